@@ -1,0 +1,93 @@
+package org.tertius.core.pade;
+
+/**
+ * A rational function p(s)/q(s) with complex coefficients, q(0) = 1. Immutable; evaluation allocates
+ * nothing.
+ */
+public final class PadeApproximant {
+    private final double[] pRe;
+    private final double[] pIm;
+    private final double[] qRe;
+    private final double[] qIm;
+    private final double[] dRe;
+    private final double[] dIm;
+
+    PadeApproximant(double[] pRe, double[] pIm, double[] qRe, double[] qIm, double[] dRe, double[] dIm) {
+        this.pRe = pRe;
+        this.pIm = pIm;
+        this.qRe = qRe;
+        this.qIm = qIm;
+        this.dRe = dRe;
+        this.dIm = dIm;
+    }
+
+    /** Numerator degree. */
+    public int numeratorDegree() {
+        return pRe.length - 1;
+    }
+
+    /** Denominator degree. */
+    public int denominatorDegree() {
+        return qRe.length - 1;
+    }
+
+    /**
+     * Evaluates at s; writes {re, im} of p(s)/q(s) into out[0..1], |q(s)| into out[2] (small next to a pole),
+     * and into out[3] the defect estimate |D(s)| / |q(s)|, where D = q f - p is formed with all the Taylor
+     * coefficients that were available (not only those the degrees used). After a degree reduction D is the
+     * part of the known series that the approximant does not reproduce; without one it holds rounding only.
+     */
+    public void evaluate(double sr, double si, double[] out) {
+        double nr = 0;
+        double ni = 0;
+        for (int k = pRe.length - 1; k >= 0; k--) {
+            double t = nr * sr - ni * si + pRe[k];
+            ni = nr * si + ni * sr + pIm[k];
+            nr = t;
+        }
+        double dr = 0;
+        double di = 0;
+        for (int k = qRe.length - 1; k >= 0; k--) {
+            double t = dr * sr - di * si + qRe[k];
+            di = dr * si + di * sr + qIm[k];
+            dr = t;
+        }
+        double d = dr * dr + di * di;
+        out[0] = (nr * dr + ni * di) / d;
+        out[1] = (ni * dr - nr * di) / d;
+        out[2] = Math.sqrt(d);
+        double er = 0;
+        double ei = 0;
+        for (int k = dRe.length - 1; k >= 0; k--) {
+            double t = er * sr - ei * si + dRe[k];
+            ei = er * si + ei * sr + dIm[k];
+            er = t;
+        }
+        out[3] = Math.hypot(er, ei) / out[2];
+    }
+
+    /** Denominator coefficients (real parts), lowest degree first; a copy. */
+    public double[] denominatorRe() {
+        return qRe.clone();
+    }
+
+    /** Denominator coefficients (imaginary parts), lowest degree first; a copy. */
+    public double[] denominatorIm() {
+        return qIm.clone();
+    }
+
+    /** Numerator coefficients (real parts); a copy. */
+    public double[] numeratorRe() {
+        return pRe.clone();
+    }
+
+    /** Numerator coefficients (imaginary parts); a copy. */
+    public double[] numeratorIm() {
+        return pIm.clone();
+    }
+
+    /** Bytes held by this approximant (for memory accounting). */
+    public long footprint() {
+        return 16L * (pRe.length + qRe.length + dRe.length) + 80;
+    }
+}

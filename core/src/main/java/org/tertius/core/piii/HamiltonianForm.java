@@ -1,0 +1,113 @@
+package org.tertius.core.piii;
+
+import org.hipparchus.complex.Complex;
+import org.tertius.core.InvalidInputException;
+import org.tertius.core.equation.IndependentVariable;
+import org.tertius.core.equation.PolynomialSystem;
+import org.tertius.core.equation.StateProjection;
+
+/**
+ * A polynomial Hamiltonian form of Painleve III for delta != 0, in the log variable (derived for this project
+ * by seeking z w' = 2 w^2 p + B w + C z with p' polynomial; the construction follows Okamoto's polynomial
+ * Hamiltonians for the Painleve equations):
+ * <pre>
+ *   z w' = 2 w^2 p + B w + C z
+ *   z p' = -2 w p^2 - B p + (alpha/2) z + (gamma/2) z^2 w
+ * </pre>
+ * with C^2 = -delta and B = 1 - beta/C. Eliminating p gives Painleve III exactly (checked by the residual
+ * tests). Poles of w are regular points of p; the zeros of w with w' = C are regular points of the system
+ * and those with w' = -C are double poles of p, which the integrator vaults like any pole.
+ */
+final class HamiltonianForm implements Painleve3Form {
+    private final Painleve3 eq;
+    private final Complex c;
+    private final Complex b;
+    private final PolynomialSystem system;
+
+    HamiltonianForm(Painleve3 eq, Complex c) {
+        if (Painleve3.isZero(eq.delta())) {
+            throw new InvalidInputException("delta", "the Hamiltonian form needs delta != 0");
+        }
+        this.eq = eq;
+        this.c = c;
+        this.b = Complex.ONE.subtract(eq.beta().divide(c));
+        this.system = PolynomialSystem.builder(IndependentVariable.LOG, "w", "p")
+                .term(0, new Complex(2), 0, 2, 1)
+                .term(0, b, 0, 1, 0)
+                .term(0, c, 1, 0, 0)
+                .term(1, new Complex(-2), 0, 1, 2)
+                .term(1, b.negate(), 0, 0, 1)
+                .term(1, eq.alpha().multiply(0.5), 1, 0, 0)
+                .term(1, eq.gamma().multiply(0.5), 2, 1, 0)
+                .build();
+    }
+
+    /** The principal square root of -delta. */
+    static Complex principalC(Painleve3 eq) {
+        return eq.delta().negate().sqrt();
+    }
+
+    Complex c() {
+        return c;
+    }
+
+    Complex b() {
+        return b;
+    }
+
+    @Override
+    public PolynomialSystem system() {
+        return system;
+    }
+
+    @Override
+    public StateProjection projection() {
+        return StateProjection.NONE;
+    }
+
+    @Override
+    public void toState(Complex z, Complex w, Complex dw, double[] re, double[] im) {
+        Complex p = z.multiply(dw).subtract(b.multiply(w)).subtract(c.multiply(z)).divide(w.multiply(w).multiply(2));
+        re[0] = w.getReal();
+        im[0] = w.getImaginary();
+        re[1] = p.getReal();
+        im[1] = p.getImaginary();
+    }
+
+    /**
+     * The state at a zero of w with w' = C: p(z0) from the third derivative, p0 = (3 a3 z0 + (2 - B) a2) /
+     * (2 C^2) with a2 = B C / (2 z0) = w''(z0)/2 and a3 = w'''(z0)/6 (series of the form at a zero).
+     */
+    void toStateAtZero(Complex z, Complex d3w, double[] re, double[] im) {
+        Complex a2 = b.multiply(c).divide(z.multiply(2));
+        Complex a3 = d3w.divide(6);
+        Complex p = a3.multiply(z).multiply(3).add(a2.multiply(Complex.valueOf(2).subtract(b)))
+                .divide(c.multiply(c).multiply(2));
+        re[0] = 0;
+        im[0] = 0;
+        re[1] = p.getReal();
+        im[1] = p.getImaginary();
+    }
+
+    @Override
+    public Complex[] fromState(Complex z, double[] re, double[] im, double[] err, double[] errOut) {
+        Complex w = new Complex(re[0], im[0]);
+        Complex p = new Complex(re[1], im[1]);
+        Complex dw = w.multiply(w).multiply(p).multiply(2).add(b.multiply(w)).add(c.multiply(z)).divide(z);
+        double zm = z.norm();
+        double dwdw = w.multiply(p).multiply(4).add(b).norm() / zm;
+        double dwdp = 2 * w.norm() * w.norm() / zm;
+        errOut[0] = err[0];
+        errOut[1] = dwdw * err[0] + dwdp * err[1] + 1e-16 * dw.norm();
+        return new Complex[] {w, dw};
+    }
+
+    @Override
+    public String describe() {
+        return "Hamiltonian form (w, p), C = " + Painleve3.fmt(c) + ", B = " + Painleve3.fmt(b);
+    }
+
+    Painleve3 equation() {
+        return eq;
+    }
+}

@@ -1,0 +1,110 @@
+package org.tertius.core.piii;
+
+import org.hipparchus.complex.Complex;
+import org.tertius.core.InvalidInputException;
+import org.tertius.core.number.SurfacePoint;
+import org.tertius.core.solution.Solution;
+import org.tertius.core.solution.StateEstimate;
+import org.tertius.core.step.SolverSettings;
+
+/** A Painleve III solution integrated by the core engine in the log variable tau = log z. */
+final class IntegratedSolution extends Painleve3Solution {
+    private final Painleve3 equation;
+    private final Painleve3Form form;
+    private final Solution engine;
+
+    private IntegratedSolution(Painleve3 equation, Painleve3Form form, Solution engine) {
+        this.equation = equation;
+        this.form = form;
+        this.engine = engine;
+    }
+
+    static IntegratedSolution create(Painleve3 eq, Complex z0, Complex w0, Complex dw0, Complex d3w0,
+                                     SolverSettings settings) {
+        boolean atZero = w0.getReal() == 0 && w0.getImaginary() == 0;
+        boolean deltaZero = Painleve3.isZero(eq.delta());
+        boolean gammaZero = Painleve3.isZero(eq.gamma());
+        Painleve3Form form;
+        double[] re;
+        double[] im;
+        if (atZero) {
+            if (deltaZero) {
+                throw new InvalidInputException("w0", "w0 = 0 is accepted only for delta != 0 (a zero of w is a regular"
+                        + " point of the Hamiltonian form only then); start at a nearby point where w != 0");
+            }
+            Complex c = HamiltonianForm.principalC(eq);
+            double scale = Math.max(1, c.norm());
+            if (dw0.subtract(c).norm() <= 1e-12 * scale) {
+                // w' = C
+            } else if (dw0.add(c).norm() <= 1e-12 * scale) {
+                c = c.negate();
+            } else {
+                throw new InvalidInputException("dw0", "w0 = 0 is a zero of w, where the equation forces"
+                        + " w'(z0)^2 = -delta, i.e. w'(z0) = +-" + Painleve3.fmt(HamiltonianForm.principalC(eq))
+                        + "; got " + Painleve3.fmt(dw0));
+            }
+            if (d3w0 == null) {
+                throw new InvalidInputException("d3w0", "w0 = 0: a solution through a zero of w is fixed by"
+                        + " w'''(z0) as well as w'(z0); give the third derivative");
+            }
+            HamiltonianForm h = new HamiltonianForm(eq, c);
+            form = h;
+            re = new double[2];
+            im = new double[2];
+            h.toStateAtZero(z0, d3w0, re, im);
+        } else {
+            if (!deltaZero) {
+                form = new HamiltonianForm(eq, HamiltonianForm.principalC(eq));
+            } else if (!gammaZero) {
+                Painleve3 r = eq.reciprocal();
+                form = new ReciprocalForm(new HamiltonianForm(r, HamiltonianForm.principalC(r)));
+            } else {
+                form = new AugmentedForm(eq);
+            }
+            int dim = form.system().dimension();
+            re = new double[dim];
+            im = new double[dim];
+            form.toState(z0, w0, dw0, re, im);
+        }
+        SurfacePoint p0 = SurfacePoint.of(z0, 0);
+        Solution engine = Solution.start(form.system(), settings, form.projection(), p0.logRe(), p0.logIm(), re, im);
+        return new IntegratedSolution(eq, form, engine);
+    }
+
+    @Override
+    public Painleve3 equation() {
+        return equation;
+    }
+
+    @Override
+    public Painleve3Value evaluate(SurfacePoint point) {
+        StateEstimate s = engine.evaluate(point.logRe(), point.logIm());
+        int n = s.dimension();
+        double[] re = new double[n];
+        double[] im = new double[n];
+        double[] err = new double[n];
+        for (int i = 0; i < n; i++) {
+            re[i] = s.re(i);
+            im[i] = s.im(i);
+            err[i] = s.error(i);
+        }
+        double[] e = new double[2];
+        Complex[] v = form.fromState(point.z(), re, im, err, e);
+        return new Painleve3Value(point, v[0], v[1], e[0], e[1]);
+    }
+
+    @Override
+    public int nodeCount() {
+        return engine.nodeCount();
+    }
+
+    @Override
+    public String formDescription() {
+        return form.describe();
+    }
+
+    /** The engine solution (path tree) behind this solution. */
+    Solution engine() {
+        return engine;
+    }
+}

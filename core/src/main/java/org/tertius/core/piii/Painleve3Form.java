@@ -1,0 +1,28 @@
+package org.tertius.core.piii;
+
+import org.hipparchus.complex.Complex;
+import org.tertius.core.equation.PolynomialSystem;
+import org.tertius.core.equation.StateProjection;
+
+/**
+ * A polynomial first-order form of Painleve III handed to the engine, with the maps between (z, w, w') and
+ * its state. All forms use the log variable tau = log z.
+ */
+interface Painleve3Form {
+    PolynomialSystem system();
+
+    StateProjection projection();
+
+    /** Writes the state for (z, w, w') at a point. */
+    void toState(Complex z, Complex w, Complex dw, double[] re, double[] im);
+
+    /**
+     * Reads {w, w', err w, err w'} from a state and its per-component absolute errors.
+     *
+     * @return {w, dw} as Complex and the two errors in {@code errOut[0..1]}
+     */
+    Complex[] fromState(Complex z, double[] re, double[] im, double[] err, double[] errOut);
+
+    /** One line that says which form is used (for output headers). */
+    String describe();
+}

@@ -1,0 +1,263 @@
+package org.tertius.core.solution;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import org.tertius.core.InvalidInputException;
+import org.tertius.core.UnreachableTargetException;
+import org.tertius.core.equation.IndependentVariable;
+import org.tertius.core.equation.PolynomialSystem;
+import org.tertius.core.equation.StateProjection;
+import org.tertius.core.equation.Term;
+import org.tertius.core.path.PathSelector;
+import org.tertius.core.step.Node;
+import org.tertius.core.step.SolverSettings;
+import org.tertius.core.step.TaylorPadeStepper;
+import org.tertius.core.taylor.RecurrencePlan;
+
+/**
+ * One solution of a polynomial system, fixed by its state at a start point, with dense output. It keeps the
+ * nodes of its path tree (each with its Pade approximants); an evaluation is answered from a stored node whose
+ * disk holds the point when its error estimate allows, otherwise a path is integrated from the nearest stored
+ * node (Fornberg-Weideman path selection) and its nodes are added to the tree.
+ *
+ * <p>Thread-safe: the tree only grows, under a lock, and readers work on immutable snapshots; each thread has
+ * its own stepper. Values do not depend on which thread asks, but a point may be reached along a different
+ * path depending on what was evaluated before; values agree within their error estimates.
+ */
+public final class Solution {
+    private final PolynomialSystem system;
+    private final RecurrencePlan plan;
+    private final SolverSettings settings;
+    private final StateProjection projection;
+    private final ThreadLocal<TaylorPadeStepper> steppers;
+    private final Object lock = new Object();
+    private final boolean singularAtOrigin;
+    private volatile Node[] nodes;
+
+    private Solution(PolynomialSystem system, RecurrencePlan plan, SolverSettings settings,
+                     StateProjection projection, Node root) {
+        this.system = system;
+        this.plan = plan;
+        this.settings = settings;
+        this.projection = projection;
+        this.steppers = ThreadLocal.withInitial(() -> new TaylorPadeStepper(system, plan, settings, projection));
+        this.nodes = new Node[] {root};
+        boolean neg = false;
+        for (int i = 0; i < system.dimension(); i++) {
+            for (Term t : system.terms(i)) {
+                neg |= t.basePower() < 0;
+            }
+        }
+        this.singularAtOrigin = system.variable() == IndependentVariable.PLAIN && neg;
+    }
+
+    /**
+     * Starts a solution at tau0 with the given state.
+     *
+     * @param system the system
+     * @param settings integrator settings
+     * @param projection invariant-manifold projection (or {@link StateProjection#NONE})
+     * @param tau0Re start point (integration variable), real part
+     * @param tau0Im imaginary part
+     * @param y0Re start state, real parts
+     * @param y0Im start state, imaginary parts
+     */
+    public static Solution start(PolynomialSystem system, SolverSettings settings, StateProjection projection,
+                                 double tau0Re, double tau0Im, double[] y0Re, double[] y0Im) {
+        if (y0Re.length != system.dimension() || y0Im.length != system.dimension()) {
+            throw new InvalidInputException("start state", "expected " + system.dimension() + " components");
+        }
+        for (int i = 0; i < y0Re.length; i++) {
+            InvalidInputException.requireFinite("start state " + system.unknowns().get(i), y0Re[i]);
+            InvalidInputException.requireFinite("start state " + system.unknowns().get(i), y0Im[i]);
+        }
+        InvalidInputException.requireFinite("start point", tau0Re);
+        InvalidInputException.requireFinite("start point", tau0Im);
+        RecurrencePlan plan = RecurrencePlan.compile(system);
+        TaylorPadeStepper stepper = new TaylorPadeStepper(system, plan, settings, projection);
+        double[] re = y0Re.clone();
+        double[] im = y0Im.clone();
+        projection.project(tau0Re, tau0Im, re, im);
+        Solution probe = new Solution(system, plan, settings, projection, null);
+        double maxR = probe.maxRadius(tau0Re, tau0Im);
+        Node root = stepper.expandStart(0, tau0Re, tau0Im, re, im, Math.min(settings.initialStep(), maxR), maxR);
+        return new Solution(system, plan, settings, projection, root);
+    }
+
+    public PolynomialSystem system() {
+        return system;
+    }
+
+    public SolverSettings settings() {
+        return settings;
+    }
+
+    /** The root node (the start point). */
+    public Node root() {
+        return nodes[0];
+    }
+
+    /** A snapshot of the nodes of the tree (index = node id). */
+    public List<Node> nodes() {
+        return List.of(nodes);
+    }
+
+    public int nodeCount() {
+        return nodes.length;
+    }
+
+    /** Approximate bytes held by the tree. */
+    public long footprint() {
+        long s = 0;
+        for (Node n : nodes) {
+            s += n.footprint();
+        }
+        return s;
+    }
+
+    /**
+     * Evaluates the state at tau.
+     *
+     * @throws UnreachableTargetException if no path reaches tau within the step budget and the error bound
+     */
+    public StateEstimate evaluate(double tauRe, double tauIm) {
+        InvalidInputException.requireFinite("target", tauRe);
+        InvalidInputException.requireFinite("target", tauIm);
+        if (singularAtOrigin && tauRe == 0 && tauIm == 0) {
+            throw new InvalidInputException("target", "x = 0 is a singular point of this system");
+        }
+        TaylorPadeStepper stepper = steppers.get();
+        double tol = settings.tolerance();
+        Node[] snapshot = nodes;
+        Node served = bestCovering(snapshot, tauRe, tauIm, stepper, tol);
+        if (served != null) {
+            return estimate(served, tauRe, tauIm, 0);
+        }
+        Node start = nearest(snapshot, tauRe, tauIm);
+        List<Node> path = new ArrayList<>();
+        Node current = start;
+        int baseId = -1;
+        int steps = 0;
+        while (true) {
+            PathSelector.Choice choice = PathSelector.choose(current, tauRe, tauIm, stepper, tol);
+            if (choice != null && choice.reachesTarget()) {
+                break;
+            }
+            if (choice == null || steps >= settings.maxSteps()) {
+                throw new UnreachableTargetException("could not reach tau = " + tauRe + (tauIm < 0 ? "" : "+")
+                        + tauIm + "i within " + settings.maxSteps() + " steps at tolerance " + tol
+                        + " (last node at " + current.tauRe() + "," + current.tauIm() + " with radius "
+                        + current.radius() + "); the point may lie on or next to a singularity: move it slightly"
+                        + " or loosen the tolerance");
+            }
+            double maxR = maxRadius(current.tauRe() + current.radius() * choice.sr(),
+                    current.tauIm() + current.radius() * choice.si());
+            Node next = stepper.step(current, choice.sr(), choice.si(), baseId - steps - 1, maxR);
+            if (!(next.accumulatedError() <= settings.maxError())) {
+                throw new UnreachableTargetException("the accumulated error estimate " + next.accumulatedError()
+                        + " exceeds " + settings.maxError() + " on the way to tau = " + tauRe + "," + tauIm
+                        + "; tighten the tolerance or raise the order");
+            }
+            path.add(next);
+            current = next;
+            steps++;
+        }
+        Node last = current;
+        if (!path.isEmpty()) {
+            last = merge(start, path);
+        }
+        return estimate(last, tauRe, tauIm, steps);
+    }
+
+    /** Largest radius allowed at tau: half the distance to a singular origin in PLAIN mode. */
+    private double maxRadius(double tRe, double tIm) {
+        if (singularAtOrigin) {
+            return 0.5 * Math.hypot(tRe, tIm);
+        }
+        return 4.0;
+    }
+
+    private Node merge(Node start, List<Node> path) {
+        synchronized (lock) {
+            Node[] old = nodes;
+            Node[] grown = Arrays.copyOf(old, old.length + path.size());
+            int parent = start.id();
+            Node last = null;
+            for (int i = 0; i < path.size(); i++) {
+                int id = old.length + i;
+                last = path.get(i).renumbered(id, parent);
+                grown[id] = last;
+                parent = id;
+            }
+            nodes = grown;
+            return last;
+        }
+    }
+
+    private Node bestCovering(Node[] snapshot, double tRe, double tIm, TaylorPadeStepper stepper, double tol) {
+        Node best = null;
+        double bestErr = Double.POSITIVE_INFINITY;
+        for (Node n : snapshot) {
+            double d = Math.hypot(tRe - n.tauRe(), tIm - n.tauIm());
+            if (d > n.radius()) {
+                continue;
+            }
+            double e = stepper.localError(n, (tRe - n.tauRe()) / n.radius(), (tIm - n.tauIm()) / n.radius());
+            if (e > tol) {
+                continue;
+            }
+            double total = e + n.accumulatedError();
+            if (total < bestErr) {
+                bestErr = total;
+                best = n;
+            }
+        }
+        return best;
+    }
+
+    private static Node nearest(Node[] snapshot, double tRe, double tIm) {
+        Node best = snapshot[0];
+        double bestD = Double.POSITIVE_INFINITY;
+        for (Node n : snapshot) {
+            double d = Math.hypot(tRe - n.tauRe(), tIm - n.tauIm()) - n.radius();
+            if (d < bestD) {
+                bestD = d;
+                best = n;
+            }
+        }
+        return best;
+    }
+
+    private StateEstimate estimate(Node node, double tRe, double tIm, int steps) {
+        return estimate(node, tRe, tIm, steps, true);
+    }
+
+    /**
+     * The estimate at tau from a node: value, local error, and inherited error (either propagated to the
+     * point exactly, one extra expansion, or bounded over the node's disk).
+     */
+    StateEstimate estimate(Node node, double tRe, double tIm, int steps, boolean exactPropagation) {
+        int n = system.dimension();
+        double[] out = new double[2 * n];
+        double[] err = new double[n];
+        node.evaluate(tRe, tIm, out, err);
+        double[] re = new double[n];
+        double[] im = new double[n];
+        double[] e = new double[n];
+        double[] pr = new double[n];
+        double[] pi = new double[n];
+        if (exactPropagation) {
+            TaylorPadeStepper stepper = steppers.get();
+            stepper.propagate(node, (tRe - node.tauRe()) / node.radius(), (tIm - node.tauIm()) / node.radius(), pr, pi);
+        }
+        for (int i = 0; i < n; i++) {
+            re[i] = out[2 * i];
+            im[i] = out[2 * i + 1];
+            double mod = Math.hypot(re[i], im[i]);
+            double inherited = exactPropagation ? Math.hypot(pr[i], pi[i]) : node.inheritedError(i);
+            e[i] = err[i] + inherited + 4 * Math.ulp(1.0) * mod;
+        }
+        return new StateEstimate(tRe, tIm, re, im, e, node.id(), steps);
+    }
+}

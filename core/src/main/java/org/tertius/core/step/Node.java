@@ -1,0 +1,182 @@
+package org.tertius.core.step;
+
+import org.tertius.core.pade.PadeApproximant;
+
+/**
+ * One expansion point of a path tree: its position tau (in the integration variable), the state there,
+ * the radius r of its disk, the Pade approximants of every component in the scaled variable
+ * {@code s = (tau - tau0) / r} (two orders, whose difference estimates the error), the singularities of the
+ * approximants near the disk, and the error already accumulated on the way from the start.
+ *
+ * <p>Immutable and thread-safe.
+ */
+public final class Node {
+    private final int id;
+    private final int parent;
+    private final double tauRe;
+    private final double tauIm;
+    private final double[] yRe;
+    private final double[] yIm;
+    private final double radius;
+    private final PadeApproximant[] high;
+    private final PadeApproximant[] low;
+    private final double[] singRe;
+    private final double[] singIm;
+    private final double[] roundingFloor;
+    private final double[] errRe;
+    private final double[] errIm;
+    private final double[] growth;
+    private final double accumulatedError;
+
+    Node(int id, int parent, double tauRe, double tauIm, double[] yRe, double[] yIm, double radius,
+         PadeApproximant[] high, PadeApproximant[] low, double[] singRe, double[] singIm,
+         double[] roundingFloor, double[] errRe, double[] errIm, double[] growth) {
+        this.id = id;
+        this.parent = parent;
+        this.tauRe = tauRe;
+        this.tauIm = tauIm;
+        this.yRe = yRe;
+        this.yIm = yIm;
+        this.radius = radius;
+        this.high = high;
+        this.low = low;
+        this.singRe = singRe;
+        this.singIm = singIm;
+        this.roundingFloor = roundingFloor;
+        this.errRe = errRe;
+        this.errIm = errIm;
+        this.growth = growth;
+        double acc = 0;
+        for (int i = 0; i < yRe.length; i++) {
+            acc = Math.max(acc, Math.hypot(errRe[i], errIm[i]) / (1 + Math.hypot(yRe[i], yIm[i])));
+        }
+        this.accumulatedError = acc;
+    }
+
+    /** Returns a copy of this node with a new id and parent (used when a path is merged into a tree). */
+    public Node renumbered(int newId, int newParent) {
+        return new Node(newId, newParent, tauRe, tauIm, yRe, yIm, radius, high, low, singRe, singIm,
+                roundingFloor, errRe, errIm, growth);
+    }
+
+    public int id() {
+        return id;
+    }
+
+    /** Id of the node this one was stepped from, or -1 for a root. */
+    public int parent() {
+        return parent;
+    }
+
+    public double tauRe() {
+        return tauRe;
+    }
+
+    public double tauIm() {
+        return tauIm;
+    }
+
+    public double radius() {
+        return radius;
+    }
+
+    public int dimension() {
+        return yRe.length;
+    }
+
+    public double stateRe(int i) {
+        return yRe[i];
+    }
+
+    public double stateIm(int i) {
+        return yIm[i];
+    }
+
+    /**
+     * Error accumulated from the start to this node, relative: max_i |e_i| / (1 + |y_i|), where e is the
+     * propagated error vector (see {@link TaylorPadeStepper}).
+     */
+    public double accumulatedError() {
+        return accumulatedError;
+    }
+
+    /** Component i of the propagated (absolute) error vector at the node, real part. */
+    public double errorRe(int i) {
+        return errRe[i];
+    }
+
+    /** Component i of the propagated (absolute) error vector at the node, imaginary part. */
+    public double errorIm(int i) {
+        return errIm[i];
+    }
+
+    /**
+     * Bound of the inherited error of component i anywhere in the disk: the larger of |e_i| at the node and
+     * the propagated error on the circle |s| = 1 (max modulus principle), with a safety factor.
+     */
+    public double inheritedError(int i) {
+        return Math.max(Math.hypot(errRe[i], errIm[i]), growth[i]);
+    }
+
+    /** Number of singularities (poles of the approximants of any component) recorded near the disk. */
+    public int singularityCount() {
+        return singRe.length;
+    }
+
+    /** Position (tau) of singularity j, real part. */
+    public double singularityRe(int j) {
+        return tauRe + radius * singRe[j];
+    }
+
+    /** Position (tau) of singularity j, imaginary part. */
+    public double singularityIm(int j) {
+        return tauIm + radius * singIm[j];
+    }
+
+    /** Singularity j in the scaled variable s. */
+    double singularityS(int j, boolean imag) {
+        return imag ? singIm[j] : singRe[j];
+    }
+
+    public PadeApproximant approximant(int component) {
+        return high[component];
+    }
+
+    public PadeApproximant lowerApproximant(int component) {
+        return low[component];
+    }
+
+    /**
+     * Evaluates every component at tau from this node's approximants.
+     *
+     * @param out out: {@code out[2i], out[2i+1]} = value of component i
+     * @param err out: {@code err[i]} = |high - low| at the point (local estimate, absolute)
+     */
+    public void evaluate(double tRe, double tIm, double[] out, double[] err) {
+        double sr = (tRe - tauRe) / radius;
+        double si = (tIm - tauIm) / radius;
+        evaluateScaled(sr, si, out, err);
+    }
+
+    /** As {@link #evaluate} but at the scaled point s. */
+    public void evaluateScaled(double sr, double si, double[] out, double[] err) {
+        double[] a = new double[4];
+        double[] b = new double[4];
+        for (int i = 0; i < high.length; i++) {
+            high[i].evaluate(sr, si, a);
+            low[i].evaluate(sr, si, b);
+            out[2 * i] = a[0];
+            out[2 * i + 1] = a[1];
+            err[i] = Math.hypot(a[0] - b[0], a[1] - b[1]) + a[3] + b[3] + roundingFloor[i];
+        }
+    }
+
+    /** Bytes held by this node (for memory accounting). */
+    public long footprint() {
+        long s = 160 + 48L * yRe.length + 16L * singRe.length;
+        for (int i = 0; i < high.length; i++) {
+            s += high[i].footprint() + low[i].footprint();
+        }
+        return s;
+    }
+}

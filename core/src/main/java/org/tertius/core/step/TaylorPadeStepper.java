@@ -1,0 +1,398 @@
+package org.tertius.core.step;
+
+import java.util.Arrays;
+import org.tertius.core.equation.PolynomialSystem;
+import org.tertius.core.equation.StateProjection;
+import org.tertius.core.pade.PadeApproximant;
+import org.tertius.core.pade.PolynomialRoots;
+import org.tertius.core.pade.RobustPade;
+import org.tertius.core.taylor.DoubleTaylorKernel;
+import org.tertius.core.taylor.RecurrencePlan;
+
+/**
+ * Expands the solution at a point into a {@link Node} and steps from node to node.
+ *
+ * <p>Per node: Taylor coefficients from the recurrence plan; robust Pade approximants of two orders per
+ * component (pole vaulting: Corliss, Math. Comp. 35 (1980); Fornberg and Weideman, J. Comput. Phys. 230
+ * (2011)); a radius no larger than the estimated radius of convergence (root test), shrunk until the two
+ * orders, together with the defect of each approximant against all known coefficients, agree to the
+ * tolerance on the circle of that radius; and the poles of the approximants near the disk.
+ *
+ * <p>Error propagation: each node carries an absolute error vector e. Stepping to s, the new vector is
+ * {@code Phi(s) e + local(s)}, where the directional derivative {@code Phi(s) e} of the flow is obtained by
+ * expanding once more from the perturbed state {@code y + eta e} (a finite difference of the step map; common
+ * practice for cheap first-order error propagation). Repeated application lines e up with the most expanding
+ * direction, so error growth along unstable paths (where 1e-16 in the data becomes 1e-8 downstream) is seen
+ * and reported rather than hidden.
+ *
+ * <p>Holds a kernel with work arrays: confined to one thread (the solution layer keeps one per thread).
+ */
+public final class TaylorPadeStepper {
+    private static final int CIRCLE_POINTS = 8;
+    private static final double SINGULARITY_WINDOW = 3.0;
+    private static final double ROUNDING_ULPS = 2;
+    /** Largest radius as a multiple of the estimated radius of convergence. */
+    private static final double RHO_FACTOR = 1.0;
+    /** Relative size of the perturbation used for the directional derivative. */
+    private static final double ETA = 1e-7;
+    /** Safety factor on the propagated error inside a disk. */
+    private static final double GROWTH_SAFETY = 2.0;
+
+    private final SolverSettings settings;
+    private final DoubleTaylorKernel kernel;
+    private final StateProjection projection;
+    private final int n;
+    private final int order;
+    private final double[][] rawRe;
+    private final double[][] rawIm;
+    private final double[][] cRe;
+    private final double[][] cIm;
+    private final double[] val;
+    private final double[] err;
+    private long expansions;
+    /** Perturbed approximants of the node expanded last (for its outgoing step). */
+    private Node pertNode;
+    private PadeApproximant[] pert;
+    private double pertEta;
+
+    public TaylorPadeStepper(PolynomialSystem system, RecurrencePlan plan, SolverSettings settings,
+                             StateProjection projection) {
+        this.settings = settings;
+        this.order = settings.order();
+        this.kernel = new DoubleTaylorKernel(plan, system, order);
+        this.projection = projection;
+        this.n = system.dimension();
+        this.rawRe = new double[n][order + 1];
+        this.rawIm = new double[n][order + 1];
+        this.cRe = new double[n][order + 1];
+        this.cIm = new double[n][order + 1];
+        this.val = new double[2 * n];
+        this.err = new double[n];
+    }
+
+    public SolverSettings settings() {
+        return settings;
+    }
+
+    /** Number of Taylor expansions (recurrence runs) done by this stepper. */
+    public long expansions() {
+        return expansions;
+    }
+
+    public StateProjection projection() {
+        return projection;
+    }
+
+    /**
+     * Expands at tau into a node whose radius is adapted to the tolerance.
+     *
+     * @param id id of the new node
+     * @param parent id of its parent or -1
+     * @param yRe state, real parts (not modified)
+     * @param yIm state, imaginary parts
+     * @param eRe inherited absolute error vector, real parts (zeros at a start point)
+     * @param eIm inherited absolute error vector, imaginary parts
+     * @param radiusGuess first trial radius
+     * @param maxRadius the largest radius allowed (for example half the distance to a singular point)
+     */
+    public Node expand(int id, int parent, double tRe, double tIm, double[] yRe, double[] yIm, double[] eRe,
+                       double[] eIm, double radiusGuess, double maxRadius) {
+        double tol = settings.tolerance();
+        int m = order / 2;
+        double r0 = Math.min(radiusGuess, maxRadius);
+        computeRaw(tRe, tIm, yRe, yIm, r0, rawRe, rawIm);
+        while (!finite(rawRe, rawIm) && r0 > 1e-14) {
+            r0 *= 0.25;
+            computeRaw(tRe, tIm, yRe, yIm, r0, rawRe, rawIm);
+        }
+        // the radius stays within the estimated radius of convergence: beyond it the scaled coefficients grow
+        // and their rounding errors, shared by both Pade orders, would reach the values unseen
+        double rho = r0 * convergenceRadius();
+        double rMax = Math.min(maxRadius, RHO_FACTOR * rho);
+        double r = Math.min(r0, rMax);
+        PadeApproximant[] hi = new PadeApproximant[n];
+        PadeApproximant[] lo = new PadeApproximant[n];
+        boolean grew = false;
+        for (int iter = 0; iter < 30; iter++) {
+            rescale(rawRe, rawIm, r / r0);
+            for (int i = 0; i < n; i++) {
+                hi[i] = RobustPade.approximate(cRe[i], cIm[i], m, m, settings.padeTolerance(), order);
+                lo[i] = RobustPade.approximate(cRe[i], cIm[i], m - 1, m - 1, settings.padeTolerance(), order);
+            }
+            double e = circleError(hi, lo);
+            double factor = Math.pow(tol / Math.max(e, 1e-300), 1.0 / m);
+            if (!(e <= tol)) {
+                if (r < 1e-13 * Math.max(1, Math.hypot(tRe, tIm))) {
+                    break;
+                }
+                r *= Math.max(0.2, Math.min(0.9, 0.9 * factor));
+                continue;
+            }
+            if (!grew && e < tol * 1e-2 && r < rMax && iter < 3) {
+                double f = Math.min(3.0, 0.9 * factor);
+                if (f > 1.15) {
+                    r = Math.min(rMax, r * f);
+                    grew = iter >= 2;
+                    continue;
+                }
+            }
+            break;
+        }
+        double[] floor = new double[n];
+        for (int i = 0; i < n; i++) {
+            double mx = 0;
+            for (int k = 0; k <= order; k++) {
+                mx = Math.max(mx, Math.hypot(cRe[i][k], cIm[i][k]));
+            }
+            // rounding of the coefficients reaches the values in proportion to the largest one (common practice)
+            floor[i] = ROUNDING_ULPS * Math.ulp(1.0) * mx;
+        }
+        double[][] sing = singularities(hi);
+        // growth of the inherited error over the disk
+        double[] growth = new double[n];
+        PadeApproximant[] perturbed = null;
+        double eta = 0;
+        if (nonZero(eRe, eIm)) {
+            eta = perturbationSize(yRe, yIm, eRe, eIm);
+            perturbed = perturbedApproximants(tRe, tIm, yRe, yIm, eRe, eIm, eta, r0, r, m);
+            double[] a = new double[4];
+            double[] b = new double[4];
+            for (int p = 0; p < CIRCLE_POINTS; p++) {
+                double th = 2 * Math.PI * p / CIRCLE_POINTS;
+                for (int i = 0; i < n; i++) {
+                    hi[i].evaluate(Math.cos(th), Math.sin(th), a);
+                    perturbed[i].evaluate(Math.cos(th), Math.sin(th), b);
+                    double g = GROWTH_SAFETY * Math.hypot(b[0] - a[0], b[1] - a[1]) / eta;
+                    growth[i] = Math.max(growth[i], Double.isFinite(g) ? g : Double.POSITIVE_INFINITY);
+                }
+            }
+        }
+        Node node = new Node(id, parent, tRe, tIm, yRe.clone(), yIm.clone(), r, hi, lo, sing[0], sing[1], floor,
+                eRe.clone(), eIm.clone(), growth);
+        pertNode = node;
+        pert = perturbed;
+        pertEta = eta;
+        return node;
+    }
+
+    /** Expands a start node (no inherited error). */
+    public Node expandStart(int id, double tRe, double tIm, double[] yRe, double[] yIm, double radiusGuess,
+                            double maxRadius) {
+        return expand(id, -1, tRe, tIm, yRe, yIm, new double[n], new double[n], radiusGuess, maxRadius);
+    }
+
+    /**
+     * The relative local error estimate of a node at the scaled point s: max over components of
+     * local error / (1 + |value|).
+     */
+    public double localError(Node node, double sr, double si) {
+        node.evaluateScaled(sr, si, val, err);
+        double e = 0;
+        for (int i = 0; i < n; i++) {
+            double mod = Math.hypot(val[2 * i], val[2 * i + 1]);
+            double rel = err[i] / (1 + mod);
+            if (!Double.isFinite(rel)) {
+                return Double.POSITIVE_INFINITY;
+            }
+            e = Math.max(e, rel);
+        }
+        return e;
+    }
+
+    /**
+     * Takes the step from a node to its scaled point s and expands the new node there. The new node's error
+     * vector is the node's vector carried by the flow plus the local error of the step.
+     */
+    public Node step(Node from, double sr, double si, int id, double maxRadius) {
+        double[] yRe = new double[n];
+        double[] yIm = new double[n];
+        double[] local = new double[n];
+        from.evaluateScaled(sr, si, val, local);
+        for (int i = 0; i < n; i++) {
+            yRe[i] = val[2 * i];
+            yIm[i] = val[2 * i + 1];
+        }
+        double[] eRe = new double[n];
+        double[] eIm = new double[n];
+        propagate(from, sr, si, eRe, eIm);
+        for (int i = 0; i < n; i++) {
+            double m = Math.hypot(eRe[i], eIm[i]);
+            if (m > 0) {
+                eRe[i] += local[i] * eRe[i] / m;
+                eIm[i] += local[i] * eIm[i] / m;
+            } else {
+                eRe[i] = local[i];
+            }
+        }
+        double tRe = from.tauRe() + from.radius() * sr;
+        double tIm = from.tauIm() + from.radius() * si;
+        projection.project(tRe, tIm, yRe, yIm);
+        return expand(id, from.id(), tRe, tIm, yRe, yIm, eRe, eIm, from.radius(), maxRadius);
+    }
+
+    /**
+     * The inherited error vector carried from the node to its scaled point s: Phi(s) e, absolute.
+     */
+    public void propagate(Node from, double sr, double si, double[] outRe, double[] outIm) {
+        double[] eRe = new double[n];
+        double[] eIm = new double[n];
+        for (int i = 0; i < n; i++) {
+            eRe[i] = from.errorRe(i);
+            eIm[i] = from.errorIm(i);
+        }
+        if (!nonZero(eRe, eIm)) {
+            Arrays.fill(outRe, 0);
+            Arrays.fill(outIm, 0);
+            return;
+        }
+        if (pertNode != from || pert == null) {
+            double[] yRe = new double[n];
+            double[] yIm = new double[n];
+            for (int i = 0; i < n; i++) {
+                yRe[i] = from.stateRe(i);
+                yIm[i] = from.stateIm(i);
+            }
+            pertEta = perturbationSize(yRe, yIm, eRe, eIm);
+            pert = perturbedApproximants(from.tauRe(), from.tauIm(), yRe, yIm, eRe, eIm, pertEta, from.radius(),
+                    from.radius(), order / 2);
+            pertNode = from;
+        }
+        double[] a = new double[4];
+        double[] b = new double[4];
+        for (int i = 0; i < n; i++) {
+            from.approximant(i).evaluate(sr, si, a);
+            pert[i].evaluate(sr, si, b);
+            outRe[i] = (b[0] - a[0]) / pertEta;
+            outIm[i] = (b[1] - a[1]) / pertEta;
+            if (!Double.isFinite(outRe[i]) || !Double.isFinite(outIm[i])) {
+                outRe[i] = Double.POSITIVE_INFINITY;
+                outIm[i] = 0;
+            }
+        }
+    }
+
+    private double perturbationSize(double[] yRe, double[] yIm, double[] eRe, double[] eIm) {
+        double rel = 0;
+        for (int i = 0; i < n; i++) {
+            rel = Math.max(rel, Math.hypot(eRe[i], eIm[i]) / (1 + Math.hypot(yRe[i], yIm[i])));
+        }
+        return ETA / rel;
+    }
+
+    private PadeApproximant[] perturbedApproximants(double tRe, double tIm, double[] yRe, double[] yIm,
+                                                    double[] eRe, double[] eIm, double eta, double r0, double r,
+                                                    int m) {
+        double[] pr = new double[n];
+        double[] pi = new double[n];
+        for (int i = 0; i < n; i++) {
+            pr[i] = yRe[i] + eta * eRe[i];
+            pi[i] = yIm[i] + eta * eIm[i];
+        }
+        double[][] xr = new double[n][order + 1];
+        double[][] xi = new double[n][order + 1];
+        computeRaw(tRe, tIm, pr, pi, r0, xr, xi);
+        rescale(xr, xi, r / r0);
+        PadeApproximant[] out = new PadeApproximant[n];
+        for (int i = 0; i < n; i++) {
+            out[i] = RobustPade.approximate(cRe[i], cIm[i], m, m, settings.padeTolerance(), order);
+        }
+        return out;
+    }
+
+    private double[][] singularities(PadeApproximant[] hi) {
+        double[] sr = new double[0];
+        double[] si = new double[0];
+        for (int i = 0; i < n; i++) {
+            double[][] roots = PolynomialRoots.roots(hi[i].denominatorRe(), hi[i].denominatorIm());
+            for (int j = 0; j < roots[0].length; j++) {
+                double x = roots[0][j];
+                double y = roots[1][j];
+                if (Double.isFinite(x) && Double.isFinite(y) && Math.hypot(x, y) < SINGULARITY_WINDOW) {
+                    sr = Arrays.copyOf(sr, sr.length + 1);
+                    si = Arrays.copyOf(si, si.length + 1);
+                    sr[sr.length - 1] = x;
+                    si[si.length - 1] = y;
+                }
+            }
+        }
+        return new double[][] {sr, si};
+    }
+
+    private static boolean nonZero(double[] re, double[] im) {
+        for (int i = 0; i < re.length; i++) {
+            if (re[i] != 0 || im[i] != 0) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /**
+     * Radius of convergence of the raw series in units of the raw scale: 1 / max_k s_k^(1/k) over
+     * k in [N/3, N], with s_k = max_i |c_ik| / (1 + |c_i0|) (root test).
+     */
+    private double convergenceRadius() {
+        double g = 0;
+        for (int k = Math.max(1, order / 3); k <= order; k++) {
+            double s = 0;
+            for (int i = 0; i < n; i++) {
+                s = Math.max(s, Math.hypot(rawRe[i][k], rawIm[i][k]) / (1 + Math.hypot(rawRe[i][0], rawIm[i][0])));
+            }
+            if (s > 0) {
+                g = Math.max(g, Math.pow(s, 1.0 / k));
+            }
+        }
+        return g == 0 ? 1e6 : 1 / g;
+    }
+
+    private void computeRaw(double tRe, double tIm, double[] yRe, double[] yIm, double scale, double[][] outRe,
+                            double[][] outIm) {
+        kernel.coefficients(tRe, tIm, yRe, yIm, scale, outRe, outIm);
+        expansions++;
+    }
+
+    private boolean finite(double[][] re, double[][] im) {
+        for (int i = 0; i < n; i++) {
+            for (int k = 0; k <= order; k++) {
+                if (!Double.isFinite(re[i][k]) || !Double.isFinite(im[i][k])) {
+                    return false;
+                }
+            }
+        }
+        return true;
+    }
+
+    /** Scaled coefficients c[i][k] = raw[i][k] f^k into the work arrays. */
+    private void rescale(double[][] re, double[][] im, double f) {
+        for (int i = 0; i < n; i++) {
+            double p = 1;
+            for (int k = 0; k <= order; k++) {
+                cRe[i][k] = re[i][k] * p;
+                cIm[i][k] = im[i][k] * p;
+                p *= f;
+            }
+        }
+    }
+
+    /** Second largest over points of the unit circle of the relative local error estimate. */
+    private double circleError(PadeApproximant[] hi, PadeApproximant[] lo) {
+        double[] a = new double[4];
+        double[] b = new double[4];
+        double[] es = new double[CIRCLE_POINTS];
+        for (int p = 0; p < CIRCLE_POINTS; p++) {
+            double th = 2 * Math.PI * p / CIRCLE_POINTS + 0.1;
+            double sr = Math.cos(th);
+            double si = Math.sin(th);
+            double e = 0;
+            for (int i = 0; i < n; i++) {
+                hi[i].evaluate(sr, si, a);
+                lo[i].evaluate(sr, si, b);
+                double rel = (Math.hypot(a[0] - b[0], a[1] - b[1]) + a[3] + b[3]) / (1 + Math.hypot(a[0], a[1]));
+                e = Math.max(e, Double.isFinite(rel) ? rel : Double.POSITIVE_INFINITY);
+            }
+            es[p] = e;
+        }
+        Arrays.sort(es);
+        return es[CIRCLE_POINTS - 2];
+    }
+}
