@@ -164,11 +164,68 @@ public final class RecurrencePlan {
         return c;
     }
 
-    int seriesCount() {
+    /** Factor series of product p (first factor). Series numbering as in the class comment. */
+    public int productFirst(int p) {
+        return prodA[p];
+    }
+
+    /** Factor series of product p (second factor). */
+    public int productSecond(int p) {
+        return prodB[p];
+    }
+
+    /** Number of term groups (terms of one equation sharing one power of the base). */
+    public int groupCount() {
+        return groupEq.length;
+    }
+
+    /** The equation group g contributes to. */
+    public int groupEquation(int g) {
+        return groupEq[g];
+    }
+
+    /** Index into {@link #basePower(int)} of group g, or -1 when its power of the base is 0. */
+    public int groupBaseIndex(int g) {
+        return groupBase[g];
+    }
+
+    /** First term of group g; the terms of g are {@code groupStart(g) .. groupStart(g+1)-1}. */
+    public int groupStart(int g) {
+        return groupStart[g];
+    }
+
+    /** Coefficient index of term t. */
+    public int termCoefficient(int t) {
+        return termCoef[t];
+    }
+
+    /** Series index of the monomial of term t, or -1 for the constant monomial 1. */
+    public int termSeries(int t) {
+        return termSeries[t];
+    }
+
+    /** Number of distinct non-zero powers of the base. */
+    public int basePowerCount() {
+        return basePowers.length;
+    }
+
+    /** The q-th distinct non-zero power of the base. */
+    public int basePower(int q) {
+        return basePowers[q];
+    }
+
+    /** Number of coefficient values the plan refers to. */
+    public int coefficientCount() {
+        return coefficientCount;
+    }
+
+    /** Total number of series (unknowns, products, groups). */
+    public int seriesCount() {
         return n + prodA.length + groupEq.length;
     }
 
-    int groupSeries(int g) {
+    /** Series index of group g. */
+    public int groupSeries(int g) {
         return n + prodA.length + g;
     }
 }
