@@ -143,7 +143,8 @@ public final class PolynomialSystem {
 
         /**
          * Adds {@code c * b^basePower * prod y_v^exponents[v]} to the right-hand side of equation {@code eq}.
-         * A zero coefficient adds nothing.
+         * A zero coefficient is kept (the structure of a system does not depend on parameter values, so that
+         * the same plan can be run with coefficients computed in another precision).
          */
         public Builder term(int eq, Complex c, int basePower, int... exponents) {
             if (exponents.length != unknowns.size()) {
@@ -157,9 +158,6 @@ public final class PolynomialSystem {
             }
             if (!Double.isFinite(c.getReal()) || !Double.isFinite(c.getImaginary())) {
                 throw new InvalidInputException("coefficient", "must be finite, got " + c);
-            }
-            if (c.getReal() == 0 && c.getImaginary() == 0) {
-                return this;
             }
             coefficients.add(c);
             rhs.get(eq).add(new Term(coefficients.size() - 1, basePower, exponents));

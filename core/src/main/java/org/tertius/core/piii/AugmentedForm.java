@@ -81,6 +81,33 @@ final class AugmentedForm implements Painleve3Form {
     }
 
     @Override
+    public org.apfloat.Apcomplex[] coefficients(HighPrecisionParameters p) {
+        org.apfloat.FixedPrecisionApcomplexHelper h = p.helper();
+        org.apfloat.Apcomplex one = h.valueOf(org.apfloat.Apcomplex.ONE);
+        // same order as the terms of the constructor
+        return new org.apfloat.Apcomplex[] {one, one, p.alpha(), p.beta(), p.gamma(), p.delta(), h.negate(one)};
+    }
+
+    @Override
+    public org.apfloat.Apcomplex[] toState(HighPrecisionParameters p, org.apfloat.Apcomplex z,
+                                           org.apfloat.Apcomplex w, org.apfloat.Apcomplex dw) {
+        org.apfloat.FixedPrecisionApcomplexHelper h = p.helper();
+        return new org.apfloat.Apcomplex[] {h.valueOf(w), h.multiply(z, dw),
+            h.divide(h.valueOf(org.apfloat.Apcomplex.ONE), w)};
+    }
+
+    @Override
+    public org.apfloat.Apcomplex[] fromState(HighPrecisionParameters p, org.apfloat.Apcomplex z,
+                                             org.apfloat.Apcomplex[] y) {
+        org.apfloat.FixedPrecisionApcomplexHelper h = p.helper();
+        org.apfloat.Apcomplex w = y[0];
+        if (org.apfloat.ApcomplexMath.abs(w).compareTo(org.apfloat.Apfloat.ONE) < 0) {
+            w = h.divide(h.valueOf(org.apfloat.Apcomplex.ONE), y[2]);
+        }
+        return new org.apfloat.Apcomplex[] {w, h.divide(y[1], z)};
+    }
+
+    @Override
     public String describe() {
         return "augmented form (w, z w', 1/w)";
     }

@@ -110,4 +110,36 @@ final class HamiltonianForm implements Painleve3Form {
     Painleve3 equation() {
         return eq;
     }
+
+    @Override
+    public org.apfloat.Apcomplex[] coefficients(HighPrecisionParameters hp) {
+        org.apfloat.FixedPrecisionApcomplexHelper h = hp.helper();
+        org.apfloat.Apcomplex cc = hp.c(c);
+        org.apfloat.Apcomplex bb = h.subtract(h.valueOf(org.apfloat.Apcomplex.ONE), h.divide(hp.beta(), cc));
+        org.apfloat.Apcomplex two = h.valueOf(new org.apfloat.Apfloat(2));
+        // same order as the terms of the constructor
+        return new org.apfloat.Apcomplex[] {two, bb, cc, h.negate(two), h.negate(bb), h.divide(hp.alpha(), two),
+            h.divide(hp.gamma(), two)};
+    }
+
+    @Override
+    public org.apfloat.Apcomplex[] toState(HighPrecisionParameters hp, org.apfloat.Apcomplex z,
+                                           org.apfloat.Apcomplex w, org.apfloat.Apcomplex dw) {
+        org.apfloat.FixedPrecisionApcomplexHelper h = hp.helper();
+        org.apfloat.Apcomplex[] k = coefficients(hp);
+        org.apfloat.Apcomplex p = h.divide(h.subtract(h.subtract(h.multiply(z, dw), h.multiply(k[1], w)),
+                h.multiply(k[2], z)), h.multiply(k[0], h.multiply(w, w)));
+        return new org.apfloat.Apcomplex[] {h.valueOf(w), p};
+    }
+
+    @Override
+    public org.apfloat.Apcomplex[] fromState(HighPrecisionParameters hp, org.apfloat.Apcomplex z,
+                                             org.apfloat.Apcomplex[] y) {
+        org.apfloat.FixedPrecisionApcomplexHelper h = hp.helper();
+        org.apfloat.Apcomplex[] k = coefficients(hp);
+        org.apfloat.Apcomplex w = y[0];
+        org.apfloat.Apcomplex dw = h.divide(h.add(h.add(h.multiply(k[0], h.multiply(h.multiply(w, w), y[1])),
+                h.multiply(k[1], w)), h.multiply(k[2], z)), z);
+        return new org.apfloat.Apcomplex[] {w, dw};
+    }
 }

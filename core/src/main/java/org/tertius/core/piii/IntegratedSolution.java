@@ -107,4 +107,8 @@ final class IntegratedSolution extends Painleve3Solution {
     Solution engine() {
         return engine;
     }
+
+    Painleve3Form form() {
+        return form;
+    }
 }

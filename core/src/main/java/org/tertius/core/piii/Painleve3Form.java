@@ -25,4 +25,19 @@ interface Painleve3Form {
 
     /** One line that says which form is used (for output headers). */
     String describe();
+
+    /**
+     * The coefficient values of {@link #system()} (same order) computed in arbitrary precision from
+     * high-precision parameters, for kernels that run the same recurrence plan at higher precision.
+     */
+    org.apfloat.Apcomplex[] coefficients(HighPrecisionParameters p);
+
+    /**
+     * The state for (z, w, w') in arbitrary precision (same layout as {@link #toState}); w != 0.
+     */
+    org.apfloat.Apcomplex[] toState(HighPrecisionParameters p, org.apfloat.Apcomplex z, org.apfloat.Apcomplex w,
+                                    org.apfloat.Apcomplex dw);
+
+    /** {w, w'} from a high-precision state. */
+    org.apfloat.Apcomplex[] fromState(HighPrecisionParameters p, org.apfloat.Apcomplex z, org.apfloat.Apcomplex[] y);
 }

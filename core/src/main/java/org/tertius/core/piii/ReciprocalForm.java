@@ -44,6 +44,28 @@ final class ReciprocalForm implements Painleve3Form {
     }
 
     @Override
+    public org.apfloat.Apcomplex[] coefficients(HighPrecisionParameters p) {
+        return inner.coefficients(p.reciprocal());
+    }
+
+    @Override
+    public org.apfloat.Apcomplex[] toState(HighPrecisionParameters p, org.apfloat.Apcomplex z,
+                                           org.apfloat.Apcomplex w, org.apfloat.Apcomplex dw) {
+        org.apfloat.FixedPrecisionApcomplexHelper h = p.helper();
+        return inner.toState(p.reciprocal(), z, h.divide(h.valueOf(org.apfloat.Apcomplex.ONE), w),
+                h.negate(h.divide(dw, h.multiply(w, w))));
+    }
+
+    @Override
+    public org.apfloat.Apcomplex[] fromState(HighPrecisionParameters p, org.apfloat.Apcomplex z,
+                                             org.apfloat.Apcomplex[] y) {
+        org.apfloat.FixedPrecisionApcomplexHelper h = p.helper();
+        org.apfloat.Apcomplex[] v = inner.fromState(p.reciprocal(), z, y);
+        return new org.apfloat.Apcomplex[] {h.divide(h.valueOf(org.apfloat.Apcomplex.ONE), v[0]),
+            h.negate(h.divide(v[1], h.multiply(v[0], v[0])))};
+    }
+
+    @Override
     public String describe() {
         return "reciprocal 1/w in the " + inner.describe();
     }

@@ -1,0 +1,54 @@
+package org.tertius.core.piii;
+
+import org.apfloat.Apcomplex;
+import org.tertius.core.solution.Solution;
+
+/**
+ * Access to what lies behind an integrated Painleve III solution, for layers that run the same recurrence
+ * plan in another precision along the same path tree: the engine solution (its nodes and their tree) and the
+ * conversions of the polynomial form that was chosen, in arbitrary precision.
+ */
+public final class EngineView {
+    private final IntegratedSolution solution;
+
+    private EngineView(IntegratedSolution solution) {
+        this.solution = solution;
+    }
+
+    /**
+     * @throws org.tertius.core.InvalidInputException if the solution is not an integrated one (for example an
+     *     image under a symmetry)
+     */
+    public static EngineView of(Painleve3Solution s) {
+        if (!(s instanceof IntegratedSolution)) {
+            throw new org.tertius.core.InvalidInputException("solution",
+                    "an integrated solution (from Painleve3Solution.builder) is required here");
+        }
+        return new EngineView((IntegratedSolution) s);
+    }
+
+    /** The engine solution (path tree in tau = log z). */
+    public Solution engine() {
+        return solution.engine();
+    }
+
+    /** Coefficients of the form's system in arbitrary precision (order of the system's coefficient list). */
+    public Apcomplex[] coefficients(HighPrecisionParameters p) {
+        return solution.form().coefficients(p);
+    }
+
+    /** The state of the form for (z, w, w'), w != 0, in arbitrary precision. */
+    public Apcomplex[] toState(HighPrecisionParameters p, Apcomplex z, Apcomplex w, Apcomplex dw) {
+        return solution.form().toState(p, z, w, dw);
+    }
+
+    /** {w, w'} from a state of the form, in arbitrary precision. */
+    public Apcomplex[] fromState(HighPrecisionParameters p, Apcomplex z, Apcomplex[] y) {
+        return solution.form().fromState(p, z, y);
+    }
+
+    /** The description of the form. */
+    public String formDescription() {
+        return solution.form().describe();
+    }
+}
