@@ -20,7 +20,7 @@ public final class ComplexText {
     }
 
     /**
-     * Parses a complex number.
+     * Parses a complex number (a+bi form) or a real rational p/q (rounded to double).
      *
      * @param argument the argument name used in the error message
      * @param text the text
@@ -32,12 +32,26 @@ public final class ComplexText {
             throw new InvalidInputException(argument, "a complex number is required (for example 3+2i)");
         }
         String s = text.trim().replace(" ", "");
-        Complex c = tryParse(s);
+        Complex c = s.contains("/") ? tryRational(s) : tryParse(s);
         if (c == null || !Double.isFinite(c.getReal()) || !Double.isFinite(c.getImaginary())) {
             throw new InvalidInputException(argument, "cannot read '" + text
                     + "' as a finite complex number; write it as a+bi, for example 3+2i, -1.5, 2.5e-3-4i or 3i");
         }
         return c;
+    }
+
+    /** A real rational p/q (integers or decimals), e.g. -1/2 or 1/3. */
+    private static Complex tryRational(String s) {
+        int slash = s.indexOf('/');
+        if (slash != s.lastIndexOf('/')) {
+            return null;
+        }
+        double p = parseSigned(s.substring(0, slash));
+        double q = parseSigned(s.substring(slash + 1));
+        if (Double.isNaN(p) || Double.isNaN(q) || q == 0) {
+            return null;
+        }
+        return new Complex(p / q);
     }
 
     private static Complex tryParse(String s) {

@@ -1,0 +1,59 @@
+package org.tertius.cli;
+
+import java.nio.file.Path;
+import org.tertius.core.InvalidInputException;
+import org.tertius.core.piii.Painleve3;
+import org.tertius.core.piii.Painleve3Solution;
+import picocli.CommandLine.ArgGroup;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+
+/** Everything that fixes one solution: equation, start data (or a problem file), solver settings. */
+public final class SolutionOptions {
+    @Option(names = "--problem", paramLabel = "FILE", description = "problem file (key = value lines); options win")
+    Path problem;
+    @Mixin
+    EquationOptions equation = new EquationOptions();
+    @Mixin
+    StartOptions start = new StartOptions();
+    @Mixin
+    SolverOptions solver = new SolverOptions();
+
+    private ProblemFile file;
+
+    /** The problem file (read once). */
+    ProblemFile file() {
+        if (file == null) {
+            file = ProblemFile.read(problem);
+            equation.defaults(file);
+            start.defaults(file);
+            solver.defaults(file);
+        }
+        return file;
+    }
+
+    Painleve3 equationValue() {
+        file();
+        return equation.equation();
+    }
+
+    Painleve3Solution solution() {
+        file();
+        Painleve3 eq = equation.equation();
+        if (!start.given()) {
+            throw new InvalidInputException("--z0", "start data are required: give --z0, --w0 and --dw0"
+                    + " (or a --problem file with z0, w0, dw0)");
+        }
+        return Painleve3Solution.builder(eq).start(start.z0(), start.w0(), start.dw0())
+                .thirdDerivativeAtZero(start.d3w0()).settings(solver.settings()).build();
+    }
+
+    /** --sheet from the option or the problem file (default 0). */
+    int sheet(Integer option) {
+        if (option != null) {
+            return option;
+        }
+        ProblemFile f = file();
+        return f.has("sheet") ? f.intValue("sheet") : 0;
+    }
+}
