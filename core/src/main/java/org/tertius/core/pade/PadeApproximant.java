@@ -36,21 +36,27 @@ public final class PadeApproximant {
      * and into out[3] the defect estimate |D(s)| / |q(s)|, where D = q f - p is formed with all the Taylor
      * coefficients that were available (not only those the degrees used). After a degree reduction D is the
      * part of the known series that the approximant does not reproduce; without one it holds rounding only.
+     * If {@code out} has a fifth slot, out[4] receives a bound of the rounding error of the evaluation itself.
      */
     public void evaluate(double sr, double si, double[] out) {
+        double sm = Math.hypot(sr, si);
         double nr = 0;
         double ni = 0;
+        double na = 0;
         for (int k = pRe.length - 1; k >= 0; k--) {
             double t = nr * sr - ni * si + pRe[k];
             ni = nr * si + ni * sr + pIm[k];
             nr = t;
+            na = na * sm + Math.hypot(pRe[k], pIm[k]);
         }
         double dr = 0;
         double di = 0;
+        double da = 0;
         for (int k = qRe.length - 1; k >= 0; k--) {
             double t = dr * sr - di * si + qRe[k];
             di = dr * si + di * sr + qIm[k];
             dr = t;
+            da = da * sm + Math.hypot(qRe[k], qIm[k]);
         }
         double d = dr * dr + di * di;
         out[0] = (nr * dr + ni * di) / d;
@@ -64,6 +70,15 @@ public final class PadeApproximant {
             er = t;
         }
         out[3] = Math.hypot(er, ei) / out[2];
+        // rounding of the two Horner sums (a standard bound, about 2 deg ulps of the sum of |terms|), divided
+        // through: large next to a pole, where |q(s)| is small against its terms
+        if (out.length > 4) {
+            double u = Math.ulp(1.0);
+            double pm = Math.hypot(nr, ni);
+            double ep = 2 * pRe.length * u * na;
+            double eq = 2 * qRe.length * u * da;
+            out[4] = (ep + eq * pm / out[2]) / out[2];
+        }
     }
 
     /** Denominator coefficients (real parts), lowest degree first; a copy. */

@@ -9,8 +9,10 @@ import org.tertius.core.step.TaylorPadeStepper;
  * a few candidate directions around the direction to the target are tried and the one whose end point lies
  * furthest from the singularities is taken. Here the singularities are the poles of the Pade approximants of
  * every component of the system, so that zeros of w (poles of the companion unknowns) are avoided as well as
- * poles of w. The direct direction is kept while it has clearance; every candidate end point must also meet
- * the local tolerance, and the step is shortened until one does.
+ * poles of w. Progress comes first: the candidate closest to the direction of the target whose end point meets
+ * the local tolerance and keeps a clearance of half the step length is taken; failing that, the one with the
+ * largest clearance; and the step is shortened (rather than turned further aside) until one qualifies, which
+ * avoids the back-and-forth that a pure clearance rule shows next to a target surrounded by singularities.
  *
  * <p>Stateless and thread-safe.
  */
@@ -18,8 +20,11 @@ public final class PathSelector {
     /** Offsets from the direction to the target (radians). */
     private static final double[] OFFSETS = {0, Math.PI / 8, -Math.PI / 8, Math.PI / 4, -Math.PI / 4,
         3 * Math.PI / 8, -3 * Math.PI / 8};
-    /** Clearance (in units of the node radius) that lets the direct direction be taken without comparison. */
-    private static final double DIRECT_CLEARANCE = 0.75;
+    /**
+     * Clearance from the singularities, as a fraction of the step length, that a candidate end point needs to
+     * be taken on progress alone.
+     */
+    private static final double MIN_CLEARANCE = 0.5;
 
     private PathSelector() {
     }
@@ -66,34 +71,33 @@ public final class PathSelector {
         }
         double theta = Math.atan2(di, dr);
         double length = Math.min(1.0, dist <= 1.0 ? 0.5 * dist : 1.0);
+        Choice fallback = null;
+        double fallbackClearance = -1;
         for (int attempt = 0; attempt < 12; attempt++) {
-            double bestScore = -1;
-            double bestR = 0;
-            double bestI = 0;
+            // candidates in order of increasing deviation: the first admissible one that keeps clear of the
+            // singularities is taken (progress first); otherwise the one with the largest clearance
             for (int c = 0; c < OFFSETS.length; c++) {
                 double a = theta + OFFSETS[c];
                 double cr = length * Math.cos(a);
                 double ci = length * Math.sin(a);
                 double clearance = clearance(node, cr, ci);
-                if (c > 0 && bestScore >= DIRECT_CLEARANCE * length && c == 1) {
-                    break; // the direct direction is clear
-                }
-                if (clearance <= bestScore) {
-                    continue;
-                }
                 if (stepper.localError(node, cr, ci) > tol) {
                     continue;
                 }
-                bestScore = clearance;
-                bestR = cr;
-                bestI = ci;
+                if (clearance >= MIN_CLEARANCE * length && Math.abs(OFFSETS[c]) <= Math.PI / 4 + 1e-9) {
+                    return new Choice(cr, ci, false);
+                }
+                if (clearance > fallbackClearance) {
+                    fallbackClearance = clearance;
+                    fallback = new Choice(cr, ci, false);
+                }
             }
-            if (bestScore >= 0) {
-                return new Choice(bestR, bestI, false);
+            if (fallback != null && fallbackClearance >= MIN_CLEARANCE * length) {
+                return fallback;
             }
             length *= 0.6;
         }
-        return null;
+        return fallback;
     }
 
     /** Distance from the scaled point s to the nearest recorded singularity, in units of the radius. */

@@ -31,6 +31,10 @@ public final class Solution {
     private final SolverSettings settings;
     private final StateProjection projection;
     private final ThreadLocal<TaylorPadeStepper> steppers;
+    /** Steps towards a target already inside the disk of the current node before its value is accepted. */
+    private static final int MAX_APPROACHES = 6;
+    /** Steps without getting closer to the target before it is declared unreachable. */
+    private static final int STALL_STEPS = 60;
     private final Object lock = new Object();
     private final boolean singularAtOrigin;
     private volatile Node[] nodes;
@@ -139,10 +143,21 @@ public final class Solution {
         Node current = start;
         int baseId = -1;
         int steps = 0;
+        int approaches = 0;
+        double bestDistance = Double.POSITIVE_INFINITY;
+        int lastProgress = 0;
         while (true) {
             PathSelector.Choice choice = PathSelector.choose(current, tauRe, tauIm, stepper, tol);
             if (choice != null && choice.reachesTarget()) {
                 break;
+            }
+            if (inDisk(current, tauRe, tauIm)) {
+                // the target is in the disk but its local error is above the tolerance (it lies next to a
+                // singularity of some component): approach it a few times, then accept the value with its
+                // larger, honest error estimate rather than circling for ever
+                if (++approaches > MAX_APPROACHES) {
+                    break;
+                }
             }
             if (choice == null || steps >= settings.maxSteps()) {
                 throw new UnreachableTargetException("could not reach tau = " + tauRe + (tauIm < 0 ? "" : "+")
@@ -154,6 +169,9 @@ public final class Solution {
             double maxR = maxRadius(current.tauRe() + current.radius() * choice.sr(),
                     current.tauIm() + current.radius() * choice.si());
             Node next = stepper.step(current, choice.sr(), choice.si(), baseId - steps - 1, maxR);
+            if (Boolean.getBoolean("tertius.trace")) {
+                System.err.printf("step %d s=(%.3f,%.3f) -> tau=(%.4f,%.4f) r=%.4f sing=%d acc=%.2e%n", steps, choice.sr(), choice.si(), next.tauRe(), next.tauIm(), next.radius(), next.singularityCount(), next.accumulatedError());
+            }
             if (!(next.accumulatedError() <= settings.maxError())) {
                 throw new UnreachableTargetException("the accumulated error estimate " + next.accumulatedError()
                         + " exceeds " + settings.maxError() + " on the way to tau = " + tauRe + "," + tauIm
@@ -162,12 +180,25 @@ public final class Solution {
             path.add(next);
             current = next;
             steps++;
+            double d = Math.hypot(tauRe - next.tauRe(), tauIm - next.tauIm());
+            if (d < bestDistance * 0.999) {
+                bestDistance = d;
+                lastProgress = steps;
+            } else if (steps - lastProgress > STALL_STEPS) {
+                throw new UnreachableTargetException("no progress towards tau = " + tauRe + "," + tauIm + " in "
+                        + STALL_STEPS + " steps (last node at " + next.tauRe() + "," + next.tauIm()
+                        + "); the target is hemmed in by singularities: move it slightly or loosen the tolerance");
+            }
         }
         Node last = current;
         if (!path.isEmpty()) {
             last = merge(start, path);
         }
         return estimate(last, tauRe, tauIm, steps);
+    }
+
+    private static boolean inDisk(Node n, double tRe, double tIm) {
+        return Math.hypot(tRe - n.tauRe(), tIm - n.tauIm()) <= n.radius();
     }
 
     /** Largest radius allowed at tau: half the distance to a singular origin in PLAIN mode. */

@@ -160,14 +160,30 @@ public final class Node {
 
     /** As {@link #evaluate} but at the scaled point s. */
     public void evaluateScaled(double sr, double si, double[] out, double[] err) {
-        double[] a = new double[4];
+        evaluateScaled(sr, si, out, err, false);
+    }
+
+    /**
+     * Evaluates at the scaled point s.
+     *
+     * @param truncationOnly if true, {@code err} holds only the truncation part of the local error (the
+     *     difference of the two orders and the defects), which is what step-size control can act on; otherwise
+     *     it also holds the rounding errors of the coefficients and of the evaluation, which grow next to
+     *     singularities whatever the step
+     */
+    public void evaluateScaled(double sr, double si, double[] out, double[] err, boolean truncationOnly) {
+        double[] a = new double[5];
         double[] b = new double[4];
         for (int i = 0; i < high.length; i++) {
             high[i].evaluate(sr, si, a);
             low[i].evaluate(sr, si, b);
             out[2 * i] = a[0];
             out[2 * i + 1] = a[1];
-            err[i] = Math.hypot(a[0] - b[0], a[1] - b[1]) + a[3] + b[3] + roundingFloor[i];
+            double e = Math.hypot(a[0] - b[0], a[1] - b[1]) + a[3] + b[3];
+            if (!truncationOnly) {
+                e += a[4] + roundingFloor[i];
+            }
+            err[i] = Double.isFinite(e) ? e : Double.POSITIVE_INFINITY;
         }
     }
 

@@ -182,11 +182,12 @@ public final class TaylorPadeStepper {
     }
 
     /**
-     * The relative local error estimate of a node at the scaled point s: max over components of
-     * local error / (1 + |value|).
+     * The relative local truncation error estimate of a node at the scaled point s (what step control acts
+     * on): max over components of truncation error / (1 + |value|). Rounding errors are not included here
+     * but are carried into the error vector and the reported errors.
      */
     public double localError(Node node, double sr, double si) {
-        node.evaluateScaled(sr, si, val, err);
+        node.evaluateScaled(sr, si, val, err, true);
         double e = 0;
         for (int i = 0; i < n; i++) {
             double mod = Math.hypot(val[2 * i], val[2 * i + 1]);

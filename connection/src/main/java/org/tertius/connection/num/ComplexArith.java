@@ -1,0 +1,92 @@
+package org.tertius.connection.num;
+
+import org.hipparchus.complex.Complex;
+
+/** {@link Arith} in double precision (Hipparchus complex numbers). */
+final class ComplexArith implements Arith<Complex> {
+
+    @Override
+    public Complex of(double re, double im) {
+        return new Complex(re, im);
+    }
+
+    @Override
+    public Complex ratio(long p, long q) {
+        return new Complex((double) p / q);
+    }
+
+    @Override
+    public Complex add(Complex a, Complex b) {
+        return a.add(b);
+    }
+
+    @Override
+    public Complex sub(Complex a, Complex b) {
+        return a.subtract(b);
+    }
+
+    @Override
+    public Complex mul(Complex a, Complex b) {
+        return a.multiply(b);
+    }
+
+    @Override
+    public Complex mul(Complex a, long k) {
+        return a.multiply((double) k);
+    }
+
+    @Override
+    public Complex scale(Complex a, double s) {
+        return a.multiply(s);
+    }
+
+    @Override
+    public Complex div(Complex a, Complex b) {
+        return a.divide(b);
+    }
+
+    @Override
+    public Complex neg(Complex a) {
+        return a.negate();
+    }
+
+    @Override
+    public Complex exp(Complex a) {
+        return a.exp();
+    }
+
+    @Override
+    public Complex log(Complex a) {
+        return a.log();
+    }
+
+    @Override
+    public Complex sqrt(Complex a) {
+        return a.sqrt();
+    }
+
+    @Override
+    public Complex pow(Complex a, Complex b) {
+        return b.multiply(a.log()).exp();
+    }
+
+    @Override
+    public double abs(Complex a) {
+        return a.norm();
+    }
+
+    @Override
+    public Complex toComplex(Complex a) {
+        return a;
+    }
+
+    @Override
+    public double epsilon() {
+        return 0x1p-53;
+    }
+
+    @Override
+    public long digits() {
+        return 16;
+    }
+}

@@ -1,0 +1,61 @@
+package org.tertius.connection.zero;
+
+import org.hipparchus.complex.Complex;
+import org.tertius.connection.num.Arith;
+
+/**
+ * A value of a local expansion: the point z, w(z), w'(z) and estimated absolute errors of w and w' (truncation
+ * plus propagated rounding). Immutable.
+ *
+ * @param <T> the number type
+ */
+public final class LocalValue<T> {
+    private final T z;
+    private final T w;
+    private final T dw;
+    private final double errW;
+    private final double errDw;
+
+    public LocalValue(T z, T w, T dw, double errW, double errDw) {
+        this.z = z;
+        this.w = w;
+        this.dw = dw;
+        this.errW = errW;
+        this.errDw = errDw;
+    }
+
+    public T z() {
+        return z;
+    }
+
+    public T w() {
+        return w;
+    }
+
+    public T dw() {
+        return dw;
+    }
+
+    public double errW() {
+        return errW;
+    }
+
+    public double errDw() {
+        return errDw;
+    }
+
+    /** The larger error estimate relative to 1 + |value|. */
+    public double relativeError(Arith<T> a) {
+        return Math.max(errW / (1 + a.abs(w)), errDw / (1 + a.abs(dw)));
+    }
+
+    /** The values in double precision: {z, w, w'}. */
+    public Complex[] toComplex(Arith<T> a) {
+        return new Complex[] {a.toComplex(z), a.toComplex(w), a.toComplex(dw)};
+    }
+
+    @Override
+    public String toString() {
+        return "z = " + z + ": w = " + w + " +- " + errW + ", w' = " + dw + " +- " + errDw;
+    }
+}
