@@ -119,7 +119,7 @@ public final class ApcomplexArith implements Arith<Apcomplex> {
         return h.precision();
     }
 
-    /** pi at the working precision. */
+    @Override
     public Apcomplex pi() {
         return new Apcomplex(ApfloatMath.pi(h.precision()));
     }

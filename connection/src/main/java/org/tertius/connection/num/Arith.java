@@ -43,6 +43,9 @@ public interface Arith<T> {
     /** a^b = exp(b log a) with the principal logarithm. */
     T pow(T a, T b);
 
+    /** pi at the working precision. */
+    T pi();
+
     /** Modulus as a double (0 and huge values are fine: the result saturates, it does not throw). */
     double abs(T a);
 

@@ -71,6 +71,11 @@ final class ComplexArith implements Arith<Complex> {
     }
 
     @Override
+    public Complex pi() {
+        return new Complex(Math.PI);
+    }
+
+    @Override
     public double abs(Complex a) {
         return a.norm();
     }

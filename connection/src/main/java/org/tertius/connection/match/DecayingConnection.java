@@ -1,0 +1,105 @@
+package org.tertius.connection.match;
+
+import java.util.List;
+import org.hipparchus.complex.Complex;
+import org.tertius.connection.infinity.DecayingTransseries;
+import org.tertius.connection.num.Arith;
+import org.tertius.connection.path.DeviationTaylor;
+import org.tertius.connection.zero.LocalValue;
+import org.tertius.core.InvalidInputException;
+import org.tertius.core.number.SurfacePoint;
+import org.tertius.core.piii.Painleve3;
+import org.tertius.core.piii.Painleve3Solution;
+import org.tertius.core.piii.Painleve3Value;
+import org.tertius.core.step.SolverSettings;
+
+/**
+ * The decaying family of PIII(0, 0, 1, -1), w ~ 1 - 2 lambda K0(2x) at +infinity (McCoy, Tracy and Wu,
+ * J. Math. Phys. 18 (1977) 1058), connected numerically to its behaviour w ~ B x^sigma at 0:
+ * <ol>
+ *   <li>the transseries {@link DecayingTransseries} at x = {@link #FAR} (error below 1e-20 relative to w - 1
+ *       there),</li>
+ *   <li>the deviation w - 1 carried inward to x = {@link #MIDDLE} by {@link DeviationTaylor} with relative
+ *       accuracy (where w - 1 is small, an absolute error of w is a large relative error of lambda),</li>
+ *   <li>from there to a small x0 by the core engine (double) or by {@link DeviationTaylor} on w itself
+ *       (any precision),</li>
+ *   <li>(sigma, B) fitted at x0 by {@link ZeroFit}.</li>
+ * </ol>
+ * Immutable and thread-safe.
+ */
+public final class DecayingConnection {
+    /** Where the transseries is evaluated. */
+    public static final double FAR = 12;
+    /** Where the background-relative integration hands over. */
+    public static final double MIDDLE = 1;
+
+    private DecayingConnection() {
+    }
+
+    /** The equation of the family: alpha = beta = 0, gamma = 1, delta = -1. */
+    public static Painleve3 equation() {
+        return Painleve3.of(0, 0, 1, -1);
+    }
+
+    /** The parameters (0, 0, 1, -1) in the arithmetic {@code ar}. */
+    public static <T> List<T> parameters(Arith<T> ar) {
+        return List.of(ar.zero(), ar.zero(), ar.one(), ar.of(-1));
+    }
+
+    /** The deviation v = w - 1 and w' at x = MIDDLE for the member lambda, with error estimates. */
+    public static <T> LocalValue<T> middleDeviation(Arith<T> ar, T lambda, double tolerance) {
+        int sectors = 1 + 2 * (int) Math.ceil(ar.digits() / 10.0);
+        DecayingTransseries<T> ts = DecayingTransseries.create(ar, lambda, sectors, (int) (8 * FAR + 20));
+        LocalValue<T> far = ts.deviationAt(ar.of(FAR));
+        return DeviationTaylor.create(ar, parameters(ar), ar.one(), order(ar)).integrate(far, ar.of(MIDDLE),
+                tolerance);
+    }
+
+    private static <T> int order(Arith<T> ar) {
+        return (int) Math.min(400, Math.max(30, 2 * ar.digits()));
+    }
+
+    /** w and w' at x = MIDDLE (double), from {@link #middleDeviation}. */
+    public static Painleve3Value middleValue(double lambda) {
+        requireFinite(lambda);
+        LocalValue<Complex> v = middleDeviation(Arith.DOUBLE, new Complex(lambda), 1e-16);
+        return new Painleve3Value(SurfacePoint.of(MIDDLE, 0), v.w().add(1), v.dw(), v.errW(), v.errDw());
+    }
+
+    /** The member lambda as an integrated solution of the core engine, started at x = MIDDLE. */
+    public static Painleve3Solution solution(double lambda, SolverSettings settings) {
+        Painleve3Value m = middleValue(lambda);
+        return Painleve3Solution.builder(equation()).start(new Complex(MIDDLE), m.w(), m.dw()).settings(settings)
+                .build();
+    }
+
+    /** (sigma, B) of the member lambda in double precision, through the core engine, fitted at x0. */
+    public static ZeroFit.Result<Complex> zeroDataByEngine(double lambda, double x0, SolverSettings settings) {
+        Painleve3Value m = middleValue(lambda);
+        Painleve3Solution s = Painleve3Solution.builder(equation()).start(new Complex(MIDDLE), m.w(), m.dw())
+                .settings(settings).build();
+        Painleve3Value at = s.evaluate(SurfacePoint.of(x0, 0));
+        // errors of the start data are propagated at most by the growth of w - 1 relative to its size at MIDDLE
+        double grow = Math.max(1, at.w().norm() / Math.max(1e-300, m.w().subtract(1).norm()));
+        LocalValue<Complex> data = new LocalValue<>(new Complex(x0), at.w(), at.dw(), at.errW() + grow * m.errW(),
+                at.errDw() + grow * m.errW() / x0);
+        return new ZeroFit<>(Arith.DOUBLE, parameters(Arith.DOUBLE), 40).fit(data);
+    }
+
+    /**
+     * (sigma, B) of the member lambda in the arithmetic {@code ar} without the core engine: the deviation
+     * integrator runs on to x0 on w itself.
+     */
+    public static <T> ZeroFit.Result<T> zeroData(Arith<T> ar, T lambda, double x0, int degree) {
+        double tol = ar.epsilon() * 10;
+        LocalValue<T> mid = middleDeviation(ar, lambda, tol);
+        LocalValue<T> w = new LocalValue<>(mid.z(), ar.add(mid.w(), ar.one()), mid.dw(), mid.errW(), mid.errDw());
+        LocalValue<T> end = DeviationTaylor.create(ar, parameters(ar), ar.zero(), order(ar)).integrate(w, ar.of(x0),
+                tol);
+        return new ZeroFit<>(ar, parameters(ar), degree).fit(end);
+    }
+
+    private static void requireFinite(double lambda) {
+        InvalidInputException.requireFinite("lambda", lambda);
+    }
+}

@@ -1,0 +1,110 @@
+package org.tertius.connection.match;
+
+import java.util.List;
+import org.tertius.connection.num.Arith;
+import org.tertius.connection.zero.LocalValue;
+import org.tertius.connection.zero.PowerSeriesAtZero;
+import org.tertius.core.TertiusException;
+
+/**
+ * Reads the parameters (sigma, B) of w ~ B z^sigma off a value (z0, w, w') at a small z0: Newton's method on
+ * the two equations "series at z0 = data" (Jacobian by differences), started from sigma = z w'/w,
+ * B = w z^-sigma. The error estimate maps the errors of the data and of the series through the inverse
+ * Jacobian (first order). Immutable and thread-safe.
+ *
+ * @param <T> number type
+ */
+public final class ZeroFit<T> {
+    private final Arith<T> ar;
+    private final List<T> parameters;
+    private final int degree;
+
+    public ZeroFit(Arith<T> ar, List<T> parameters, int degree) {
+        this.ar = ar;
+        this.parameters = List.copyOf(parameters);
+        this.degree = degree;
+    }
+
+    /** The fitted sigma and B with estimated absolute errors. */
+    public static final class Result<T> {
+        private final T sigma;
+        private final T b;
+        private final double errSigma;
+        private final double errB;
+
+        Result(T sigma, T b, double errSigma, double errB) {
+            this.sigma = sigma;
+            this.b = b;
+            this.errSigma = errSigma;
+            this.errB = errB;
+        }
+
+        public T sigma() {
+            return sigma;
+        }
+
+        public T amplitude() {
+            return b;
+        }
+
+        public double errSigma() {
+            return errSigma;
+        }
+
+        public double errAmplitude() {
+            return errB;
+        }
+    }
+
+    /**
+     * @throws TertiusException if Newton's method does not converge (the data are not in the region of the
+     *     power behaviour: z0 too large, or a logarithmic or oscillatory solution)
+     */
+    public Result<T> fit(LocalValue<T> data) {
+        T z = data.z();
+        T sigma = ar.div(ar.mul(z, data.dw()), data.w());
+        T b = ar.div(data.w(), ar.pow(z, sigma));
+        double hs = Math.sqrt(ar.epsilon());
+        T[] r = residual(sigma, b, data);
+        double tol = 4 * ar.epsilon();
+        for (int it = 0; it < 60; it++) {
+            T ds = ar.of(hs);
+            T db = ar.mul(b, ar.of(hs));
+            T[] rs = residual(ar.add(sigma, ds), b, data);
+            T[] rb = residual(sigma, ar.add(b, db), data);
+            T j11 = ar.div(ar.sub(rs[0], r[0]), ds);
+            T j21 = ar.div(ar.sub(rs[1], r[1]), ds);
+            T j12 = ar.div(ar.sub(rb[0], r[0]), db);
+            T j22 = ar.div(ar.sub(rb[1], r[1]), db);
+            T det = ar.sub(ar.mul(j11, j22), ar.mul(j12, j21));
+            T stepS = ar.div(ar.sub(ar.mul(j22, r[0]), ar.mul(j12, r[1])), det);
+            T stepB = ar.div(ar.sub(ar.mul(j11, r[1]), ar.mul(j21, r[0])), det);
+            sigma = ar.sub(sigma, stepS);
+            b = ar.sub(b, stepB);
+            r = residual(sigma, b, data);
+            if (ar.abs(stepS) <= tol * (1 + ar.abs(sigma)) && ar.abs(stepB) <= tol * ar.abs(b)) {
+                return withErrors(sigma, b, data, new Object[] {j11, j12, j21, j22, det});
+            }
+        }
+        throw new TertiusException("the fit of w ~ B z^sigma at z0 = " + ar.toComplex(z) + " did not converge;"
+                + " the data are not in the region of the power behaviour (take z0 smaller)");
+    }
+
+    @SuppressWarnings("unchecked")
+    private Result<T> withErrors(T sigma, T b, LocalValue<T> data, Object[] jac) {
+        LocalValue<T> s = PowerSeriesAtZero.create(ar, parameters, sigma, b, degree).at(data.z());
+        double ew = data.errW() + s.errW();
+        double ed = data.errDw() + s.errDw();
+        double det = ar.abs((T) jac[4]);
+        double es = (ar.abs((T) jac[3]) * ew + ar.abs((T) jac[1]) * ed) / det;
+        double eb = (ar.abs((T) jac[2]) * ew + ar.abs((T) jac[0]) * ed) / det;
+        return new Result<>(sigma, b, es, eb);
+    }
+
+    private T[] residual(T sigma, T b, LocalValue<T> data) {
+        LocalValue<T> s = PowerSeriesAtZero.create(ar, parameters, sigma, b, degree).at(data.z());
+        @SuppressWarnings("unchecked")
+        T[] r = (T[]) new Object[] {ar.sub(s.w(), data.w()), ar.sub(s.dw(), data.dw())};
+        return r;
+    }
+}

@@ -1,0 +1,524 @@
+package org.tertius.core.mp;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.ConcurrentHashMap;
+import java.util.function.DoubleConsumer;
+import org.apfloat.Apcomplex;
+import org.apfloat.ApcomplexMath;
+import org.apfloat.Apfloat;
+import org.apfloat.ApfloatMath;
+import org.hipparchus.complex.Complex;
+import org.tertius.core.InvalidInputException;
+import org.tertius.core.number.SurfacePoint;
+import org.tertius.core.piii.EngineView;
+import org.tertius.core.piii.HighPrecisionParameters;
+import org.tertius.core.piii.Painleve3;
+import org.tertius.core.piii.Painleve3Solution;
+import org.tertius.core.solution.Solution;
+import org.tertius.core.step.Node;
+import org.tertius.core.step.SolverSettings;
+import org.tertius.core.taylor.RecurrencePlan;
+
+/**
+ * A Painleve III solution evaluated to a requested number of significant digits, from exact parameters and
+ * start data. The double-precision engine plans the path (its path tree in tau = log z, around the poles); the
+ * path from the start to the node nearest the target, and on to the target, is then integrated again in
+ * arbitrary precision with the same recurrence plan, the same polynomial form and its conversions.
+ *
+ * <p>Every value comes with its estimated number of correct digits: the path is integrated at two accuracies
+ * (about D/2 and D plus guard digits); their difference measures how much the path amplifies errors, and the
+ * guard digits of the accurate run are widened and the run repeated when the estimate falls short of D.
+ *
+ * <p>The states reached at the nodes of the path tree are kept (per accuracy), so later evaluations and
+ * tabulations start from the nearest of them instead of from the start point. Thread-safe; a long run can be
+ * cancelled by interrupting its thread ({@link org.tertius.core.TertiusException}).
+ */
+public final class HighPrecisionSolution {
+    /** The smallest and largest number of digits accepted. */
+    public static final int MIN_DIGITS = 16;
+    public static final int MAX_DIGITS = 5000;
+    private static final int MAX_REFINEMENTS = 3;
+
+    private final ExactNumber[] parameters;
+    private final ExactNumber z0;
+    private final ExactNumber w0;
+    private final ExactNumber dw0;
+    private final int digits;
+    private final DoubleConsumer progress;
+    private final Solution engine;
+    private final EngineView view;
+    private final RecurrencePlan plan;
+    private final double planningTolerance;
+    private final Map<Integer, Level> levels = new ConcurrentHashMap<>();
+
+    private HighPrecisionSolution(Builder b) {
+        this.parameters = b.parameters.clone();
+        this.z0 = b.z0;
+        this.w0 = b.w0;
+        this.dw0 = b.dw0;
+        this.digits = b.digits;
+        this.progress = b.progress;
+        Painleve3 eq = Painleve3.of(parameters[0].toComplex(), parameters[1].toComplex(), parameters[2].toComplex(),
+                parameters[3].toComplex());
+        Painleve3Solution planner = Painleve3Solution.builder(eq).settings(b.planning)
+                .start(z0.toComplex(), w0.toComplex(), dw0.toComplex()).build();
+        this.view = EngineView.of(planner);
+        this.engine = view.engine();
+        this.plan = RecurrencePlan.compile(engine.system());
+        this.planningTolerance = b.planning.tolerance();
+    }
+
+    /** A builder for the equation with the given exact parameters (decimals or rationals p/q, see {@link ExactNumber}). */
+    public static Builder builder(String alpha, String beta, String gamma, String delta) {
+        return new Builder(ExactNumber.parse("alpha", alpha), ExactNumber.parse("beta", beta),
+                ExactNumber.parse("gamma", gamma), ExactNumber.parse("delta", delta));
+    }
+
+    public static Builder builder(ExactNumber alpha, ExactNumber beta, ExactNumber gamma, ExactNumber delta) {
+        return new Builder(alpha, beta, gamma, delta);
+    }
+
+    /** The requested number of significant digits. */
+    public int digits() {
+        return digits;
+    }
+
+    /** The polynomial form integrated (from the planning solution). */
+    public String formDescription() {
+        return view.formDescription();
+    }
+
+    /**
+     * The value at a point of the Riemann surface (the point's coordinates are taken as exact binary numbers).
+     *
+     * @throws org.tertius.core.UnreachableTargetException if the point cannot be reached
+     */
+    public HighPrecisionValue evaluate(SurfacePoint point) {
+        return compute(level -> List.of(level.valueAt(point, null)), List.of(point)).get(0);
+    }
+
+    /**
+     * n >= 2 values at equally spaced points of the straight segment from a to b in tau = log z (a segment of
+     * the Riemann surface), from one pass of high-precision steps along it: the path is not integrated again per
+     * point.
+     */
+    public List<HighPrecisionValue> tabulate(SurfacePoint a, SurfacePoint b, int n) {
+        if (n < 2 || n > 1000000) {
+            throw new InvalidInputException("n", "the number of points must be in [2, 1000000], got " + n);
+        }
+        List<SurfacePoint> points = new ArrayList<>();
+        for (int i = 0; i < n; i++) {
+            double t = (double) i / (n - 1);
+            points.add(SurfacePoint.fromLog(a.logRe() + t * (b.logRe() - a.logRe()),
+                    a.logIm() + t * (b.logIm() - a.logIm())));
+        }
+        return compute(level -> level.line(a, b, n), points);
+    }
+
+    /** One integration pass at some accuracy, returning {w, w'} per point and the steps taken. */
+    private interface Pass {
+        List<Outcome> run(Level level);
+    }
+
+    /** {w, w'} of one point from one pass, with the number of steps on its path. */
+    static final class Outcome {
+        final Apcomplex w;
+        final Apcomplex dw;
+        final int steps;
+
+        Outcome(Apcomplex w, Apcomplex dw, int steps) {
+            this.w = w;
+            this.dw = dw;
+            this.steps = steps;
+        }
+    }
+
+    /**
+     * Runs a cheap pass and an accurate pass; the relative difference d of their results measures the error
+     * amplification of the path, A = d / (steps * tol_cheap), and the accurate result is credited with
+     * 10 * steps * tol * max(1, A) (each step contributes at most the local tolerance, amplified alike).
+     */
+    private List<HighPrecisionValue> compute(Pass pass, List<SurfacePoint> points) {
+        int cheapDigits = Math.max(20, digits / 2 + 5);
+        Progress meter = new Progress(progress);
+        meter.phase(0, 0.15);
+        List<Outcome> cheap = pass.run(level(cheapDigits, meter));
+        int maxSteps = 1;
+        for (Outcome o : cheap) {
+            maxSteps = Math.max(maxSteps, o.steps);
+        }
+        int accurateDigits = digits + 4 + (int) Math.ceil(Math.log10(maxSteps + 1.0));
+        List<HighPrecisionValue> result = null;
+        for (int round = 0; round < MAX_REFINEMENTS; round++) {
+            meter.phase(0.15 + 0.85 * round / MAX_REFINEMENTS, round == 0 ? 0.85 : 0.85 / MAX_REFINEMENTS);
+            List<Outcome> accurate = pass.run(level(accurateDigits, meter));
+            int worst = Integer.MAX_VALUE;
+            result = new ArrayList<>();
+            for (int i = 0; i < accurate.size(); i++) {
+                Outcome a = accurate.get(i);
+                Outcome c = cheap.get(i);
+                double log10Diff = Math.max(relativeDifference(a.w, c.w), relativeDifference(a.dw, c.dw));
+                double log10Amp = Math.max(0, log10Diff + cheapDigitsOf(c, cheapDigits) - Math.log10(c.steps + 1.0));
+                double log10Err = 1 + Math.log10(a.steps + 1.0) - accurateDigits + log10Amp;
+                int correct = (int) Math.max(0, Math.min(digits, Math.floor(-log10Err)));
+                worst = Math.min(worst, correct);
+                result.add(new HighPrecisionValue(points.get(i), a.w, a.dw, digits, correct));
+            }
+            if (worst >= digits) {
+                break;
+            }
+            cheap = accurate;
+            cheapDigits = accurateDigits;
+            accurateDigits = accurateDigits + (digits - worst) + 5;
+        }
+        meter.done();
+        return result;
+    }
+
+    private static int cheapDigitsOf(Outcome o, int d) {
+        return d;
+    }
+
+    /** log10 of |a - b| / |a| (or of |a - b| when a = 0). */
+    private static double relativeDifference(Apcomplex a, Apcomplex b) {
+        MpContext c = new MpContext((int) Math.min(100000, Math.max(20, Math.min(a.precision(), 1000000))));
+        MpComplex x = c.fromApcomplex(a);
+        MpComplex d = c.subtract(x, c.fromApcomplex(b));
+        if (d.isZero()) {
+            return -c.digits();
+        }
+        double l = d.log2Abs() - (x.isZero() ? 0 : x.log2Abs());
+        return l / MpContext.LOG2_10;
+    }
+
+    private Level level(int tolDigits, Progress meter) {
+        Level l = levels.computeIfAbsent(tolDigits, Level::new);
+        return l.withProgress(meter);
+    }
+
+    /** The double-precision chain of node ids from the root to the node that serves tau. */
+    private int[] chain(double tauRe, double tauIm) {
+        int served = engine.evaluate(tauRe, tauIm).nodeId();
+        List<Node> nodes = engine.nodes();
+        List<Integer> ids = new ArrayList<>();
+        for (int id = served; id >= 0; id = nodes.get(id).parent()) {
+            ids.add(0, id);
+        }
+        int[] out = new int[ids.size()];
+        for (int i = 0; i < out.length; i++) {
+            out[i] = ids.get(i);
+        }
+        return out;
+    }
+
+    /** A state reached at a node of the path tree: tau, the state, the scale to start from, steps from the root. */
+    private static final class PathState {
+        final MpComplex tau;
+        final MpComplex[] y;
+        final double scale;
+        final int steps;
+
+        PathState(MpComplex tau, MpComplex[] y, double scale, int steps) {
+            this.tau = tau;
+            this.y = y;
+            this.scale = scale;
+            this.steps = steps;
+        }
+    }
+
+    /** Progress over the phases of a computation, reported as a fraction in [0, 1]. */
+    private static final class Progress {
+        private final DoubleConsumer sink;
+        private double start;
+        private double width;
+        private double total = 1;
+        private double done;
+
+        Progress(DoubleConsumer sink) {
+            this.sink = sink;
+        }
+
+        void phase(double start, double width) {
+            this.start = start;
+            this.width = width;
+            this.done = 0;
+            this.total = 0;
+        }
+
+        void expect(double length) {
+            total += length;
+        }
+
+        void advanced(double d) {
+            done += d;
+            if (sink != null && total > 0) {
+                sink.accept(Math.min(1, start + width * Math.min(1, done / total)));
+            }
+        }
+
+        void done() {
+            if (sink != null) {
+                sink.accept(1.0);
+            }
+        }
+    }
+
+    /** Everything that depends on one accuracy: precision, kernel, start state, and the states reached. */
+    private final class Level {
+        final int tolDigits;
+        final MpContext ctx;
+        final HighPrecisionParameters hp;
+        final SegmentIntegrator integrator;
+        final PathState root;
+        final Map<Integer, PathState> reached = new ConcurrentHashMap<>();
+        private final ThreadLocal<Progress> meter = new ThreadLocal<>();
+
+        Level(int tolDigits) {
+            this.tolDigits = tolDigits;
+            this.ctx = new MpContext(tolDigits + 6);
+            long apDigits = ctx.digits() + 4;
+            this.hp = new HighPrecisionParameters(apDigits, ap(parameters[0]), ap(parameters[1]), ap(parameters[2]),
+                    ap(parameters[3]));
+            Apcomplex[] k = view.coefficients(hp);
+            MpComplex[] coefficients = new MpComplex[k.length];
+            for (int i = 0; i < k.length; i++) {
+                coefficients[i] = ctx.fromApcomplex(k[i]);
+            }
+            int order = (int) Math.ceil(1.1513 * tolDigits) + 2;
+            FixedPointKernel kernel = new FixedPointKernel(plan, coefficients, order, ctx);
+            this.integrator = new SegmentIntegrator(kernel, ctx, tolDigits);
+            Apcomplex z = ap(z0);
+            Apcomplex[] y = view.toState(hp, z, ap(w0), ap(dw0));
+            MpComplex[] y0 = new MpComplex[y.length];
+            for (int i = 0; i < y.length; i++) {
+                y0[i] = ctx.fromApcomplex(y[i]);
+            }
+            MpComplex tau0 = ctx.fromApcomplex(ApcomplexMath.log(z));
+            this.root = new PathState(tau0, y0, engine.root().radius(), 0);
+        }
+
+        Level withProgress(Progress p) {
+            meter.set(p);
+            return this;
+        }
+
+        private Apcomplex ap(ExactNumber x) {
+            return ctx.toApcomplex(ctx.fromExact(x));
+        }
+
+        private SegmentIntegrator.Advance advance() {
+            Progress p = meter.get();
+            return p == null ? null : p::advanced;
+        }
+
+        /** The state at the point, integrated along the planned path (keepNodes: the last segment's nodes). */
+        Outcome valueAt(SurfacePoint point, List<HpNode> keep) {
+            PathState s = stateAt(point);
+            return outcome(point, s.y, s.steps);
+        }
+
+        PathState stateAt(SurfacePoint point) {
+            int[] ids = chain(point.logRe(), point.logIm());
+            List<Node> nodes = engine.nodes();
+            int from = 0;
+            for (int i = ids.length - 1; i > 0; i--) {
+                if (reached.containsKey(ids[i])) {
+                    from = i;
+                    break;
+                }
+            }
+            PathState s = from == 0 ? root : reached.get(ids[from]);
+            MpComplex target = tau(point);
+            Progress p = meter.get();
+            if (p != null) {
+                double len = 0;
+                double[] prev = {s.tau.toComplex().getReal(), s.tau.toComplex().getImaginary()};
+                for (int i = from + 1; i < ids.length; i++) {
+                    Node n = nodes.get(ids[i]);
+                    len += Math.hypot(n.tauRe() - prev[0], n.tauIm() - prev[1]);
+                    prev = new double[] {n.tauRe(), n.tauIm()};
+                }
+                len += Math.hypot(point.logRe() - prev[0], point.logIm() - prev[1]);
+                p.expect(len);
+            }
+            for (int i = from + 1; i < ids.length; i++) {
+                Node n = nodes.get(ids[i]);
+                MpComplex t = ctx.fromDouble(n.tauRe(), n.tauIm());
+                SegmentIntegrator.Result r = integrator.run(s.tau, s.y, t, s.scale, false, advance());
+                s = new PathState(t, r.y, r.scale, s.steps + r.steps);
+                reached.putIfAbsent(ids[i], s);
+            }
+            SegmentIntegrator.Result r = integrator.run(s.tau, s.y, target, s.scale, false, advance());
+            return new PathState(target, r.y, r.scale, s.steps + r.steps);
+        }
+
+        /** tau = log|z| + i (Arg z + 2 pi k) of a point, at this precision. */
+        MpComplex tau(SurfacePoint p) {
+            Apcomplex z = ctx.toApcomplex(ctx.fromDouble(p.re(), p.im()));
+            Apcomplex l = ApcomplexMath.log(z);
+            if (p.sheet() != 0) {
+                Apfloat twoPiK = ApfloatMath.pi(ctx.digits() + 10).multiply(new Apfloat(2L * p.sheet()));
+                l = l.add(new Apcomplex(Apfloat.ZERO, twoPiK));
+            }
+            return ctx.fromApcomplex(l);
+        }
+
+        Outcome outcome(SurfacePoint point, MpComplex[] y, int steps) {
+            return outcome(ctx.toApcomplex(ctx.fromDouble(point.re(), point.im())), y, steps);
+        }
+
+        Outcome outcome(Apcomplex z, MpComplex[] y, int steps) {
+            Apcomplex[] s = new Apcomplex[y.length];
+            for (int i = 0; i < y.length; i++) {
+                s[i] = ctx.toApcomplex(y[i]);
+            }
+            Apcomplex[] v = view.fromState(hp, z, s);
+            return new Outcome(v[0], v[1], steps);
+        }
+
+        /** n equally spaced points of the line from a to b in tau, from one pass of steps with their nodes kept. */
+        List<Outcome> line(SurfacePoint a, SurfacePoint b, int n) {
+            PathState s = stateAt(a);
+            MpComplex tb = tau(b);
+            Progress p = meter.get();
+            if (p != null) {
+                p.expect(Math.hypot(b.logRe() - a.logRe(), b.logIm() - a.logIm()));
+            }
+            SegmentIntegrator.Result r = integrator.run(s.tau, s.y, tb, s.scale, true, advance());
+            MpComplex delta = ctx.subtract(tb, s.tau);
+            List<Outcome> out = new ArrayList<>();
+            int node = 0;
+            MpComplex nodeEnd = r.nodes.isEmpty() ? tb : end(r.nodes.get(0));
+            for (int i = 0; i < n; i++) {
+                MpComplex t = i == n - 1 ? tb : ctx.add(s.tau, ctx.divide(ctx.multiply(delta, i), n - 1));
+                // advance to the node whose step covers t (nodes follow each other along the line)
+                while (node < r.nodes.size() - 1 && ctx.subtract(t, s.tau).abs() > ctx.subtract(nodeEnd, s.tau).abs()) {
+                    node++;
+                    nodeEnd = end(r.nodes.get(node));
+                }
+                MpComplex[] y;
+                int steps = s.steps + node + 1;
+                if (r.nodes.isEmpty()) {
+                    y = s.y;
+                } else {
+                    HpNode hn = r.nodes.get(node);
+                    TaylorSeries ts = hn.series();
+                    MpComplex sp = ctx.divide(ctx.subtract(t, ts.center()), ctx.fromDouble(ts.scale(), 0));
+                    y = hn.evaluate(ctx, sp, integrator.tolerance());
+                    if (y == null) {
+                        MpComplex[] y0 = new MpComplex[ts.dimension()];
+                        for (int c = 0; c < y0.length; c++) {
+                            y0[c] = ts.coefficient(ctx, c, 0);
+                        }
+                        SegmentIntegrator.Result q = integrator.run(ts.center(), y0, t, ts.scale(), false, null);
+                        y = q.y;
+                        steps += q.steps;
+                    }
+                }
+                out.add(outcome(ctx.toApcomplex(ctx.exp(t)), y, steps));
+            }
+            return out;
+        }
+
+        private MpComplex end(HpNode n) {
+            TaylorSeries ts = n.series();
+            return ctx.add(ts.center(), ctx.multiply(n.endS(), ctx.fromDouble(ts.scale(), 0)));
+        }
+    }
+
+    /** Builder: exact parameters, exact start data, the number of digits, an optional progress callback. */
+    public static final class Builder {
+        private final ExactNumber[] parameters;
+        private ExactNumber z0;
+        private ExactNumber w0;
+        private ExactNumber dw0;
+        private int digits = 50;
+        private DoubleConsumer progress;
+        private SolverSettings planning = SolverSettings.defaults();
+
+        private Builder(ExactNumber alpha, ExactNumber beta, ExactNumber gamma, ExactNumber delta) {
+            this.parameters = new ExactNumber[] {require("alpha", alpha), require("beta", beta),
+                require("gamma", gamma), require("delta", delta)};
+        }
+
+        /** Exact start data w(z0) = w0, w'(z0) = dw0 (decimals or rationals, complex a+bi allowed). */
+        public Builder start(String z0, String w0, String dw0) {
+            return start(ExactNumber.parse("z0", z0), ExactNumber.parse("w0", w0), ExactNumber.parse("dw0", dw0));
+        }
+
+        public Builder start(ExactNumber z0, ExactNumber w0, ExactNumber dw0) {
+            this.z0 = require("z0", z0);
+            this.w0 = require("w0", w0);
+            this.dw0 = require("dw0", dw0);
+            return this;
+        }
+
+        /** The number of significant digits wanted, in [16, 5000] (default 50). */
+        public Builder digits(int digits) {
+            if (digits < MIN_DIGITS || digits > MAX_DIGITS) {
+                throw new InvalidInputException("digits", "must be in [" + MIN_DIGITS + ", " + MAX_DIGITS + "], got "
+                        + digits);
+            }
+            this.digits = digits;
+            return this;
+        }
+
+        /** Receives the fraction of the work done, in [0, 1], from the computing thread. */
+        public Builder progress(DoubleConsumer progress) {
+            this.progress = progress;
+            return this;
+        }
+
+        /** Settings of the double-precision run that plans the path (default: the engine's defaults). */
+        public Builder planning(SolverSettings settings) {
+            this.planning = require("planning", settings);
+            return this;
+        }
+
+        /**
+         * @throws InvalidInputException if data are missing, z0 or w0 is zero, or some datum is known to fewer
+         *     digits than requested (for example a binary double for 50 digits)
+         */
+        public HighPrecisionSolution build() {
+            if (z0 == null) {
+                throw new InvalidInputException("z0", "start data are missing: give z0, w0 and w'(z0)");
+            }
+            if (z0.isZero()) {
+                throw new InvalidInputException("z0", "z0 = 0 is the branch point of the equation; choose z0 != 0");
+            }
+            if (w0.isZero()) {
+                throw new InvalidInputException("w0", "w0 = 0 is not accepted at high precision: start the solution"
+                        + " at a point where w != 0");
+            }
+            String[] names = {"alpha", "beta", "gamma", "delta"};
+            for (int i = 0; i < 4; i++) {
+                requireDigits(names[i], parameters[i]);
+            }
+            requireDigits("z0", z0);
+            requireDigits("w0", w0);
+            requireDigits("dw0", dw0);
+            return new HighPrecisionSolution(this);
+        }
+
+        private void requireDigits(String name, ExactNumber x) {
+            if (x.significantDigits() < digits) {
+                throw new InvalidInputException(name, "is known to about " + x.significantDigits()
+                        + " significant digits only (it was given as a binary double), but " + digits + " digits were"
+                        + " requested: give it exactly, as a decimal string or a rational p/q such as 1/3");
+            }
+        }
+
+        private static <T> T require(String name, T x) {
+            if (x == null) {
+                throw new InvalidInputException(name, "is required");
+            }
+            return x;
+        }
+    }
+
+    static Complex toComplex(Apcomplex x) {
+        return new Complex(x.real().doubleValue(), x.imag().doubleValue());
+    }
+}

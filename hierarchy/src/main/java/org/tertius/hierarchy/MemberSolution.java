@@ -1,0 +1,344 @@
+package org.tertius.hierarchy;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import org.hipparchus.complex.Complex;
+import org.tertius.core.InvalidInputException;
+import org.tertius.core.equation.IndependentVariable;
+import org.tertius.core.equation.PolynomialSystem;
+import org.tertius.core.equation.StateProjection;
+import org.tertius.core.number.SurfacePoint;
+import org.tertius.core.solution.Solution;
+import org.tertius.core.solution.StateEstimate;
+import org.tertius.core.step.Node;
+import org.tertius.core.step.SolverSettings;
+
+/**
+ * A solution of member n, fixed by its state at a start point x0 (or, for member 1, by a_-2 at the fixed
+ * singular point x = 0), integrated by the core engine (one path tree with dense output; thread-safe like
+ * {@link Solution}). Every value reports q, r, all unknowns with error estimates, and the first integrals.
+ * Immutable; build with {@link #builder(MemberParameters)}.
+ *
+ * <p>Member 1 lives on the Riemann surface of log x: its points are given with a sheet number, counted from
+ * the principal sheet of x0. Members n >= 2 are single-valued in x.
+ */
+public final class MemberSolution {
+    /** Start data must satisfy the constraints to this relative accuracy. */
+    private static final double START_CONSISTENCY = 1e-10;
+    /** Coefficients of the series at x = 0 for member 1. */
+    private static final int SERIES_ORDER = 60;
+
+    private final HierarchyMember member;
+    private final MemberParameters parameters;
+    private final SolverSettings settings;
+    private final Complex x0;
+    private final int x0Sheet;
+    private final List<Complex> startState;
+    private final double[] startError;
+    private final Complex traceIntegral;
+    private final Solution engine;
+    private final IntegralMonitor monitor;
+    private final Linearized[] observables;
+
+    private MemberSolution(HierarchyMember member, MemberParameters parameters, SolverSettings settings, Complex x0,
+                           int x0Sheet, List<Complex> startState, double[] startError) {
+        this.member = member;
+        this.parameters = parameters;
+        this.settings = settings;
+        this.x0 = x0;
+        this.x0Sheet = x0Sheet;
+        this.startState = List.copyOf(startState);
+        this.startError = startError.clone();
+        MemberEquations eq = member.equations();
+        this.traceIntegral = new Linearized(eq.traceForm(), eq.unknownCount()).value(ringValues(startState, x0));
+        this.monitor = new IntegralMonitor(eq, parameters.s(), traceIntegral);
+        List<org.tertius.hierarchy.algebra.Polynomial> xf = eq.xFlow();
+        int xi = eq.timeIndex(1);
+        this.observables = new Linearized[] {new Linearized(eq.q(), eq.unknownCount()),
+            new Linearized(eq.r(), eq.unknownCount()),
+            new Linearized(eq.q().derivativeAlong(xf, xi), eq.unknownCount()),
+            new Linearized(eq.r().derivativeAlong(xf, xi), eq.unknownCount())};
+        checkConsistent();
+        PolynomialSystem system = member.xFlow(parameters);
+        double[] re = new double[startState.size()];
+        double[] im = new double[startState.size()];
+        for (int i = 0; i < re.length; i++) {
+            re[i] = startState.get(i).getReal();
+            im[i] = startState.get(i).getImaginary();
+        }
+        double[] tau = tau(x0, x0Sheet);
+        this.engine = Solution.start(system, settings, StateProjection.NONE, tau[0], tau[1], re, im);
+    }
+
+    public static Builder builder(MemberParameters parameters) {
+        return new Builder(parameters);
+    }
+
+    public HierarchyMember member() {
+        return member;
+    }
+
+    public MemberParameters parameters() {
+        return parameters;
+    }
+
+    /** The start point x0 (member 1 started at x = 0: the small point where the series was summed). */
+    public Complex startPoint() {
+        return x0;
+    }
+
+    /** The state at the start point. */
+    public List<Complex> startState() {
+        return startState;
+    }
+
+    /** The value of the trace form tr(a_-2 a_-1), a first integral fixed by the start data. */
+    public Complex traceIntegral() {
+        return traceIntegral;
+    }
+
+    /** Number of nodes in the path tree. */
+    public int nodeCount() {
+        return engine.nodeCount();
+    }
+
+    /** The value at x (principal sheet for member 1). */
+    public MemberValue evaluate(Complex x) {
+        return evaluate(x, 0);
+    }
+
+    /** The value at a point of the surface of log x (member 1; for n >= 2 the sheet must be 0). */
+    public MemberValue evaluate(SurfacePoint x) {
+        return evaluate(x.z(), x.sheet());
+    }
+
+    /**
+     * The value at x on the given sheet.
+     *
+     * @throws org.tertius.core.UnreachableTargetException if the engine cannot reach x to its tolerance
+     */
+    public MemberValue evaluate(Complex x, int sheet) {
+        if (x == null || !Double.isFinite(x.getReal()) || !Double.isFinite(x.getImaginary())) {
+            throw new InvalidInputException("x", "must be a finite complex number, got " + x);
+        }
+        if (member.order() == 1 && x.norm() == 0) {
+            throw new InvalidInputException("x", "x = 0 is the fixed singular point of member 1");
+        }
+        if (member.order() >= 2 && sheet != 0) {
+            throw new InvalidInputException("sheet", "member " + member.order() + " is single-valued in x; the sheet"
+                    + " must be 0, got " + sheet);
+        }
+        double[] tau = tau(x, sheet);
+        StateEstimate e = engine.evaluate(tau[0], tau[1]);
+        List<Complex> state = new ArrayList<>();
+        double[] err = new double[e.dimension()];
+        for (int i = 0; i < e.dimension(); i++) {
+            state.add(new Complex(e.re(i), e.im(i)));
+            err[i] = e.error(i) + startError[i];
+        }
+        List<Complex> values = ringValues(state, x);
+        Complex[] qr = new Complex[4];
+        double[] qrErr = new double[4];
+        for (int k = 0; k < 4; k++) {
+            qr[k] = observables[k].value(values);
+            qrErr[k] = observables[k].bound(values, err);
+        }
+        return new MemberValue(x, sheet, state, err, qr, qrErr, monitor.check(values, err));
+    }
+
+    /**
+     * The first integrals checked at every node of the path tree grown so far; for each integral the check
+     * with the largest deviation relative to its bound.
+     */
+    public List<IntegralCheck> integralsAlongPaths() {
+        List<IntegralCheck> worst = null;
+        for (Node node : engine.nodes()) {
+            List<Complex> state = new ArrayList<>();
+            double[] err = new double[node.dimension()];
+            for (int i = 0; i < node.dimension(); i++) {
+                state.add(new Complex(node.stateRe(i), node.stateIm(i)));
+                err[i] = Math.hypot(node.errorRe(i), node.errorIm(i)) + startError[i]
+                        + 4 * Math.ulp(1.0) * state.get(i).norm();
+            }
+            Complex x = member.variable() == IndependentVariable.LOG
+                    ? new Complex(node.tauRe(), node.tauIm()).exp() : new Complex(node.tauRe(), node.tauIm());
+            List<IntegralCheck> c = monitor.check(ringValues(state, x), err);
+            if (worst == null) {
+                worst = c;
+            } else {
+                for (int k = 0; k < c.size(); k++) {
+                    if (c.get(k).ratio() > worst.get(k).ratio()) {
+                        worst.set(k, c.get(k));
+                    }
+                }
+            }
+            worst = new ArrayList<>(worst);
+        }
+        return List.copyOf(worst);
+    }
+
+    /**
+     * The solution with the top time moved to tn at the same x0: the start state is carried along the flow in
+     * t_n (integrated by the core engine in the variable t_n; t_n = 0 is its singular point). The error estimate
+     * of the carried state is added to every later error estimate (not propagated further).
+     */
+    public MemberSolution withTopTime(Complex tn) {
+        int n = member.order();
+        if (n < 2) {
+            throw new InvalidInputException("t_n", "member 1 has no time besides x");
+        }
+        MemberParameters moved = parameters.withTopTime(tn);
+        Complex t0 = parameters.time(n);
+        PolynomialSystem flow = member.timeFlow(parameters, x0);
+        double[] re = new double[startState.size()];
+        double[] im = new double[startState.size()];
+        for (int i = 0; i < re.length; i++) {
+            re[i] = startState.get(i).getReal();
+            im[i] = startState.get(i).getImaginary();
+        }
+        StateEstimate e = Solution.start(flow, settings, StateProjection.NONE, t0.getReal(), t0.getImaginary(), re, im)
+                .evaluate(tn.getReal(), tn.getImaginary());
+        List<Complex> state = new ArrayList<>();
+        double[] err = startError.clone();
+        for (int i = 0; i < re.length; i++) {
+            state.add(new Complex(e.re(i), e.im(i)));
+            err[i] += e.error(i);
+        }
+        return new MemberSolution(member, moved, settings, x0, 0, state, err);
+    }
+
+    private List<Complex> ringValues(List<Complex> state, Complex x) {
+        List<Complex> v = new ArrayList<>(state);
+        v.addAll(parameters.ringValues(x));
+        return v;
+    }
+
+    private double[] tau(Complex x, int sheet) {
+        if (member.variable() == IndependentVariable.LOG) {
+            SurfacePoint p = SurfacePoint.of(x, sheet);
+            return new double[] {p.logRe(), p.logIm()};
+        }
+        return new double[] {x.getReal(), x.getImaginary()};
+    }
+
+    private void checkConsistent() {
+        double[] err = new double[startState.size()];
+        for (int i = 0; i < err.length; i++) {
+            err[i] = START_CONSISTENCY * (1 + startState.get(i).norm()) + startError[i];
+        }
+        for (IntegralCheck c : monitor.check(ringValues(startState, x0), err)) {
+            if (!c.withinEstimate()) {
+                throw new InvalidInputException(c.name().startsWith("det a_-2") ? "s" : "start state",
+                        "the start data violate " + c.name() + ": value " + c.value() + ", required " + c.expected()
+                        + " (deviation " + c.deviation() + "); the diagonal entries a(k)11, k >= -1, follow from x0,"
+                        + " the times and m (HierarchyMember.completeDiagonal), and det a_-2 must equal s^2");
+            }
+        }
+    }
+
+    /** Builder of a member solution. Not thread-safe. */
+    public static final class Builder {
+        private final MemberParameters parameters;
+        private final HierarchyMember member;
+        private SolverSettings settings = SolverSettings.defaults();
+        private Complex x0;
+        private int x0Sheet;
+        private List<Complex> state;
+        private Complex[] origin;
+
+        private Builder(MemberParameters parameters) {
+            if (parameters == null) {
+                throw new InvalidInputException("parameters", "are required");
+            }
+            this.parameters = parameters;
+            this.member = HierarchyMember.of(parameters.order());
+        }
+
+        public Builder settings(SolverSettings settings) {
+            this.settings = settings;
+            return this;
+        }
+
+        /**
+         * Start at x0 with all unknowns given (order of {@link HierarchyMember#unknowns()}); they must satisfy
+         * det a_-2 = s^2 and the top-coefficient constraints (see {@link HierarchyMember#completeDiagonal}).
+         * For member 1, x0 != 0 lies on the principal sheet.
+         */
+        public Builder start(Complex x0, List<Complex> state) {
+            return start(x0, 0, state);
+        }
+
+        /** As {@link #start(Complex, List)} with x0 on the given sheet of log x (member 1; 0 for n >= 2). */
+        public Builder start(Complex x0, int sheet, List<Complex> state) {
+            this.x0 = x0;
+            this.x0Sheet = sheet;
+            this.state = state;
+            this.origin = null;
+            return this;
+        }
+
+        /**
+         * Member 1 only: the solution analytic at x = 0 with a_-2(0) = [[a11, a12], [a21, -a11]] (det = s^2);
+         * there a_-1(0) = diag(m, -m), and the trace form equals 2 m a11. Needs 2m not a non-zero integer.
+         */
+        public Builder startAtOrigin(Complex a11, Complex a12, Complex a21) {
+            this.origin = new Complex[] {a11, a12, a21};
+            this.x0 = null;
+            this.state = null;
+            return this;
+        }
+
+        public MemberSolution build() {
+            if (settings == null) {
+                throw new InvalidInputException("settings", "are required");
+            }
+            int n = member.order();
+            if (origin != null) {
+                if (n != 1) {
+                    throw new InvalidInputException("start", "a start at x = 0 exists for member 1 only; members n >= 2"
+                            + " start at any x0");
+                }
+                return fromOrigin();
+            }
+            if (x0 == null) {
+                throw new InvalidInputException("x0", "start data are missing: give x0 and the start state");
+            }
+            if (!Double.isFinite(x0.getReal()) || !Double.isFinite(x0.getImaginary())) {
+                throw new InvalidInputException("x0", "must be a finite complex number, got " + x0);
+            }
+            if (n == 1 && x0.norm() == 0) {
+                throw new InvalidInputException("x0", "x = 0 is the fixed singular point of member 1; use startAtOrigin");
+            }
+            if (n >= 2 && x0Sheet != 0) {
+                throw new InvalidInputException("sheet", "member " + n + " is single-valued in x; the sheet must be 0");
+            }
+            member.checkState(state);
+            return new MemberSolution(member, parameters, settings, x0, x0Sheet, state, new double[state.size()]);
+        }
+
+        private MemberSolution fromOrigin() {
+            Complex m = parameters.m();
+            double twoM = 2 * m.getReal();
+            if (m.getImaginary() == 0 && Math.rint(twoM) != 0 && Math.abs(twoM - Math.rint(twoM)) < 1e-9) {
+                throw new InvalidInputException("m", "the start at x = 0 needs 2m not a non-zero integer (there the"
+                        + " analytic solution is resonant); got m = " + m);
+            }
+            Complex[] y0 = {origin[0], origin[1], origin[2], m, Complex.ZERO, Complex.ZERO};
+            member.checkState(Arrays.asList(y0));
+            OriginSeries series = OriginSeries.compute(member.xFlow(parameters), y0, SERIES_ORDER);
+            double scale = 1;
+            for (Complex c : y0) {
+                scale = Math.max(scale, c.norm());
+            }
+            double x = Math.min(0.25 * series.radius(), 0.5);
+            while (series.lastTerm(x) > 1e-18 * scale) {
+                x *= 0.5;
+            }
+            Complex xs = new Complex(x);
+            double[] err = new double[y0.length];
+            Arrays.fill(err, 16 * series.lastTerm(x));
+            return new MemberSolution(member, parameters, settings, xs, 0, Arrays.asList(series.value(xs)), err);
+        }
+    }
+}
