@@ -7,6 +7,13 @@ import org.hipparchus.complex.Complex;
  * implied by the error estimates of the state (first-order propagation plus rounding). Immutable.
  */
 public final class IntegralCheck {
+    /**
+     * The drift allowed, as a multiple of the first-order bound: the engine's error estimates are estimates
+     * (propagated to first order along the path), not rigorous bounds, and were measured up to about 1.2 times
+     * too small next to poles; a factor 2 separates that from a real drift.
+     */
+    public static final double ESTIMATE_SAFETY = 2;
+
     private final String name;
     private final Complex value;
     private final Complex expected;
@@ -42,9 +49,9 @@ public final class IntegralCheck {
         return bound;
     }
 
-    /** Whether the deviation lies within the bound. */
+    /** Whether the deviation lies within {@link #ESTIMATE_SAFETY} times the bound. */
     public boolean withinEstimate() {
-        return deviation() <= bound;
+        return deviation() <= ESTIMATE_SAFETY * bound;
     }
 
     /** deviation / bound (above 1: drift beyond the error estimate). */

@@ -10,34 +10,50 @@ import org.tertius.core.piii.Painleve3Solution;
 import org.tertius.core.piii.Painleve3Value;
 import org.tertius.core.step.SolverSettings;
 
+/** Member 1 against the core Painleve III engine through the map of {@link Member1Map}. */
 class Member1PainleveTest {
-    private static final Complex S = new Complex(1.0);
-    private static final Complex M = new Complex(0.1);
-    private static final Complex T = new Complex(0, -0.25);
+    /**
+     * Both engines run at tolerance 1e-14 per step; along these paths (at most about one turn around x = 0,
+     * which is half a turn around z = 0) the accumulated error stays below 1e-12, the accuracy asked of the map
+     * by issue 6 (at the default 1e-13 per step the two engines already differ by up to 2e-12 here).
+     */
+    private static final double AGREEMENT = 1e-12;
 
     @Test
-    void member1AgreesWithCorePainleve3ThroughTheMapOnThreeSheets() {
-        Member1Map map = Member1Map.canonical(S);
-        Painleve3 eq = map.equation(M, T);
-        Complex w0 = new Complex(1.0);
-        Complex dw0 = new Complex(0.2);
+    void member1AgreesWithCorePainleve3ThroughTheCanonicalMapOnSeveralSheets() {
+        Member1Map map = Member1Map.canonical(new Complex(1.0));
+        Painleve3 eq = map.equation(new Complex(0.1), new Complex(0, -0.25));
+        assertAgreement(map, eq, new Complex(1.0), new Complex(0.2));
+    }
+
+    @Test
+    void member1AgreesWithCorePainleve3ForComplexParametersAndAGeneralD6Equation() {
+        // a D6 equation with gamma, delta not normalised, reached by the general map with s = 0.7 - 0.2i
+        Painleve3 eq = Painleve3.of(new Complex(0.3, 0.1), new Complex(-0.4, 0.2), new Complex(2.0, 0.5),
+                new Complex(-1.5, 0.3));
+        Member1Map map = Member1Map.forEquation(eq, new Complex(0.7, -0.2));
+        assertAgreement(map, eq, new Complex(0.8, 0.1), new Complex(-0.2, 0.3));
+    }
+
+    private static void assertAgreement(Member1Map map, Painleve3 eq, Complex w0, Complex dw0) {
         SurfacePoint z0 = SurfacePoint.of(1, 0);
-        SolverSettings st = SolverSettings.builder().tolerance(1e-14).build();
-        Painleve3Solution core = Painleve3Solution.builder(eq).settings(st).start(z0.z(), w0, dw0).build();
-        MemberSolution member = map.solution(eq, new Painleve3Value(z0, w0, dw0, 0, 0), st);
-        {
-            for (double[] p : new double[][] {{1.5, 0.4, 0}, {0.3, -0.2, 0}, {-1.2, 0.5, 0}, {-1.2, -0.5, 1}, {-0.6, -0.9, 1}, {-1.2, 0.5, -1}, {-0.6, 0.9, -1}, {-2, 0.1, -1}, {-2, -0.1, 1}}) {
-                SurfacePoint z = SurfacePoint.of(p[0], p[1], (int) p[2]);
-                long t0 = System.nanoTime();
-                Painleve3Value a = core.evaluate(z);
-                long t1 = System.nanoTime();
-                Painleve3Value b = map.evaluate(member, z);
-                System.out.printf("time core %.1f ms member %.1f ms nodes %d %d%n", (t1 - t0) / 1e6, (System.nanoTime() - t1) / 1e6, core.nodeCount(), member.nodeCount());
-                double dw = a.w().subtract(b.w()).norm() / (1 + a.w().norm());
-                double dd = a.dw().subtract(b.dw()).norm() / (1 + a.dw().norm());
-                System.out.printf("%s core %s member %s rel %.2e %.2e est %.2e %.2e %.2e%n", z, a.w(), b.w(), dw, dd,
-                        a.errW(), b.errW(), a.errDw() + b.errDw());
-            }
+        SolverSettings settings = SolverSettings.builder().tolerance(1e-14).build();
+        Painleve3Solution core = Painleve3Solution.builder(eq).settings(settings).start(z0.z(), w0, dw0).build();
+        MemberSolution member = map.solution(eq, new Painleve3Value(z0, w0, dw0, 0, 0), settings);
+        // z-sheet 0 covers x-sheets -1, 0, 1 (x = (z/c)^2); the last two points lie on z-sheets 1 and -1
+        double[][] points = {{1.5, 0.4, 0}, {0.3, -0.2, 0}, {0.2, 1.5, 0}, {-0.5, 1.0, 0}, {-1.2, 0.5, 0},
+            {-1.2, -0.5, 0}, {-1.5, -0.2, 1}, {-1.5, 0.2, -1}};
+        java.util.Set<Integer> xSheets = new java.util.TreeSet<>();
+        for (double[] p : points) {
+            SurfacePoint z = SurfacePoint.of(p[0], p[1], (int) p[2]);
+            xSheets.add(map.x(z).sheet());
+            Painleve3Value a = core.evaluate(z);
+            Painleve3Value b = map.evaluate(member, z);
+            double dw = a.w().subtract(b.w()).norm() / (1 + a.w().norm());
+            double ddw = a.dw().subtract(b.dw()).norm() / (1 + a.dw().norm());
+            assertTrue(dw <= AGREEMENT, "w at " + z + ": core " + a.w() + ", member 1 " + b.w() + ", rel " + dw);
+            assertTrue(ddw <= AGREEMENT, "w' at " + z + ": core " + a.dw() + ", member 1 " + b.dw() + ", rel " + ddw);
         }
+        assertTrue(xSheets.size() >= 3, "the points cover x-sheets " + xSheets);
     }
 }

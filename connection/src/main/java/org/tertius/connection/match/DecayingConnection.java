@@ -28,7 +28,7 @@ import org.tertius.core.step.SolverSettings;
  * Immutable and thread-safe.
  */
 public final class DecayingConnection {
-    /** Where the transseries is evaluated. */
+    /** Where the transseries is evaluated in double precision (larger in arbitrary precision, see far()). */
     public static final double FAR = 12;
     /** Where the background-relative integration hands over. */
     public static final double MIDDLE = 1;
@@ -49,34 +49,52 @@ public final class DecayingConnection {
     /** The deviation v = w - 1 and w' at x = MIDDLE for the member lambda, with error estimates. */
     public static <T> LocalValue<T> middleDeviation(Arith<T> ar, T lambda, double tolerance) {
         int sectors = 1 + 2 * (int) Math.ceil(ar.digits() / 10.0);
-        DecayingTransseries<T> ts = DecayingTransseries.create(ar, lambda, sectors, (int) (8 * FAR + 20));
-        LocalValue<T> far = ts.deviationAt(ar.of(FAR));
+        double x = far(ar);
+        DecayingTransseries<T> ts = DecayingTransseries.create(ar, lambda, sectors, (int) (4 * x + 20));
+        LocalValue<T> far = ts.deviationAt(ar.of(x));
         return DeviationTaylor.create(ar, parameters(ar), ar.one(), order(ar)).integrate(far, ar.of(MIDDLE),
                 tolerance);
+    }
+
+    /**
+     * The start of the transseries: the smallest term of sector 1 is about e^(-4x) relative to it (optimal
+     * truncation of the K0 expansion), so x = digits ln(10)/4 + 2, at least {@link #FAR}.
+     */
+    static <T> double far(Arith<T> ar) {
+        return Math.max(FAR, Math.ceil(ar.digits() * Math.log(10) / 4 + 2));
     }
 
     private static <T> int order(Arith<T> ar) {
         return (int) Math.min(400, Math.max(30, 2 * ar.digits()));
     }
 
-    /** w and w' at x = MIDDLE (double), from {@link #middleDeviation}. */
+    /**
+     * w and w' (double) at the hand-over point: x = MIDDLE, or the first point of FAR - 0.5 k (k = 1, 2, ...)
+     * where |w - 1| exceeds 0.05 (members with large lambda have zeros of w beyond MIDDLE, which the
+     * deviation integrator does not pass; the core engine does).
+     */
     public static Painleve3Value middleValue(double lambda) {
         requireFinite(lambda);
-        LocalValue<Complex> v = middleDeviation(Arith.DOUBLE, new Complex(lambda), 1e-16);
-        return new Painleve3Value(SurfacePoint.of(MIDDLE, 0), v.w().add(1), v.dw(), v.errW(), v.errDw());
+        Arith<Complex> ar = Arith.DOUBLE;
+        DecayingTransseries<Complex> ts = DecayingTransseries.create(ar, new Complex(lambda), 7, (int) (4 * FAR + 20));
+        LocalValue<Complex> v = ts.deviationAt(new Complex(FAR));
+        DeviationTaylor<Complex> taylor = DeviationTaylor.create(ar, parameters(ar), ar.one(), order(ar));
+        for (double x = FAR - 0.5; x >= MIDDLE - 1e-12 && v.w().norm() <= 0.05; x -= 0.5) {
+            v = taylor.integrate(v, new Complex(x), 1e-16);
+        }
+        return new Painleve3Value(SurfacePoint.of(v.z().getReal(), 0), v.w().add(1), v.dw(), v.errW(), v.errDw());
     }
 
     /** The member lambda as an integrated solution of the core engine, started at x = MIDDLE. */
     public static Painleve3Solution solution(double lambda, SolverSettings settings) {
         Painleve3Value m = middleValue(lambda);
-        return Painleve3Solution.builder(equation()).start(new Complex(MIDDLE), m.w(), m.dw()).settings(settings)
-                .build();
+        return Painleve3Solution.builder(equation()).start(m.point().z(), m.w(), m.dw()).settings(settings).build();
     }
 
     /** (sigma, B) of the member lambda in double precision, through the core engine, fitted at x0. */
     public static ZeroFit.Result<Complex> zeroDataByEngine(double lambda, double x0, SolverSettings settings) {
         Painleve3Value m = middleValue(lambda);
-        Painleve3Solution s = Painleve3Solution.builder(equation()).start(new Complex(MIDDLE), m.w(), m.dw())
+        Painleve3Solution s = Painleve3Solution.builder(equation()).start(m.point().z(), m.w(), m.dw())
                 .settings(settings).build();
         Painleve3Value at = s.evaluate(SurfacePoint.of(x0, 0));
         // errors of the start data are propagated at most by the growth of w - 1 relative to its size at MIDDLE

@@ -105,6 +105,17 @@ public final class ApcomplexArith implements Arith<Apcomplex> {
     }
 
     @Override
+    public double logAbs(Apcomplex a) {
+        Apfloat m = h.abs(a);
+        if (m.signum() == 0) {
+            return Double.NEGATIVE_INFINITY;
+        }
+        long scale = m.scale();
+        Apfloat mantissa = ApfloatMath.scale(m, -scale);
+        return Math.log(mantissa.doubleValue()) + scale * Math.log(10);
+    }
+
+    @Override
     public Complex toComplex(Apcomplex a) {
         return new Complex(a.real().doubleValue(), a.imag().doubleValue());
     }

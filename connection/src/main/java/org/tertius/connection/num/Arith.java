@@ -51,6 +51,9 @@ public interface Arith<T> {
 
     Complex toComplex(T a);
 
+    /** Natural logarithm of the modulus, without overflow ({@code -infinity} for 0). */
+    double logAbs(T a);
+
     /** Unit roundoff of the arithmetic (2^-53 for double, 10^-precision for arbitrary precision). */
     double epsilon();
 

@@ -81,6 +81,11 @@ final class ComplexArith implements Arith<Complex> {
     }
 
     @Override
+    public double logAbs(Complex a) {
+        return Math.log(a.norm());
+    }
+
+    @Override
     public Complex toComplex(Complex a) {
         return a;
     }

@@ -82,9 +82,9 @@ public final class DeviationTaylor<T> {
             double scale = Math.max(ar.abs(v), ar.abs(dv) * restLen) + Double.MIN_NORMAL;
             double hLen = Math.min(restLen, 0.5 * ar.abs(z));
             for (int n = order - 1; n <= order; n++) {
-                double an = ar.abs(co[n]);
-                if (an > 0) {
-                    hLen = Math.min(hLen, Math.pow(0.5 * tolerance * scale / an, 1.0 / n));
+                double la = ar.logAbs(co[n]);
+                if (la > Double.NEGATIVE_INFINITY) {
+                    hLen = Math.min(hLen, Math.exp((Math.log(0.5 * tolerance * scale) - la) / n));
                 }
             }
             if (hLen < 1e-12 * Math.max(1, ar.abs(z))) {
@@ -103,7 +103,9 @@ public final class DeviationTaylor<T> {
                 }
                 hp = ar.mul(hp, h);
             }
-            double local = ar.abs(co[order]) * Math.pow(ah, order) + ar.abs(co[order - 1]) * Math.pow(ah, order - 1);
+            double lh = Math.log(ah);
+            double local = Math.exp(ar.logAbs(co[order]) + order * lh)
+                    + Math.exp(ar.logAbs(co[order - 1]) + (order - 1) * lh);
             rel += local / Math.max(ar.abs(nv), Double.MIN_NORMAL) + ar.epsilon() * order;
             z = hLen >= restLen ? target : ar.add(z, h);
             v = nv;

@@ -20,10 +20,17 @@ import java.util.List;
 final class ContinuedFraction {
     private final MpComplex[] d;
     private final MpComplex[] a;
+    private final long productCount;
 
-    private ContinuedFraction(MpComplex[] d, MpComplex[] a) {
+    private ContinuedFraction(MpComplex[] d, MpComplex[] a, long productCount) {
         this.d = d;
         this.a = a;
+        this.productCount = productCount;
+    }
+
+    /** Complex products done to build the fraction. */
+    long productCount() {
+        return productCount;
     }
 
     /**
@@ -41,6 +48,7 @@ final class ContinuedFraction {
         }
         MpComplex[] cur = c.clone();
         double lossLimit = 0.5 * ctx.bits();
+        long count = 0;
         while (cur.length > 0 && !cur[0].isZero()) {
             MpComplex u0 = cur[0];
             double scaleCur = rowScale(cur);
@@ -54,13 +62,14 @@ final class ContinuedFraction {
                 break;
             }
             MpComplex[] next = new MpComplex[len];
+            count += 2L * len;
             for (int j = 0; j < len; j++) {
                 next[j] = ctx.subtract(ctx.multiply(u0, prev[j + 1]), ctx.multiply(prev[0], cur[j + 1]));
             }
             prev = cur;
             cur = next;
         }
-        return new ContinuedFraction(ds.toArray(new MpComplex[0]), as.toArray(new MpComplex[0]));
+        return new ContinuedFraction(ds.toArray(new MpComplex[0]), as.toArray(new MpComplex[0]), count);
     }
 
     private static double rowScale(MpComplex[] row) {

@@ -52,6 +52,8 @@ public final class HighPrecisionSolution {
     private final RecurrencePlan plan;
     private final double planningTolerance;
     private final Map<Integer, Level> levels = new ConcurrentHashMap<>();
+    private final java.util.concurrent.atomic.AtomicReference<Statistics> statistics =
+            new java.util.concurrent.atomic.AtomicReference<>();
 
     private HighPrecisionSolution(Builder b) {
         this.parameters = b.parameters.clone();
@@ -117,6 +119,53 @@ public final class HighPrecisionSolution {
         return compute(level -> level.line(a, b, n), points);
     }
 
+    /** Figures of the last computation (for benchmarks), or null before the first. */
+    public Statistics statistics() {
+        return statistics.get();
+    }
+
+    /** Figures of one computation: order, steps, fixed-point bits and complex products of its accurate pass. */
+    public static final class Statistics {
+        private final int order;
+        private final int steps;
+        private final int totalSteps;
+        private final int fractionBits;
+        private final long productCount;
+
+        Statistics(int order, int steps, int totalSteps, int fractionBits, long productCount) {
+            this.order = order;
+            this.steps = steps;
+            this.totalSteps = totalSteps;
+            this.fractionBits = fractionBits;
+            this.productCount = productCount;
+        }
+
+        /** Taylor order of the accurate pass. */
+        public int order() {
+            return order;
+        }
+
+        /** Steps of the accurate pass from the start to the (first) point. */
+        public int steps() {
+            return steps;
+        }
+
+        /** Steps of the cheap and the accurate pass together. */
+        public int totalSteps() {
+            return totalSteps;
+        }
+
+        /** Fractional bits of the fixed-point coefficients of the accurate pass. */
+        public int fractionBits() {
+            return fractionBits;
+        }
+
+        /** Complex products of coefficients done by the accurate pass (recurrence and continued fractions). */
+        public long productCount() {
+            return productCount;
+        }
+    }
+
     /** One integration pass at some accuracy, returning {w, w'} per point and the steps taken. */
     private interface Pass {
         List<Outcome> run(Level level);
@@ -153,7 +202,12 @@ public final class HighPrecisionSolution {
         List<HighPrecisionValue> result = null;
         for (int round = 0; round < MAX_REFINEMENTS; round++) {
             meter.phase(0.15 + 0.85 * round / MAX_REFINEMENTS, round == 0 ? 0.85 : 0.85 / MAX_REFINEMENTS);
-            List<Outcome> accurate = pass.run(level(accurateDigits, meter));
+            Level level = level(accurateDigits, meter);
+            long products = level.integrator.products();
+            List<Outcome> accurate = pass.run(level);
+            statistics.set(new Statistics(level.integrator.order(), accurate.get(0).steps,
+                    accurate.get(0).steps + cheap.get(0).steps, level.ctx.bits() + 16,
+                    level.integrator.products() - products));
             int worst = Integer.MAX_VALUE;
             result = new ArrayList<>();
             for (int i = 0; i < accurate.size(); i++) {

@@ -19,8 +19,8 @@ import org.tertius.core.UnreachableTargetException;
 final class SegmentIntegrator {
     /** Safety factor on the Taylor step (the truncation error then lies a few digits below the tolerance). */
     private static final double TAYLOR_SAFETY = 0.95;
-    /** Pade is tried when Taylor would need more than this many steps for the rest of the segment. */
-    private static final double PADE_TRIGGER = 8;
+    /** Pade is tried when Taylor would need more than this many steps for the rest of the segment (Pade steps are typically several times longer than Taylor steps of the same order). */
+    private static final double PADE_TRIGGER = 1.5;
     /** Extra digits for the continued fractions (Viskovatov's algorithm loses some to cancellation). */
     private static final int PADE_EXTRA_DIGITS = 10;
     private static final int MAX_STEPS = 100000;
@@ -29,6 +29,9 @@ final class SegmentIntegrator {
     private final MpContext ctx;
     private final double tolerance;
     private final int toleranceDigits;
+    /** Complex products of series coefficients done so far (recurrence and continued fractions), and expansions. */
+    private final java.util.concurrent.atomic.AtomicLong products = new java.util.concurrent.atomic.AtomicLong();
+    private final java.util.concurrent.atomic.AtomicLong expansions = new java.util.concurrent.atomic.AtomicLong();
 
     /**
      * @param kernel the recurrence kernel
@@ -56,6 +59,22 @@ final class SegmentIntegrator {
 
     int order() {
         return kernel.order();
+    }
+
+    /** Complex products of coefficients done so far by this integrator (for the cost model of benchmarks). */
+    long products() {
+        return products.get();
+    }
+
+    /** Taylor expansions done so far by this integrator. */
+    long expansions() {
+        return expansions.get();
+    }
+
+    private TaylorSeries expand(MpComplex tau, MpComplex[] y, double r) {
+        expansions.incrementAndGet();
+        products.addAndGet(kernel.productsPerExpansion());
+        return kernel.expand(tau, y, r);
     }
 
     /** The state at the end of a segment, with the steps taken (and their nodes when asked for). */
@@ -168,14 +187,14 @@ final class SegmentIntegrator {
      * says that the guess was far off), so that the fixed-point coefficients neither grow nor shrink fast.
      */
     private TaylorSeries expandScaled(MpComplex tau, MpComplex[] y, double r) {
-        TaylorSeries series = kernel.expand(tau, y, r);
+        TaylorSeries series = expand(tau, y, r);
         for (int attempt = 0; attempt < 3; attempt++) {
             double q = rootRadius(series);
             if (q >= 0.4 && q <= 2.5 || !Double.isFinite(q) || q <= 0) {
                 break;
             }
             r = r * Math.max(1e-4, Math.min(1e4, q));
-            series = kernel.expand(tau, y, r);
+            series = expand(tau, y, r);
         }
         return series;
     }
@@ -236,6 +255,7 @@ final class SegmentIntegrator {
                 c[k] = series.coefficient(wide, i, k);
             }
             out[i] = ContinuedFraction.of(wide, c);
+            products.addAndGet(out[i].productCount());
             if (out[i].depth() < n / 2) {
                 return null;
             }

@@ -156,11 +156,22 @@ public final class Painleve3 {
             return false;
         }
         Painleve3 p = (Painleve3) o;
-        return alpha.equals(p.alpha) && beta.equals(p.beta) && gamma.equals(p.gamma) && delta.equals(p.delta);
+        return same(alpha, p.alpha) && same(beta, p.beta) && same(gamma, p.gamma) && same(delta, p.delta);
+    }
+
+    /** Numerical equality (0.0 and -0.0 are the same parameter). */
+    private static boolean same(Complex a, Complex b) {
+        return a.getReal() == b.getReal() && a.getImaginary() == b.getImaginary();
     }
 
     @Override
     public int hashCode() {
-        return alpha.hashCode() * 31 * 31 * 31 + beta.hashCode() * 31 * 31 + gamma.hashCode() * 31 + delta.hashCode();
+        double[] v = {alpha.getReal(), alpha.getImaginary(), beta.getReal(), beta.getImaginary(), gamma.getReal(),
+            gamma.getImaginary(), delta.getReal(), delta.getImaginary()};
+        int h = 1;
+        for (double x : v) {
+            h = 31 * h + Double.hashCode(x + 0.0);
+        }
+        return h;
     }
 }

@@ -1,0 +1,106 @@
+package org.tertius.connection.family;
+
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import org.hipparchus.complex.Complex;
+import org.tertius.connection.match.DecayingConnection;
+import org.tertius.connection.num.Arith;
+import org.tertius.connection.zero.LocalValue;
+import org.tertius.connection.zero.PowerSeriesAtZero;
+import org.tertius.core.InvalidInputException;
+import org.tertius.core.number.ComplexText;
+import org.tertius.core.piii.Painleve3;
+import org.tertius.core.piii.Painleve3Solution;
+import org.tertius.core.step.SolverSettings;
+
+/**
+ * Solutions fixed by connection data instead of start data. Families:
+ * <ul>
+ *   <li>{@code decaying} (lambda, real): PIII(0, 0, 1, -1), w ~ 1 - 2 lambda K0(2x) at +infinity (McCoy, Tracy
+ *       and Wu, J. Math. Phys. 18 (1977) 1058); every real lambda (pole-free on the positive axis only for
+ *       |lambda| &lt; 1/pi);</li>
+ *   <li>{@code power} (sigma, B, complex, |Re sigma| &lt; 1): w ~ B z^sigma at 0, any equation;</li>
+ *   <li>{@code analytic} (w0 != 0): analytic at 0 with w(0) = w0, any equation (the power family with
+ *       sigma = 0).</li>
+ * </ul>
+ */
+public final class Families {
+    /** Family names. */
+    public static final List<String> NAMES = List.of("decaying", "power", "analytic");
+    /** Largest |z| tried for start data of the families at 0. */
+    static final double START_RADIUS = 0.25;
+
+    private Families() {
+    }
+
+    /**
+     * The solution of {@code equation} in family {@code name} with its parameters (texts: real or complex
+     * numbers a+bi, p/q).
+     *
+     * @throws InvalidInputException for an unknown family, a missing or extra parameter, a parameter outside
+     *     the family's range, or an equation the family does not belong to
+     */
+    public static Painleve3Solution create(Painleve3 equation, String name, Map<String, String> parameters,
+                                           SolverSettings settings) {
+        String n = name == null ? "" : name.trim().toLowerCase(java.util.Locale.ROOT);
+        switch (n) {
+            case "decaying":
+                return decaying(equation, parameters, settings);
+            case "power":
+                allow(parameters, Set.of("sigma", "B"));
+                return atZero(equation, value(parameters, "sigma"), value(parameters, "B"), settings);
+            case "analytic":
+                allow(parameters, Set.of("w0"));
+                Complex w0 = value(parameters, "w0");
+                if (w0.norm() == 0) {
+                    throw new InvalidInputException("w0", "must be non-zero for the family analytic at 0 (w(0) = 0"
+                            + " is not a value an analytic solution takes at z = 0 unless w vanishes identically"
+                            + " there; use the power family for w ~ B z^sigma)");
+                }
+                return atZero(equation, Complex.ZERO, w0, settings);
+            default:
+                throw new InvalidInputException("family", "unknown family '" + name + "'; known: " + NAMES);
+        }
+    }
+
+    private static Painleve3Solution decaying(Painleve3 equation, Map<String, String> parameters,
+                                              SolverSettings settings) {
+        allow(parameters, Set.of("lambda"));
+        if (!equation.equals(DecayingConnection.equation())) {
+            throw new InvalidInputException("family", "the decaying family belongs to alpha = 0, beta = 0, gamma = 1,"
+                    + " delta = -1, got " + equation + " (rescale z and w to reach that equation)");
+        }
+        Complex lambda = value(parameters, "lambda");
+        if (lambda.getImaginary() != 0) {
+            throw new InvalidInputException("lambda", "must be real for the decaying family on the positive axis,"
+                    + " got " + lambda);
+        }
+        return DecayingConnection.solution(lambda.getReal(), settings);
+    }
+
+    private static Painleve3Solution atZero(Painleve3 equation, Complex sigma, Complex b, SolverSettings settings) {
+        Arith<Complex> ar = Arith.DOUBLE;
+        List<Complex> p = List.of(equation.alpha(), equation.beta(), equation.gamma(), equation.delta());
+        PowerSeriesAtZero<Complex> s = PowerSeriesAtZero.create(ar, p, sigma, b, 40);
+        LocalValue<Complex> v = s.startData(new Complex(START_RADIUS), Math.max(1e-15, settings.tolerance()));
+        return Painleve3Solution.builder(equation).start(v.z(), v.w(), v.dw()).settings(settings).build();
+    }
+
+    private static void allow(Map<String, String> parameters, Set<String> names) {
+        for (String k : parameters.keySet()) {
+            if (!names.contains(k)) {
+                throw new InvalidInputException(k, "is not a parameter of this family; its parameters are " + names);
+            }
+        }
+        for (String k : names) {
+            if (!parameters.containsKey(k)) {
+                throw new InvalidInputException(k, "is required by this family (parameters " + names + ")");
+            }
+        }
+    }
+
+    private static Complex value(Map<String, String> parameters, String key) {
+        return ComplexText.parse(key, parameters.get(key));
+    }
+}

@@ -1,0 +1,124 @@
+package org.tertius.core.mp;
+
+import java.math.BigInteger;
+import java.util.Locale;
+import org.apfloat.Apcomplex;
+import org.apfloat.ApcomplexMath;
+import org.apfloat.Apfloat;
+import org.apfloat.ApfloatMath;
+import org.tertius.core.number.SurfacePoint;
+
+/**
+ * Benchmark of the high-precision layer (not a test): the generic D6 case alpha = 1, beta = -1/2, gamma = 1,
+ * delta = -1, w(1) = 1/2, w'(1) = 1/3, evaluated at z = 3+2i.
+ *
+ * <pre>
+ *   java -cp ... org.tertius.core.mp.HighPrecisionBench once 50        # one evaluation, as a whole process
+ *   java -cp ... org.tertius.core.mp.HighPrecisionBench table 30 50 100 200 1000
+ *   java -cp ... org.tertius.core.mp.HighPrecisionBench apfloat        # cost of Apfloat and BigInteger products
+ * </pre>
+ * The table reports, per number of digits, the wall time of a fresh solution (in a warm JVM), the steps and
+ * order of the accurate pass, the time per step, and the ratio of the time to the multiplication-count bound
+ * order^2 x products per order x steps x (time of one complex product at that precision).
+ */
+public final class HighPrecisionBench {
+    private HighPrecisionBench() {
+    }
+
+    public static void main(String[] args) {
+        String mode = args.length == 0 ? "once" : args[0];
+        switch (mode) {
+            case "once":
+                once(args.length > 1 ? Integer.parseInt(args[1]) : 50);
+                break;
+            case "table":
+                int[] ds = new int[Math.max(0, args.length - 1)];
+                for (int i = 1; i < args.length; i++) {
+                    ds[i - 1] = Integer.parseInt(args[i]);
+                }
+                table(ds.length == 0 ? new int[] {30, 50, 100, 200} : ds);
+                break;
+            case "apfloat":
+                apfloat();
+                break;
+            default:
+                System.err.println("usage: HighPrecisionBench once D | table D... | apfloat");
+                System.exit(2);
+        }
+    }
+
+    static HighPrecisionSolution scenario(int digits) {
+        return HighPrecisionSolution.builder("1", "-1/2", "1", "-1").start("1", "1/2", "1/3").digits(digits).build();
+    }
+
+    private static void once(int digits) {
+        long t0 = System.nanoTime();
+        HighPrecisionValue v = scenario(digits).evaluate(SurfacePoint.of(3, 2));
+        long t1 = System.nanoTime();
+        System.out.println("digits " + digits + "  correct digits " + v.correctDigits());
+        System.out.println("w(3+2i)  = " + v.wText());
+        System.out.println("w'(3+2i) = " + v.dwText());
+        System.out.printf(Locale.ROOT, "elapsed in main %.3f s%n", (t1 - t0) / 1e9);
+    }
+
+    private static void table(int[] digits) {
+        // warm the JIT on a small case first
+        scenario(30).evaluate(SurfacePoint.of(3, 2));
+        System.out.println("digits  order  steps  time[s]  per-step[ms]  complex-product[us]  bound[s]  ratio");
+        for (int d : digits) {
+            HighPrecisionSolution s = scenario(d);
+            long t0 = System.nanoTime();
+            HighPrecisionValue v = s.evaluate(SurfacePoint.of(3, 2));
+            double t = (System.nanoTime() - t0) / 1e9;
+            HighPrecisionSolution.Statistics st = s.statistics();
+            double mul = complexProductSeconds(st.fractionBits());
+            double bound = st.productCount() * mul;
+            System.out.printf(Locale.ROOT, "%6d  %5d  %5d  %7.3f  %12.2f  %19.3f  %8.3f  %5.2f   (%d correct)%n", d,
+                    st.order(), st.steps(), t, 1e3 * t / Math.max(1, st.totalSteps()), mul * 1e6, bound,
+                    t / bound, v.correctDigits());
+        }
+    }
+
+    /** Time of one fixed-point complex product (three BigInteger products and their accumulation). */
+    static double complexProductSeconds(int bits) {
+        BigInteger a = BigInteger.ONE.shiftLeft(bits).subtract(BigInteger.valueOf(987654321));
+        BigInteger b = a.add(BigInteger.valueOf(123456789));
+        BigInteger acc = BigInteger.ZERO;
+        int n = Math.max(2000, 4_000_000 / Math.max(1, bits));
+        for (int i = 0; i < n; i++) {
+            acc = acc.add(a.multiply(b));
+        }
+        long t0 = System.nanoTime();
+        for (int i = 0; i < n; i++) {
+            acc = acc.add(a.multiply(b)).add(b.multiply(a)).add(a.multiply(a));
+        }
+        double t = (System.nanoTime() - t0) / 1e9 / n;
+        if (acc.signum() == 0) {
+            System.out.print("");
+        }
+        return t;
+    }
+
+    private static void apfloat() {
+        System.out.println("digits  apfloat-complex-multiply[us]  biginteger-3-products[us]");
+        for (int d : new int[] {20, 50, 100, 200}) {
+            Apcomplex x = new Apcomplex(ApfloatMath.pi(d), ApfloatMath.sqrt(new Apfloat(2, d)));
+            Apcomplex y = ApcomplexMath.exp(x);
+            Apcomplex acc = x;
+            int n = 20000;
+            for (int i = 0; i < n; i++) {
+                acc = acc.multiply(y).divide(y);
+            }
+            long t0 = System.nanoTime();
+            for (int i = 0; i < n; i++) {
+                acc = x.multiply(y);
+            }
+            double t = (System.nanoTime() - t0) / 1e3 / n;
+            System.out.printf(Locale.ROOT, "%6d  %28.2f  %25.3f%n", d, t,
+                    1e6 * complexProductSeconds((int) Math.ceil(d * MpContext.LOG2_10)));
+            if (acc.real().signum() == 2) {
+                System.out.print("");
+            }
+        }
+    }
+}
