@@ -12,7 +12,7 @@ import org.tertius.hierarchy.algebra.Polynomial;
 
 /**
  * Member n of the Painleve III hierarchy as a first-order polynomial system, generated from the Lax pair
- * (see {@link MemberEquations} and hierarchy/README.md for the convention). The unknowns are the entries
+ * (the convention is documented in hierarchy/README.md). The unknowns are the entries
  * {@code a(k)11, a(k)12, a(k)21} of the traceless coefficients a_k of A(lambda), k = -2 .. n-2; then
  * {@code q = a(n-2)12 / (n t_n)} and {@code r = a(n-2)21 / (n t_n)} (t_1 = x).
  *

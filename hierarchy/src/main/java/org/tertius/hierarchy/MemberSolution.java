@@ -13,6 +13,7 @@ import org.tertius.core.solution.Solution;
 import org.tertius.core.solution.StateEstimate;
 import org.tertius.core.step.Node;
 import org.tertius.core.step.SolverSettings;
+import org.tertius.hierarchy.algebra.Polynomial;
 
 /**
  * A solution of member n, fixed by its state at a start point x0 (or, for member 1, by a_-2 at the fixed
@@ -53,7 +54,7 @@ public final class MemberSolution {
         MemberEquations eq = member.equations();
         this.traceIntegral = new Linearized(eq.traceForm(), eq.unknownCount()).value(ringValues(startState, x0));
         this.monitor = new IntegralMonitor(eq, parameters.s(), traceIntegral);
-        List<org.tertius.hierarchy.algebra.Polynomial> xf = eq.xFlow();
+        List<Polynomial> xf = eq.xFlow();
         int xi = eq.timeIndex(1);
         this.observables = new Linearized[] {new Linearized(eq.q(), eq.unknownCount()),
             new Linearized(eq.r(), eq.unknownCount()),

@@ -83,14 +83,19 @@ class MemberSolutionTest {
         assertFalse(monitor.check(values, err).stream().allMatch(IntegralCheck::withinEstimate));
     }
 
+    private static final MemberParameters MEMBER1 = MemberParameters.builder(1).s(new Complex(1.0))
+            .m(new Complex(0.3, 0.1)).build();
+    private static final Complex A11 = new Complex(0.4, 0.2);
+    private static final Complex A12 = new Complex(0.7, -0.1);
+    /** a(-2)21 from det a_-2 = s^2 = 1. */
+    private static final Complex A21 = Complex.ONE.add(A11.multiply(A11)).negate().divide(A12);
+
     @Test
     void member1StartedAtTheOriginIsSingleValuedAroundIt() {
         // analytic at x = 0: the value after one turn around x = 0 (sheet 1) equals the value on sheet 0
-        MemberParameters p = MemberParameters.builder(1).s(new Complex(1.0)).m(new Complex(0.3, 0.1)).build();
-        Complex a11 = new Complex(0.4, 0.2);
-        Complex a12 = new Complex(0.7, -0.1);
-        Complex a21 = Complex.ONE.add(a11.multiply(a11)).negate().divide(a12);
-        MemberSolution sol = MemberSolution.builder(p).startAtOrigin(a11, a12, a21).build();
+        MemberParameters p = MEMBER1;
+        Complex a11 = A11;
+        MemberSolution sol = MemberSolution.builder(p).startAtOrigin(A11, A12, A21).build();
         assertTrue(sol.traceIntegral().subtract(p.m().multiply(a11).multiply(2)).norm() < 1e-12,
                 "trace form 2 m a11 at x = 0, got " + sol.traceIntegral());
         for (Complex x : new Complex[] {new Complex(0.5, 0.3), new Complex(-0.4, 0.6)}) {
@@ -99,8 +104,8 @@ class MemberSolutionTest {
             for (int i = 0; i < 6; i++) {
                 double d = v0.state().get(i).subtract(v1.state().get(i)).norm();
                 // the engine's error estimates are first-order estimates; allowed slack as for the integrals
-                assertTrue(d <= IntegralCheck.ESTIMATE_SAFETY * (v0.error(i) + v1.error(i)), "component " + i + " at " + x + ": " + d + " > "
-                        + (v0.error(i) + v1.error(i)));
+                assertTrue(d <= IntegralCheck.ESTIMATE_SAFETY * (v0.error(i) + v1.error(i)), "component " + i
+                        + " at " + x + ": " + d + " > " + (v0.error(i) + v1.error(i)));
             }
             assertTrue(v0.integralsWithinEstimate() && v1.integralsWithinEstimate(), v0.warning() + v1.warning());
         }
@@ -109,12 +114,8 @@ class MemberSolutionTest {
     @Test
     void member1StartedAwayFromTheAnalyticFamilyIsMultivaluedAroundTheOrigin() {
         // the contrast to the test above: generic data at x0 pick up monodromy x^{+-2m} around x = 0
-        MemberParameters p = MemberParameters.builder(1).s(new Complex(1.0)).m(new Complex(0.3, 0.1)).build();
-        Complex a = new Complex(0.4, 0.2);
-        Complex b = new Complex(0.7, -0.1);
-        Complex c = Complex.ONE.add(a.multiply(a)).negate().divide(b);
-        List<Complex> state = List.of(a, b, c, p.m(), new Complex(0.2), new Complex(-0.3, 0.1));
-        MemberSolution sol = MemberSolution.builder(p).start(new Complex(0.5), state).build();
+        List<Complex> state = List.of(A11, A12, A21, MEMBER1.m(), new Complex(0.2), new Complex(-0.3, 0.1));
+        MemberSolution sol = MemberSolution.builder(MEMBER1).start(new Complex(0.5), state).build();
         Complex x = new Complex(0.5, 0.3);
         MemberValue v0 = sol.evaluate(x, 0);
         MemberValue v1 = sol.evaluate(SurfacePoint.of(x, 1));

@@ -13,7 +13,8 @@ import org.tertius.hierarchy.algebra.Arithmetics;
 import org.tertius.hierarchy.algebra.GaussianRational;
 
 /**
- * The generated member equations against the Lax pair itself, in exact rational arithmetic. The residual
+ * The generated member equations against the Lax pair itself (the isomonodromic pair of Sakka, J. Phys. A 42
+ * (2009) 025210, in the convention of hierarchy/README.md), in exact rational arithmetic. The residual
  * {@code A_x - U_lambda + [A, U]} is formed here with plain 2x2 matrices (independently of the generator's
  * symbolic matrices) and must vanish exactly at every power of lambda.
  */

@@ -117,6 +117,37 @@ public final class DecayingConnection {
         return new ZeroFit<>(ar, parameters(ar), degree).fit(end);
     }
 
+    /** Largest |sigma| accepted by {@link #lambdaForSigma} (sigma(0.312) = 0.8836...). */
+    public static final double SIGMA_MAX = 0.88;
+
+    /**
+     * The member lambda whose exponent at 0 is sigma (0 &lt; |sigma| &lt; 1), by Brent's method (Hipparchus) on
+     * lambda -> sigma(lambda) - sigma over (-1/pi, 1/pi), sigma(lambda) from {@link #zeroDataByEngine}.
+     *
+     * @return {lambda, estimated error}
+     */
+    public static double[] lambdaForSigma(double sigma, double x0, SolverSettings settings) {
+        InvalidInputException.requireFinite("sigma", sigma);
+        if (!(Math.abs(sigma) <= SIGMA_MAX)) {
+            throw new InvalidInputException("sigma", "must be in [-" + SIGMA_MAX + ", " + SIGMA_MAX + "] here, got "
+                    + sigma + "; the pole-free family has |sigma| < 1, sigma = +-1 is the logarithmic member"
+                    + " lambda = +-1/pi, no member has |sigma| > 1 on the positive axis, and for |sigma| > "
+                    + SIGMA_MAX + " the fit at x0 needs x0 below double range");
+        }
+        double edge = 0.312;
+        double err = 0;
+        double[] slope = new double[1];
+        double lam = new org.hipparchus.analysis.solvers.BrentSolver(1e-15, 1e-15).solve(200, l -> {
+            ZeroFit.Result<Complex> r = zeroDataByEngine(l, x0, settings);
+            return r.sigma().getReal() - sigma;
+        }, -edge, edge);
+        ZeroFit.Result<Complex> r = zeroDataByEngine(lam, x0, settings);
+        ZeroFit.Result<Complex> r2 = zeroDataByEngine(lam + 1e-7, x0, settings);
+        slope[0] = (r2.sigma().getReal() - r.sigma().getReal()) / 1e-7;
+        err = (r.errSigma() + Math.abs(r.sigma().getReal() - sigma)) / Math.abs(slope[0]) + 1e-15;
+        return new double[] {lam, err};
+    }
+
     private static void requireFinite(double lambda) {
         InvalidInputException.requireFinite("lambda", lambda);
     }

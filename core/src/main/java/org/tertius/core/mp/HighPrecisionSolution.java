@@ -9,7 +9,6 @@ import org.apfloat.Apcomplex;
 import org.apfloat.ApcomplexMath;
 import org.apfloat.Apfloat;
 import org.apfloat.ApfloatMath;
-import org.hipparchus.complex.Complex;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.number.SurfacePoint;
 import org.tertius.core.piii.EngineView;
@@ -98,24 +97,27 @@ public final class HighPrecisionSolution {
      * @throws org.tertius.core.UnreachableTargetException if the point cannot be reached
      */
     public HighPrecisionValue evaluate(SurfacePoint point) {
-        return compute(level -> List.of(level.valueAt(point, null)), List.of(point)).get(0);
+        return compute(level -> List.of(level.valueAt(point)), List.of(point)).get(0);
     }
 
     /**
      * n >= 2 values at equally spaced points of the straight segment from a to b in tau = log z (a segment of
      * the Riemann surface), from one pass of high-precision steps along it: the path is not integrated again per
-     * point.
+     * point. The values belong to the exact points tau_a + (i / (n-1)) (tau_b - tau_a); the {@link
+     * HighPrecisionValue#point()} of an interior point is that point rounded to double precision.
      */
     public List<HighPrecisionValue> tabulate(SurfacePoint a, SurfacePoint b, int n) {
         if (n < 2 || n > 1000000) {
             throw new InvalidInputException("n", "the number of points must be in [2, 1000000], got " + n);
         }
         List<SurfacePoint> points = new ArrayList<>();
-        for (int i = 0; i < n; i++) {
+        points.add(a);
+        for (int i = 1; i < n - 1; i++) {
             double t = (double) i / (n - 1);
             points.add(SurfacePoint.fromLog(a.logRe() + t * (b.logRe() - a.logRe()),
                     a.logIm() + t * (b.logIm() - a.logIm())));
         }
+        points.add(b);
         return compute(level -> level.line(a, b, n), points);
     }
 
@@ -190,6 +192,15 @@ public final class HighPrecisionSolution {
      * 10 * steps * tol * max(1, A) (each step contributes at most the local tolerance, amplified alike).
      */
     private List<HighPrecisionValue> compute(Pass pass, List<SurfacePoint> points) {
+        try {
+            return computeUninterrupted(pass, points);
+        } catch (org.apfloat.ApfloatInterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new org.tertius.core.TertiusException("high-precision computation cancelled (thread interrupted)", e);
+        }
+    }
+
+    private List<HighPrecisionValue> computeUninterrupted(Pass pass, List<SurfacePoint> points) {
         int cheapDigits = Math.max(20, digits / 2 + 5);
         Progress meter = new Progress(progress);
         meter.phase(0, 0.15);
@@ -214,7 +225,7 @@ public final class HighPrecisionSolution {
                 Outcome a = accurate.get(i);
                 Outcome c = cheap.get(i);
                 double log10Diff = Math.max(relativeDifference(a.w, c.w), relativeDifference(a.dw, c.dw));
-                double log10Amp = Math.max(0, log10Diff + cheapDigitsOf(c, cheapDigits) - Math.log10(c.steps + 1.0));
+                double log10Amp = Math.max(0, log10Diff + cheapDigits - Math.log10(c.steps + 1.0));
                 double log10Err = 1 + Math.log10(a.steps + 1.0) - accurateDigits + log10Amp;
                 int correct = (int) Math.max(0, Math.min(digits, Math.floor(-log10Err)));
                 worst = Math.min(worst, correct);
@@ -229,10 +240,6 @@ public final class HighPrecisionSolution {
         }
         meter.done();
         return result;
-    }
-
-    private static int cheapDigitsOf(Outcome o, int d) {
-        return d;
     }
 
     /** log10 of |a - b| / |a| (or of |a - b| when a = 0). */
@@ -367,8 +374,8 @@ public final class HighPrecisionSolution {
             return p == null ? null : p::advanced;
         }
 
-        /** The state at the point, integrated along the planned path (keepNodes: the last segment's nodes). */
-        Outcome valueAt(SurfacePoint point, List<HpNode> keep) {
+        /** The value at the point, integrated along the planned path. */
+        Outcome valueAt(SurfacePoint point) {
             PathState s = stateAt(point);
             return outcome(point, s.y, s.steps);
         }
@@ -570,9 +577,5 @@ public final class HighPrecisionSolution {
             }
             return x;
         }
-    }
-
-    static Complex toComplex(Apcomplex x) {
-        return new Complex(x.real().doubleValue(), x.imag().doubleValue());
     }
 }

@@ -47,6 +47,32 @@ public final class EngineView {
         return solution.form().fromState(p, z, y);
     }
 
+    /** The state component that carries w or 1/w. */
+    public int wComponent() {
+        return solution.form().wComponent();
+    }
+
+    /** Whether {@link #wComponent()} carries 1/w (then poles of w are zeros of that component). */
+    public boolean wComponentIsReciprocal() {
+        return solution.form().wComponentIsReciprocal();
+    }
+
+    /**
+     * The value at a point from the stored tree only (no new steps), or null when no stored node covers the
+     * point with a local error below {@code maxRelativeError}.
+     */
+    public Painleve3Value evaluateStored(org.tertius.core.number.SurfacePoint p, double maxRelativeError) {
+        org.tertius.core.solution.StateEstimate s = solution.engine().evaluateStored(p.logRe(), p.logIm(),
+                maxRelativeError);
+        return s == null ? null : solution.value(p, s);
+    }
+
+    /** The start point of the solution (principal sheet). */
+    public org.tertius.core.number.SurfacePoint startPoint() {
+        org.tertius.core.step.Node root = solution.engine().root();
+        return org.tertius.core.number.SurfacePoint.fromLog(root.tauRe(), root.tauIm());
+    }
+
     /** The description of the form. */
     public String formDescription() {
         return solution.form().describe();

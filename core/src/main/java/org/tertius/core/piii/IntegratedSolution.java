@@ -78,7 +78,11 @@ final class IntegratedSolution extends Painleve3Solution {
 
     @Override
     public Painleve3Value evaluate(SurfacePoint point) {
-        StateEstimate s = engine.evaluate(point.logRe(), point.logIm());
+        return value(point, engine.evaluate(point.logRe(), point.logIm()));
+    }
+
+    /** The PIII value from an engine estimate at the point. */
+    Painleve3Value value(SurfacePoint point, StateEstimate s) {
         int n = s.dimension();
         double[] re = new double[n];
         double[] im = new double[n];

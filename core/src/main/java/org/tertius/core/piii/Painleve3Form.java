@@ -23,6 +23,16 @@ interface Painleve3Form {
      */
     Complex[] fromState(Complex z, double[] re, double[] im, double[] err, double[] errOut);
 
+    /** The state component that carries w (or 1/w, see {@link #wComponentIsReciprocal()}). */
+    default int wComponent() {
+        return 0;
+    }
+
+    /** Whether {@link #wComponent()} carries 1/w rather than w. */
+    default boolean wComponentIsReciprocal() {
+        return false;
+    }
+
     /** One line that says which form is used (for output headers). */
     String describe();
 

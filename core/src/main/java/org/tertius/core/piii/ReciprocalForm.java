@@ -66,6 +66,11 @@ final class ReciprocalForm implements Painleve3Form {
     }
 
     @Override
+    public boolean wComponentIsReciprocal() {
+        return !inner.wComponentIsReciprocal();
+    }
+
+    @Override
     public String describe() {
         return "reciprocal 1/w in the " + inner.describe();
     }

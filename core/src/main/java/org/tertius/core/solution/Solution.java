@@ -38,6 +38,7 @@ public final class Solution {
     private final Object lock = new Object();
     private final boolean singularAtOrigin;
     private volatile Node[] nodes;
+    private final NodeIndex index = new NodeIndex();
 
     private Solution(PolynomialSystem system, RecurrencePlan plan, SolverSettings settings,
                      StateProjection projection, Node root) {
@@ -47,6 +48,9 @@ public final class Solution {
         this.projection = projection;
         this.steppers = ThreadLocal.withInitial(() -> new TaylorPadeStepper(system, plan, settings, projection));
         this.nodes = new Node[] {root};
+        if (root != null) {
+            index.add(root);
+        }
         boolean neg = false;
         for (int i = 0; i < system.dimension(); i++) {
             for (Term t : system.terms(i)) {
@@ -222,6 +226,9 @@ public final class Solution {
                 parent = id;
             }
             nodes = grown;
+            for (int i = old.length; i < grown.length; i++) {
+                index.add(grown[i]);
+            }
             return last;
         }
     }
@@ -229,7 +236,11 @@ public final class Solution {
     private Node bestCovering(Node[] snapshot, double tRe, double tIm, TaylorPadeStepper stepper, double tol) {
         Node best = null;
         double bestErr = Double.POSITIVE_INFINITY;
-        for (Node n : snapshot) {
+        for (int id : index.candidates(tRe, tIm)) {
+            if (id >= snapshot.length) {
+                continue;
+            }
+            Node n = snapshot[id];
             double d = Math.hypot(tRe - n.tauRe(), tIm - n.tauIm());
             if (d > n.radius()) {
                 continue;
@@ -245,6 +256,19 @@ public final class Solution {
             }
         }
         return best;
+    }
+
+    /**
+     * The value at tau from the stored tree only (no new steps), with the inherited error bounded over the
+     * serving node's disk: the fast path for evaluating many points (grids, tables) once a tree covers them.
+     *
+     * @param maxRelativeError the largest accepted local truncation error relative to 1 + |y|
+     * @return the estimate, or null if no stored node covers tau to that accuracy
+     */
+    public StateEstimate evaluateStored(double tauRe, double tauIm, double maxRelativeError) {
+        Node[] snapshot = nodes;
+        Node best = bestCovering(snapshot, tauRe, tauIm, steppers.get(), maxRelativeError);
+        return best == null ? null : estimate(best, tauRe, tauIm, 0, false);
     }
 
     private static Node nearest(Node[] snapshot, double tRe, double tIm) {

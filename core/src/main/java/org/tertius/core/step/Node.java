@@ -33,10 +33,11 @@ public final class Node {
     private final double[] errIm;
     private final double[] growth;
     private final double accumulatedError;
+    private final double suggestedRadius;
 
     Node(int id, int parent, double tauRe, double tauIm, double[] yRe, double[] yIm, double radius,
          PadeApproximant[] high, PadeApproximant[] low, double[] singRe, double[] singIm,
-         double[] roundingFloor, double[] errRe, double[] errIm, double[] growth) {
+         double[] roundingFloor, double[] errRe, double[] errIm, double[] growth, double suggestedRadius) {
         this.id = id;
         this.parent = parent;
         this.tauRe = tauRe;
@@ -52,6 +53,7 @@ public final class Node {
         this.errRe = errRe;
         this.errIm = errIm;
         this.growth = growth;
+        this.suggestedRadius = suggestedRadius;
         double acc = 0;
         for (int i = 0; i < yRe.length; i++) {
             acc = Math.max(acc, Math.hypot(errRe[i], errIm[i]) / (1 + Math.hypot(yRe[i], yIm[i])));
@@ -62,7 +64,7 @@ public final class Node {
     /** Returns a copy of this node with a new id and parent (used when a path is merged into a tree). */
     public Node renumbered(int newId, int newParent) {
         return new Node(newId, newParent, tauRe, tauIm, yRe, yIm, radius, high, low, singRe, singIm,
-                roundingFloor, errRe, errIm, growth);
+                roundingFloor, errRe, errIm, growth, suggestedRadius);
     }
 
     public int id() {
@@ -84,6 +86,11 @@ public final class Node {
 
     public double radius() {
         return radius;
+    }
+
+    /** The radius to try first at a node stepped to from this one (from this node's error model). */
+    public double suggestedRadius() {
+        return suggestedRadius;
     }
 
     public int dimension() {

@@ -112,7 +112,7 @@ public final class TaylorPadeStepper {
         double r = Math.min(r0, rMax);
         PadeApproximant[] hi = new PadeApproximant[n];
         PadeApproximant[] lo = new PadeApproximant[n];
-        boolean grew = false;
+        double suggested = r;
         for (int iter = 0; iter < 30; iter++) {
             rescale(rawRe, rawIm, r / r0);
             for (int i = 0; i < n; i++) {
@@ -128,14 +128,8 @@ public final class TaylorPadeStepper {
                 r *= Math.max(0.2, Math.min(0.9, 0.9 * factor));
                 continue;
             }
-            if (!grew && e < tol * 1e-2 && r < rMax && iter < 3) {
-                double f = Math.min(3.0, 0.9 * factor);
-                if (f > 1.15) {
-                    r = Math.min(rMax, r * f);
-                    grew = iter >= 2;
-                    continue;
-                }
-            }
+            // accepted; the next node starts from a radius predicted by the error model e ~ r^m
+            suggested = Math.min(rMax * 2, r * Math.max(0.5, Math.min(2.0, 0.9 * factor)));
             break;
         }
         double[] floor = new double[n];
@@ -168,7 +162,7 @@ public final class TaylorPadeStepper {
             }
         }
         Node node = new Node(id, parent, tRe, tIm, yRe.clone(), yIm.clone(), r, hi, lo, sing[0], sing[1], floor,
-                eRe.clone(), eIm.clone(), growth);
+                eRe.clone(), eIm.clone(), growth, suggested);
         pertNode = node;
         pert = perturbed;
         pertEta = eta;
@@ -228,7 +222,7 @@ public final class TaylorPadeStepper {
         double tRe = from.tauRe() + from.radius() * sr;
         double tIm = from.tauIm() + from.radius() * si;
         projection.project(tRe, tIm, yRe, yIm);
-        return expand(id, from.id(), tRe, tIm, yRe, yIm, eRe, eIm, from.radius(), maxRadius);
+        return expand(id, from.id(), tRe, tIm, yRe, yIm, eRe, eIm, from.suggestedRadius(), maxRadius);
     }
 
     /**

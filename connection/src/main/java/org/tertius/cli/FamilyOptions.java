@@ -1,0 +1,52 @@
+package org.tertius.cli;
+
+import java.util.LinkedHashMap;
+import java.util.Map;
+import org.tertius.connection.family.Families;
+import org.tertius.core.piii.Painleve3;
+import org.tertius.core.piii.Painleve3Solution;
+import org.tertius.core.step.SolverSettings;
+import picocli.CommandLine.Option;
+
+/**
+ * A solution given by connection data instead of start data: {@code --family NAME} with its parameters
+ * (decaying: --lambda; power: --sigma --amplitude; analytic: --value-at-zero).
+ */
+public final class FamilyOptions {
+    @Option(names = "--family", paramLabel = "NAME",
+            description = "solution by connection data: decaying (needs --lambda; alpha=0 beta=0 gamma=1 delta=-1),"
+                    + " power (--sigma, --amplitude: w ~ B z^sigma at 0), analytic (--value-at-zero: w(0))")
+    String family;
+    @Option(names = "--lambda", paramLabel = "L", description = "decaying family: w ~ 1 - 2 lambda K0(2x) at +infinity")
+    String lambda;
+    @Option(names = "--sigma", paramLabel = "S", description = "power family: exponent at 0, |Re sigma| < 1")
+    String sigma;
+    @Option(names = "--amplitude", paramLabel = "B", description = "power family: B in w ~ B z^sigma")
+    String amplitude;
+    @Option(names = "--value-at-zero", paramLabel = "W", description = "analytic family: w(0) != 0")
+    String valueAtZero;
+
+    public boolean given() {
+        return family != null;
+    }
+
+    /** The parameters given, keyed by the library's parameter names. */
+    Map<String, String> parameters() {
+        Map<String, String> m = new LinkedHashMap<>();
+        put(m, "lambda", lambda);
+        put(m, "sigma", sigma);
+        put(m, "B", amplitude);
+        put(m, "w0", valueAtZero);
+        return m;
+    }
+
+    private static void put(Map<String, String> m, String k, String v) {
+        if (v != null) {
+            m.put(k, v);
+        }
+    }
+
+    public Painleve3Solution solution(Painleve3 equation, SolverSettings settings) {
+        return Families.create(equation, family, parameters(), settings);
+    }
+}

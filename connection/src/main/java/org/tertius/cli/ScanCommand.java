@@ -1,0 +1,97 @@
+package org.tertius.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.UncheckedIOException;
+import java.io.Writer;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.concurrent.Callable;
+import org.tertius.connection.scan.Classification;
+import org.tertius.connection.scan.DecayingClassifier;
+import org.tertius.connection.scan.ScanPlot;
+import org.tertius.connection.scan.ScanRunner;
+import org.tertius.core.InvalidInputException;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+
+/** A sweep of the decaying family over lambda with classification of each member. */
+@Command(name = "scan", mixinStandardHelpOptions = true,
+        description = "Sweep lambda of the decaying family w ~ 1 - 2 lambda K0(2x) of PIII(0,0,1,-1); classify each"
+                + " member (pole-free on the positive axis, first zero or pole, behaviour at 0) to CSV streamed in"
+                + " order; progress on standard error; resume by re-running with the same --output.")
+public final class ScanCommand implements Callable<Integer> {
+    @Spec
+    CommandSpec spec;
+    @Mixin
+    SolverOptions solver = new SolverOptions();
+    @Option(names = "--range", paramLabel = "A:B:N", required = true, description = "lambda from A to B, N values")
+    String range;
+    @Option(names = "--output", paramLabel = "FILE", description = "CSV file (rows already there are kept and"
+            + " their tasks skipped); default standard output")
+    Path output;
+    @Option(names = "--plot", paramLabel = "FILE.png", description = "PNG plot of the first singularity and sigma")
+    Path plot;
+    @Option(names = "--threads", paramLabel = "N", description = "worker threads (default: processors)")
+    int threads = Runtime.getRuntime().availableProcessors();
+
+    @Override
+    public Integer call() throws InterruptedException {
+        String[] p = range.split(":");
+        if (p.length != 3) {
+            throw new InvalidInputException("--range", "expected A:B:N, e.g. 0.05:0.6:50");
+        }
+        double a = parse(p[0]);
+        double b = parse(p[1]);
+        int n = Targets.count("--range", p[2], 2);
+        List<Double> grid = ScanRunner.grid(a, b, n);
+        Map<Integer, Classification> done = ScanRunner.readExisting(output);
+        PrintWriter err = spec.commandLine().getErr();
+        DecayingClassifier classifier = new DecayingClassifier(solver.settings());
+        List<Classification> rows;
+        try (Writer w = writer()) {
+            w.write("# decaying family of PIII(0,0,1,-1), w ~ 1 - 2 lambda K0(2x); scan of lambda " + range + "\n");
+            w.write(Classification.CSV_HEADER + "\n");
+            rows = new ScanRunner(threads).run(grid, classifier::classify, done, w,
+                    (k, total, c) -> err.printf(Locale.ROOT, "scan: %d/%d lambda=%.6g %s%n", k, total, c.parameter(),
+                            c.kind()));
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        if (plot != null) {
+            ScanPlot.write(rows, "Decaying family of PIII(0,0,1,-1): first real zero/pole and sigma", "lambda",
+                    plot);
+        }
+        return 0;
+    }
+
+    private Writer writer() throws IOException {
+        if (output == null) {
+            return new KeepOpen(spec.commandLine().getOut());
+        }
+        return Files.newBufferedWriter(output, StandardCharsets.UTF_8);
+    }
+
+    /** Standard output for the try-with-resources: flushed, not closed. */
+    private static final class KeepOpen extends java.io.FilterWriter {
+        KeepOpen(Writer out) {
+            super(out);
+        }
+
+        @Override
+        public void close() throws IOException {
+            flush();
+        }
+    }
+
+    private static double parse(String s) {
+        return EquationOptions.value("--range", s).getReal();
+    }
+}

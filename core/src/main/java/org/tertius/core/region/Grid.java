@@ -1,0 +1,147 @@
+package org.tertius.core.region;
+
+import org.tertius.core.InvalidInputException;
+import org.tertius.core.number.SurfacePoint;
+
+/**
+ * A rectangular grid of points of one sheet: nx points from re0 to re1 and ny points from im0 to im1 (both ends
+ * included). Immutable.
+ */
+public final class Grid {
+    /** Bytes per grid point held by a {@link GridResult} (five doubles). */
+    public static final long BYTES_PER_POINT = 5 * 8;
+
+    private final double re0;
+    private final double re1;
+    private final int nx;
+    private final double im0;
+    private final double im1;
+    private final int ny;
+    private final int sheet;
+
+    private Grid(String arg, double re0, double re1, int nx, double im0, double im1, int ny, int sheet) {
+        for (double v : new double[] {re0, re1, im0, im1}) {
+            InvalidInputException.requireFinite(arg, v);
+        }
+        if (nx < 1 || ny < 1) {
+            throw new InvalidInputException(arg, "point counts must be at least 1, got " + nx + " x " + ny);
+        }
+        if ((nx > 1 && !(re1 > re0)) || (ny > 1 && !(im1 > im0))) {
+            throw new InvalidInputException(arg, "empty or inverted range: need RE0 < RE1 and IM0 < IM1 (got "
+                    + re0 + ":" + re1 + ", " + im0 + ":" + im1 + ")");
+        }
+        if ((long) nx * ny > 50_000_000L) {
+            throw new InvalidInputException(arg, nx + " x " + ny + " points is more than the 5e7 allowed");
+        }
+        this.re0 = re0;
+        this.re1 = re1;
+        this.nx = nx;
+        this.im0 = im0;
+        this.im1 = im1;
+        this.ny = ny;
+        this.sheet = sheet;
+    }
+
+    public static Grid of(double re0, double re1, int nx, double im0, double im1, int ny, int sheet) {
+        return new Grid("grid", re0, re1, nx, im0, im1, ny, sheet);
+    }
+
+    /**
+     * Parses "RE0:RE1:NX,IM0:IM1:NY".
+     *
+     * @param argument the option name for messages
+     */
+    public static Grid parse(String argument, String text, int sheet) {
+        String[] parts = text == null ? new String[0] : text.split(",");
+        if (parts.length != 2) {
+            throw new InvalidInputException(argument, "expected RE0:RE1:NX,IM0:IM1:NY, e.g. -10:10:401,-10:10:401");
+        }
+        String[] a = parts[0].split(":");
+        String[] b = parts[1].split(":");
+        if (a.length != 3 || b.length != 3) {
+            throw new InvalidInputException(argument, "expected RE0:RE1:NX,IM0:IM1:NY, e.g. -10:10:401,-10:10:401");
+        }
+        try {
+            return new Grid(argument, Double.parseDouble(a[0]), Double.parseDouble(a[1]), Integer.parseInt(a[2].trim()),
+                    Double.parseDouble(b[0]), Double.parseDouble(b[1]), Integer.parseInt(b[2].trim()), sheet);
+        } catch (NumberFormatException e) {
+            throw new InvalidInputException(argument, "cannot read '" + text + "': " + e.getMessage());
+        }
+    }
+
+    public int nx() {
+        return nx;
+    }
+
+    public int ny() {
+        return ny;
+    }
+
+    public int sheet() {
+        return sheet;
+    }
+
+    public double re0() {
+        return re0;
+    }
+
+    public double re1() {
+        return re1;
+    }
+
+    public double im0() {
+        return im0;
+    }
+
+    public double im1() {
+        return im1;
+    }
+
+    public int size() {
+        return nx * ny;
+    }
+
+    public double re(int i) {
+        return nx == 1 ? re0 : re0 + (re1 - re0) * i / (nx - 1);
+    }
+
+    public double im(int j) {
+        return ny == 1 ? im0 : im0 + (im1 - im0) * j / (ny - 1);
+    }
+
+    /** Spacing of the grid (the larger of the two), or the extent if a single point. */
+    public double spacing() {
+        double dx = nx > 1 ? (re1 - re0) / (nx - 1) : 0;
+        double dy = ny > 1 ? (im1 - im0) / (ny - 1) : 0;
+        return Math.max(dx, dy);
+    }
+
+    /** Whether z lies in the closed rectangle (any sheet). */
+    public boolean contains(double re, double im) {
+        return re >= re0 && re <= re1 && im >= im0 && im <= im1;
+    }
+
+    /** The point (i, j), row-major index j * nx + i; null when it is z = 0 (the branch point). */
+    public SurfacePoint point(int i, int j) {
+        double x = re(i);
+        double y = im(j);
+        if (x == 0 && y == 0) {
+            return null;
+        }
+        return SurfacePoint.of(x, y, sheet);
+    }
+
+    /**
+     * Checks that the values of the grid fit in memory with room for the path tree, else refuses with the
+     * estimate.
+     */
+    public void checkMemory(String argument) {
+        long need = BYTES_PER_POINT * size();
+        long max = Runtime.getRuntime().maxMemory();
+        if (need > max / 2) {
+            throw new InvalidInputException(argument, String.format(java.util.Locale.ROOT,
+                    "a %d x %d grid needs about %d MB for its values, more than half of the %d MB this JVM may"
+                            + " use; choose fewer points or raise -Xmx", nx, ny, need >> 20, max >> 20));
+        }
+    }
+}

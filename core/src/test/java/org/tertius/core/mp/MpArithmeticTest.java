@@ -1,0 +1,139 @@
+package org.tertius.core.mp;
+
+import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.quicktheories.QuickTheory.qt;
+import static org.quicktheories.generators.SourceDSL.doubles;
+
+import java.math.BigInteger;
+import org.apfloat.Apcomplex;
+import org.apfloat.ApcomplexMath;
+import org.apfloat.Apfloat;
+import org.hipparchus.complex.Complex;
+import org.junit.jupiter.api.Test;
+import org.tertius.core.equation.IndependentVariable;
+import org.tertius.core.equation.PolynomialSystem;
+import org.tertius.core.taylor.DoubleTaylorKernel;
+import org.tertius.core.taylor.RecurrencePlan;
+
+/** The binary arithmetic, the fixed-point kernel and the continued fractions of the high-precision layer. */
+class MpArithmeticTest {
+    private static final int DIGITS = 60;
+    private static final MpContext C = new MpContext(DIGITS);
+
+    /** log10 |x - ref| / |ref| with ref from Apfloat. */
+    private static double error(MpComplex x, Apcomplex ref) {
+        MpContext wide = C.widen(20);
+        MpComplex r = wide.fromApcomplex(ref);
+        MpComplex d = wide.subtract(x, r);
+        return d.isZero() ? -1000 : (d.log2Abs() - r.log2Abs()) / MpContext.LOG2_10;
+    }
+
+    private static Apcomplex ap(double re, double im) {
+        return new Apcomplex(new Apfloat(new java.math.BigDecimal(re), DIGITS + 30),
+                new Apfloat(new java.math.BigDecimal(im), DIGITS + 30));
+    }
+
+    @Test
+    void productsQuotientsAndExponentialsAgreeWithApfloatToTheWorkingPrecision() {
+        // reference: Apfloat at 90 digits; the working precision is 60 digits (plus guard bits), so one rounding
+        // leaves a relative error below 1e-60
+        qt().withExamples(200).forAll(doubles().between(-50, 50), doubles().between(-50, 50), doubles().between(-3, 3),
+                doubles().between(-3, 3)).checkAssert((a, b, c, d) -> {
+                    MpComplex x = C.fromDouble(a, b);
+                    MpComplex y = C.fromDouble(c, d);
+                    Apcomplex ax = ap(a, b);
+                    Apcomplex ay = ap(c, d);
+                    assertTrue(error(C.multiply(x, y), ax.multiply(ay)) < -DIGITS);
+                    if (c != 0 || d != 0) {
+                        assertTrue(error(C.divide(x, y), ax.divide(ay)) < -DIGITS);
+                    }
+                    assertTrue(error(C.add(x, y), ax.add(ay)) < -DIGITS + 2);
+                    // e^y: the argument reduction costs a few bits, kept by the guard bits of exp
+                    assertTrue(error(C.exp(y), ApcomplexMath.exp(ay)) < -DIGITS);
+                });
+    }
+
+    @Test
+    void rationalsAndApfloatNumbersConvertWithOneRounding() {
+        MpComplex third = C.fromExact(ExactNumber.parse("x", "1/3-2/7i"));
+        Apcomplex ref = new Apcomplex(new Apfloat(1, 100).divide(new Apfloat(3, 100)),
+                new Apfloat(-2, 100).divide(new Apfloat(7, 100)));
+        assertTrue(error(third, ref) < -DIGITS);
+        assertTrue(error(C.fromApcomplex(ref), ref) < -DIGITS);
+        assertTrue(error(C.fromApcomplex(C.toApcomplex(third)), ref) < -DIGITS + 1);
+    }
+
+    @Test
+    void fixedPointKernelMatchesTheDoubleKernelOnTheSamePlan() {
+        // z y' = y^2 p + (1/2) z y, z p' = -y p^2 + z^2 (a system with products and powers of the base)
+        PolynomialSystem sys = PolynomialSystem.builder(IndependentVariable.LOG, "y", "p")
+                .term(0, new Complex(1), 0, 2, 1).term(0, new Complex(0.5), 1, 1, 0)
+                .term(1, new Complex(-1), 0, 1, 2).term(1, new Complex(0, 1), 2, 0, 0).build();
+        RecurrencePlan plan = RecurrencePlan.compile(sys);
+        int order = 24;
+        MpComplex[] coef = new MpComplex[sys.coefficientValues().size()];
+        for (int i = 0; i < coef.length; i++) {
+            Complex v = sys.coefficientValues().get(i);
+            coef[i] = C.fromDouble(v.getReal(), v.getImaginary());
+        }
+        FixedPointKernel k = new FixedPointKernel(plan, coef, order, C);
+        TaylorSeries s = k.expand(C.fromDouble(0.1, 0.2), new MpComplex[] {C.fromDouble(0.5, 0.25),
+            C.fromDouble(-0.3, 0.1)}, 0.2);
+        DoubleTaylorKernel dk = new DoubleTaylorKernel(plan, sys, order);
+        double[][] re = new double[2][order + 1];
+        double[][] im = new double[2][order + 1];
+        dk.coefficients(0.1, 0.2, new double[] {0.5, -0.3}, new double[] {0.25, 0.1}, 0.2, re, im);
+        for (int i = 0; i < 2; i++) {
+            for (int j = 0; j <= order; j++) {
+                Complex hp = s.coefficient(C, i, j).toComplex();
+                // the double kernel is accurate to a few ulps of the largest coefficient (common practice)
+                assertTrue(hp.subtract(new Complex(re[i][j], im[i][j])).norm() < 1e-13, "coefficient " + i + "," + j);
+            }
+        }
+    }
+
+    @Test
+    void continuedFractionReproducesARationalFunctionBeyondItsRadiusOfConvergence() {
+        // f = (1 + 2s) / (1 - s/2 - 3 s^2 / 10): its [1/2] Pade approximant is f itself, so the convergents agree
+        // with f far outside the disk of convergence of the series (radius about 1.5)
+        int n = 20;
+        MpComplex[] c = new MpComplex[n + 1];
+        // series by the recurrence q f = p: c_k = p_k + c_{k-1}/2 + 3 c_{k-2}/10
+        MpComplex half = C.fromDouble(0.5, 0);
+        MpComplex threeTenths = C.fromExact(ExactNumber.parse("x", "3/10"));
+        for (int k = 0; k <= n; k++) {
+            MpComplex v = C.fromLong(k == 0 ? 1 : k == 1 ? 2 : 0);
+            if (k >= 1) {
+                v = C.add(v, C.multiply(half, c[k - 1]));
+            }
+            if (k >= 2) {
+                v = C.add(v, C.multiply(threeTenths, c[k - 2]));
+            }
+            c[k] = v;
+        }
+        ContinuedFraction f = ContinuedFraction.of(C, c);
+        MpComplex s = C.fromDouble(3, 1);
+        MpComplex[] conv = f.lastConvergents(C, s);
+        MpComplex exact = C.divide(C.add(C.fromLong(1), C.multiply(s, 2)),
+                C.subtract(C.subtract(C.fromLong(1), C.multiply(half, s)), C.multiply(threeTenths, C.multiply(s, s))));
+        Apcomplex ref = C.toApcomplex(exact);
+        assertTrue(error(conv[2], ref) < -DIGITS + 20, "last convergent");
+    }
+
+    @Test
+    void continuedFractionStopsAtASingularMinorInsteadOfFailing() {
+        // 1 + s^2: u_2(0) = 0 (the [0/1] approximant does not exist); the fraction is cut there
+        MpComplex[] c = {C.fromLong(1), MpComplex.ZERO, C.fromLong(1), MpComplex.ZERO, MpComplex.ZERO};
+        ContinuedFraction f = ContinuedFraction.of(C, c);
+        assertTrue(f.depth() < c.length);
+        MpComplex[] conv = f.lastConvergents(C, C.fromDouble(0.5, 0));
+        assertTrue(conv == null || conv[2] != null);
+    }
+
+    @Test
+    void shiftRoundRoundsToNearest() {
+        assertTrue(MpContext.shiftRound(BigInteger.valueOf(5), 1).intValue() == 3);
+        assertTrue(MpContext.shiftRound(BigInteger.valueOf(-5), 1).intValue() == -2);
+        assertTrue(MpContext.shiftRound(BigInteger.valueOf(7), 2).intValue() == 2);
+    }
+}
