@@ -36,48 +36,42 @@ final class ContinuedFraction {
     /**
      * The fraction of the series with coefficients c[0..N] (c[0] != 0 is needed; otherwise the fraction is
      * empty). Rows whose leading coefficient has lost more than half the working bits to cancellation end it.
+     *
+     * <p>Each row u_k is held in fixed point relative to its largest coefficient ({@link ScaledRow}): both
+     * products of an entry of the next row have the same scale, so their difference is formed exactly and
+     * rounded once; the row is then rescaled by whole limbs. Nothing is allocated per operation.
      */
     static ContinuedFraction of(MpContext ctx, MpComplex[] c) {
         int n = c.length;
         List<MpComplex> ds = new ArrayList<>();
         List<MpComplex> as = new ArrayList<>();
-        MpComplex[] prev = new MpComplex[n];
-        prev[0] = ctx.fromLong(1);
-        for (int j = 1; j < n; j++) {
-            prev[j] = MpComplex.ZERO;
-        }
-        MpComplex[] cur = c.clone();
+        // one limb more than the working bits: a row rescaled by whole limbs keeps all of them
+        LimbFormat fmt = new LimbFormat(ctx.bits() + LimbFormat.BITS, 1);
+        ScaledRow prev = ScaledRow.unit(fmt, n);
+        ScaledRow cur = ScaledRow.of(fmt, c);
+        ScaledRow next = new ScaledRow(fmt, n);
+        LimbAccumulator acc = new LimbAccumulator(fmt);
         double lossLimit = 0.5 * ctx.bits();
         long count = 0;
-        while (cur.length > 0 && !cur[0].isZero()) {
-            MpComplex u0 = cur[0];
-            double scaleCur = rowScale(cur);
-            if (scaleCur - u0.log2Abs() > lossLimit) {
+        while (cur.length() > 0 && !cur.isZero(0)) {
+            MpComplex u0 = cur.value(ctx, 0);
+            if (cur.log2Max() - u0.log2Abs() > lossLimit) {
                 break;
             }
-            ds.add(ctx.divide(prev[0], u0));
+            ds.add(ctx.divide(prev.value(ctx, 0), u0));
             as.add(ctx.reciprocal(u0));
-            int len = Math.min(prev.length, cur.length) - 1;
+            int len = Math.min(prev.length(), cur.length()) - 1;
             if (len <= 0) {
                 break;
             }
-            MpComplex[] next = new MpComplex[len];
             count += 2L * len;
-            for (int j = 0; j < len; j++) {
-                next[j] = ctx.subtract(ctx.multiply(u0, prev[j + 1]), ctx.multiply(prev[0], cur[j + 1]));
-            }
+            next.combine(cur, prev, acc, len);
+            ScaledRow t = prev;
             prev = cur;
             cur = next;
+            next = t;
         }
         return new ContinuedFraction(ds.toArray(new MpComplex[0]), as.toArray(new MpComplex[0]), count);
-    }
-
-    private static double rowScale(MpComplex[] row) {
-        double m = Double.NEGATIVE_INFINITY;
-        for (MpComplex x : row) {
-            m = Math.max(m, x.log2Abs());
-        }
-        return m;
     }
 
     /** Number of levels (the last convergent matches this many series coefficients). */

@@ -1,31 +1,34 @@
 package org.tertius.core.mp;
 
 import java.math.BigInteger;
-import java.util.Arrays;
 import org.tertius.core.InvalidInputException;
+import org.tertius.core.UnreachableTargetException;
 import org.tertius.core.equation.IndependentVariable;
 import org.tertius.core.taylor.RecurrencePlan;
 
 /**
  * Runs a {@link RecurrencePlan} (the same compiled recurrence the double-precision kernel runs) in binary
- * fixed-point arithmetic on {@link BigInteger}s: every Taylor coefficient is an integer multiple of 2^-F. Each
- * convolution sum is accumulated exactly and rounded once; complex products use three integer multiplications
- * (Gauss). Stateless apart from its immutable inputs, so one kernel can serve several threads.
+ * fixed-point arithmetic: every Taylor coefficient is an integer multiple of 2^-F held in preallocated limbs
+ * ({@link LimbFormat}). Each convolution sum is accumulated exactly in columns and rounded once; complex products
+ * use three integer multiplications (Gauss); nothing is allocated per product. The integer limbs start small and
+ * are doubled when a value outgrows them. Stateless apart from its immutable inputs, so one kernel can serve
+ * several threads.
  */
 final class FixedPointKernel {
+    /** Integer limbs beyond which a growing solution is refused (values near 2^1500). */
+    private static final int MAX_HEADROOM = 64;
     private final RecurrencePlan plan;
     private final MpContext ctx;
     private final int order;
     private final int f;
     private final BigInteger[] coefRe;
     private final BigInteger[] coefIm;
-    private final BigInteger[] coefSum;
 
     /**
      * @param plan the compiled recurrence
      * @param coefficients the coefficient values of the system, in its coefficient order, at ctx precision
      * @param order the highest Taylor order N
-     * @param ctx the working precision (F = its bit count plus 16)
+     * @param ctx the working precision (F = its bit count plus 16, rounded up to whole limbs)
      */
     FixedPointKernel(RecurrencePlan plan, MpComplex[] coefficients, int order, MpContext ctx) {
         if (coefficients.length != plan.coefficientCount()) {
@@ -38,15 +41,13 @@ final class FixedPointKernel {
         this.plan = plan;
         this.ctx = ctx;
         this.order = order;
-        this.f = ctx.bits() + 16;
+        this.f = LimbFormat.fractionBits(ctx.bits() + 16);
         int nc = coefficients.length;
         coefRe = new BigInteger[nc];
         coefIm = new BigInteger[nc];
-        coefSum = new BigInteger[nc];
         for (int c = 0; c < nc; c++) {
             coefRe[c] = MpContext.fixedRe(coefficients[c], f);
             coefIm[c] = MpContext.fixedIm(coefficients[c], f);
-            coefSum[c] = coefRe[c].add(coefIm[c]);
         }
     }
 
@@ -68,27 +69,53 @@ final class FixedPointKernel {
      * The Taylor coefficients at tau0 of the solution through y0, in s with tau = tau0 + scale * s.
      */
     TaylorSeries expand(MpComplex tau0, MpComplex[] y0, double scale) {
+        for (int headroom = 2; ; headroom *= 2) {
+            try {
+                return expand(tau0, y0, scale, new LimbFormat(f, headroom));
+            } catch (RuntimeException e) {
+                if (e != LimbFormat.overflow()) {
+                    throw e;
+                }
+                if (headroom >= MAX_HEADROOM) {
+                    throw new UnreachableTargetException("the high-precision Taylor coefficients near tau = "
+                            + tau0.toComplex() + " exceed 2^" + (LimbFormat.BITS * headroom) + ": the solution is too"
+                            + " large there");
+                }
+            }
+        }
+    }
+
+    private TaylorSeries expand(MpComplex tau0, MpComplex[] y0, double scale, LimbFormat fmt) {
         final int n = plan.dimension();
         final int st = order + 1;
         final int np = plan.productCount();
         final int ng = plan.groupCount();
-        Work w = new Work(plan.seriesCount() * st);
+        LimbVector w = new LimbVector(fmt, plan.seriesCount() * st);
         for (int i = 0; i < n; i++) {
             w.set(i * st, MpContext.fixedRe(y0[i], f), MpContext.fixedIm(y0[i], f));
         }
-        Work base = baseSeries(tau0, scale);
-        BigInteger rFixed = MpContext.fixedRe(ctx.fromDouble(scale, 0), f);
-        BigInteger[] fr = new BigInteger[n];
-        BigInteger[] fi = new BigInteger[n];
-        Acc acc = new Acc();
+        LimbVector coef = new LimbVector(fmt, coefRe.length);
+        for (int c = 0; c < coefRe.length; c++) {
+            coef.set(c, coefRe[c], coefIm[c]);
+        }
+        LimbVector base = baseSeries(tau0, scale, fmt);
+        // slot 0: the scale r; slot 1: F_k of one equation
+        LimbVector aux = new LimbVector(fmt, 2);
+        aux.set(0, MpContext.fixedRe(ctx.fromDouble(scale, 0), f), java.math.BigInteger.ZERO);
+        LimbAccumulator acc = new LimbAccumulator(fmt);
+        LimbAccumulator[] rhs = new LimbAccumulator[n];
+        for (int i = 0; i < n; i++) {
+            rhs[i] = new LimbAccumulator(fmt);
+        }
         for (int k = 0; k < order; k++) {
             for (int p = 0; p < np; p++) {
                 acc.clear();
                 acc.convolve(w, plan.productFirst(p) * st, w, plan.productSecond(p) * st, k);
-                acc.store(w, (n + p) * st + k, f);
+                acc.store(w, (n + p) * st + k);
             }
-            Arrays.fill(fr, BigInteger.ZERO);
-            Arrays.fill(fi, BigInteger.ZERO);
+            for (int i = 0; i < n; i++) {
+                rhs[i].clear();
+            }
             for (int g = 0; g < ng; g++) {
                 acc.clear();
                 for (int t = plan.groupStart(g); t < plan.groupStart(g + 1); t++) {
@@ -96,37 +123,38 @@ final class FixedPointKernel {
                     int c = plan.termCoefficient(t);
                     if (s < 0) {
                         if (k == 0) {
-                            acc.addShifted(coefRe[c], coefIm[c], f);
+                            acc.add(coef, c);
                         }
                     } else {
-                        acc.multiplyAdd(coefRe[c], coefIm[c], coefSum[c], w, s * st + k);
+                        acc.multiplyAdd(coef, c, w, s * st + k);
                     }
                 }
                 int gs = plan.groupSeries(g) * st;
-                acc.store(w, gs + k, f);
-                int e = plan.groupEquation(g);
+                acc.store(w, gs + k);
+                LimbAccumulator r = rhs[plan.groupEquation(g)];
                 int b = plan.groupBaseIndex(g);
                 if (b < 0) {
-                    fr[e] = fr[e].add(w.re[gs + k]);
-                    fi[e] = fi[e].add(w.im[gs + k]);
+                    r.add(w, gs + k);
                 } else {
-                    acc.clear();
-                    acc.convolve(base, b * st, w, gs, k);
-                    fr[e] = fr[e].add(acc.resultRe(f));
-                    fi[e] = fi[e].add(acc.resultIm(f));
+                    r.convolve(base, b * st, w, gs, k);
                 }
             }
-            BigInteger div = BigInteger.valueOf(k + 1);
             for (int i = 0; i < n; i++) {
-                w.set(i * st + k + 1, MpContext.shiftRound(fr[i].multiply(rFixed), f).divide(div),
-                        MpContext.shiftRound(fi[i].multiply(rFixed), f).divide(div));
+                // y_{k+1} = r F_k / (k + 1)
+                rhs[i].store(aux, 1);
+                acc.clear();
+                acc.multiplyAdd(aux, 0, aux, 1);
+                acc.store(w, i * st + k + 1);
+                w.divide(i * st + k + 1, k + 1);
             }
         }
-        BigInteger[][] outRe = new BigInteger[n][];
-        BigInteger[][] outIm = new BigInteger[n][];
+        BigInteger[][] outRe = new BigInteger[n][st];
+        BigInteger[][] outIm = new BigInteger[n][st];
         for (int i = 0; i < n; i++) {
-            outRe[i] = Arrays.copyOfRange(w.re, i * st, i * st + st);
-            outIm[i] = Arrays.copyOfRange(w.im, i * st, i * st + st);
+            for (int k = 0; k < st; k++) {
+                outRe[i][k] = w.re(i * st + k);
+                outIm[i][k] = w.im(i * st + k);
+            }
         }
         return new TaylorSeries(tau0, scale, f, outRe, outIm);
     }
@@ -135,10 +163,10 @@ final class FixedPointKernel {
      * Series in s of b^j for each distinct power j of the base: for tau = log z, e^{j tau0} (j r)^k / k!; for the
      * plain variable, x0^j binom(j, k) (r / x0)^k. Both are c_k = c_{k-1} * m * a_k / k with a_k = 1 or j-k+1.
      */
-    private Work baseSeries(MpComplex tau0, double scale) {
+    private LimbVector baseSeries(MpComplex tau0, double scale, LimbFormat fmt) {
         final int st = order + 1;
         int q = plan.basePowerCount();
-        Work base = new Work(q * st);
+        LimbVector base = new LimbVector(fmt, q * st);
         boolean log = plan.variable() == IndependentVariable.LOG;
         MpComplex b0 = log ? ctx.exp(tau0) : tau0;
         for (int qi = 0; qi < q; qi++) {
@@ -149,10 +177,10 @@ final class FixedPointKernel {
             BigInteger mi = MpContext.fixedIm(m, f);
             BigInteger ms = mr.add(mi);
             int o = qi * st;
-            base.set(o, MpContext.fixedRe(c0, f), MpContext.fixedIm(c0, f));
+            BigInteger ar = MpContext.fixedRe(c0, f);
+            BigInteger ai = MpContext.fixedIm(c0, f);
+            base.set(o, ar, ai);
             for (int k = 1; k <= order; k++) {
-                BigInteger ar = base.re[o + k - 1];
-                BigInteger ai = base.im[o + k - 1];
                 BigInteger t1 = ar.multiply(mr);
                 BigInteger t2 = ai.multiply(mi);
                 BigInteger t3 = ar.add(ai).multiply(ms);
@@ -161,8 +189,9 @@ final class FixedPointKernel {
                 long a = log ? 1 : j - k + 1;
                 BigInteger d = BigInteger.valueOf(k);
                 BigInteger am = BigInteger.valueOf(a);
-                base.set(o + k, MpContext.shiftRound(pr.multiply(am), f).divide(d),
-                        MpContext.shiftRound(pi.multiply(am), f).divide(d));
+                ar = MpContext.shiftRound(pr.multiply(am), f).divide(d);
+                ai = MpContext.shiftRound(pi.multiply(am), f).divide(d);
+                base.set(o + k, ar, ai);
             }
         }
         return base;
@@ -174,94 +203,5 @@ final class FixedPointKernel {
             r = ctx.multiply(r, b);
         }
         return j < 0 ? ctx.reciprocal(r) : r;
-    }
-
-    /** Work arrays of fixed-point coefficients, with re + im kept for three-multiplication products. */
-    private static final class Work {
-        final BigInteger[] re;
-        final BigInteger[] im;
-        final BigInteger[] sum;
-
-        Work(int size) {
-            re = new BigInteger[size];
-            im = new BigInteger[size];
-            sum = new BigInteger[size];
-            Arrays.fill(re, BigInteger.ZERO);
-            Arrays.fill(im, BigInteger.ZERO);
-            Arrays.fill(sum, BigInteger.ZERO);
-        }
-
-        void set(int i, BigInteger r, BigInteger m) {
-            re[i] = r;
-            im[i] = m;
-            sum[i] = r.add(m);
-        }
-    }
-
-    /** An exact accumulator of complex products at scale 2^-2F: t1 = sum ar br, t2 = sum ai bi, t3 = sum (ar+ai)(br+bi). */
-    private static final class Acc {
-        BigInteger t1;
-        BigInteger t2;
-        BigInteger t3;
-
-        void clear() {
-            t1 = BigInteger.ZERO;
-            t2 = BigInteger.ZERO;
-            t3 = BigInteger.ZERO;
-        }
-
-        /** Adds sum_{i=0..k} a[i] b[k-i]. */
-        void convolve(Work a, int ao, Work b, int bo, int k) {
-            BigInteger s1 = t1;
-            BigInteger s2 = t2;
-            BigInteger s3 = t3;
-            for (int i = 0; i <= k; i++) {
-                BigInteger as = a.sum[ao + i];
-                BigInteger ar = a.re[ao + i];
-                BigInteger ai = a.im[ao + i];
-                if (ar.signum() == 0 && ai.signum() == 0) {
-                    continue;
-                }
-                int j = bo + k - i;
-                BigInteger br = b.re[j];
-                BigInteger bi = b.im[j];
-                if (br.signum() == 0 && bi.signum() == 0) {
-                    continue;
-                }
-                s1 = s1.add(ar.multiply(br));
-                s2 = s2.add(ai.multiply(bi));
-                s3 = s3.add(as.multiply(b.sum[j]));
-            }
-            t1 = s1;
-            t2 = s2;
-            t3 = s3;
-        }
-
-        void multiplyAdd(BigInteger cr, BigInteger ci, BigInteger cs, Work b, int j) {
-            t1 = t1.add(cr.multiply(b.re[j]));
-            t2 = t2.add(ci.multiply(b.im[j]));
-            t3 = t3.add(cs.multiply(b.sum[j]));
-        }
-
-        /** Adds the fixed-point value (r, m) at scale 2^-F. */
-        void addShifted(BigInteger r, BigInteger m, int f) {
-            // as t1 - t2 = re, t3 - t1 - t2 = im: put re in t1 and im in t3 (with the re part compensated)
-            BigInteger rs = r.shiftLeft(f);
-            BigInteger ms = m.shiftLeft(f);
-            t1 = t1.add(rs);
-            t3 = t3.add(ms).add(rs);
-        }
-
-        BigInteger resultRe(int f) {
-            return MpContext.shiftRound(t1.subtract(t2), f);
-        }
-
-        BigInteger resultIm(int f) {
-            return MpContext.shiftRound(t3.subtract(t1).subtract(t2), f);
-        }
-
-        void store(Work w, int i, int f) {
-            w.set(i, resultRe(f), resultIm(f));
-        }
     }
 }

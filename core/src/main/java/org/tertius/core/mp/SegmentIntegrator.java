@@ -164,6 +164,7 @@ final class SegmentIntegrator {
                     next = series.evaluate(ctx, s);
                 }
             }
+            if (System.getProperty("hpdebug") != null) { System.err.printf("DBG order %d r %.3g hT %.3g rho %.3g dist %.3g pade %b exp %d%n", kernel.order(), r, hT, rho, dist, fractions != null, expansions.get()); }
             if (keepNodes) {
                 nodes.add(new HpNode(series, fractions, s));
             }

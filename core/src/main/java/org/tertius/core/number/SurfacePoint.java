@@ -76,7 +76,7 @@ public final class SurfacePoint {
 
     /** Real part of the log coordinate, log|z|. */
     public double logRe() {
-        return Math.log(Math.hypot(re, im));
+        return Math.log(org.tertius.core.number.Cx.abs(re, im));
     }
 
     /** Imaginary part of the log coordinate: Arg z + 2 pi k with Arg z in (-pi, pi]. */

@@ -39,7 +39,7 @@ public final class PadeApproximant {
      * If {@code out} has a fifth slot, out[4] receives a bound of the rounding error of the evaluation itself.
      */
     public void evaluate(double sr, double si, double[] out) {
-        double sm = Math.hypot(sr, si);
+        double sm = org.tertius.core.number.Cx.abs(sr, si);
         double nr = 0;
         double ni = 0;
         double na = 0;
@@ -47,7 +47,7 @@ public final class PadeApproximant {
             double t = nr * sr - ni * si + pRe[k];
             ni = nr * si + ni * sr + pIm[k];
             nr = t;
-            na = na * sm + Math.hypot(pRe[k], pIm[k]);
+            na = na * sm + org.tertius.core.number.Cx.abs(pRe[k], pIm[k]);
         }
         double dr = 0;
         double di = 0;
@@ -56,7 +56,7 @@ public final class PadeApproximant {
             double t = dr * sr - di * si + qRe[k];
             di = dr * si + di * sr + qIm[k];
             dr = t;
-            da = da * sm + Math.hypot(qRe[k], qIm[k]);
+            da = da * sm + org.tertius.core.number.Cx.abs(qRe[k], qIm[k]);
         }
         double d = dr * dr + di * di;
         out[0] = (nr * dr + ni * di) / d;
@@ -69,12 +69,12 @@ public final class PadeApproximant {
             ei = er * si + ei * sr + dIm[k];
             er = t;
         }
-        out[3] = Math.hypot(er, ei) / out[2];
+        out[3] = org.tertius.core.number.Cx.abs(er, ei) / out[2];
         // rounding of the two Horner sums (a standard bound, about 2 deg ulps of the sum of |terms|), divided
         // through: large next to a pole, where |q(s)| is small against its terms
         if (out.length > 4) {
             double u = Math.ulp(1.0);
-            double pm = Math.hypot(nr, ni);
+            double pm = org.tertius.core.number.Cx.abs(nr, ni);
             double ep = 2 * pRe.length * u * na;
             double eq = 2 * qRe.length * u * da;
             out[4] = (ep + eq * pm / out[2]) / out[2];

@@ -34,10 +34,10 @@ public final class PolynomialRoots {
         }
         double bound = 0;
         for (int k = 0; k < deg; k++) {
-            bound = Math.max(bound, Math.hypot(ar[k], ai[k]));
+            bound = Math.max(bound, org.tertius.core.number.Cx.abs(ar[k], ai[k]));
         }
         // a root radius estimate: geometric mean of |a_0|^(1/deg) and the Cauchy bound, kept positive
-        double r0 = Math.pow(Math.max(Math.hypot(ar[0], ai[0]), 1e-300), 1.0 / deg);
+        double r0 = Math.pow(Math.max(org.tertius.core.number.Cx.abs(ar[0], ai[0]), 1e-300), 1.0 / deg);
         double radius = Math.min(1 + bound, Math.max(r0, 1e-12));
         double[] zr = new double[deg];
         double[] zi = new double[deg];
@@ -46,9 +46,13 @@ public final class PolynomialRoots {
             zr[k] = radius * Math.cos(t);
             zi[k] = radius * Math.sin(t);
         }
-        for (int iter = 0; iter < 500; iter++) {
+        boolean[] done = new boolean[deg];
+        for (int iter = 0; iter < 200; iter++) {
             double maxMove = 0;
             for (int k = 0; k < deg; k++) {
+                if (done[k]) {
+                    continue;
+                }
                 // p and p' by Horner
                 double pr = 1;
                 double pi = 0;
@@ -98,7 +102,10 @@ public final class PolynomialRoots {
                 double wi = (ni * er - nr * ei) / ed;
                 zr[k] -= wr;
                 zi[k] -= wi;
-                double mv = Math.hypot(wr, wi) / Math.max(1e-300, Math.hypot(zr[k], zi[k]));
+                double mv = org.tertius.core.number.Cx.abs(wr, wi) / Math.max(1e-300, org.tertius.core.number.Cx.abs(zr[k], zi[k]));
+                if (mv < 1e-15) {
+                    done[k] = true;
+                }
                 maxMove = Math.max(maxMove, mv);
             }
             if (maxMove < 1e-15) {

@@ -66,7 +66,7 @@ public final class RobustPade {
     private static PadeApproximant solve(double[] cRe, double[] cIm, int m, int n, double tol) {
         double norm = 0;
         for (int k = 0; k <= m + n; k++) {
-            norm = Math.max(norm, Math.hypot(cRe[k], cIm[k]));
+            norm = Math.max(norm, org.tertius.core.number.Cx.abs(cRe[k], cIm[k]));
         }
         double ts = tol * norm;
         if (norm == 0) {
@@ -75,7 +75,7 @@ public final class RobustPade {
         // all numerator-relevant coefficients negligible -> the zero function
         boolean allSmall = true;
         for (int k = 0; k <= m; k++) {
-            if (Math.hypot(cRe[k], cIm[k]) > ts) {
+            if (org.tertius.core.number.Cx.abs(cRe[k], cIm[k]) > ts) {
                 allSmall = false;
                 break;
             }
@@ -161,10 +161,10 @@ public final class RobustPade {
         // remove a common factor s^lambda (leading zeros of q and p)
         double qn = 0;
         for (int j = 0; j < qr.length; j++) {
-            qn = Math.max(qn, Math.hypot(qr[j], qi[j]));
+            qn = Math.max(qn, org.tertius.core.number.Cx.abs(qr[j], qi[j]));
         }
         int lead = 0;
-        while (lead < qr.length - 1 && Math.hypot(qr[lead], qi[lead]) <= tol * qn) {
+        while (lead < qr.length - 1 && org.tertius.core.number.Cx.abs(qr[lead], qi[lead]) <= tol * qn) {
             lead++;
         }
         if (lead > 0) {
@@ -184,10 +184,10 @@ public final class RobustPade {
         int qd = trimmedLength(qr, qi, tol);
         double pnorm = 0;
         for (int k = 0; k < pr.length; k++) {
-            pnorm = Math.max(pnorm, Math.hypot(pr[k], pi[k]));
+            pnorm = Math.max(pnorm, org.tertius.core.number.Cx.abs(pr[k], pi[k]));
         }
         int pd = pr.length;
-        while (pd > 1 && Math.hypot(pr[pd - 1], pi[pd - 1]) <= tol * pnorm) {
+        while (pd > 1 && org.tertius.core.number.Cx.abs(pr[pd - 1], pi[pd - 1]) <= tol * pnorm) {
             pd--;
         }
         return new PadeApproximant(java.util.Arrays.copyOf(pr, pd), java.util.Arrays.copyOf(pi, pd),
@@ -197,10 +197,10 @@ public final class RobustPade {
     private static int trimmedLength(double[] re, double[] im, double tol) {
         double norm = 0;
         for (int k = 0; k < re.length; k++) {
-            norm = Math.max(norm, Math.hypot(re[k], im[k]));
+            norm = Math.max(norm, org.tertius.core.number.Cx.abs(re[k], im[k]));
         }
         int len = re.length;
-        while (len > 1 && Math.hypot(re[len - 1], im[len - 1]) <= tol * norm) {
+        while (len > 1 && org.tertius.core.number.Cx.abs(re[len - 1], im[len - 1]) <= tol * norm) {
             len--;
         }
         return len;
@@ -265,7 +265,7 @@ public final class RobustPade {
             double alpha = Math.sqrt(bestNorm);
             double x0r = ar[k * cols + k];
             double x0i = ai[k * cols + k];
-            double x0m = Math.hypot(x0r, x0i);
+            double x0m = org.tertius.core.number.Cx.abs(x0r, x0i);
             double phr = x0m == 0 ? 1 : x0r / x0m;
             double phi = x0m == 0 ? 0 : x0i / x0m;
             // v = x + e^{i arg x0} alpha e1 ; R_kk = -e^{i arg x0} alpha

@@ -65,7 +65,7 @@ public final class PathSelector {
         double r = node.radius();
         double dr = (targetRe - node.tauRe()) / r;
         double di = (targetIm - node.tauIm()) / r;
-        double dist = Math.hypot(dr, di);
+        double dist = org.tertius.core.number.Cx.abs(dr, di);
         if (dist <= 1.0 && stepper.localError(node, dr, di) <= tol) {
             return new Choice(dr, di, true);
         }
@@ -107,7 +107,7 @@ public final class PathSelector {
         for (int j = 0; j < node.singularityCount(); j++) {
             double xr = (node.singularityRe(j) - node.tauRe()) / r - sr;
             double xi = (node.singularityIm(j) - node.tauIm()) / r - si;
-            best = Math.min(best, Math.hypot(xr, xi));
+            best = Math.min(best, org.tertius.core.number.Cx.abs(xr, xi));
         }
         return best;
     }

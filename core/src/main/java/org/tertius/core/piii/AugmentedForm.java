@@ -39,7 +39,7 @@ final class AugmentedForm implements Painleve3Form {
     @Override
     public StateProjection projection() {
         return (tr, ti, re, im) -> {
-            double wm = Math.hypot(re[0], im[0]);
+            double wm = org.tertius.core.number.Cx.abs(re[0], im[0]);
             if (wm >= 1) {
                 double d = re[0] * re[0] + im[0] * im[0];
                 re[2] = re[0] / d;

@@ -59,7 +59,7 @@ public final class HighPrecisionParameters {
         Apcomplex r = h.sqrt(h.negate(delta));
         double re = r.real().doubleValue() - c.getReal();
         double im = r.imag().doubleValue() - c.getImaginary();
-        if (Math.hypot(re, im) > 1e-6 * Math.max(1, c.norm())) {
+        if (org.tertius.core.number.Cx.abs(re, im) > 1e-6 * Math.max(1, c.norm())) {
             r = h.negate(r);
         }
         return r;

@@ -66,7 +66,7 @@ public final class GridResult {
         double m = 0;
         for (int k = 0; k < err.length; k++) {
             if (Double.isFinite(err[k])) {
-                m = Math.max(m, err[k] / (1 + Math.hypot(wRe[k], wIm[k])));
+                m = Math.max(m, err[k] / (1 + org.tertius.core.number.Cx.abs(wRe[k], wIm[k])));
             }
         }
         return m;

@@ -73,7 +73,7 @@ public final class RegionSolver {
             SurfacePoint p = grid.point(c[0], c[1]);
             if (p != null) {
                 try {
-                    solution.evaluate(p);
+                    view.engine().extendTo(p.logRe(), p.logIm());
                 } catch (TertiusException e) {
                     // left for pass 3, which reports it
                 }
@@ -139,6 +139,9 @@ public final class RegionSolver {
                 store(solution.evaluate(p), k, wRe, wIm, dwRe, dwIm, err);
                 integrated++;
             } catch (TertiusException e) {
+                if (failed == 0 && Boolean.getBoolean("tertius.region.trace")) {
+                    System.err.println("first failure at " + p + ": " + e.getMessage());
+                }
                 failed++;
             }
         }
@@ -159,7 +162,7 @@ public final class RegionSolver {
     }
 
     private static double distance(Grid g, int i, int j, SurfacePoint start) {
-        return Math.hypot(g.re(i) - start.re(), g.im(j) - start.im()) + Math.abs(g.sheet() - start.sheet()) * 10.0;
+        return org.tertius.core.number.Cx.abs(g.re(i) - start.re(), g.im(j) - start.im()) + Math.abs(g.sheet() - start.sheet()) * 10.0;
     }
 
     private static void checkCancelled(RegionSettings s) {

@@ -130,6 +130,22 @@ public final class Solution {
      * @throws UnreachableTargetException if no path reaches tau within the step budget and the error bound
      */
     public StateEstimate evaluate(double tauRe, double tauIm) {
+        int[] steps = new int[1];
+        Node node = reach(tauRe, tauIm, steps);
+        return estimate(node, tauRe, tauIm, steps[0]);
+    }
+
+    /**
+     * Grows the tree so that it reaches tau, without evaluating there (used to build trees for regions).
+     *
+     * @throws UnreachableTargetException as {@link #evaluate}
+     */
+    public void extendTo(double tauRe, double tauIm) {
+        reach(tauRe, tauIm, new int[1]);
+    }
+
+    /** The node that serves tau, after growing the tree if needed; steps[0] receives the new steps. */
+    private Node reach(double tauRe, double tauIm, int[] stepsOut) {
         InvalidInputException.requireFinite("target", tauRe);
         InvalidInputException.requireFinite("target", tauIm);
         if (singularAtOrigin && tauRe == 0 && tauIm == 0) {
@@ -140,7 +156,8 @@ public final class Solution {
         Node[] snapshot = nodes;
         Node served = bestCovering(snapshot, tauRe, tauIm, stepper, tol);
         if (served != null) {
-            return estimate(served, tauRe, tauIm, 0);
+            stepsOut[0] = 0;
+            return served;
         }
         Node start = nearest(snapshot, tauRe, tauIm);
         List<Node> path = new ArrayList<>();
@@ -184,7 +201,7 @@ public final class Solution {
             path.add(next);
             current = next;
             steps++;
-            double d = Math.hypot(tauRe - next.tauRe(), tauIm - next.tauIm());
+            double d = org.tertius.core.number.Cx.abs(tauRe - next.tauRe(), tauIm - next.tauIm());
             if (d < bestDistance * 0.999) {
                 bestDistance = d;
                 lastProgress = steps;
@@ -198,17 +215,18 @@ public final class Solution {
         if (!path.isEmpty()) {
             last = merge(start, path);
         }
-        return estimate(last, tauRe, tauIm, steps);
+        stepsOut[0] = steps;
+        return last;
     }
 
     private static boolean inDisk(Node n, double tRe, double tIm) {
-        return Math.hypot(tRe - n.tauRe(), tIm - n.tauIm()) <= n.radius();
+        return org.tertius.core.number.Cx.abs(tRe - n.tauRe(), tIm - n.tauIm()) <= n.radius();
     }
 
     /** Largest radius allowed at tau: half the distance to a singular origin in PLAIN mode. */
     private double maxRadius(double tRe, double tIm) {
         if (singularAtOrigin) {
-            return 0.5 * Math.hypot(tRe, tIm);
+            return 0.5 * org.tertius.core.number.Cx.abs(tRe, tIm);
         }
         return 4.0;
     }
@@ -241,7 +259,7 @@ public final class Solution {
                 continue;
             }
             Node n = snapshot[id];
-            double d = Math.hypot(tRe - n.tauRe(), tIm - n.tauIm());
+            double d = org.tertius.core.number.Cx.abs(tRe - n.tauRe(), tIm - n.tauIm());
             if (d > n.radius()) {
                 continue;
             }
@@ -267,15 +285,62 @@ public final class Solution {
      */
     public StateEstimate evaluateStored(double tauRe, double tauIm, double maxRelativeError) {
         Node[] snapshot = nodes;
-        Node best = bestCovering(snapshot, tauRe, tauIm, steppers.get(), maxRelativeError);
-        return best == null ? null : estimate(best, tauRe, tauIm, 0, false);
+        int n = system.dimension();
+        double[] out = new double[2 * n];
+        double[] err = new double[n];
+        double[] trunc = new double[n];
+        // candidates in order of relative distance d / r: the first whose truncation error is acceptable serves
+        int[] ids = index.candidates(tauRe, tauIm);
+        double[] rel = new double[ids.length];
+        int count = 0;
+        int[] order = new int[ids.length];
+        for (int id : ids) {
+            if (id >= snapshot.length) {
+                continue;
+            }
+            Node c = snapshot[id];
+            double d = org.tertius.core.number.Cx.abs(tauRe - c.tauRe(), tauIm - c.tauIm()) / c.radius();
+            if (d <= 1) {
+                rel[count] = d;
+                order[count++] = id;
+            }
+        }
+        for (int pass = 0; pass < count; pass++) {
+            int bestK = -1;
+            for (int k = 0; k < count; k++) {
+                if (order[k] >= 0 && (bestK < 0 || rel[k] < rel[bestK])) {
+                    bestK = k;
+                }
+            }
+            Node c = snapshot[order[bestK]];
+            order[bestK] = -1;
+            double sr = (tauRe - c.tauRe()) / c.radius();
+            double si = (tauIm - c.tauIm()) / c.radius();
+            c.evaluateScaled(sr, si, out, trunc, err);
+            boolean ok = true;
+            for (int i = 0; i < n && ok; i++) {
+                ok = trunc[i] <= maxRelativeError * (1 + org.tertius.core.number.Cx.abs(out[2 * i], out[2 * i + 1]));
+            }
+            if (ok) {
+                double[] re = new double[n];
+                double[] im = new double[n];
+                double[] e = new double[n];
+                for (int i = 0; i < n; i++) {
+                    re[i] = out[2 * i];
+                    im[i] = out[2 * i + 1];
+                    e[i] = err[i] + 4 * Math.ulp(1.0) * org.tertius.core.number.Cx.abs(re[i], im[i]);
+                }
+                return new StateEstimate(tauRe, tauIm, re, im, e, c.id(), 0);
+            }
+        }
+        return null;
     }
 
     private static Node nearest(Node[] snapshot, double tRe, double tIm) {
         Node best = snapshot[0];
         double bestD = Double.POSITIVE_INFINITY;
         for (Node n : snapshot) {
-            double d = Math.hypot(tRe - n.tauRe(), tIm - n.tauIm()) - n.radius();
+            double d = org.tertius.core.number.Cx.abs(tRe - n.tauRe(), tIm - n.tauIm()) - n.radius();
             if (d < bestD) {
                 bestD = d;
                 best = n;
@@ -285,33 +350,17 @@ public final class Solution {
     }
 
     private StateEstimate estimate(Node node, double tRe, double tIm, int steps) {
-        return estimate(node, tRe, tIm, steps, true);
-    }
-
-    /**
-     * The estimate at tau from a node: value, local error, and inherited error (either propagated to the
-     * point exactly, one extra expansion, or bounded over the node's disk).
-     */
-    StateEstimate estimate(Node node, double tRe, double tIm, int steps, boolean exactPropagation) {
         int n = system.dimension();
         double[] out = new double[2 * n];
         double[] err = new double[n];
-        node.evaluate(tRe, tIm, out, err);
+        node.evaluateScaled((tRe - node.tauRe()) / node.radius(), (tIm - node.tauIm()) / node.radius(), out, null, err);
         double[] re = new double[n];
         double[] im = new double[n];
         double[] e = new double[n];
-        double[] pr = new double[n];
-        double[] pi = new double[n];
-        if (exactPropagation) {
-            TaylorPadeStepper stepper = steppers.get();
-            stepper.propagate(node, (tRe - node.tauRe()) / node.radius(), (tIm - node.tauIm()) / node.radius(), pr, pi);
-        }
         for (int i = 0; i < n; i++) {
             re[i] = out[2 * i];
             im[i] = out[2 * i + 1];
-            double mod = Math.hypot(re[i], im[i]);
-            double inherited = exactPropagation ? Math.hypot(pr[i], pi[i]) : node.inheritedError(i);
-            e[i] = err[i] + inherited + 4 * Math.ulp(1.0) * mod;
+            e[i] = err[i] + 4 * Math.ulp(1.0) * org.tertius.core.number.Cx.abs(re[i], im[i]);
         }
         return new StateEstimate(tRe, tIm, re, im, e, node.id(), steps);
     }

@@ -31,13 +31,15 @@ public final class Node {
     private final double[] roundingFloor;
     private final double[] errRe;
     private final double[] errIm;
-    private final double[] growth;
+    private final PadeApproximant[] perturbed;
+    private final double eta;
     private final double accumulatedError;
     private final double suggestedRadius;
 
     Node(int id, int parent, double tauRe, double tauIm, double[] yRe, double[] yIm, double radius,
          PadeApproximant[] high, PadeApproximant[] low, double[] singRe, double[] singIm,
-         double[] roundingFloor, double[] errRe, double[] errIm, double[] growth, double suggestedRadius) {
+         double[] roundingFloor, double[] errRe, double[] errIm, PadeApproximant[] perturbed, double eta,
+         double suggestedRadius) {
         this.id = id;
         this.parent = parent;
         this.tauRe = tauRe;
@@ -52,11 +54,12 @@ public final class Node {
         this.roundingFloor = roundingFloor;
         this.errRe = errRe;
         this.errIm = errIm;
-        this.growth = growth;
+        this.perturbed = perturbed;
+        this.eta = eta;
         this.suggestedRadius = suggestedRadius;
         double acc = 0;
         for (int i = 0; i < yRe.length; i++) {
-            acc = Math.max(acc, Math.hypot(errRe[i], errIm[i]) / (1 + Math.hypot(yRe[i], yIm[i])));
+            acc = Math.max(acc, org.tertius.core.number.Cx.abs(errRe[i], errIm[i]) / (1 + org.tertius.core.number.Cx.abs(yRe[i], yIm[i])));
         }
         this.accumulatedError = acc;
     }
@@ -64,7 +67,7 @@ public final class Node {
     /** Returns a copy of this node with a new id and parent (used when a path is merged into a tree). */
     public Node renumbered(int newId, int newParent) {
         return new Node(newId, newParent, tauRe, tauIm, yRe, yIm, radius, high, low, singRe, singIm,
-                roundingFloor, errRe, errIm, growth, suggestedRadius);
+                roundingFloor, errRe, errIm, perturbed, eta, suggestedRadius);
     }
 
     public int id() {
@@ -124,11 +127,28 @@ public final class Node {
     }
 
     /**
-     * Bound of the inherited error of component i anywhere in the disk: the larger of |e_i| at the node and
-     * the propagated error on the circle |s| = 1 (max modulus principle), with a safety factor.
+     * The inherited error vector carried by the flow from the node to the scaled point s: {@code Phi(s) e},
+     * from the approximants of the solution through the perturbed state {@code y + eta e} (a directional
+     * finite difference); zeros when the node carries no error.
      */
-    public double inheritedError(int i) {
-        return Math.max(Math.hypot(errRe[i], errIm[i]), growth[i]);
+    public void inheritedError(double sr, double si, double[] outRe, double[] outIm) {
+        if (perturbed == null) {
+            java.util.Arrays.fill(outRe, 0);
+            java.util.Arrays.fill(outIm, 0);
+            return;
+        }
+        double[] a = new double[4];
+        double[] b = new double[4];
+        for (int i = 0; i < high.length; i++) {
+            high[i].evaluate(sr, si, a);
+            perturbed[i].evaluate(sr, si, b);
+            outRe[i] = (b[0] - a[0]) / eta;
+            outIm[i] = (b[1] - a[1]) / eta;
+            if (!Double.isFinite(outRe[i]) || !Double.isFinite(outIm[i])) {
+                outRe[i] = Double.POSITIVE_INFINITY;
+                outIm[i] = 0;
+            }
+        }
     }
 
     /** Number of singularities (poles of the approximants of any component) recorded near the disk. */
@@ -185,6 +205,29 @@ public final class Node {
      *     singularities whatever the step
      */
     public void evaluateScaled(double sr, double si, double[] out, double[] err, boolean truncationOnly) {
+        if (truncationOnly) {
+            evaluateScaled(sr, si, out, err, null);
+        } else {
+            evaluateScaled(sr, si, out, null, err);
+        }
+    }
+
+    /**
+     * Evaluates at the scaled point s, filling either or both error arrays: {@code trunc} with the truncation
+     * part of the local error (difference of the orders and defects, what step control acts on), {@code total}
+     * with the reported error: the truncation part and the rounding errors of the coefficients and of the
+     * evaluation, times {@link #SAFETY}, plus the inherited error carried by the flow to s.
+     */
+    public void evaluateScaled(double sr, double si, double[] out, double[] trunc, double[] total) {
+        evaluateScaled(sr, si, out, trunc, total, true);
+    }
+
+    /**
+     * As {@link #evaluateScaled(double, double, double[], double[], double[])}; with {@code withInherited} false
+     * the total holds the local error of this node only (what a step adds to the carried error vector).
+     */
+    public void evaluateScaled(double sr, double si, double[] out, double[] trunc, double[] total,
+                               boolean withInherited) {
         double[] a = new double[5];
         double[] b = new double[4];
         for (int i = 0; i < high.length; i++) {
@@ -192,11 +235,18 @@ public final class Node {
             low[i].evaluate(sr, si, b);
             out[2 * i] = a[0];
             out[2 * i + 1] = a[1];
-            double e = Math.hypot(a[0] - b[0], a[1] - b[1]) + a[3] + b[3];
-            if (!truncationOnly) {
-                e = SAFETY * (e + a[4] + roundingFloor[i]);
+            double e = org.tertius.core.number.Cx.abs(a[0] - b[0], a[1] - b[1]) + a[3] + b[3];
+            if (trunc != null) {
+                trunc[i] = Double.isFinite(e) ? e : Double.POSITIVE_INFINITY;
             }
-            err[i] = Double.isFinite(e) ? e : Double.POSITIVE_INFINITY;
+            if (total != null) {
+                double t = SAFETY * (e + a[4] + roundingFloor[i]);
+                if (perturbed != null && withInherited) {
+                    perturbed[i].evaluate(sr, si, b);
+                    t += org.tertius.core.number.Cx.abs(b[0] - a[0], b[1] - a[1]) / eta;
+                }
+                total[i] = Double.isFinite(t) ? t : Double.POSITIVE_INFINITY;
+            }
         }
     }
 
@@ -204,7 +254,7 @@ public final class Node {
     public long footprint() {
         long s = 160 + 48L * yRe.length + 16L * singRe.length;
         for (int i = 0; i < high.length; i++) {
-            s += high[i].footprint() + low[i].footprint();
+            s += high[i].footprint() + low[i].footprint() + (perturbed == null ? 0 : perturbed[i].footprint());
         }
         return s;
     }

@@ -35,7 +35,7 @@ public final class SolverSettings {
         return new Builder();
     }
 
-    /** The defaults: order 40, tolerance 1e-13, Pade rank tolerance 1e-14, 20000 steps per path. */
+    /** The defaults: order 32, tolerance 1e-13, Pade rank tolerance 1e-14, 20000 steps per path. */
     public static SolverSettings defaults() {
         return builder().build();
     }
@@ -71,7 +71,7 @@ public final class SolverSettings {
 
     /** Builder with validation of every field. */
     public static final class Builder {
-        private int order = 40;
+        private int order = 32;
         private double tolerance = 1e-13;
         private double padeTolerance = 1e-14;
         private int maxSteps = 20000;

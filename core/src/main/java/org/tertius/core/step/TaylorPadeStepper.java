@@ -35,8 +35,6 @@ public final class TaylorPadeStepper {
     private static final double RHO_FACTOR = 1.0;
     /** Relative size of the perturbation used for the directional derivative. */
     private static final double ETA = 1e-7;
-    /** Safety factor on the propagated error inside a disk. */
-    private static final double GROWTH_SAFETY = 2.0;
 
     private final SolverSettings settings;
     private final DoubleTaylorKernel kernel;
@@ -50,10 +48,6 @@ public final class TaylorPadeStepper {
     private final double[] val;
     private final double[] err;
     private long expansions;
-    /** Perturbed approximants of the node expanded last (for its outgoing step). */
-    private Node pertNode;
-    private PadeApproximant[] pert;
-    private double pertEta;
 
     public TaylorPadeStepper(PolynomialSystem system, RecurrencePlan plan, SolverSettings settings,
                              StateProjection projection) {
@@ -122,7 +116,7 @@ public final class TaylorPadeStepper {
             double e = circleError(hi, lo);
             double factor = Math.pow(tol / Math.max(e, 1e-300), 1.0 / m);
             if (!(e <= tol)) {
-                if (r < 1e-13 * Math.max(1, Math.hypot(tRe, tIm))) {
+                if (r < 1e-13 * Math.max(1, org.tertius.core.number.Cx.abs(tRe, tIm))) {
                     break;
                 }
                 r *= Math.max(0.2, Math.min(0.9, 0.9 * factor));
@@ -136,39 +130,23 @@ public final class TaylorPadeStepper {
         for (int i = 0; i < n; i++) {
             double mx = 0;
             for (int k = 0; k <= order; k++) {
-                mx = Math.max(mx, Math.hypot(cRe[i][k], cIm[i][k]));
+                mx = Math.max(mx, org.tertius.core.number.Cx.abs(cRe[i][k], cIm[i][k]));
             }
             // rounding of the coefficients reaches the values in proportion to the largest one (common practice)
             floor[i] = ROUNDING_ULPS * Math.ulp(1.0) * mx;
         }
         double[][] sing = singularities(hi);
-        // growth of the inherited error over the disk
-        double[] growth = new double[n];
+        // the solution through the perturbed state, for the inherited error anywhere in the disk
         PadeApproximant[] perturbed = null;
         double eta = 0;
         if (nonZero(eRe, eIm)) {
             eta = perturbationSize(yRe, yIm, eRe, eIm);
             perturbed = perturbedApproximants(tRe, tIm, yRe, yIm, eRe, eIm, eta, r0, r, m);
-            double[] a = new double[4];
-            double[] b = new double[4];
-            for (int p = 0; p < CIRCLE_POINTS; p++) {
-                double th = 2 * Math.PI * p / CIRCLE_POINTS;
-                for (int i = 0; i < n; i++) {
-                    hi[i].evaluate(Math.cos(th), Math.sin(th), a);
-                    perturbed[i].evaluate(Math.cos(th), Math.sin(th), b);
-                    double g = GROWTH_SAFETY * Math.hypot(b[0] - a[0], b[1] - a[1]) / eta;
-                    growth[i] = Math.max(growth[i], Double.isFinite(g) ? g : Double.POSITIVE_INFINITY);
-                }
-            }
         }
         Node node = new Node(id, parent, tRe, tIm, yRe.clone(), yIm.clone(), r, hi, lo, sing[0], sing[1], floor,
-                eRe.clone(), eIm.clone(), growth, suggested);
-        pertNode = node;
-        pert = perturbed;
-        pertEta = eta;
+                eRe.clone(), eIm.clone(), perturbed, eta, suggested);
         return node;
     }
-
     /** Expands a start node (no inherited error). */
     public Node expandStart(int id, double tRe, double tIm, double[] yRe, double[] yIm, double radiusGuess,
                             double maxRadius) {
@@ -184,7 +162,7 @@ public final class TaylorPadeStepper {
         node.evaluateScaled(sr, si, val, err, true);
         double e = 0;
         for (int i = 0; i < n; i++) {
-            double mod = Math.hypot(val[2 * i], val[2 * i + 1]);
+            double mod = org.tertius.core.number.Cx.abs(val[2 * i], val[2 * i + 1]);
             double rel = err[i] / (1 + mod);
             if (!Double.isFinite(rel)) {
                 return Double.POSITIVE_INFINITY;
@@ -202,7 +180,7 @@ public final class TaylorPadeStepper {
         double[] yRe = new double[n];
         double[] yIm = new double[n];
         double[] local = new double[n];
-        from.evaluateScaled(sr, si, val, local);
+        from.evaluateScaled(sr, si, val, null, local, false);
         for (int i = 0; i < n; i++) {
             yRe[i] = val[2 * i];
             yIm[i] = val[2 * i + 1];
@@ -211,7 +189,7 @@ public final class TaylorPadeStepper {
         double[] eIm = new double[n];
         propagate(from, sr, si, eRe, eIm);
         for (int i = 0; i < n; i++) {
-            double m = Math.hypot(eRe[i], eIm[i]);
+            double m = org.tertius.core.number.Cx.abs(eRe[i], eIm[i]);
             if (m > 0) {
                 eRe[i] += local[i] * eRe[i] / m;
                 eIm[i] += local[i] * eIm[i] / m;
@@ -225,51 +203,15 @@ public final class TaylorPadeStepper {
         return expand(id, from.id(), tRe, tIm, yRe, yIm, eRe, eIm, from.suggestedRadius(), maxRadius);
     }
 
-    /**
-     * The inherited error vector carried from the node to its scaled point s: Phi(s) e, absolute.
-     */
+    /** The inherited error vector carried from the node to its scaled point s: Phi(s) e, absolute. */
     public void propagate(Node from, double sr, double si, double[] outRe, double[] outIm) {
-        double[] eRe = new double[n];
-        double[] eIm = new double[n];
-        for (int i = 0; i < n; i++) {
-            eRe[i] = from.errorRe(i);
-            eIm[i] = from.errorIm(i);
-        }
-        if (!nonZero(eRe, eIm)) {
-            Arrays.fill(outRe, 0);
-            Arrays.fill(outIm, 0);
-            return;
-        }
-        if (pertNode != from || pert == null) {
-            double[] yRe = new double[n];
-            double[] yIm = new double[n];
-            for (int i = 0; i < n; i++) {
-                yRe[i] = from.stateRe(i);
-                yIm[i] = from.stateIm(i);
-            }
-            pertEta = perturbationSize(yRe, yIm, eRe, eIm);
-            pert = perturbedApproximants(from.tauRe(), from.tauIm(), yRe, yIm, eRe, eIm, pertEta, from.radius(),
-                    from.radius(), order / 2);
-            pertNode = from;
-        }
-        double[] a = new double[4];
-        double[] b = new double[4];
-        for (int i = 0; i < n; i++) {
-            from.approximant(i).evaluate(sr, si, a);
-            pert[i].evaluate(sr, si, b);
-            outRe[i] = (b[0] - a[0]) / pertEta;
-            outIm[i] = (b[1] - a[1]) / pertEta;
-            if (!Double.isFinite(outRe[i]) || !Double.isFinite(outIm[i])) {
-                outRe[i] = Double.POSITIVE_INFINITY;
-                outIm[i] = 0;
-            }
-        }
+        from.inheritedError(sr, si, outRe, outIm);
     }
 
     private double perturbationSize(double[] yRe, double[] yIm, double[] eRe, double[] eIm) {
         double rel = 0;
         for (int i = 0; i < n; i++) {
-            rel = Math.max(rel, Math.hypot(eRe[i], eIm[i]) / (1 + Math.hypot(yRe[i], yIm[i])));
+            rel = Math.max(rel, org.tertius.core.number.Cx.abs(eRe[i], eIm[i]) / (1 + org.tertius.core.number.Cx.abs(yRe[i], yIm[i])));
         }
         return ETA / rel;
     }
@@ -302,7 +244,7 @@ public final class TaylorPadeStepper {
             for (int j = 0; j < roots[0].length; j++) {
                 double x = roots[0][j];
                 double y = roots[1][j];
-                if (Double.isFinite(x) && Double.isFinite(y) && Math.hypot(x, y) < SINGULARITY_WINDOW) {
+                if (Double.isFinite(x) && Double.isFinite(y) && org.tertius.core.number.Cx.abs(x, y) < SINGULARITY_WINDOW) {
                     sr = Arrays.copyOf(sr, sr.length + 1);
                     si = Arrays.copyOf(si, si.length + 1);
                     sr[sr.length - 1] = x;
@@ -331,7 +273,7 @@ public final class TaylorPadeStepper {
         for (int k = Math.max(1, order / 3); k <= order; k++) {
             double s = 0;
             for (int i = 0; i < n; i++) {
-                s = Math.max(s, Math.hypot(rawRe[i][k], rawIm[i][k]) / (1 + Math.hypot(rawRe[i][0], rawIm[i][0])));
+                s = Math.max(s, org.tertius.core.number.Cx.abs(rawRe[i][k], rawIm[i][k]) / (1 + org.tertius.core.number.Cx.abs(rawRe[i][0], rawIm[i][0])));
             }
             if (s > 0) {
                 g = Math.max(g, Math.pow(s, 1.0 / k));
@@ -382,7 +324,7 @@ public final class TaylorPadeStepper {
             for (int i = 0; i < n; i++) {
                 hi[i].evaluate(sr, si, a);
                 lo[i].evaluate(sr, si, b);
-                double rel = (Math.hypot(a[0] - b[0], a[1] - b[1]) + a[3] + b[3]) / (1 + Math.hypot(a[0], a[1]));
+                double rel = (org.tertius.core.number.Cx.abs(a[0] - b[0], a[1] - b[1]) + a[3] + b[3]) / (1 + org.tertius.core.number.Cx.abs(a[0], a[1]));
                 e = Math.max(e, Double.isFinite(rel) ? rel : Double.POSITIVE_INFINITY);
             }
             es[p] = e;

@@ -182,7 +182,7 @@ public final class DoubleTaylorKernel {
                 }
             } else {
                 // (x0 + r s)^j = x0^j sum binom(j, k) (r s / x0)^k
-                double mod = Math.hypot(t0r, t0i);
+                double mod = org.tertius.core.number.Cx.abs(t0r, t0i);
                 double arg = Math.atan2(t0i, t0r);
                 double m = Math.pow(mod, j);
                 double cr = m * Math.cos(j * arg);

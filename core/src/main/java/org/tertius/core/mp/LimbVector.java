@@ -1,0 +1,54 @@
+package org.tertius.core.mp;
+
+import java.math.BigInteger;
+
+/**
+ * A work array of complex fixed-point numbers in one {@link LimbFormat}: real parts, imaginary parts and their
+ * sums re + im (kept for products with three multiplications), each value taking L consecutive longs. Mutable
+ * scratch space owned by one computation (never shared between threads).
+ */
+final class LimbVector {
+    final LimbFormat format;
+    final int limbs;
+    final long[] re;
+    final long[] im;
+    final long[] sum;
+
+    LimbVector(LimbFormat format, int size) {
+        this.format = format;
+        this.limbs = format.limbs();
+        this.re = new long[size * limbs];
+        this.im = new long[size * limbs];
+        this.sum = new long[size * limbs];
+    }
+
+    /** Sets value i to (r + i m) 2^-F from fixed-point integers. */
+    void set(int i, BigInteger r, BigInteger m) {
+        format.write(r, re, i * limbs);
+        format.write(m, im, i * limbs);
+        updateSum(i);
+    }
+
+    /** Recomputes re + im of value i (limb by limb, without carries). */
+    void updateSum(int i) {
+        int o = i * limbs;
+        for (int x = o; x < o + limbs; x++) {
+            sum[x] = re[x] + im[x];
+        }
+    }
+
+    BigInteger re(int i) {
+        return format.read(re, i * limbs);
+    }
+
+    BigInteger im(int i) {
+        return format.read(im, i * limbs);
+    }
+
+    /** Divides value i by d (0 < d < 2^38), rounding each part toward minus infinity. */
+    void divide(int i, long d) {
+        format.divide(re, i * limbs, d);
+        format.divide(im, i * limbs, d);
+        updateSum(i);
+    }
+}
