@@ -25,7 +25,7 @@ import org.tertius.core.taylor.RecurrencePlan;
 
 /**
  * The unit of the lower bound: Taylor coefficient generation alone ({@link DoubleTaylorKernel#coefficients} at
- * order 40 on the scenario's polynomial form, at the start point), next to the cost of a whole node
+ * orders 32 and 40 on the scenario's polynomial form, at the start point), next to the cost of a whole node
  * ({@link TaylorPadeStepper#expandStart}: coefficients, robust Pade approximants of two orders per component,
  * radius control, singularities).
  */
@@ -36,7 +36,7 @@ import org.tertius.core.taylor.RecurrencePlan;
 @Fork(value = 1, jvmArgsAppend = {"-Xms1g", "-Xmx4g"})
 @State(Scope.Thread)
 public class CoefficientBenchmark {
-    @Param({"40"})
+    @Param({"32", "40"})
     public int order;
 
     private DoubleTaylorKernel kernel;

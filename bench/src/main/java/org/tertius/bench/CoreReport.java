@@ -65,7 +65,7 @@ public final class CoreReport {
                 load, System.getProperty("java.version"), rt.maxMemory() >> 20);
     }
 
-    /** Cost of one coefficient generation at order 40, and the multiply-add count behind it. */
+    /** Cost of one coefficient generation at the engine's order, and the multiply-add count behind it. */
     private static double coefficients() {
         Solution engine = EngineView.of(Scenario.fresh()).engine();
         PolynomialSystem system = engine.system();

@@ -11,8 +11,7 @@ import org.tertius.core.region.RegionSettings;
 
 /**
  * The benchmark scenario shared by every figure: the generic D6 solution of Painleve III with alpha = 1,
- * beta = -1/2, gamma = 1, delta = -1 and w(1) = 1/2, w'(1) = 1/3 (default solver settings: order 40,
- * tolerance 1e-13).
+ * beta = -1/2, gamma = 1, delta = -1 and w(1) = 1/2, w'(1) = 1/3 (default solver settings).
  */
 public final class Scenario {
     public static final Painleve3 EQUATION = Painleve3.of(1, -0.5, 1, -1);

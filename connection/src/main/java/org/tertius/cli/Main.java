@@ -14,7 +14,8 @@ import picocli.CommandLine.Command;
 @Command(name = "tertius", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
         description = "Painleve III transcendents on their Riemann surface: values, tables, pole fields,"
                 + " connection problems and solution scans, with error estimates.",
-        subcommands = {EvalCommand.class, DemoCommand.class})
+        subcommands = {EvalCommand.class, TableCommand.class, FieldCommand.class, PolesCommand.class,
+            DemoCommand.class})
 public final class Main implements Runnable {
     public static final int EXIT_BAD_INPUT = 2;
     public static final int EXIT_UNREACHED = 3;

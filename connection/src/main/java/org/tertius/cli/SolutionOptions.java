@@ -48,6 +48,15 @@ public final class SolutionOptions {
                 .thirdDerivativeAtZero(start.d3w0()).settings(solver.settings()).build();
     }
 
+    /** A canonical one-line description of the problem (for table signatures). */
+    String describe() {
+        file();
+        String[] eq = equation.texts();
+        return "alpha=" + eq[0] + " beta=" + eq[1] + " gamma=" + eq[2] + " delta=" + eq[3] + " z0=" + start.z0
+                + " w0=" + start.w0 + " dw0=" + start.dw0 + (start.d3w0 == null ? "" : " d3w0=" + start.d3w0)
+                + " tol=" + solver.settings().tolerance() + " order=" + solver.settings().order();
+    }
+
     /** --sheet from the option or the problem file (default 0). */
     int sheet(Integer option) {
         if (option != null) {

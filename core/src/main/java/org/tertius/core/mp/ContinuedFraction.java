@@ -9,22 +9,24 @@ import java.util.List;
  * P. Graves-Morris, "Pade Approximants", 2nd ed., Cambridge 1996, section 4.1; the algorithm is also known as
  * the "Viscovatov" algorithm). With u_0 = 1 and u_1 = f,
  * <pre>  u_{k+1}(s) = (u_k(0) u_{k-1}(s) - u_{k-1}(0) u_k(s)) / s  </pre>
- * gives {@code u_{k-1}/u_k = d_k + a_k s / (u_k/u_{k+1})} with {@code d_k = u_{k-1}(0)/u_k(0)} and
- * {@code a_k = 1/u_k(0)}, so {@code f = 1/(d_1 + a_1 s/(d_2 + a_2 s/(d_3 + ...)))}.
+ * gives, with e_k = u_k(0) and V_k = e_k u_{k-1} / u_k,
+ * <pre>  V_k = e_{k-1} + s e_{k+1} / V_{k+1},   f = e_1 / V_1,  </pre>
+ * a fraction whose convergents (Wallis' recurrences) need products only; cutting it at depth m (V_m = e_{m-1})
+ * gives the same approximants as the usual form {@code f = 1/(d_1 + a_1 s/(d_2 + ...))} with
+ * {@code d_k = e_{k-1}/e_k}, {@code a_k = 1/e_k}, of which it is an equivalence transformation.
  *
- * <p>When some u_k(0) vanishes (a singular leading minor: a block in the Pade table) or is lost in rounding,
- * the fraction is cut there: its last convergents are still Pade approximants of lower order, and the caller's
+ * <p>When some e_k vanishes (a singular leading minor: a block in the Pade table) or is lost in rounding, the
+ * fraction is cut there: its last convergents are still Pade approximants of lower order, and the caller's
  * error estimate, the difference of the last convergents, tells whether they are good enough (otherwise the
  * caller falls back on the Taylor polynomial). Immutable.
  */
 final class ContinuedFraction {
-    private final MpComplex[] d;
-    private final MpComplex[] a;
+    /** e_0 = 1, e_1 = f(0), ..., e_depth. */
+    private final MpComplex[] e;
     private final long productCount;
 
-    private ContinuedFraction(MpComplex[] d, MpComplex[] a, long productCount) {
-        this.d = d;
-        this.a = a;
+    private ContinuedFraction(MpComplex[] e, long productCount) {
+        this.e = e;
         this.productCount = productCount;
     }
 
@@ -43,8 +45,8 @@ final class ContinuedFraction {
      */
     static ContinuedFraction of(MpContext ctx, MpComplex[] c) {
         int n = c.length;
-        List<MpComplex> ds = new ArrayList<>();
-        List<MpComplex> as = new ArrayList<>();
+        List<MpComplex> es = new ArrayList<>();
+        es.add(ctx.fromLong(1));
         // one limb more than the working bits: a row rescaled by whole limbs keeps all of them
         LimbFormat fmt = new LimbFormat(ctx.bits() + LimbFormat.BITS, 1);
         ScaledRow prev = ScaledRow.unit(fmt, n);
@@ -58,8 +60,7 @@ final class ContinuedFraction {
             if (cur.log2Max() - u0.log2Abs() > lossLimit) {
                 break;
             }
-            ds.add(ctx.divide(prev.value(ctx, 0), u0));
-            as.add(ctx.reciprocal(u0));
+            es.add(u0);
             int len = Math.min(prev.length(), cur.length()) - 1;
             if (len <= 0) {
                 break;
@@ -71,54 +72,50 @@ final class ContinuedFraction {
             cur = next;
             next = t;
         }
-        return new ContinuedFraction(ds.toArray(new MpComplex[0]), as.toArray(new MpComplex[0]), count);
+        return new ContinuedFraction(es.toArray(new MpComplex[0]), count);
     }
 
     /** Number of levels (the last convergent matches this many series coefficients). */
     int depth() {
-        return d.length;
+        return e.length - 1;
     }
 
     /**
-     * The last three convergents at s (Wallis' forward recurrences), or null when the fraction has fewer than
-     * three levels or a denominator vanishes.
+     * The last three convergents at s (depths k-2, k-1, k), or null when the fraction has fewer than three levels
+     * or a convergent is infinite.
      */
     MpComplex[] lastConvergents(MpContext ctx, MpComplex s) {
-        int k = d.length;
+        int k = depth();
         if (k < 3) {
             return null;
         }
-        // f = 0 + 1/(d_1 + a_1 s/(d_2 + ...)): A_0 = 0, B_0 = 1, A_1 = 1, B_1 = d_1
-        MpComplex aPrev = MpComplex.ZERO;
-        MpComplex bPrev = ctx.fromLong(1);
-        MpComplex aCur = ctx.fromLong(1);
-        MpComplex bCur = d[0];
+        // Wallis for V_1 = b_0 + a_1/(b_1 + a_2/(b_2 + ...)), b_n = e_n, a_n = s e_{n+1}; the convergent of depth
+        // n + 1 is f = e_1 B_n / A_n, with A_{-1} = 1, B_{-1} = 0, A_0 = e_0, B_0 = 1
+        MpComplex aPrev = ctx.fromLong(1);
+        MpComplex bPrev = MpComplex.ZERO;
+        MpComplex aCur = e[0];
+        MpComplex bCur = ctx.fromLong(1);
         MpComplex[] conv = new MpComplex[3];
-        conv[2] = quotient(ctx, aCur, bCur);
-        for (int i = 1; i < k; i++) {
-            MpComplex alpha = ctx.multiply(a[i - 1], s);
-            MpComplex an = ctx.add(ctx.multiply(d[i], aCur), ctx.multiply(alpha, aPrev));
-            MpComplex bn = ctx.add(ctx.multiply(d[i], bCur), ctx.multiply(alpha, bPrev));
-            // keep the numbers moderate: rescale both by the same power of two
-            int shift = -(int) Math.floor(bn.log2Abs());
-            if (bn.isZero()) {
+        for (int n = 1; n < k; n++) {
+            MpComplex an = ctx.multiply(s, e[n + 1]);
+            MpComplex a = ctx.add(ctx.multiply(e[n], aCur), ctx.multiply(an, aPrev));
+            MpComplex b = ctx.add(ctx.multiply(e[n], bCur), ctx.multiply(an, bPrev));
+            if (a.isZero()) {
                 return null;
             }
+            // keep the numbers moderate: rescale all four by the same power of two
+            int shift = -(int) Math.floor(a.log2Abs());
             aPrev = aCur.scalb(shift);
             bPrev = bCur.scalb(shift);
-            aCur = an.scalb(shift);
-            bCur = bn.scalb(shift);
-            conv[0] = conv[1];
-            conv[1] = conv[2];
-            conv[2] = quotient(ctx, aCur, bCur);
-            if (conv[2] == null) {
-                return null;
+            aCur = a.scalb(shift);
+            bCur = b.scalb(shift);
+            if (n >= k - 3) {
+                conv[n - (k - 3)] = ctx.divide(ctx.multiply(e[1], bCur), aCur);
             }
         }
+        if (k == 3) {
+            conv[0] = e[1];
+        }
         return conv;
-    }
-
-    private static MpComplex quotient(MpContext ctx, MpComplex a, MpComplex b) {
-        return b.isZero() ? null : ctx.divide(a, b);
     }
 }

@@ -23,6 +23,8 @@ final class FixedPointKernel {
     private final int f;
     private final BigInteger[] coefRe;
     private final BigInteger[] coefIm;
+    /** Groups whose terms are all constants: their series vanish beyond order 0. */
+    private final boolean[] constantGroup;
 
     /**
      * @param plan the compiled recurrence
@@ -45,6 +47,14 @@ final class FixedPointKernel {
         int nc = coefficients.length;
         coefRe = new BigInteger[nc];
         coefIm = new BigInteger[nc];
+        constantGroup = new boolean[plan.groupCount()];
+        for (int g = 0; g < constantGroup.length; g++) {
+            boolean constant = true;
+            for (int t = plan.groupStart(g); t < plan.groupStart(g + 1); t++) {
+                constant &= plan.termSeries(t) < 0;
+            }
+            constantGroup[g] = constant;
+        }
         for (int c = 0; c < nc; c++) {
             coefRe[c] = MpContext.fixedRe(coefficients[c], f);
             coefIm[c] = MpContext.fixedIm(coefficients[c], f);
@@ -61,15 +71,25 @@ final class FixedPointKernel {
 
     /** Number of complex products of series coefficients per expansion (the cost unit). */
     long productsPerExpansion() {
-        long perOrder = plan.productCount() + plan.baseConvolutionCount();
-        return perOrder * (long) order * (order + 1) / 2;
+        long convolutions = plan.productCount();
+        long single = 0;
+        for (int g = 0; g < constantGroup.length; g++) {
+            if (plan.groupBaseIndex(g) >= 0) {
+                if (constantGroup[g]) {
+                    single++;
+                } else {
+                    convolutions++;
+                }
+            }
+        }
+        return convolutions * (long) order * (order + 1) / 2 + single * order;
     }
 
     /**
      * The Taylor coefficients at tau0 of the solution through y0, in s with tau = tau0 + scale * s.
      */
     TaylorSeries expand(MpComplex tau0, MpComplex[] y0, double scale) {
-        for (int headroom = 2; ; headroom *= 2) {
+        for (int headroom = 1; ; headroom *= 2) {
             try {
                 return expand(tau0, y0, scale, new LimbFormat(f, headroom));
             } catch (RuntimeException e) {
@@ -135,6 +155,8 @@ final class FixedPointKernel {
                 int b = plan.groupBaseIndex(g);
                 if (b < 0) {
                     r.add(w, gs + k);
+                } else if (constantGroup[g]) {
+                    r.multiplyAdd(base, b * st + k, w, gs);
                 } else {
                     r.convolve(base, b * st, w, gs, k);
                 }

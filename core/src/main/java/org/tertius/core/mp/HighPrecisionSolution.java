@@ -404,14 +404,22 @@ public final class HighPrecisionSolution {
                 len += Math.hypot(point.logRe() - prev[0], point.logIm() - prev[1]);
                 p.expect(len);
             }
+            // the nodes after the start, then the point; states reached at nodes are kept for later calls
+            List<MpComplex> waypoints = new ArrayList<>();
             for (int i = from + 1; i < ids.length; i++) {
                 Node n = nodes.get(ids[i]);
-                MpComplex t = ctx.fromDouble(n.tauRe(), n.tauIm());
-                SegmentIntegrator.Result r = integrator.run(s.tau, s.y, t, s.scale, false, advance());
-                s = new PathState(t, r.y, r.scale, s.steps + r.steps);
-                reached.putIfAbsent(ids[i], s);
+                waypoints.add(ctx.fromDouble(n.tauRe(), n.tauIm()));
             }
-            SegmentIntegrator.Result r = integrator.run(s.tau, s.y, target, s.scale, false, advance());
+            waypoints.add(target);
+            PathState start = s;
+            int first = from + 1;
+            SegmentIntegrator.Result r = integrator.run(s.tau, s.y, waypoints, s.scale, false, advance(),
+                    (j, y, scale, steps) -> {
+                        if (first + j < ids.length) {
+                            reached.putIfAbsent(ids[first + j],
+                                    new PathState(waypoints.get(j), y, scale, start.steps + steps));
+                        }
+                    });
             return new PathState(target, r.y, r.scale, s.steps + r.steps);
         }
 

@@ -24,6 +24,9 @@ final class SegmentIntegrator {
     /** Extra digits for the continued fractions (Viskovatov's algorithm loses some to cancellation). */
     private static final int PADE_EXTRA_DIGITS = 10;
     private static final int MAX_STEPS = 100000;
+    /** Later waypoints a Pade step tries to reach directly, and their largest distance in units of the scale. */
+    private static final int SHORTCUT_CANDIDATES = 3;
+    private static final double SHORTCUT_REACH = 1.2;
 
     private final FixedPointKernel kernel;
     private final MpContext ctx;
@@ -97,6 +100,11 @@ final class SegmentIntegrator {
         void advanced(double distance);
     }
 
+    /** Receives the states reached at waypoints (for caching them). */
+    interface Landing {
+        void landed(int waypoint, MpComplex[] y, double scale, int steps);
+    }
+
     /**
      * Integrates from (tau, y) to target along the straight line.
      *
@@ -107,18 +115,39 @@ final class SegmentIntegrator {
      */
     Result run(MpComplex tau, MpComplex[] y, MpComplex target, double scaleGuess, boolean keepNodes,
                Advance advance) {
+        return run(tau, y, List.of(target), scaleGuess, keepNodes, advance, null);
+    }
+
+    /**
+     * Integrates from (tau, y) through the waypoints to the last one, along the straight lines between them. A
+     * Pade step may go straight on to a later waypoint when its continued fractions meet the tolerance there: the
+     * solutions are meromorphic in tau, so the value does not depend on the side on which a line passes a pole.
+     *
+     * @param landing receives the state at every waypoint the run stops at (may be null)
+     * @throws UnreachableTargetException if the step size collapses (the line runs into a singularity)
+     * @throws TertiusException if the thread is interrupted (cancellation)
+     */
+    Result run(MpComplex tau, MpComplex[] y, List<MpComplex> waypoints, double scaleGuess, boolean keepNodes,
+               Advance advance, Landing landing) {
         List<HpNode> nodes = keepNodes ? new ArrayList<>() : null;
         double r = scaleGuess;
-        double total = ctx.subtract(target, tau).abs();
         int steps = 0;
+        int next = 0;
         while (true) {
             if (Thread.currentThread().isInterrupted()) {
                 throw new TertiusException("high-precision computation cancelled (thread interrupted)");
             }
+            MpComplex target = waypoints.get(next);
             MpComplex remaining = ctx.subtract(target, tau);
             double dist = remaining.abs();
             if (dist == 0) {
-                return new Result(y, r, steps, nodes);
+                if (landing != null) {
+                    landing.landed(next, y, r, steps);
+                }
+                if (++next == waypoints.size()) {
+                    return new Result(y, r, steps, nodes);
+                }
+                continue;
             }
             if (steps >= MAX_STEPS) {
                 throw new UnreachableTargetException("more than " + MAX_STEPS + " high-precision steps on one segment");
@@ -131,56 +160,95 @@ final class SegmentIntegrator {
                 throw new UnreachableTargetException("the high-precision step size collapsed near tau = "
                         + tau.toComplex() + ": the path runs into a singularity");
             }
-            ContinuedFraction[] fractions = null;
-            MpComplex s;
-            MpComplex[] next;
-            boolean last = hT >= dist;
-            if (last) {
-                s = ctx.divide(remaining, ctx.fromDouble(r, 0));
-                next = series.evaluate(ctx, s);
-            } else {
-                MpComplex dir = ctx.divide(remaining, ctx.fromDouble(dist * r, 0));
-                next = null;
-                s = null;
-                if (dist > PADE_TRIGGER * hT) {
-                    fractions = fractions(series);
-                    for (double len = dist; len > 1.5 * hT && fractions != null; len *= 0.7) {
-                        MpComplex sp = len == dist ? ctx.divide(remaining, ctx.fromDouble(r, 0))
-                                : ctx.multiply(dir, ctx.fromDouble(len, 0));
-                        MpComplex[] v = padeValue(ctx, fractions, sp, tolerance);
-                        if (v != null) {
-                            s = sp;
-                            next = v;
-                            last = len == dist;
-                            break;
-                        }
-                    }
-                    if (next == null) {
-                        fractions = null;
-                    }
-                }
-                if (next == null) {
-                    s = ctx.multiply(dir, ctx.fromDouble(hT, 0));
-                    next = series.evaluate(ctx, s);
-                }
+            Step step = hT >= dist ? null : padeStep(series, tau, waypoints, next, dist, hT);
+            if (step == null) {
+                boolean last = hT >= dist;
+                MpComplex s = last ? ctx.divide(remaining, ctx.fromDouble(r, 0))
+                        : ctx.multiply(remaining, ctx.fromDouble(hT / (dist * r), 0));
+                step = new Step(s, series.evaluate(ctx, s), null, last ? next : -1);
             }
-            if (System.getProperty("hpdebug") != null) { System.err.printf("DBG order %d r %.3g hT %.3g rho %.3g dist %.3g pade %b exp %d%n", kernel.order(), r, hT, rho, dist, fractions != null, expansions.get()); }
             if (keepNodes) {
-                nodes.add(new HpNode(series, fractions, s));
+                nodes.add(new HpNode(series, step.fractions, step.s));
             }
-            MpComplex step = ctx.multiply(s, ctx.fromDouble(r, 0));
-            MpComplex newTau = ctx.add(tau, step);
-            tau = last ? target : newTau;
-            y = next;
-            steps++;
+            MpComplex end = step.waypoint >= 0 ? waypoints.get(step.waypoint)
+                    : ctx.add(tau, ctx.multiply(step.s, ctx.fromDouble(r, 0)));
             if (advance != null) {
-                advance.advanced(Math.min(dist, step.abs()));
+                advance.advanced(pathLength(tau, end, waypoints, next, step.waypoint));
             }
+            tau = end;
+            y = step.y;
+            steps++;
             r = Math.max(rho, 1e-3 * r);
-            if (last) {
-                return new Result(y, r, steps, nodes);
+            if (step.waypoint >= 0) {
+                next = step.waypoint;
             }
         }
+    }
+
+    /** A step: its scaled length, the state at its end, its fractions (Pade) and the waypoint reached (or -1). */
+    private static final class Step {
+        final MpComplex s;
+        final MpComplex[] y;
+        final ContinuedFraction[] fractions;
+        final int waypoint;
+
+        Step(MpComplex s, MpComplex[] y, ContinuedFraction[] fractions, int waypoint) {
+            this.s = s;
+            this.y = y;
+            this.fractions = fractions;
+            this.waypoint = waypoint;
+        }
+    }
+
+    /**
+     * A Pade step when Taylor steps would be short: to the farthest of the next few waypoints within reach whose
+     * convergents meet the tolerance, else along the current line to its target or to 0.7^m of the way; null
+     * when no Pade value is accepted farther than 1.5 Taylor steps.
+     */
+    private Step padeStep(TaylorSeries series, MpComplex tau, List<MpComplex> waypoints, int next, double dist,
+                          double hT) {
+        if (dist <= PADE_TRIGGER * hT) {
+            return null;
+        }
+        ContinuedFraction[] fractions = fractions(series);
+        if (fractions == null) {
+            return null;
+        }
+        MpComplex r = ctx.fromDouble(series.scale(), 0);
+        int last = Math.min(waypoints.size() - 1, next + SHORTCUT_CANDIDATES);
+        for (int j = last; j > next; j--) {
+            MpComplex d = ctx.subtract(waypoints.get(j), tau);
+            if (d.abs() > SHORTCUT_REACH * series.scale()) {
+                continue;
+            }
+            MpComplex sp = ctx.divide(d, r);
+            MpComplex[] v = padeValue(ctx, fractions, sp, tolerance);
+            if (v != null) {
+                return new Step(sp, v, fractions, j);
+            }
+        }
+        MpComplex remaining = ctx.subtract(waypoints.get(next), tau);
+        MpComplex dir = ctx.divide(remaining, ctx.fromDouble(dist, 0));
+        for (double len = dist; len > 1.5 * hT; len *= 0.7) {
+            MpComplex sp = len == dist ? ctx.divide(remaining, r) : ctx.divide(ctx.multiply(dir, ctx.fromDouble(len, 0)), r);
+            MpComplex[] v = padeValue(ctx, fractions, sp, tolerance);
+            if (v != null) {
+                return new Step(sp, v, fractions, len == dist ? next : -1);
+            }
+        }
+        return null;
+    }
+
+    /** Length of the path from tau to end: straight when end is not a waypoint, else along the waypoints. */
+    private double pathLength(MpComplex tau, MpComplex end, List<MpComplex> waypoints, int next, int reached) {
+        if (reached < 0) {
+            return ctx.subtract(end, tau).abs();
+        }
+        double len = ctx.subtract(waypoints.get(next), tau).abs();
+        for (int j = next + 1; j <= reached; j++) {
+            len += ctx.subtract(waypoints.get(j), waypoints.get(j - 1)).abs();
+        }
+        return len;
     }
 
     /**

@@ -1,0 +1,133 @@
+package org.tertius.cli;
+
+import java.awt.image.BufferedImage;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+import javax.imageio.ImageIO;
+import org.tertius.core.InvalidInputException;
+import org.tertius.core.TertiusException;
+import org.tertius.core.number.SurfacePoint;
+import org.tertius.core.piii.Painleve3Solution;
+import org.tertius.core.piii.Painleve3Value;
+import org.tertius.core.region.Grid;
+import org.tertius.core.region.GridResult;
+import org.tertius.core.region.PoleFinder;
+import org.tertius.core.region.RegionSettings;
+import org.tertius.core.region.RegionSolver;
+import org.tertius.core.region.Singularity;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+
+/** A PNG picture of a solution over a region, or a line plot of w along a segment. */
+@Command(name = "field", mixinStandardHelpOptions = true,
+        description = "Draw the solution over a region of one sheet (--grid) as a PNG: colour shows the phase, lightness"
+                + " the modulus (zeros black, poles white), located poles and zeros ringed; or plot Re w and Im w"
+                + " along a segment (--line) with its poles marked.")
+public final class FieldCommand implements Callable<Integer> {
+    @Spec
+    CommandSpec spec;
+    @Mixin
+    SolutionOptions solution = new SolutionOptions();
+    @Option(names = "--grid", paramLabel = "RE0:RE1:NX,IM0:IM1:NY", description = "the region (one sheet)")
+    String grid;
+    @Option(names = "--line", paramLabel = "A:B:N", description = "plot w along this segment instead")
+    String line;
+    @Option(names = "--sheet", paramLabel = "K", description = "sheet (default 0)")
+    Integer sheet;
+    @Option(names = "--out", paramLabel = "FILE.png", required = true, description = "the PNG file")
+    Path out;
+    @Option(names = "--size", paramLabel = "WxH", description = "picture size in pixels (default 900x720)")
+    String size = "900x720";
+    @Option(names = "--no-marks", description = "do not locate and mark poles and zeros")
+    boolean noMarks;
+
+    @Override
+    public Integer call() {
+        ProblemFile f = solution.file();
+        String gridSpec = grid != null ? grid : (line == null ? f.get("grid") : null);
+        String lineSpec = line != null ? line : (grid == null ? f.get("line") : null);
+        if ((gridSpec == null) == (lineSpec == null)) {
+            throw new InvalidInputException("--grid", "give exactly one of --grid RE0:RE1:NX,IM0:IM1:NY and --line A:B:N");
+        }
+        int[] wh = parseSize(size);
+        OutputFile.checkWritable("--out", out);
+        int k = solution.sheet(sheet);
+        Painleve3Solution s = solution.solution();
+        PrintWriter err = spec.commandLine().getErr();
+        String title = s.equation().toString();
+        if (lineSpec != null) {
+            return linePlot(s, Targets.line("--line", lineSpec, k), title, wh, err);
+        }
+        Grid g = Grid.parse("--grid", gridSpec, k);
+        if (g.nx() < 2 || g.ny() < 2) {
+            throw new InvalidInputException("--grid", "a picture needs at least 2 x 2 points");
+        }
+        GridResult r;
+        try (Progress progress = new Progress("field")) {
+            r = RegionSolver.solve(s, g, RegionSettings.builder().progress(progress::update).build());
+        }
+        List<Singularity> marks = noMarks ? List.of() : PoleFinder.find(s, g);
+        BufferedImage img = FieldPainter.paint(r, marks, title, wh[0], wh[1]);
+        OutputFile.writeWhole("--out", out, p -> ImageIO.write(img, "png", p.toFile()));
+        err.println(String.format(Locale.ROOT, "tertius: wrote %s (%dx%d); %s; largest error estimate %.1e relative to"
+                + " 1+|w|", out, wh[0], wh[1], r.statistics(), r.maxRelativeError()));
+        return r.statistics().failed() == 0 ? 0 : Main.EXIT_UNREACHED;
+    }
+
+    private int linePlot(Painleve3Solution s, List<SurfacePoint> points, String title, int[] wh, PrintWriter err) {
+        double[] x = new double[points.size()];
+        double[] re = new double[points.size()];
+        double[] im = new double[points.size()];
+        SurfacePoint a = points.get(0);
+        SurfacePoint b = points.get(points.size() - 1);
+        double len = Math.hypot(b.re() - a.re(), b.im() - a.im());
+        boolean realSegment = a.im() == 0 && b.im() == 0;
+        int failed = 0;
+        for (int i = 0; i < points.size(); i++) {
+            SurfacePoint p = points.get(i);
+            x[i] = realSegment ? p.re() : Math.hypot(p.re() - a.re(), p.im() - a.im());
+            try {
+                Painleve3Value v = s.evaluate(p);
+                re[i] = v.w().getReal();
+                im[i] = v.w().getImaginary();
+            } catch (TertiusException e) {
+                re[i] = Double.NaN;
+                im[i] = Double.NaN;
+                failed++;
+            }
+        }
+        List<Singularity> poles = TableCommand.polesAlong(s, points);
+        double[] poleX = new double[poles.size()];
+        for (int i = 0; i < poleX.length; i++) {
+            SurfacePoint p = poles.get(i).point();
+            poleX[i] = realSegment ? p.re() : Math.hypot(p.re() - a.re(), p.im() - a.im());
+        }
+        String xLabel = realSegment ? "z (real axis, sheet " + a.sheet() + ")"
+                : String.format(Locale.ROOT, "distance along the segment from %s (length %.4g)", a, len);
+        BufferedImage img = LinePlot.draw(title, xLabel, x, re, im, poleX, wh[0], wh[1]);
+        OutputFile.writeWhole("--out", out, p -> ImageIO.write(img, "png", p.toFile()));
+        err.println("tertius: wrote " + out + " with " + poles.size() + " pole(s) marked");
+        return failed == 0 ? 0 : Main.EXIT_UNREACHED;
+    }
+
+    static int[] parseSize(String text) {
+        String[] p = text.toLowerCase(Locale.ROOT).split("x");
+        try {
+            int w = Integer.parseInt(p[0].trim());
+            int h = Integer.parseInt(p[1].trim());
+            if (p.length != 2 || w < 320 || h < 240 || w > 8000 || h > 8000) {
+                throw new NumberFormatException();
+            }
+            return new int[] {w, h};
+        } catch (RuntimeException e) {
+            throw new InvalidInputException("--size", "expected WxH with 320 <= W <= 8000 and 240 <= H <= 8000, got '"
+                    + text + "'");
+        }
+    }
+}

@@ -1,0 +1,168 @@
+package org.tertius.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+import org.tertius.core.InvalidInputException;
+import org.tertius.core.TertiusException;
+import org.tertius.core.number.SurfacePoint;
+import org.tertius.core.piii.Painleve3Solution;
+import org.tertius.core.region.Grid;
+import org.tertius.core.region.GridResult;
+import org.tertius.core.region.PoleFinder;
+import org.tertius.core.region.RegionSettings;
+import org.tertius.core.region.RegionSolver;
+import org.tertius.core.region.Singularity;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+
+/** Values on a line or a grid, streamed to CSV, resumable. */
+@Command(name = "table", mixinStandardHelpOptions = true,
+        description = "Tabulate a solution on a line (--line A:B:N) or a grid (--grid RE0:RE1:NX,IM0:IM1:NY) of one"
+                + " sheet to CSV (columns as eval). Rows are written as they are computed; an interrupted run keeps"
+                + " them and --resume continues it. Poles met along a line are reported.")
+public final class TableCommand implements Callable<Integer> {
+    /** Grid rows per band: a band is computed, then written. */
+    private static final int BAND = 16;
+
+    @Spec
+    CommandSpec spec;
+    @Mixin
+    SolutionOptions solution = new SolutionOptions();
+    @Option(names = "--line", paramLabel = "A:B:N", description = "N points from A to B (complex), e.g. 0.5:10:200")
+    String line;
+    @Option(names = "--grid", paramLabel = "RE0:RE1:NX,IM0:IM1:NY", description = "a grid of one sheet")
+    String grid;
+    @Option(names = "--sheet", paramLabel = "K", description = "sheet of the points (default 0)")
+    Integer sheet;
+    @Option(names = "--out", paramLabel = "FILE", description = "CSV file (default: standard output)")
+    Path out;
+    @Option(names = "--resume", description = "continue an interrupted run in --out FILE")
+    boolean resume;
+
+    @Override
+    public Integer call() {
+        ProblemFile f = solution.file();
+        String lineSpec = line != null ? line : (grid == null ? f.get("line") : null);
+        String gridSpec = grid != null ? grid : (line == null ? f.get("grid") : null);
+        if ((lineSpec == null) == (gridSpec == null)) {
+            throw new InvalidInputException("--line", "give exactly one of --line A:B:N and --grid"
+                    + " RE0:RE1:NX,IM0:IM1:NY");
+        }
+        int k = solution.sheet(sheet);
+        Painleve3Solution s = solution.solution();
+        String signature = "tertius table " + solution.describe() + (lineSpec != null ? " line=" + lineSpec
+                : " grid=" + gridSpec) + " sheet=" + k;
+        List<String> comments = List.of(s.equation() + " [" + s.equation().type().describe() + "]",
+                "integrated in the " + s.formDescription(),
+                "err: the larger of the estimated absolute errors of w and w'");
+        PrintWriter console = spec.commandLine().getErr();
+        int status;
+        try (TableWriter w = TableWriter.open(spec.commandLine().getOut(), out, resume, signature, comments);
+             Progress progress = new Progress("table")) {
+            Runtime.getRuntime().addShutdownHook(new Thread(w::flush));
+            if (lineSpec != null) {
+                status = line(s, Targets.line("--line", lineSpec, k), w, progress, console);
+            } else {
+                status = grid(s, Grid.parse("--grid", gridSpec, k), w, progress);
+            }
+        }
+        if (out != null) {
+            console.println("tertius: wrote " + out);
+        }
+        return status;
+    }
+
+    private int line(Painleve3Solution s, List<SurfacePoint> points, TableWriter w, Progress progress,
+                     PrintWriter console) {
+        int unreached = 0;
+        long skip = w.existingRows();
+        for (int i = (int) skip; i < points.size(); i++) {
+            SurfacePoint p = points.get(i);
+            try {
+                w.row(ValueCsv.row(s.evaluate(p)));
+            } catch (TertiusException e) {
+                unreached++;
+                w.row(ValueCsv.unreachedRow(p));
+                console.println("tertius: point " + p + " not reached: " + e.getMessage());
+            }
+            if (i % 16 == 15) {
+                w.flush();
+            }
+            progress.update(i + 1, points.size());
+        }
+        for (Singularity pole : polesAlong(s, points)) {
+            String msg = String.format(Locale.ROOT, "%s on the line at %s (lead %s, position error %.1e)",
+                    pole.kind().label(), pole.point(), pole.lead(), pole.error());
+            w.comment(msg);
+            console.println("tertius: " + msg);
+        }
+        w.flush();
+        return unreached == 0 ? 0 : Main.EXIT_UNREACHED;
+    }
+
+    /** Poles within half a spacing of the segment. */
+    static List<Singularity> polesAlong(Painleve3Solution s, List<SurfacePoint> points) {
+        List<Singularity> out = new ArrayList<>();
+        if (points.size() < 2) {
+            return out;
+        }
+        SurfacePoint a = points.get(0);
+        SurfacePoint b = points.get(points.size() - 1);
+        double h = Math.hypot(b.re() - a.re(), b.im() - a.im()) / (points.size() - 1);
+        double m = Math.max(h, 1e-9);
+        Grid box = Grid.of(Math.min(a.re(), b.re()) - m, Math.max(a.re(), b.re()) + m, 2,
+                Math.min(a.im(), b.im()) - m, Math.max(a.im(), b.im()) + m, 2, a.sheet());
+        for (Singularity p : PoleFinder.find(s, box)) {
+            if (p.kind() == Singularity.Kind.POLE && distanceToSegment(p.point(), a, b) <= 0.5 * h + 1e-12) {
+                out.add(p);
+            }
+        }
+        return out;
+    }
+
+    private static double distanceToSegment(SurfacePoint p, SurfacePoint a, SurfacePoint b) {
+        double dx = b.re() - a.re();
+        double dy = b.im() - a.im();
+        double t = ((p.re() - a.re()) * dx + (p.im() - a.im()) * dy) / (dx * dx + dy * dy);
+        t = Math.max(0, Math.min(1, t));
+        return Math.hypot(p.re() - (a.re() + t * dx), p.im() - (a.im() + t * dy));
+    }
+
+    private int grid(Painleve3Solution s, Grid g, TableWriter w, Progress progress) {
+        g.checkMemory("--grid");
+        long skip = w.existingRows();
+        int nx = g.nx();
+        int failed = 0;
+        for (int j0 = (int) (skip / nx); j0 < g.ny(); j0 += BAND) {
+            int j1 = Math.min(g.ny() - 1, j0 + BAND - 1);
+            Grid band = Grid.of(g.re0(), g.re1(), nx, g.im(j0), g.im(j1), j1 - j0 + 1, g.sheet());
+            GridResult r = RegionSolver.solve(s, band, RegionSettings.defaults());
+            failed += r.statistics().failed();
+            for (int j = 0; j < band.ny(); j++) {
+                for (int i = 0; i < nx; i++) {
+                    long index = (long) (j0 + j) * nx + i;
+                    if (index < skip) {
+                        continue;
+                    }
+                    w.row(r.computed(i, j) ? ValueCsv.row(r.value(i, j)) : pointRow(band, i, j));
+                }
+            }
+            w.flush();
+            progress.update((long) (j1 + 1) * nx, (long) g.size());
+        }
+        return failed == 0 ? 0 : Main.EXIT_UNREACHED;
+    }
+
+    private static String pointRow(Grid g, int i, int j) {
+        SurfacePoint p = g.point(i, j);
+        return p == null ? String.format(Locale.ROOT, "%.17g,%.17g,%d,nan,nan,nan,nan,inf", g.re(i), g.im(j), g.sheet())
+                : ValueCsv.unreachedRow(p);
+    }
+}
