@@ -7,6 +7,15 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
+import java.awt.image.BufferedImage;
+import javax.imageio.ImageIO;
+import org.tertius.core.number.ComplexText;
+import org.tertius.core.region.Grid;
+import org.tertius.core.region.GridResult;
+import org.tertius.core.region.PoleFinder;
+import org.tertius.core.region.RegionSettings;
+import org.tertius.core.region.RegionSolver;
+import org.tertius.core.region.Singularity;
 import org.hipparchus.complex.Complex;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.number.SurfacePoint;
@@ -20,7 +29,8 @@ import picocli.CommandLine.Spec;
 
 /**
  * The built-in demo scenario: a generic D6 solution (alpha = 1, beta = -1/2, gamma = 1, delta = -1,
- * w(1) = 1/2, w'(1) = 1/3) evaluated at a few points of three sheets.
+ * w(1) = 1/2, w'(1) = 1/3): values at points of three sheets, a table and a plot along the positive real axis
+ * with its poles, and the pole field of the principal sheet as a picture and a pole list.
  */
 @Command(name = "demo", mixinStandardHelpOptions = true,
         description = "Run the built-in scenario (a generic D6 solution) and write its results into a folder.")
@@ -47,8 +57,10 @@ public final class DemoCommand implements Callable<Integer> {
         } catch (IOException e) {
             throw new InvalidInputException("--out", "cannot create folder " + out + ": " + e.getMessage());
         }
+        long t0 = System.nanoTime();
         Painleve3Solution s = solution();
         console.println("tertius demo: " + EQUATION + ", w(1) = 1/2, w'(1) = 1/3 [" + EQUATION.type().describe() + "]");
+        // values at a few points of three sheets
         List<SurfacePoint> pts = List.of(SurfacePoint.of(3, 2), SurfacePoint.of(1, 10), SurfacePoint.of(-8, 6),
                 SurfacePoint.of(-3, 0.5, 1), SurfacePoint.of(-3, -0.5, -1), SurfacePoint.of(1e-6, 1e-6));
         Path values = out.resolve("values.csv");
@@ -57,11 +69,55 @@ public final class DemoCommand implements Callable<Integer> {
             for (SurfacePoint p : pts) {
                 Painleve3Value v = s.evaluate(p);
                 w.println(ValueCsv.row(v));
-                console.printf("  w(%s) = %s  (err %.1e)%n", p, org.tertius.core.number.ComplexText.format(v.w()),
+                console.printf("  w(%s) = %s  (err %.1e)%n", p, ComplexText.format(v.w()),
                         Math.max(v.errW(), v.errDw()));
             }
         }
-        console.println("wrote " + values.toAbsolutePath());
+        // a table along the positive real axis, with the poles met
+        List<SurfacePoint> line = Targets.line("line", "0.25:10:400", 0);
+        Path table = out.resolve("real-axis.csv");
+        List<Singularity> onLine;
+        try (PrintWriter w = new PrintWriter(Files.newBufferedWriter(table, StandardCharsets.UTF_8))) {
+            ValueCsv.header(w, s.equation().toString(), "the positive real axis, 400 points from 0.25 to 10");
+            for (SurfacePoint p : line) {
+                w.println(ValueCsv.row(s.evaluate(p)));
+            }
+            onLine = TableCommand.polesAlong(s, line);
+            for (Singularity p : onLine) {
+                w.println("# pole on the line at " + p.point() + ", residue " + ComplexText.format(p.lead()));
+            }
+        }
+        // the pole field of the principal sheet, its picture and its pole list
+        Grid g = Grid.of(-8, 8, 321, -8, 8, 321, 0);
+        GridResult r = RegionSolver.solve(s, g, RegionSettings.defaults());
+        List<Singularity> found = PoleFinder.find(s, g);
+        Path picture = out.resolve("pole-field.png");
+        BufferedImage img = FieldPainter.paint(r, found, s.equation().toString(), 900, 720);
+        OutputFile.writeWhole("--out", picture, p -> ImageIO.write(img, "png", p.toFile()));
+        Path poles = out.resolve("poles.csv");
+        Files.writeString(poles, PolesCommand.csv(found), StandardCharsets.UTF_8);
+        Path plot = out.resolve("real-axis.png");
+        double[] x = new double[line.size()];
+        double[] re = new double[line.size()];
+        double[] im = new double[line.size()];
+        for (int i = 0; i < x.length; i++) {
+            Painleve3Value v = s.evaluate(line.get(i));
+            x[i] = line.get(i).re();
+            re[i] = v.w().getReal();
+            im[i] = v.w().getImaginary();
+        }
+        double[] px = onLine.stream().mapToDouble(p -> p.point().re()).toArray();
+        BufferedImage lp = LinePlot.draw(s.equation().toString(), "z (real axis)", x, re, im, px, 900, 500);
+        OutputFile.writeWhole("--out", plot, p -> ImageIO.write(lp, "png", p.toFile()));
+        long poleCount = found.stream().filter(p -> p.kind() == Singularity.Kind.POLE).count();
+        console.printf(java.util.Locale.ROOT, "  %d poles and %d zeros in [-8,8]^2 (sheet 0); %d pole(s) on the real"
+                + " segment [0.25, 10]%n", poleCount, found.size() - poleCount, onLine.size());
+        console.printf(java.util.Locale.ROOT, "  grid 321 x 321: %s%n", r.statistics());
+        console.println("wrote:");
+        for (Path p : List.of(values, table, plot, picture, poles)) {
+            console.println("  " + p.toAbsolutePath());
+        }
+        console.printf(java.util.Locale.ROOT, "done in %.1f s%n", (System.nanoTime() - t0) / 1e9);
         return 0;
     }
 }

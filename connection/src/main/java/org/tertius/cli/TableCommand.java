@@ -45,6 +45,9 @@ public final class TableCommand implements Callable<Integer> {
     Path out;
     @Option(names = "--resume", description = "continue an interrupted run in --out FILE")
     boolean resume;
+    @Option(names = "--digits", paramLabel = "D", description = "line only: D significant digits in arbitrary"
+            + " precision (exact start data and parameters)")
+    Integer digits;
 
     @Override
     public Integer call() {
@@ -56,6 +59,15 @@ public final class TableCommand implements Callable<Integer> {
                     + " RE0:RE1:NX,IM0:IM1:NY");
         }
         int k = solution.sheet(sheet);
+        if (digits == null && f.has("digits")) {
+            digits = f.intValue("digits");
+        }
+        if (digits != null) {
+            if (lineSpec == null) {
+                throw new InvalidInputException("--digits", "applies to --line tables (and eval), not to grids");
+            }
+            return highPrecisionLine(Targets.line("--line", lineSpec, k), lineSpec, k);
+        }
         Painleve3Solution s = solution.solution();
         String signature = "tertius table " + solution.describe() + (lineSpec != null ? " line=" + lineSpec
                 : " grid=" + gridSpec) + " sheet=" + k;
@@ -64,7 +76,8 @@ public final class TableCommand implements Callable<Integer> {
                 "err: the larger of the estimated absolute errors of w and w'");
         PrintWriter console = spec.commandLine().getErr();
         int status;
-        try (TableWriter w = TableWriter.open(spec.commandLine().getOut(), out, resume, signature, comments);
+        try (TableWriter w = TableWriter.open(spec.commandLine().getOut(), out, resume, signature, comments,
+                ValueCsv.HEADER);
              Progress progress = new Progress("table")) {
             Runtime.getRuntime().addShutdownHook(new Thread(w::flush));
             if (lineSpec != null) {
@@ -77,6 +90,22 @@ public final class TableCommand implements Callable<Integer> {
             console.println("tertius: wrote " + out);
         }
         return status;
+    }
+
+    private int highPrecisionLine(List<SurfacePoint> points, String lineSpec, int k) {
+        String signature = "tertius table " + solution.describe() + " line=" + lineSpec + " sheet=" + k
+                + " digits=" + digits;
+        try (Progress progress = new Progress("table");
+             TableWriter w = TableWriter.open(spec.commandLine().getOut(), out, resume, signature,
+                     List.of(solution.equationValue() + ", " + digits + " digits; digits: estimated correct significant"
+                             + " digits of w and w'"), HighPrecisionRows.HEADER)) {
+            org.tertius.core.mp.HighPrecisionSolution hp = HighPrecisionRows.solution(solution, digits, progress);
+            for (int i = (int) w.existingRows(); i < points.size(); i++) {
+                w.row(HighPrecisionRows.row(hp.evaluate(points.get(i))));
+                w.flush();
+            }
+        }
+        return 0;
     }
 
     private int line(Painleve3Solution s, List<SurfacePoint> points, TableWriter w, Progress progress,

@@ -29,12 +29,13 @@ final class TableWriter implements AutoCloseable {
         this.path = path;
     }
 
-    static TableWriter open(PrintWriter stdout, Path path, boolean resume, String signature, List<String> comments) {
+    static TableWriter open(PrintWriter stdout, Path path, boolean resume, String signature, List<String> comments,
+                            String columns) {
         if (path == null) {
             if (resume) {
                 throw new InvalidInputException("--resume", "needs --out FILE (standard output cannot be resumed)");
             }
-            header(stdout, signature, comments);
+            header(stdout, signature, comments, columns);
             return new TableWriter(stdout, 0, null);
         }
         OutputFile.checkWritable("--out", path);
@@ -47,13 +48,13 @@ final class TableWriter implements AutoCloseable {
                 }
                 truncatePartialLine(path);
                 long data = Files.readAllLines(path, StandardCharsets.UTF_8).stream()
-                        .filter(l -> !l.startsWith("#") && !l.startsWith("z_re")).count();
+                        .filter(l -> !l.startsWith("#") && !l.equals(columns)).count();
                 BufferedWriter w = Files.newBufferedWriter(path, StandardCharsets.UTF_8, StandardOpenOption.APPEND);
                 return new TableWriter(new PrintWriter(w), data, path);
             }
             BufferedWriter w = Files.newBufferedWriter(path, StandardCharsets.UTF_8);
             PrintWriter pw = new PrintWriter(w);
-            header(pw, signature, comments);
+            header(pw, signature, comments, columns);
             pw.flush();
             return new TableWriter(pw, 0, path);
         } catch (IOException e) {
@@ -61,12 +62,12 @@ final class TableWriter implements AutoCloseable {
         }
     }
 
-    private static void header(PrintWriter w, String signature, List<String> comments) {
+    private static void header(PrintWriter w, String signature, List<String> comments, String columns) {
         w.println("# " + signature);
         for (String c : comments) {
             w.println("# " + c);
         }
-        w.println(ValueCsv.HEADER);
+        w.println(columns);
     }
 
     private static void truncatePartialLine(Path path) throws IOException {

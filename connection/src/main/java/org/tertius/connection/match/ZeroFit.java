@@ -67,6 +67,7 @@ public final class ZeroFit<T> {
         double hs = Math.sqrt(ar.epsilon());
         T[] r = residual(sigma, b, data);
         double tol = 4 * ar.epsilon();
+        double lastSize = Double.POSITIVE_INFINITY;
         for (int it = 0; it < 60; it++) {
             T ds = ar.of(hs);
             T db = ar.mul(b, ar.of(hs));
@@ -82,9 +83,12 @@ public final class ZeroFit<T> {
             sigma = ar.sub(sigma, stepS);
             b = ar.sub(b, stepB);
             r = residual(sigma, b, data);
-            if (ar.abs(stepS) <= tol * (1 + ar.abs(sigma)) && ar.abs(stepB) <= tol * ar.abs(b)) {
+            double size = ar.abs(stepS) / (1 + ar.abs(sigma)) + ar.abs(stepB) / ar.abs(b);
+            // converged, or stalled at the rounding floor of the data (the step no longer shrinks)
+            if (size <= tol || (it >= 3 && size > 0.5 * lastSize && size < 1e-8)) {
                 return withErrors(sigma, b, data, new Object[] {j11, j12, j21, j22, det});
             }
+            lastSize = size;
         }
         throw new TertiusException("the fit of w ~ B z^sigma at z0 = " + ar.toComplex(z) + " did not converge;"
                 + " the data are not in the region of the power behaviour (take z0 smaller)");

@@ -17,8 +17,8 @@ import org.tertius.core.step.Node;
  * the roots of the denominator (poles) and numerator (zeros) of the approximant of w at each node, in and
  * around its disk. A root is kept only if the lower-order approximant of the same node has a root next to it (a spurious
  * pole-zero pair of one approximant does not survive this), and the distance between the two roots is the
- * position error estimate. Roots found by several overlapping nodes are merged, keeping the one found nearest
- * to its node's centre. The leading coefficient is computed from the approximant: at a pole of w(tau) the
+ * position error estimate. Roots found by several overlapping nodes are merged, keeping the copy with the
+ * smallest position error. The leading coefficient is computed from the approximant: at a pole of w(tau) the
  * residue in tau is r p(s0)/q'(s0), so that w ~ c/(z - z0) with c = z0 r p(s0)/q'(s0); at a zero,
  * w' = (p'(s0)/q(s0)) / (r z0). When the form carries 1/w, the roles of numerator and denominator swap.
  */
@@ -54,9 +54,9 @@ public final class PoleFinder {
             collect(all, n, hi, lo, true, reciprocal ? Singularity.Kind.ZERO : Singularity.Kind.POLE, reciprocal, grid);
             collect(all, n, hi, lo, false, reciprocal ? Singularity.Kind.POLE : Singularity.Kind.ZERO, reciprocal, grid);
         }
-        // most central first, then merge
-        all.sort(Comparator.comparingDouble((Candidate c) -> c.centrality).thenComparingDouble(c -> c.s.point().re())
-                .thenComparingDouble(c -> c.s.point().im()));
+        // the best-determined copy first (smallest position error, then nearest to its node's centre), then merge
+        all.sort(Comparator.comparingDouble((Candidate c) -> c.s.error()).thenComparingDouble(c -> c.centrality)
+                .thenComparingDouble(c -> c.s.point().re()).thenComparingDouble(c -> c.s.point().im()));
         List<Singularity> found = new ArrayList<>();
         for (Candidate c : all) {
             if (!isKnown(found, c.s)) {

@@ -336,13 +336,20 @@ public final class Solution {
         return null;
     }
 
+    /**
+     * The node a new path starts from: the nearest disk, with a penalty for nodes that carry a large error
+     * (half a radius per decade above 1e-12), so that paths do not grow from nodes placed next to poles when a
+     * cleaner node is almost as near (after the Fornberg-Weideman rule of starting from the nearest node).
+     */
     private static Node nearest(Node[] snapshot, double tRe, double tIm) {
         Node best = snapshot[0];
-        double bestD = Double.POSITIVE_INFINITY;
+        double bestScore = Double.POSITIVE_INFINITY;
         for (Node n : snapshot) {
             double d = org.tertius.core.number.Cx.abs(tRe - n.tauRe(), tIm - n.tauIm()) - n.radius();
-            if (d < bestD) {
-                bestD = d;
+            double decades = Math.max(0, Math.log10(Math.max(n.accumulatedError(), 1e-300) / 1e-12));
+            double score = Math.max(d, 0) + 0.5 * n.radius() * decades;
+            if (score < bestScore) {
+                bestScore = score;
                 best = n;
             }
         }

@@ -11,7 +11,9 @@ import org.tertius.core.InvalidInputException;
  *   <li>tolerance: accepted local error per step, relative to 1 + |y| per component.</li>
  *   <li>padeTolerance: the relative threshold of the rank test of the robust Pade algorithm.</li>
  *   <li>maxSteps: the largest number of steps of one path before the target is declared unreachable.</li>
- *   <li>maxError: a value whose error estimate (relative to 1 + |w|) exceeds this is reported unreachable.</li>
+ *   <li>maxError: a path whose carried error (relative to 1 + |y| per component) exceeds this is abandoned and its
+ *       target reported unreachable; next to a pole the relative error of a node grows like 1/distance, so this
+ *       is a guard against garbage, not an accuracy target (default 1e-3).</li>
  * </ul>
  */
 public final class SolverSettings {
@@ -76,7 +78,7 @@ public final class SolverSettings {
         private double padeTolerance = 1e-14;
         private int maxSteps = 20000;
         private double initialStep = 0.25;
-        private double maxError = 1e-6;
+        private double maxError = 1e-3;
 
         public Builder order(int order) {
             if (order < 8 || order > 400 || order % 2 != 0) {
