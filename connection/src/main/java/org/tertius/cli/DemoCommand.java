@@ -79,6 +79,7 @@ public final class DemoCommand implements Callable<Integer> {
         List<Singularity> onLine;
         try (PrintWriter w = new PrintWriter(Files.newBufferedWriter(table, StandardCharsets.UTF_8))) {
             ValueCsv.header(w, s.equation().toString(), "the positive real axis, 400 points from 0.25 to 10");
+            RegionSolver.growTowards(s, line);
             for (SurfacePoint p : line) {
                 w.println(ValueCsv.row(s.evaluate(p)));
             }

@@ -112,6 +112,7 @@ public final class TableCommand implements Callable<Integer> {
                      PrintWriter console) {
         int unreached = 0;
         long skip = w.existingRows();
+        RegionSolver.growTowards(s, points.subList((int) Math.min(skip, points.size()), points.size()));
         for (int i = (int) skip; i < points.size(); i++) {
             SurfacePoint p = points.get(i);
             try {

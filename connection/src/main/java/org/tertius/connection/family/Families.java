@@ -30,6 +30,8 @@ public final class Families {
     public static final List<String> NAMES = List.of("decaying", "power", "analytic");
     /** Largest |z| tried for start data of the families at 0. */
     static final double START_RADIUS = 0.25;
+    /** Error of the start data of the families at 0, relative to 1 + |w| (about ten units of double rounding). */
+    static final double START_TOLERANCE = 1e-15;
 
     private Families() {
     }
@@ -83,7 +85,7 @@ public final class Families {
         Arith<Complex> ar = Arith.DOUBLE;
         List<Complex> p = List.of(equation.alpha(), equation.beta(), equation.gamma(), equation.delta());
         PowerSeriesAtZero<Complex> s = PowerSeriesAtZero.create(ar, p, sigma, b, 40);
-        LocalValue<Complex> v = s.startData(new Complex(START_RADIUS), Math.max(1e-15, settings.tolerance()));
+        LocalValue<Complex> v = s.startData(new Complex(START_RADIUS), START_TOLERANCE);
         return Painleve3Solution.builder(equation).start(v.z(), v.w(), v.dw()).settings(settings).build();
     }
 

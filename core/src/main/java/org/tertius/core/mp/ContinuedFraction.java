@@ -39,20 +39,21 @@ final class ContinuedFraction {
      * The fraction of the series with coefficients c[0..N] (c[0] != 0 is needed; otherwise the fraction is
      * empty). Rows whose leading coefficient has lost more than half the working bits to cancellation end it.
      *
-     * <p>Each row u_k is held in fixed point relative to its largest coefficient ({@link ScaledRow}): both
-     * products of an entry of the next row have the same scale, so their difference is formed exactly and
-     * rounded once; the row is then rescaled by whole limbs. Nothing is allocated per operation.
+     * <p>The rows are held as floating values with limb-granular exponents ({@link ScaledRow}); an entry of the
+     * next row is formed exactly from its two products and rounded once. Nothing is allocated per product.
      */
     static ContinuedFraction of(MpContext ctx, MpComplex[] c) {
         int n = c.length;
         List<MpComplex> es = new ArrayList<>();
         es.add(ctx.fromLong(1));
-        // one limb more than the working bits: a row rescaled by whole limbs keeps all of them
-        LimbFormat fmt = new LimbFormat(ctx.bits() + LimbFormat.BITS, 1);
+        // two limbs more than the working bits: an entry normalised to whole limbs keeps all of them
+        LimbFormat fmt = new LimbFormat(ctx.bits() + 2 * LimbFormat.BITS, 1);
         ScaledRow prev = ScaledRow.unit(fmt, n);
         ScaledRow cur = ScaledRow.of(fmt, c);
         ScaledRow next = new ScaledRow(fmt, n);
-        LimbAccumulator acc = new LimbAccumulator(fmt);
+        // products placed up to L + 2 limbs apart; columns from 3 below the rounding of the larger product
+        int l = fmt.limbs();
+        LimbAccumulator acc = new LimbAccumulator(fmt, l + 2, (l + 2) + l - 5);
         double lossLimit = 0.5 * ctx.bits();
         long count = 0;
         while (cur.length() > 0 && !cur.isZero(0)) {

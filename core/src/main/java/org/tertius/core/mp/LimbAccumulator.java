@@ -4,30 +4,45 @@ package org.tertius.core.mp;
  * An exact accumulator of complex fixed-point products in columns of longs: with three multiplications per
  * complex product (Gauss), t1 = sum ar br, t2 = sum ai bi, t3 = sum (ar + ai)(br + bi), so that re = t1 - t2 and
  * im = t3 - t1 - t2. A sum of products is rounded once, when it is stored; nothing is allocated per product.
- * Columns below {@link LimbFormat#lowColumn()} are not formed (short products). Mutable scratch space of one
- * computation.
+ * Columns below a low column are not formed (short products). A product may be placed some whole limbs lower
+ * (a smaller binary exponent), for floating values with limb-granular exponents ({@link ScaledRow}). Mutable
+ * scratch space of one computation.
  */
 final class LimbAccumulator {
     private final LimbFormat format;
     private final int limbs;
+    /** column of weight 2^-2F (columns below it serve products placed lower) */
+    private final int base;
     private final int low;
     private final int flushEvery;
     private final long[] t1;
     private final long[] t2;
     private final long[] t3;
     private final long[] column;
+    private final long[] column2;
     private int load;
 
+    /** An accumulator of fixed-point products rounded at 2^-F, forming the columns from the format's low one. */
     LimbAccumulator(LimbFormat format) {
+        this(format, 0, format.lowColumn());
+    }
+
+    /**
+     * @param base columns below the one of weight 2^-2F, for products placed up to that many limbs lower
+     * @param low the lowest column formed
+     */
+    LimbAccumulator(LimbFormat format, int base, int low) {
         this.format = format;
         this.limbs = format.limbs();
-        this.low = format.lowColumn();
+        this.base = base;
+        this.low = low;
         this.flushEvery = format.flushEvery();
-        int n = 2 * limbs + 1;
+        int n = base + 2 * limbs + 1;
         t1 = new long[n];
         t2 = new long[n];
         t3 = new long[n];
         column = new long[n];
+        column2 = new long[n];
     }
 
     void clear() {
@@ -46,6 +61,11 @@ final class LimbAccumulator {
 
     /** Adds a[i] b[j]. */
     void multiplyAdd(LimbVector a, int i, LimbVector b, int j) {
+        multiplyAdd(a, i, b, j, 0);
+    }
+
+    /** Adds a[i] b[j] 2^(BITS shift), shift <= 0 and -shift <= base. */
+    void multiplyAdd(LimbVector a, int i, LimbVector b, int j, int shift) {
         final int n = limbs;
         final long[] ar = a.re;
         final long[] ai = a.im;
@@ -58,6 +78,7 @@ final class LimbAccumulator {
         final long[] c3 = t3;
         final int ao = i * n;
         final int bo = j * n;
+        final int off = base + shift;
         for (int x = 0; x < n; x++) {
             long pr = ar[ao + x];
             long pi = ai[ao + x];
@@ -65,9 +86,9 @@ final class LimbAccumulator {
             if ((pr | pi | ps) == 0) {
                 continue;
             }
-            int y0 = Math.max(0, low - x);
-            for (int y = y0; y < n; y++) {
-                int c = x + y;
+            int y0 = Math.max(0, low - off - x);
+            int c = off + x + y0;
+            for (int y = y0; y < n; y++, c++) {
                 int q = bo + y;
                 c1[c] += pr * br[q];
                 c2[c] += pi * bi[q];
@@ -75,9 +96,9 @@ final class LimbAccumulator {
             }
         }
         if (++load >= flushEvery) {
-            format.carry(t1);
-            format.carry(t2);
-            format.carry(t3);
+            format.carry(t1, low);
+            format.carry(t2, low);
+            format.carry(t3, low);
             load = 0;
         }
     }
@@ -85,7 +106,7 @@ final class LimbAccumulator {
     /** Adds the value a[i] itself (scale 2^-F). */
     void add(LimbVector a, int i) {
         int o = i * limbs;
-        int f = format.fractionLimbs();
+        int f = base + format.fractionLimbs();
         for (int x = 0; x < limbs; x++) {
             // re goes to t1; im = t3 - t1 - t2 then needs re + im in t3
             t1[f + x] += a.re[o + x];
@@ -99,15 +120,41 @@ final class LimbAccumulator {
      * @throws RuntimeException {@link LimbFormat#overflow()} when it does not fit
      */
     void store(LimbVector dst, int i) {
-        long[] col = column;
-        for (int c = low; c < col.length; c++) {
-            col[c] = t1[c] - t2[c];
-        }
-        format.round(col, dst.re, i * limbs);
-        for (int c = low; c < col.length; c++) {
-            col[c] = t3[c] - t1[c] - t2[c];
-        }
-        format.round(col, dst.im, i * limbs);
+        compose();
+        int from = base + format.fractionLimbs();
+        format.round(column, from, low, dst.re, i * limbs);
+        format.round(column2, from, low, dst.im, i * limbs);
         dst.updateSum(i);
+    }
+
+    /**
+     * Rounds the sum to L - 1 significant limbs (a floating value) and stores it as value i of dst: the stored
+     * value times 2^(BITS e) is the sum, where e is returned; Integer.MIN_VALUE when the sum vanishes (dst then
+     * holds 0).
+     */
+    int storeNormalized(LimbVector dst, int i) {
+        compose();
+        format.carry(column, low);
+        format.carry(column2, low);
+        int t = Math.max(format.topColumn(column, low), format.topColumn(column2, low));
+        if (t < 0) {
+            java.util.Arrays.fill(dst.re, i * limbs, (i + 1) * limbs, 0);
+            java.util.Arrays.fill(dst.im, i * limbs, (i + 1) * limbs, 0);
+            dst.updateSum(i);
+            return Integer.MIN_VALUE;
+        }
+        int from = t - (limbs - 2);
+        format.round(column, from, low, dst.re, i * limbs);
+        format.round(column2, from, low, dst.im, i * limbs);
+        dst.updateSum(i);
+        return from - base - format.fractionLimbs();
+    }
+
+    /** re = t1 - t2 into column, im = t3 - t1 - t2 into column2. */
+    private void compose() {
+        for (int c = low; c < column.length; c++) {
+            column[c] = t1[c] - t2[c];
+            column2[c] = t3[c] - t1[c] - t2[c];
+        }
     }
 }

@@ -164,28 +164,27 @@ final class LimbFormat {
     }
 
     /**
-     * Rounds the exact column sums col[lowColumn .. 2L] (scale 2^-2F) to nearest at scale 2^-F into
-     * out[off .. off+L-1].
+     * Rounds exact column sums to nearest at column {@code from} (the column of limb 0 of the result) into
+     * out[off .. off+L-1]; the columns below {@code low} count as zero.
      *
      * @throws RuntimeException {@link #overflow()} when the result does not fit
      */
-    void round(long[] col, long[] out, int off) {
+    void round(long[] col, int from, int low, long[] out, int off) {
         long carry = 0;
-        int f = fractionLimbs;
-        for (int c = lowColumn; c < f; c++) {
+        for (int c = low; c < from; c++) {
             long v = col[c] + carry;
-            if (c == f - 1) {
+            if (c == from - 1) {
                 v += 1L << (BITS - 1);
             }
             carry = v >> BITS;
         }
-        int topColumn = f + limbs - 1;
-        for (int c = f; c < topColumn; c++) {
-            long v = col[c] + carry;
-            out[off + c - f] = v & MASK;
+        int topColumn = from + limbs - 1;
+        for (int c = from; c < topColumn; c++) {
+            long v = (c >= low ? col[c] : 0) + carry;
+            out[off + c - from] = v & MASK;
             carry = v >> BITS;
         }
-        long v = col[topColumn] + carry;
+        long v = (topColumn >= low ? col[topColumn] : 0) + carry;
         long t = v & MASK;
         carry = v >> BITS;
         boolean zeros = true;
@@ -208,14 +207,33 @@ final class LimbFormat {
         out[off + limbs - 1] = t;
     }
 
-    /** Normalises the columns lowColumn .. 2L-1 to [0, 2^BITS), carrying into column 2L. */
-    void carry(long[] col) {
+    /** Normalises the columns low .. last-1 to [0, 2^BITS), carrying into the last column. */
+    void carry(long[] col, int low) {
         int last = col.length - 1;
-        for (int c = lowColumn; c < last; c++) {
+        for (int c = low; c < last; c++) {
             long v = col[c];
             col[c] = v & MASK;
             col[c + 1] += v >> BITS;
         }
+    }
+
+    /**
+     * The highest column of carried columns that is not a sign extension (-1 when they all vanish); a negative
+     * value whose columns are all ones down to low gives low.
+     */
+    int topColumn(long[] col, int low) {
+        int last = col.length - 1;
+        long top = col[last];
+        if (top != 0 && top != -1) {
+            return last;
+        }
+        long sign = top == 0 ? 0 : MASK;
+        for (int c = last - 1; c >= low; c--) {
+            if (col[c] != sign) {
+                return c;
+            }
+        }
+        return top == 0 ? -1 : low;
     }
 
     private static final class Overflow extends RuntimeException {

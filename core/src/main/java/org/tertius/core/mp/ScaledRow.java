@@ -3,21 +3,25 @@ package org.tertius.core.mp;
 import java.math.BigInteger;
 
 /**
- * One row of Viskovatov's algorithm (see {@link ContinuedFraction}): complex numbers X_j 2^-F 2^e with X_j in a
- * {@link LimbFormat} of one integer limb and a common binary exponent e chosen so that the largest entry lies in
- * [2^-BITS, 1). Mutable scratch space of one continued-fraction construction.
+ * One row of Viskovatov's algorithm (see {@link ContinuedFraction}): complex floating values X_j 2^-F 2^(BITS e_j),
+ * with X_j in a {@link LimbFormat} of one integer limb and an exponent per entry in whole limbs, normalised so
+ * that the leading limb of the fraction is non-zero (at least (L - 2) BITS significant bits). Mutable scratch
+ * space of one continued-fraction construction.
  */
 final class ScaledRow {
     private final LimbFormat format;
     private final LimbVector values;
+    private final int[] exponent;
+    private final boolean[] zero;
     /** the slot after the entries, holding the negated leading entry during {@link #combine} */
     private final int scratch;
     private int length;
-    private int exponent;
 
     ScaledRow(LimbFormat format, int capacity) {
         this.format = format;
         this.values = new LimbVector(format, capacity + 1);
+        this.exponent = new int[capacity + 1];
+        this.zero = new boolean[capacity + 1];
         this.scratch = capacity;
     }
 
@@ -25,25 +29,32 @@ final class ScaledRow {
     static ScaledRow unit(LimbFormat format, int length) {
         ScaledRow r = new ScaledRow(format, length);
         r.length = length;
-        r.values.set(0, BigInteger.ONE.shiftLeft(format.fractionBits() - 1), BigInteger.ZERO);
-        r.exponent = 1;
+        java.util.Arrays.fill(r.zero, true);
+        r.set(0, new MpComplex(BigInteger.ONE, BigInteger.ZERO, 0));
         return r;
     }
 
-    /** The row of the given numbers (exactly as far as the format allows). */
+    /** The row of the given numbers (rounded to the format). */
     static ScaledRow of(LimbFormat format, MpComplex[] c) {
         ScaledRow r = new ScaledRow(format, c.length);
         r.length = c.length;
-        double top = Double.NEGATIVE_INFINITY;
-        for (MpComplex x : c) {
-            top = Math.max(top, x.log2Abs());
-        }
-        r.exponent = top == Double.NEGATIVE_INFINITY ? 0 : (int) Math.floor(top) + 1;
-        int f = format.fractionBits() - r.exponent;
         for (int j = 0; j < c.length; j++) {
-            r.values.set(j, MpContext.fixedRe(c[j], f), MpContext.fixedIm(c[j], f));
+            r.set(j, c[j]);
         }
         return r;
+    }
+
+    private void set(int j, MpComplex x) {
+        zero[j] = x.isZero();
+        if (zero[j]) {
+            values.set(j, BigInteger.ZERO, BigInteger.ZERO);
+            return;
+        }
+        // |x| / 2^(BITS e) in [2^-BITS, 1)
+        int e = (int) Math.floor(x.log2Abs() / LimbFormat.BITS) + 1;
+        int f = format.fractionBits() - LimbFormat.BITS * e;
+        values.set(j, MpContext.fixedRe(x, f), MpContext.fixedIm(x, f));
+        exponent[j] = e;
     }
 
     int length() {
@@ -51,64 +62,57 @@ final class ScaledRow {
     }
 
     boolean isZero(int j) {
-        int o = j * values.limbs;
-        for (int x = o; x < o + values.limbs; x++) {
-            if (values.re[x] != 0 || values.im[x] != 0) {
-                return false;
-            }
-        }
-        return true;
+        return zero[j];
     }
 
     /** Entry j rounded to the precision of ctx. */
     MpComplex value(MpContext ctx, int j) {
-        return ctx.round(new MpComplex(values.re(j), values.im(j), exponent - format.fractionBits()));
+        if (zero[j]) {
+            return MpComplex.ZERO;
+        }
+        return ctx.round(new MpComplex(values.re(j), values.im(j),
+                LimbFormat.BITS * exponent[j] - format.fractionBits()));
     }
 
     /** log2 of the largest modulus of the entries (negative infinity when all vanish). */
     double log2Max() {
-        double m = maxModulus();
-        return m == 0 ? Double.NEGATIVE_INFINITY : Math.log(m) / Math.log(2) + exponent;
-    }
-
-    private double maxModulus() {
-        double m = 0;
+        double m = Double.NEGATIVE_INFINITY;
         for (int j = 0; j < length; j++) {
-            int o = j * values.limbs;
-            m = Math.max(m, Math.hypot(format.approximate(values.re, o), format.approximate(values.im, o)));
+            if (!zero[j]) {
+                int o = j * values.limbs;
+                double a = Math.hypot(format.approximate(values.re, o), format.approximate(values.im, o));
+                m = Math.max(m, Math.log(a) / Math.log(2) + LimbFormat.BITS * exponent[j]);
+            }
         }
         return m;
     }
 
     /**
-     * Sets this row to the next one after (cur, prev): entry j = (u0 prev_{j+1} - p0 cur_{j+1}) for j < len, with
-     * u0 = cur_0 and p0 = prev_0, each rounded once, then rescaled.
+     * Sets this row to the next one after (cur, prev): entry j = u0 prev_{j+1} - p0 cur_{j+1} for j < len, with
+     * u0 = cur_0 and p0 = prev_0, formed exactly from the two products (placed by their exponents) and rounded
+     * once. A product more than L + 2 limbs below the other is below the rounding and is left out.
      */
     void combine(ScaledRow cur, ScaledRow prev, LimbAccumulator acc, int len) {
         LimbVector pv = prev.values;
         pv.set(prev.scratch, pv.re(0).negate(), pv.im(0).negate());
+        int reach = values.limbs + 2;
         for (int j = 0; j < len; j++) {
+            boolean hasA = !prev.zero[j + 1] && !cur.zero[0];
+            boolean hasB = !cur.zero[j + 1] && !prev.zero[0];
+            int ea = cur.exponent[0] + prev.exponent[j + 1];
+            int eb = prev.exponent[0] + cur.exponent[j + 1];
+            int e = hasA && hasB ? Math.max(ea, eb) : hasA ? ea : eb;
             acc.clear();
-            acc.multiplyAdd(cur.values, 0, pv, j + 1);
-            acc.multiplyAdd(pv, prev.scratch, cur.values, j + 1);
-            acc.store(values, j);
+            if (hasA && ea - e >= -reach) {
+                acc.multiplyAdd(cur.values, 0, pv, j + 1, ea - e);
+            }
+            if (hasB && eb - e >= -reach) {
+                acc.multiplyAdd(pv, prev.scratch, cur.values, j + 1, eb - e);
+            }
+            int shift = acc.storeNormalized(values, j);
+            zero[j] = shift == Integer.MIN_VALUE;
+            exponent[j] = zero[j] ? 0 : e + shift;
         }
         length = len;
-        exponent = cur.exponent + prev.exponent;
-        double m = maxModulus();
-        if (m == 0) {
-            return;
-        }
-        // whole limbs that bring the largest entry into [2^-BITS, 1)
-        int shift = (int) Math.floor(-Math.log(m) / Math.log(2) / LimbFormat.BITS);
-        if (shift != 0) {
-            for (int j = 0; j < len; j++) {
-                int o = j * values.limbs;
-                format.shiftLimbs(values.re, o, shift);
-                format.shiftLimbs(values.im, o, shift);
-                values.updateSum(j);
-            }
-            exponent -= LimbFormat.BITS * shift;
-        }
     }
 }

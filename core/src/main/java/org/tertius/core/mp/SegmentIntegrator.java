@@ -25,7 +25,7 @@ final class SegmentIntegrator {
     private static final int PADE_EXTRA_DIGITS = 10;
     private static final int MAX_STEPS = 100000;
     /** Later waypoints a Pade step tries to reach directly, and their largest distance in units of the scale. */
-    private static final int SHORTCUT_CANDIDATES = 0;
+    private static final int SHORTCUT_CANDIDATES = 3;
     private static final double SHORTCUT_REACH = 1.2;
 
     private final FixedPointKernel kernel;

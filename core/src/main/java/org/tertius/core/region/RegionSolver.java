@@ -152,6 +152,35 @@ public final class RegionSolver {
         return new GridResult(grid, wRe, wIm, dwRe, dwIm, err, stats);
     }
 
+    /**
+     * Grows the tree of a solution towards a list of points (for example a line) the way the first pass of
+     * {@link #solve} does: a subset spaced about {@value #COARSE_SPACING} apart, taken in order of distance from
+     * the start, so that paths radiate from the start point instead of chaining along the list (a chain that
+     * hugs a line of poles and zeros gathers error at every one of them).
+     */
+    public static void growTowards(Painleve3Solution solution, List<SurfacePoint> points) {
+        EngineView view = EngineView.of(solution);
+        SurfacePoint start = view.startPoint();
+        List<SurfacePoint> coarse = new ArrayList<>();
+        SurfacePoint last = null;
+        for (SurfacePoint p : points) {
+            if (last == null || Math.hypot(p.re() - last.re(), p.im() - last.im()) >= COARSE_SPACING
+                    || p.sheet() != last.sheet()) {
+                coarse.add(p);
+                last = p;
+            }
+        }
+        coarse.sort(Comparator.comparingDouble((SurfacePoint p) -> Math.hypot(p.re() - start.re(), p.im() - start.im())
+                + Math.abs(p.sheet() - start.sheet()) * 10.0));
+        for (SurfacePoint p : coarse) {
+            try {
+                view.engine().extendTo(p.logRe(), p.logIm());
+            } catch (TertiusException e) {
+                // the point itself will report it when evaluated
+            }
+        }
+    }
+
     private static void store(Painleve3Value v, int k, double[] wRe, double[] wIm, double[] dwRe, double[] dwIm,
                               double[] err) {
         wRe[k] = v.w().getReal();

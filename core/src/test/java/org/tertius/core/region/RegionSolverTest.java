@@ -1,0 +1,132 @@
+package org.tertius.core.region;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+import java.util.Random;
+import java.util.concurrent.CancellationException;
+import org.hipparchus.complex.Complex;
+import org.junit.jupiter.api.Test;
+import org.tertius.core.InvalidInputException;
+import org.tertius.core.number.SurfacePoint;
+import org.tertius.core.piii.Painleve3;
+import org.tertius.core.piii.Painleve3Solution;
+import org.tertius.core.piii.Painleve3Value;
+
+/** Grids against direct evaluations, determinism, cancellation and bad regions. */
+class RegionSolverTest {
+    private static final Painleve3 EQ = Painleve3.of(1, -0.5, 1, -1);
+
+    private static Painleve3Solution demo() {
+        return Painleve3Solution.builder(EQ).start(Complex.ONE, new Complex(0.5), new Complex(1.0 / 3)).build();
+    }
+
+    @Test
+    void gridValuesAgreeWithDirectEvaluationsWithinTheirEstimates() {
+        Grid g = Grid.of(-4, 4, 81, -4, 4, 81, 0);
+        GridResult r = RegionSolver.solve(demo(), g, RegionSettings.defaults());
+        assertEquals(0, r.statistics().failed());
+        Random rnd = new Random(7);
+        for (int k = 0; k < 25; k++) {
+            int i = rnd.nextInt(g.nx());
+            int j = rnd.nextInt(g.ny());
+            if (!r.computed(i, j)) {
+                continue;
+            }
+            Painleve3Value direct = demo().evaluate(g.point(i, j));
+            double d = r.w(i, j).subtract(direct.w()).norm();
+            assertTrue(d <= r.error(i, j) + direct.errW(), "grid and direct differ by " + d + " at " + g.point(i, j)
+                    + " (estimates " + r.error(i, j) + ", " + direct.errW() + ")");
+        }
+    }
+
+    @Test
+    void valuesDoNotDependOnTheNumberOfThreads() {
+        Grid g = Grid.of(-3, 3, 61, -3, 3, 61, 0);
+        GridResult one = RegionSolver.solve(demo(), g, RegionSettings.builder().threads(1).build());
+        GridResult two = RegionSolver.solve(demo(), g, RegionSettings.builder().threads(3).build());
+        double[] a = new double[g.size()];
+        double[] b = new double[g.size()];
+        for (int j = 0; j < g.ny(); j++) {
+            for (int i = 0; i < g.nx(); i++) {
+                a[j * g.nx() + i] = one.w(i, j).getReal() + one.error(i, j);
+                b[j * g.nx() + i] = two.w(i, j).getReal() + two.error(i, j);
+            }
+        }
+        assertArrayEquals(a, b, 0.0);
+    }
+
+    @Test
+    void cancellationStopsTheComputation() {
+        Grid g = Grid.of(-10, 10, 201, -10, 10, 201, 0);
+        assertThrows(CancellationException.class,
+                () -> RegionSolver.solve(demo(), g, RegionSettings.builder().cancelled(() -> true).build()));
+    }
+
+    @Test
+    void badRegionsAreRefusedWithTheReason() {
+        InvalidInputException e = assertThrows(InvalidInputException.class, () -> Grid.parse("--grid", "1:-1:10,0:1:10", 0));
+        assertTrue(e.getMessage().contains("inverted"), e.getMessage());
+        e = assertThrows(InvalidInputException.class, () -> Grid.parse("--grid", "0:1:0,0:1:10", 0));
+        assertTrue(e.getMessage().contains("at least 1"), e.getMessage());
+        assertThrows(InvalidInputException.class, () -> Grid.parse("--grid", "0:1:10", 0));
+        e = assertThrows(InvalidInputException.class, () -> Grid.parse("--grid", "0:1:100000,0:1:100000", 0));
+        assertTrue(e.getMessage().contains("allowed"), e.getMessage());
+    }
+
+    @Test
+    void polesAndZerosOfTheRationalSolutionAreFoundWithTheirLeadingCoefficients() {
+        // w = (z - 1/2)/(z + 1/2) solves (2, 2, 1, -1) (see ExactSolutionsTest): pole -1/2 with residue -1, zero
+        // 1/2 with w' = 1
+        Complex z0 = new Complex(2, 1);
+        Painleve3Solution s = Painleve3Solution.builder(Painleve3.of(2, 2, 1, -1))
+                .start(z0, z0.subtract(0.5).divide(z0.add(0.5)), z0.add(0.5).pow(-2)).build();
+        Grid g = Grid.of(-2, 2, 41, -2, 2, 41, 0);
+        RegionSolver.solve(s, g, RegionSettings.defaults());
+        List<Singularity> found = PoleFinder.find(s, g);
+        assertEquals(2, found.size(), found.toString());
+        for (Singularity x : found) {
+            Complex expect = x.kind() == Singularity.Kind.POLE ? new Complex(-0.5) : new Complex(0.5);
+            Complex lead = x.kind() == Singularity.Kind.POLE ? new Complex(-1) : Complex.ONE;
+            double d = x.point().z().subtract(expect).norm();
+            assertTrue(d <= x.error() && x.error() < 1e-10, x + " is " + d + " from " + expect);
+            assertTrue(x.lead().subtract(lead).norm() < 1e-9, x.toString());
+        }
+    }
+
+    @Test
+    void polesOfABesselTypeSolutionAreZerosOfItsBesselDenominator() {
+        // w = -u'/(a u) with u built from 0F1 (DLMF 10.16.9, §32.10): poles of w are zeros of u with residue -1/a.
+        // Independent check: Newton's method on 1/w evaluated with Apfloat from each reported pole must move it
+        // by less than its error estimate.
+        org.tertius.core.piii.RiccatiReferenceAccess ref = new org.tertius.core.piii.RiccatiReferenceAccess(
+                new Complex(1), new Complex(0.3), new Complex(1), new Complex(1), new Complex(0.7, 0.2));
+        SurfacePoint p0 = SurfacePoint.of(1, 0.2);
+        Complex[] s0 = ref.value(p0);
+        Painleve3Solution s = Painleve3Solution.builder(ref.equation()).start(p0.z(), s0[0], s0[1]).build();
+        Grid g = Grid.of(-3, 3, 61, -3, 3, 61, 0);
+        RegionSolver.solve(s, g, RegionSettings.defaults());
+        int poles = 0;
+        for (Singularity x : PoleFinder.find(s, g)) {
+            if (x.kind() != Singularity.Kind.POLE) {
+                continue;
+            }
+            poles++;
+            Complex z = x.point().z();
+            Complex[] v = ref.value(x.point());
+            // Newton on 1/w: z <- z + w/w', started a little way off the reported pole, iterated to convergence
+            Complex root = z.add(new Complex(1e-4, 1e-4));
+            for (int it = 0; it < 6; it++) {
+                Complex[] vo = ref.value(SurfacePoint.of(root, 0));
+                root = root.add(vo[0].divide(vo[1]));
+            }
+            double moved = root.subtract(z).norm();
+            assertTrue(moved <= x.error() + 1e-9, "pole " + x + ": Newton moves it by " + moved);
+            assertTrue(x.lead().subtract(new Complex(-1)).norm() < 1e-8, "residue " + x.lead() + " (w value " + v[0] + ")");
+        }
+        assertTrue(poles >= 2, "expected poles in the region, found " + poles);
+    }
+}
