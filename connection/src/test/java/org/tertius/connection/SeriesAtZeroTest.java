@@ -32,7 +32,7 @@ class SeriesAtZeroTest {
 
     /**
      * The series at the largest z = 0.2 / 2^k where its own error estimate is below 1e-14, against the engine
-     * started from the series at a smaller z (Families.create asks for 1e-15 there). Budget 1e-12 relative to
+     * started from the series at a smaller z (Families.create asks for 4e-15 there). Budget 1e-12 relative to
      * 1 + |w|: engine tolerance 1e-13 per step over a few dozen steps in log z.
      */
     @Test

@@ -30,8 +30,8 @@ public final class Families {
     public static final List<String> NAMES = List.of("decaying", "power", "analytic");
     /** Largest |z| tried for start data of the families at 0. */
     static final double START_RADIUS = 0.25;
-    /** Error of the start data of the families at 0, relative to 1 + |w| (about ten units of double rounding). */
-    static final double START_TOLERANCE = 1e-15;
+    /** Error of the start data of the families at 0, relative to 1 + |w| (the floor of the conservative rounding estimate of w'). */
+    static final double START_TOLERANCE = 4e-15;
 
     private Families() {
     }
