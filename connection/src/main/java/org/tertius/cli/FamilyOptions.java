@@ -46,6 +46,20 @@ public final class FamilyOptions {
         }
     }
 
+    /** The family and its parameters in one line (for signatures). */
+    String describe() {
+        return family + parameters();
+    }
+
+    /** Fills unset options from a problem file. */
+    void defaults(ProblemFile f) {
+        family = f.fill(family, "family");
+        lambda = f.fill(lambda, "lambda");
+        sigma = f.fill(sigma, "sigma");
+        amplitude = f.fill(amplitude, "b");
+        valueAtZero = f.fill(valueAtZero, "w00");
+    }
+
     public Painleve3Solution solution(Painleve3 equation, SolverSettings settings) {
         return Families.create(equation, family, parameters(), settings);
     }

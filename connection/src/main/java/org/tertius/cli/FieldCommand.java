@@ -46,6 +46,8 @@ public final class FieldCommand implements Callable<Integer> {
     String size = "900x720";
     @Option(names = "--no-marks", description = "do not locate and mark poles and zeros")
     boolean noMarks;
+    @Mixin
+    MemberOptions member = new MemberOptions();
 
     @Override
     public Integer call() {
@@ -58,8 +60,16 @@ public final class FieldCommand implements Callable<Integer> {
         int[] wh = parseSize(size);
         OutputFile.checkWritable("--out", out);
         int k = solution.sheet(sheet);
-        Painleve3Solution s = solution.solution();
         PrintWriter err = spec.commandLine().getErr();
+        member.defaults(f);
+        if (member.given()) {
+            if (lineSpec == null) {
+                throw new InvalidInputException("--member", "pictures of hierarchy members are line plots of q: use"
+                        + " --line A:B:N");
+            }
+            return memberPlot(Targets.line("--line", lineSpec, k), wh, err);
+        }
+        Painleve3Solution s = solution.solution();
         String title = s.equation().toString();
         if (lineSpec != null) {
             return linePlot(s, Targets.line("--line", lineSpec, k), title, wh, err);
@@ -113,6 +123,34 @@ public final class FieldCommand implements Callable<Integer> {
         BufferedImage img = LinePlot.draw(title, xLabel, x, re, im, poleX, wh[0], wh[1]);
         OutputFile.writeWhole("--out", out, p -> ImageIO.write(img, "png", p.toFile()));
         err.println("tertius: wrote " + out + " with " + poles.size() + " pole(s) marked");
+        return failed == 0 ? 0 : Main.EXIT_UNREACHED;
+    }
+
+    private int memberPlot(List<SurfacePoint> points, int[] wh, PrintWriter err) {
+        org.tertius.hierarchy.MemberSolution ms = member.solution(solution.solver.settings());
+        double[] x = new double[points.size()];
+        double[] re = new double[points.size()];
+        double[] im = new double[points.size()];
+        SurfacePoint a = points.get(0);
+        int failed = 0;
+        for (int i = 0; i < points.size(); i++) {
+            SurfacePoint p = points.get(i);
+            x[i] = a.im() == 0 && points.get(points.size() - 1).im() == 0 ? p.re()
+                    : Math.hypot(p.re() - a.re(), p.im() - a.im());
+            try {
+                org.tertius.hierarchy.MemberValue v = ms.evaluate(p);
+                re[i] = v.q().getReal();
+                im[i] = v.q().getImaginary();
+            } catch (TertiusException e) {
+                re[i] = Double.NaN;
+                im[i] = Double.NaN;
+                failed++;
+            }
+        }
+        BufferedImage img = LinePlot.draw("member " + member.member + ": q(x), " + ms.parameters(), "x", x, re, im,
+                new double[0], wh[0], wh[1]);
+        OutputFile.writeWhole("--out", out, p -> ImageIO.write(img, "png", p.toFile()));
+        err.println("tertius: wrote " + out);
         return failed == 0 ? 0 : Main.EXIT_UNREACHED;
     }
 

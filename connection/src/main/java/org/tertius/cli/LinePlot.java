@@ -27,8 +27,8 @@ final class LinePlot {
         double[] sorted = mags.clone();
         Arrays.sort(sorted);
         double clip = Math.max(1, 4 * sorted[(int) (0.75 * (sorted.length - 1))]);
-        XYSeries sRe = new XYSeries("Re w", false);
-        XYSeries sIm = new XYSeries("Im w", false);
+        XYSeries sRe = new XYSeries(title.startsWith("member") ? "Re q" : "Re w", false);
+        XYSeries sIm = new XYSeries(title.startsWith("member") ? "Im q" : "Im w", false);
         for (int i = 0; i < x.length; i++) {
             sRe.add(x[i], Math.abs(re[i]) <= clip ? re[i] : Double.NaN);
             sIm.add(x[i], Math.abs(im[i]) <= clip ? im[i] : Double.NaN);

@@ -15,7 +15,7 @@ import picocli.CommandLine.Command;
         description = "Painleve III transcendents on their Riemann surface: values, tables, pole fields,"
                 + " connection problems and solution scans, with error estimates.",
         subcommands = {EvalCommand.class, TableCommand.class, FieldCommand.class, PolesCommand.class,
-            DescribeCommand.class, DemoCommand.class})
+            DescribeCommand.class, ConnectCommand.class, ScanCommand.class, DemoCommand.class})
 public final class Main implements Runnable {
     public static final int EXIT_BAD_INPUT = 2;
     public static final int EXIT_UNREACHED = 3;

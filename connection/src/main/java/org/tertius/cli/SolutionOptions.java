@@ -18,6 +18,8 @@ public final class SolutionOptions {
     StartOptions start = new StartOptions();
     @Mixin
     SolverOptions solver = new SolverOptions();
+    @Mixin
+    FamilyOptions family = new FamilyOptions();
 
     private ProblemFile file;
 
@@ -28,6 +30,7 @@ public final class SolutionOptions {
             equation.defaults(file);
             start.defaults(file);
             solver.defaults(file);
+            family.defaults(file);
         }
         return file;
     }
@@ -40,6 +43,13 @@ public final class SolutionOptions {
     Painleve3Solution solution() {
         file();
         Painleve3 eq = equation.equation();
+        if (family.given()) {
+            if (start.given()) {
+                throw new InvalidInputException("--family", "give either --family with its parameters or start data"
+                        + " --z0 --w0 --dw0, not both");
+            }
+            return family.solution(eq, solver.settings());
+        }
         if (!start.given()) {
             throw new InvalidInputException("--z0", "start data are required: give --z0, --w0 and --dw0"
                     + " (or a --problem file with z0, w0, dw0)");
@@ -52,7 +62,8 @@ public final class SolutionOptions {
     String describe() {
         file();
         String[] eq = equation.texts();
-        return "alpha=" + eq[0] + " beta=" + eq[1] + " gamma=" + eq[2] + " delta=" + eq[3] + " z0=" + start.z0
+        return "alpha=" + eq[0] + " beta=" + eq[1] + " gamma=" + eq[2] + " delta=" + eq[3]
+                + (family.given() ? " family=" + family.describe() : "") + " z0=" + start.z0
                 + " w0=" + start.w0 + " dw0=" + start.dw0 + (start.d3w0 == null ? "" : " d3w0=" + start.d3w0)
                 + " tol=" + solver.settings().tolerance() + " order=" + solver.settings().order();
     }

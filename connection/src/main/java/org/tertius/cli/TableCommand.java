@@ -45,6 +45,8 @@ public final class TableCommand implements Callable<Integer> {
     Path out;
     @Option(names = "--resume", description = "continue an interrupted run in --out FILE")
     boolean resume;
+    @Mixin
+    MemberOptions member = new MemberOptions();
     @Option(names = "--digits", paramLabel = "D", description = "line only: D significant digits in arbitrary"
             + " precision (exact start data and parameters)")
     Integer digits;
@@ -59,6 +61,13 @@ public final class TableCommand implements Callable<Integer> {
                     + " RE0:RE1:NX,IM0:IM1:NY");
         }
         int k = solution.sheet(sheet);
+        member.defaults(f);
+        if (member.given()) {
+            if (lineSpec == null) {
+                throw new InvalidInputException("--member", "hierarchy members are tabulated on lines (--line A:B:N)");
+            }
+            return memberLine(Targets.line("--line", lineSpec, k), lineSpec, k);
+        }
         if (digits == null && f.has("digits")) {
             digits = f.intValue("digits");
         }
@@ -90,6 +99,32 @@ public final class TableCommand implements Callable<Integer> {
             console.println("tertius: wrote " + out);
         }
         return status;
+    }
+
+    private int memberLine(List<SurfacePoint> points, String lineSpec, int k) {
+        org.tertius.hierarchy.MemberSolution ms = member.solution(solution.solver.settings());
+        String signature = "tertius table member=" + member.member + " times=" + member.times + " s=" + member.s
+                + " m=" + member.m + " x0=" + member.x0 + " state=" + member.state + " origin=" + member.origin
+                + " line=" + lineSpec + " sheet=" + k;
+        int unreached = 0;
+        try (Progress progress = new Progress("table");
+             TableWriter w = TableWriter.open(spec.commandLine().getOut(), out, resume, signature,
+                     List.of("member " + member.member + " of the Painleve III hierarchy, " + ms.parameters()),
+                     MemberOptions.HEADER)) {
+            for (int i = (int) w.existingRows(); i < points.size(); i++) {
+                try {
+                    w.row(MemberOptions.row(ms.evaluate(points.get(i))));
+                } catch (TertiusException e) {
+                    unreached++;
+                    w.row(MemberOptions.unreachedRow(points.get(i)));
+                    spec.commandLine().getErr().println("tertius: point " + points.get(i) + " not reached: "
+                            + e.getMessage());
+                }
+                w.flush();
+                progress.update(i + 1, points.size());
+            }
+        }
+        return unreached == 0 ? 0 : Main.EXIT_UNREACHED;
     }
 
     private int highPrecisionLine(List<SurfacePoint> points, String lineSpec, int k) {

@@ -79,8 +79,33 @@ public final class HighPrecisionBench {
         }
     }
 
-    /** Time of one fixed-point complex product (three BigInteger products and their accumulation). */
+    /** Time of one fixed-point complex product accumulated in limb columns (the kernel's unit of work). */
     static double complexProductSeconds(int bits) {
+        LimbFormat fmt = new LimbFormat(bits, 1);
+        int n = 32;
+        LimbVector v = new LimbVector(fmt, n + 1);
+        java.util.Random r = new java.util.Random(1);
+        for (int i = 0; i < n; i++) {
+            v.set(i, new BigInteger(fmt.fractionBits(), r), new BigInteger(fmt.fractionBits(), r).negate());
+        }
+        LimbAccumulator acc = new LimbAccumulator(fmt);
+        int reps = Math.max(20, 20_000_000 / (fmt.limbs() * fmt.limbs() * n));
+        for (int i = 0; i < reps; i++) {
+            acc.clear();
+            acc.convolve(v, 0, v, 0, n - 1);
+        }
+        long t0 = System.nanoTime();
+        for (int i = 0; i < reps; i++) {
+            acc.clear();
+            acc.convolve(v, 0, v, 0, n - 1);
+        }
+        double t = (System.nanoTime() - t0) / 1e9 / reps / n;
+        acc.store(v, n);
+        return t;
+    }
+
+    /** Time of one fixed-point complex product with three BigInteger products and their accumulation. */
+    static double bigIntegerProductSeconds(int bits) {
         BigInteger a = BigInteger.ONE.shiftLeft(bits).subtract(BigInteger.valueOf(987654321));
         BigInteger b = a.add(BigInteger.valueOf(123456789));
         BigInteger acc = BigInteger.ZERO;
@@ -100,7 +125,7 @@ public final class HighPrecisionBench {
     }
 
     private static void apfloat() {
-        System.out.println("digits  apfloat-complex-multiply[us]  biginteger-3-products[us]");
+        System.out.println("digits  apfloat-complex-multiply[us]  biginteger-3-products[us]  limb-columns[us]");
         for (int d : new int[] {20, 50, 100, 200}) {
             Apcomplex x = new Apcomplex(ApfloatMath.pi(d), ApfloatMath.sqrt(new Apfloat(2, d)));
             Apcomplex y = ApcomplexMath.exp(x);
@@ -114,8 +139,9 @@ public final class HighPrecisionBench {
                 acc = x.multiply(y);
             }
             double t = (System.nanoTime() - t0) / 1e3 / n;
-            System.out.printf(Locale.ROOT, "%6d  %28.2f  %25.3f%n", d, t,
-                    1e6 * complexProductSeconds((int) Math.ceil(d * MpContext.LOG2_10)));
+            int bits = (int) Math.ceil(d * MpContext.LOG2_10);
+            System.out.printf(Locale.ROOT, "%6d  %28.2f  %25.3f  %16.3f%n", d, t, 1e6 * bigIntegerProductSeconds(bits),
+                    1e6 * complexProductSeconds(bits));
             if (acc.real().signum() == 2) {
                 System.out.print("");
             }

@@ -217,7 +217,7 @@ public final class HighPrecisionSolution {
             long products = level.integrator.products();
             List<Outcome> accurate = pass.run(level);
             statistics.set(new Statistics(level.integrator.order(), accurate.get(0).steps,
-                    accurate.get(0).steps + cheap.get(0).steps, level.ctx.bits() + 16,
+                    accurate.get(0).steps + cheap.get(0).steps, LimbFormat.fractionBits(level.ctx.bits() + 16),
                     level.integrator.products() - products));
             int worst = Integer.MAX_VALUE;
             result = new ArrayList<>();

@@ -73,6 +73,18 @@ public final class Solution {
      */
     public static Solution start(PolynomialSystem system, SolverSettings settings, StateProjection projection,
                                  double tau0Re, double tau0Im, double[] y0Re, double[] y0Im) {
+        return start(system, settings, projection, tau0Re, tau0Im, y0Re, y0Im, new double[y0Re.length],
+                new double[y0Re.length]);
+    }
+
+    /**
+     * Starts a solution whose start state is itself uncertain: {@code e0} is the absolute error vector of the
+     * start state (for example from a series summed at a small x0, or from moving along another flow); it is
+     * carried by the flow like every later error.
+     */
+    public static Solution start(PolynomialSystem system, SolverSettings settings, StateProjection projection,
+                                 double tau0Re, double tau0Im, double[] y0Re, double[] y0Im, double[] e0Re,
+                                 double[] e0Im) {
         if (y0Re.length != system.dimension() || y0Im.length != system.dimension()) {
             throw new InvalidInputException("start state", "expected " + system.dimension() + " components");
         }
@@ -89,7 +101,11 @@ public final class Solution {
         projection.project(tau0Re, tau0Im, re, im);
         Solution probe = new Solution(system, plan, settings, projection, null);
         double maxR = probe.maxRadius(tau0Re, tau0Im);
-        Node root = stepper.expandStart(0, tau0Re, tau0Im, re, im, Math.min(settings.initialStep(), maxR), maxR);
+        if (e0Re.length != system.dimension() || e0Im.length != system.dimension()) {
+            throw new InvalidInputException("start error", "expected " + system.dimension() + " components");
+        }
+        Node root = stepper.expand(0, -1, tau0Re, tau0Im, re, im, e0Re.clone(), e0Im.clone(),
+                Math.min(settings.initialStep(), maxR), maxR);
         return new Solution(system, plan, settings, projection, root);
     }
 

@@ -1,0 +1,88 @@
+package org.tertius.core.mp;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.quicktheories.QuickTheory.qt;
+import static org.quicktheories.generators.SourceDSL.integers;
+import static org.quicktheories.generators.SourceDSL.longs;
+
+import java.math.BigInteger;
+import java.util.Random;
+import org.junit.jupiter.api.Test;
+
+/** The limb fixed-point arithmetic of the high-precision kernel against exact BigInteger arithmetic. */
+class LimbArithmeticTest {
+    /** A random fixed-point integer of |x| < 2^(f + 3), either sign. */
+    private static BigInteger random(Random r, int f) {
+        BigInteger x = new BigInteger(f + 3, r);
+        return r.nextBoolean() ? x.negate() : x;
+    }
+
+    @Test
+    void valuesSurviveTheLimbRepresentation() {
+        qt().withExamples(300).forAll(longs().all(), integers().between(30, 900)).checkAssert((seed, bits) -> {
+            Random r = new Random(seed);
+            LimbFormat fmt = new LimbFormat(bits, 1);
+            LimbVector v = new LimbVector(fmt, 1);
+            BigInteger re = random(r, fmt.fractionBits());
+            BigInteger im = random(r, fmt.fractionBits());
+            v.set(0, re, im);
+            assertEquals(re, v.re(0));
+            assertEquals(im, v.im(0));
+        });
+    }
+
+    @Test
+    void dotProductsAreRoundedOnceFromTheExactSum() {
+        // sum_i a_i b_{k-i} of complex fixed-point numbers, exact in BigInteger, then rounded to 2^-F: the limb
+        // accumulator drops only columns far below the rounding (each worth < 2^-40 units), so its result differs
+        // from the exactly rounded sum by at most one unit in each part
+        qt().withExamples(150).forAll(longs().all(), integers().between(30, 700), integers().between(1, 60))
+                .checkAssert((seed, bits, k) -> {
+                    Random r = new Random(seed);
+                    LimbFormat fmt = new LimbFormat(bits, 1);
+                    int f = fmt.fractionBits();
+                    LimbVector v = new LimbVector(fmt, 2 * (k + 1) + 1);
+                    BigInteger[] re = new BigInteger[2 * (k + 1)];
+                    BigInteger[] im = new BigInteger[2 * (k + 1)];
+                    for (int i = 0; i < re.length; i++) {
+                        re[i] = random(r, f);
+                        im[i] = random(r, f);
+                        v.set(i, re[i], im[i]);
+                    }
+                    BigInteger sr = BigInteger.ZERO;
+                    BigInteger si = BigInteger.ZERO;
+                    for (int i = 0; i <= k; i++) {
+                        int j = k + 1 + k - i;
+                        sr = sr.add(re[i].multiply(re[j])).subtract(im[i].multiply(im[j]));
+                        si = si.add(re[i].multiply(im[j])).add(im[i].multiply(re[j]));
+                    }
+                    LimbAccumulator acc = new LimbAccumulator(new LimbFormat(bits, 2));
+                    LimbVector w = new LimbVector(new LimbFormat(bits, 2), 2 * (k + 1) + 1);
+                    for (int i = 0; i < re.length; i++) {
+                        w.set(i, re[i], im[i]);
+                    }
+                    acc.convolve(w, 0, w, k + 1, k);
+                    int out = 2 * (k + 1);
+                    acc.store(w, out);
+                    assertTrue(w.re(out).subtract(MpContext.shiftRound(sr, f)).abs().compareTo(BigInteger.ONE) <= 0);
+                    assertTrue(w.im(out).subtract(MpContext.shiftRound(si, f)).abs().compareTo(BigInteger.ONE) <= 0);
+                });
+    }
+
+    @Test
+    void divisionsBySmallIntegersRoundDown() {
+        qt().withExamples(200).forAll(longs().all(), integers().between(1, 5000)).checkAssert((seed, d) -> {
+            Random r = new Random(seed);
+            LimbFormat fmt = new LimbFormat(200, 2);
+            LimbVector v = new LimbVector(fmt, 1);
+            BigInteger x = random(r, 200);
+            v.set(0, x, x.negate());
+            v.divide(0, d);
+            BigInteger q = x.divide(BigInteger.valueOf(d));
+            // floor division: differs from truncation by at most one
+            assertTrue(v.re(0).subtract(q).abs().compareTo(BigInteger.ONE) <= 0);
+            assertTrue(v.im(0).add(q).abs().compareTo(BigInteger.ONE) <= 0);
+        });
+    }
+}
