@@ -17,7 +17,8 @@ import org.tertius.core.region.Singularity;
 /**
  * Draws a solution over a region (Java2D): hue shows the phase of w (red at arg w = 0, then yellow, green,
  * cyan, blue, magenta as the argument grows), lightness shows the modulus (black at a zero, mid-tone at |w| = 1,
- * white at a pole: L = 2 atan(|w|)/pi), with faint bands at every doubling of |w|. Located poles are ringed in
+ * white at a pole: L = 2 atan(|w|)/pi), with faint bands at every doubling of |w| that fade out towards
+ * the two extremes. Located poles are ringed in
  * black and zeros in white; axes with tick labels, a title and a legend. Points that could not be computed are
  * grey.
  */
@@ -42,7 +43,8 @@ final class FieldPainter {
         if (mod > 0 && Double.isFinite(mod)) {
             double band = Math.log(mod) / Math.log(2);
             double frac = band - Math.floor(band);
-            light = light * (0.92 + 0.08 * frac);
+            // bands fade out towards black (zeros) and white (poles), so the extremes keep the legend's colours
+            light = light * (1 - 0.08 * (1 - frac) * 4 * light * (1 - light));
         }
         return hsl(hue, 1.0, light);
     }

@@ -338,15 +338,7 @@ public final class Solution {
                 ok = trunc[i] <= maxRelativeError * (1 + org.tertius.core.number.Cx.abs(out[2 * i], out[2 * i + 1]));
             }
             if (ok) {
-                double[] re = new double[n];
-                double[] im = new double[n];
-                double[] e = new double[n];
-                for (int i = 0; i < n; i++) {
-                    re[i] = out[2 * i];
-                    im[i] = out[2 * i + 1];
-                    e[i] = err[i] + 4 * Math.ulp(1.0) * org.tertius.core.number.Cx.abs(re[i], im[i]);
-                }
-                return new StateEstimate(tauRe, tauIm, re, im, e, c.id(), 0);
+                return toEstimate(tauRe, tauIm, out, err, c.id(), 0);
             }
         }
         return null;
@@ -377,6 +369,12 @@ public final class Solution {
         double[] out = new double[2 * n];
         double[] err = new double[n];
         node.evaluateScaled((tRe - node.tauRe()) / node.radius(), (tIm - node.tauIm()) / node.radius(), out, null, err);
+        return toEstimate(tRe, tIm, out, err, node.id(), steps);
+    }
+
+    /** Packs interleaved values and their errors (plus a few ulps of the value) into an estimate. */
+    private static StateEstimate toEstimate(double tRe, double tIm, double[] out, double[] err, int nodeId, int steps) {
+        int n = err.length;
         double[] re = new double[n];
         double[] im = new double[n];
         double[] e = new double[n];
@@ -385,6 +383,6 @@ public final class Solution {
             im[i] = out[2 * i + 1];
             e[i] = err[i] + 4 * Math.ulp(1.0) * org.tertius.core.number.Cx.abs(re[i], im[i]);
         }
-        return new StateEstimate(tRe, tIm, re, im, e, node.id(), steps);
+        return new StateEstimate(tRe, tIm, re, im, e, nodeId, steps);
     }
 }
