@@ -9,16 +9,47 @@ public final class PadeApproximant {
     private final double[] pIm;
     private final double[] qRe;
     private final double[] qIm;
+    /** The significant tail of the defect, from index {@link #dStart} on. */
     private final double[] dRe;
     private final double[] dIm;
+    private final int dStart;
+    /** Moduli of the coefficients (for the rounding bound). */
+    private final double[] pAbs;
+    private final double[] qAbs;
+    /** Sum of |d_k| below dStart (bounds their contribution for |s| <= 1). */
+    private final double dHead;
 
     PadeApproximant(double[] pRe, double[] pIm, double[] qRe, double[] qIm, double[] dRe, double[] dIm) {
         this.pRe = pRe;
         this.pIm = pIm;
         this.qRe = qRe;
         this.qIm = qIm;
-        this.dRe = dRe;
-        this.dIm = dIm;
+        this.pAbs = moduli(pRe, pIm);
+        this.qAbs = moduli(qRe, qIm);
+        // keep the defect's significant tail (its leading coefficients are rounding-level where the approximant
+        // matches the series) and bound the head by the sum of its moduli
+        double max = 0;
+        for (int k = 0; k < dRe.length; k++) {
+            max = Math.max(max, Math.abs(dRe[k]) + Math.abs(dIm[k]));
+        }
+        int start = 0;
+        double head = 0;
+        while (start < dRe.length - 1 && Math.abs(dRe[start]) + Math.abs(dIm[start]) < 1e-3 * max) {
+            head += org.tertius.core.number.Cx.abs(dRe[start], dIm[start]);
+            start++;
+        }
+        this.dStart = start;
+        this.dHead = head;
+        this.dRe = java.util.Arrays.copyOfRange(dRe, start, dRe.length);
+        this.dIm = java.util.Arrays.copyOfRange(dIm, start, dIm.length);
+    }
+
+    private static double[] moduli(double[] re, double[] im) {
+        double[] m = new double[re.length];
+        for (int k = 0; k < re.length; k++) {
+            m[k] = org.tertius.core.number.Cx.abs(re[k], im[k]);
+        }
+        return m;
     }
 
     /** Numerator degree. */
@@ -42,21 +73,17 @@ public final class PadeApproximant {
         double sm = org.tertius.core.number.Cx.abs(sr, si);
         double nr = 0;
         double ni = 0;
-        double na = 0;
         for (int k = pRe.length - 1; k >= 0; k--) {
             double t = nr * sr - ni * si + pRe[k];
             ni = nr * si + ni * sr + pIm[k];
             nr = t;
-            na = na * sm + org.tertius.core.number.Cx.abs(pRe[k], pIm[k]);
         }
         double dr = 0;
         double di = 0;
-        double da = 0;
         for (int k = qRe.length - 1; k >= 0; k--) {
             double t = dr * sr - di * si + qRe[k];
             di = dr * si + di * sr + qIm[k];
             dr = t;
-            da = da * sm + org.tertius.core.number.Cx.abs(qRe[k], qIm[k]);
         }
         double d = dr * dr + di * di;
         out[0] = (nr * dr + ni * di) / d;
@@ -69,10 +96,20 @@ public final class PadeApproximant {
             ei = er * si + ei * sr + dIm[k];
             er = t;
         }
-        out[3] = org.tertius.core.number.Cx.abs(er, ei) / out[2];
+        double big = Math.max(1, sm);
+        out[3] = (org.tertius.core.number.Cx.abs(er, ei) * Math.pow(sm, dStart) + dHead * Math.pow(big, dStart))
+                / out[2];
         // rounding of the two Horner sums (a standard bound, about 2 deg ulps of the sum of |terms|), divided
         // through: large next to a pole, where |q(s)| is small against its terms
         if (out.length > 4) {
+            double na = 0;
+            for (int k = pAbs.length - 1; k >= 0; k--) {
+                na = na * sm + pAbs[k];
+            }
+            double da = 0;
+            for (int k = qAbs.length - 1; k >= 0; k--) {
+                da = da * sm + qAbs[k];
+            }
             double u = Math.ulp(1.0);
             double pm = org.tertius.core.number.Cx.abs(nr, ni);
             double ep = 2 * pRe.length * u * na;
@@ -103,6 +140,6 @@ public final class PadeApproximant {
 
     /** Bytes held by this approximant (for memory accounting). */
     public long footprint() {
-        return 16L * (pRe.length + qRe.length + dRe.length) + 80;
+        return 16L * (pRe.length + qRe.length + dRe.length) + 96;
     }
 }

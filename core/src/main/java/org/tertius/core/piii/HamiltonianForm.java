@@ -91,15 +91,31 @@ final class HamiltonianForm implements Painleve3Form {
 
     @Override
     public Complex[] fromState(Complex z, double[] re, double[] im, double[] err, double[] errOut) {
-        Complex w = new Complex(re[0], im[0]);
-        Complex p = new Complex(re[1], im[1]);
-        Complex dw = w.multiply(w).multiply(p).multiply(2).add(b.multiply(w)).add(c.multiply(z)).divide(z);
-        double zm = z.norm();
-        double dwdw = w.multiply(p).multiply(4).add(b).norm() / zm;
-        double dwdp = 2 * w.norm() * w.norm() / zm;
+        // primitive arithmetic: this runs once per grid point
+        double wr = re[0];
+        double wi = im[0];
+        double pr = re[1];
+        double pi = im[1];
+        double w2r = wr * wr - wi * wi;
+        double w2i = 2 * wr * wi;
+        double br = b.getReal();
+        double bi = b.getImaginary();
+        double zr = z.getReal();
+        double zi = z.getImaginary();
+        // numerator 2 w^2 p + B w + C z
+        double nr = 2 * (w2r * pr - w2i * pi) + (br * wr - bi * wi) + (c.getReal() * zr - c.getImaginary() * zi);
+        double ni = 2 * (w2r * pi + w2i * pr) + (br * wi + bi * wr) + (c.getReal() * zi + c.getImaginary() * zr);
+        double zz = zr * zr + zi * zi;
+        double dr = (nr * zr + ni * zi) / zz;
+        double di = (ni * zr - nr * zi) / zz;
+        double zm = Math.sqrt(zz);
+        double wm = org.tertius.core.number.Cx.abs(wr, wi);
+        // |d w'/d w| = |4 w p + B| / |z|, |d w'/d p| = 2 |w|^2 / |z|
+        double dwdw = org.tertius.core.number.Cx.abs(4 * (wr * pr - wi * pi) + br, 4 * (wr * pi + wi * pr) + bi) / zm;
+        double dwdp = 2 * wm * wm / zm;
         errOut[0] = err[0];
-        errOut[1] = dwdw * err[0] + dwdp * err[1] + 1e-16 * dw.norm();
-        return new Complex[] {w, dw};
+        errOut[1] = dwdw * err[0] + dwdp * err[1] + 1e-16 * org.tertius.core.number.Cx.abs(dr, di);
+        return new Complex[] {new Complex(wr, wi), new Complex(dr, di)};
     }
 
     @Override

@@ -49,6 +49,9 @@ public final class PoleFinder {
         boolean reciprocal = view.wComponentIsReciprocal();
         List<Candidate> all = new ArrayList<>();
         for (Node n : view.engine().nodes()) {
+            if (!near(n, grid)) {
+                continue;
+            }
             PadeApproximant hi = n.approximant(comp);
             PadeApproximant lo = n.lowerApproximant(comp);
             collect(all, n, hi, lo, true, reciprocal ? Singularity.Kind.ZERO : Singularity.Kind.POLE, reciprocal, grid);
@@ -78,10 +81,29 @@ public final class PoleFinder {
         }
     }
 
+    /** Whether the node's search window (INSIDE radii) can reach the rectangle on the grid's sheet. */
+    private static boolean near(Node n, Grid g) {
+        SurfacePoint c = SurfacePoint.fromLog(n.tauRe(), n.tauIm());
+        double reach = Cx.abs(c.re(), c.im()) * (Math.exp(INSIDE * n.radius()) - 1) + 1e-12;
+        if (Math.abs(c.sheet() - g.sheet()) > 1 || n.radius() * INSIDE > Math.PI) {
+            return Math.abs(c.sheet() - g.sheet()) <= 1 || n.radius() * INSIDE > Math.PI;
+        }
+        double dx = Math.max(0, Math.max(g.re0() - c.re(), c.re() - g.re1()));
+        double dy = Math.max(0, Math.max(g.im0() - c.im(), c.im() - g.im1()));
+        return Math.hypot(dx, dy) <= reach;
+    }
+
     private static void collect(List<Candidate> out, Node n, PadeApproximant hi, PadeApproximant lo, boolean den,
                                 Singularity.Kind kind, boolean reciprocal, Grid grid) {
         double[][] roots = den ? PolynomialRoots.roots(hi.denominatorRe(), hi.denominatorIm())
                 : PolynomialRoots.roots(hi.numeratorRe(), hi.numeratorIm());
+        boolean any = false;
+        for (int j = 0; j < roots[0].length && !any; j++) {
+            any = Cx.abs(roots[0][j], roots[1][j]) < INSIDE;
+        }
+        if (!any) {
+            return;
+        }
         double[][] check = den ? PolynomialRoots.roots(lo.denominatorRe(), lo.denominatorIm())
                 : PolynomialRoots.roots(lo.numeratorRe(), lo.numeratorIm());
         double[][] other = den ? PolynomialRoots.roots(hi.numeratorRe(), hi.numeratorIm())

@@ -35,6 +35,8 @@ public final class Solution {
     private static final int MAX_APPROACHES = 6;
     /** Steps without getting closer to the target before it is declared unreachable. */
     private static final int STALL_STEPS = 60;
+    /** Carried relative error above which a node is penalised as the start of a new path. */
+    private static final double PENALTY_FROM = Double.parseDouble(System.getProperty("tertius.penalty", "1e-10"));
     private final Object lock = new Object();
     private final boolean singularAtOrigin;
     private volatile Node[] nodes;
@@ -346,7 +348,7 @@ public final class Solution {
 
     /**
      * The node a new path starts from: the nearest disk, with a penalty for nodes that carry a large error
-     * (half a radius per decade above 1e-12), so that paths do not grow from nodes placed next to poles when a
+     * (half a radius per decade above {@link #PENALTY_FROM}), so that paths do not grow from nodes placed next to poles when a
      * cleaner node is almost as near (after the Fornberg-Weideman rule of starting from the nearest node).
      */
     private static Node nearest(Node[] snapshot, double tRe, double tIm) {
@@ -354,7 +356,7 @@ public final class Solution {
         double bestScore = Double.POSITIVE_INFINITY;
         for (Node n : snapshot) {
             double d = org.tertius.core.number.Cx.abs(tRe - n.tauRe(), tIm - n.tauIm()) - n.radius();
-            double decades = Math.max(0, Math.log10(Math.max(n.accumulatedError(), 1e-300) / 1e-12));
+            double decades = Math.max(0, Math.log10(Math.max(n.accumulatedError(), 1e-300) / PENALTY_FROM));
             double score = Math.max(d, 0) + 0.5 * n.radius() * decades;
             if (score < bestScore) {
                 bestScore = score;
