@@ -18,7 +18,8 @@ import org.tertius.core.step.Node;
  * around its disk. A root is kept only if the lower-order approximant of the same node has a root next to it (a spurious
  * pole-zero pair of one approximant does not survive this), and the distance between the two roots is the
  * position error estimate. Roots found by several overlapping nodes are merged, keeping the copy with the
- * smallest position error. The leading coefficient is computed from the approximant: at a pole of w(tau) the
+ * smallest position error, whose error is raised to the distance of any copy that disagrees beyond both
+ * estimates. The leading coefficient is computed from the approximant: at a pole of w(tau) the
  * residue in tau is r p(s0)/q'(s0), so that w ~ c/(z - z0) with c = z0 r p(s0)/q'(s0); at a zero,
  * w' = (p'(s0)/q(s0)) / (r z0). When the form carries 1/w, the roles of numerator and denominator swap.
  */
@@ -62,8 +63,17 @@ public final class PoleFinder {
                 .thenComparingDouble(c -> c.s.point().re()).thenComparingDouble(c -> c.s.point().im()));
         List<Singularity> found = new ArrayList<>();
         for (Candidate c : all) {
-            if (!isKnown(found, c.s)) {
+            int k = indexOfKnown(found, c.s);
+            if (k < 0) {
                 found.add(c.s);
+                continue;
+            }
+            // two copies of one singularity that disagree beyond their estimates: the kept one's error becomes
+            // at least their distance, so that no position is claimed more precisely than the copies agree
+            Singularity s = found.get(k);
+            double d = Cx.abs(s.point().re() - c.s.point().re(), s.point().im() - c.s.point().im());
+            if (d > s.error() + c.s.error()) {
+                found.set(k, new Singularity(s.kind(), s.point(), s.lead(), d));
             }
         }
         found.sort(Comparator.comparing((Singularity s) -> s.kind()).thenComparingDouble(s -> s.point().re())
@@ -210,15 +220,16 @@ public final class PoleFinder {
         return v;
     }
 
-    private static boolean isKnown(List<Singularity> found, Singularity c) {
-        for (Singularity s : found) {
+    private static int indexOfKnown(List<Singularity> found, Singularity c) {
+        for (int k = 0; k < found.size(); k++) {
+            Singularity s = found.get(k);
             if (s.kind() == c.kind() && s.point().sheet() == c.point().sheet()) {
                 double d = Cx.abs(s.point().re() - c.point().re(), s.point().im() - c.point().im());
                 if (d <= Math.max(1e-6 * (1 + c.point().z().norm()), 100 * (s.error() + c.error()))) {
-                    return true;
+                    return k;
                 }
             }
         }
-        return false;
+        return -1;
     }
 }
