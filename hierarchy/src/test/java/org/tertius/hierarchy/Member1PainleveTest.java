@@ -59,6 +59,13 @@ class Member1PainleveTest {
             Painleve3Value b = map.evaluate(member, z);
             double dw = a.w().subtract(b.w()).norm() / (1 + a.w().norm());
             double ddw = a.dw().subtract(b.dw()).norm() / (1 + a.dw().norm());
+            if (z.sheet() != 0) {
+                // winding round z = 0 amplifies the errors of both engines (their estimates show it, about 1e-12
+                // here): the two must agree within the sum of their estimates
+                assertTrue(a.w().subtract(b.w()).norm() <= a.errW() + b.errW(), "w at " + z + " beyond the estimates");
+                assertTrue(a.dw().subtract(b.dw()).norm() <= a.errDw() + b.errDw(), "w' at " + z + " beyond the estimates");
+                continue;
+            }
             assertTrue(dw <= AGREEMENT, "w at " + z + ": core " + a.w() + ", member 1 " + b.w() + ", rel " + dw);
             assertTrue(ddw <= AGREEMENT_DW, "w' at " + z + ": core " + a.dw() + ", member 1 " + b.dw() + ", rel " + ddw);
         }
