@@ -14,7 +14,7 @@ import org.tertius.core.number.SurfacePoint;
  * so u = A z^{2 mu} 0F1(;1+mu; x) + B 0F1(;1-mu; x), x = -a c z^2 / 4, mu = (1 + b)/2 (DLMF 10.16.9). The
  * factor z^{2 mu} carries the sheet: on sheet k it is exp(2 mu (Log z + 2 pi i k)).
  */
-final class BesselRiccatiReference {
+public final class BesselRiccatiReference {
     private final long digits;
     private final FixedPrecisionApcomplexHelper h;
     private final MpContext ctx;
@@ -26,7 +26,7 @@ final class BesselRiccatiReference {
     private final Apcomplex coefB;
 
     /** a, b, c, A, B as exact strings; values computed with {@code digits} digits. */
-    BesselRiccatiReference(String a, String b, String c, String coefA, String coefB, int digits) {
+    public BesselRiccatiReference(String a, String b, String c, String coefA, String coefB, int digits) {
         this.digits = digits;
         this.h = new FixedPrecisionApcomplexHelper(digits);
         this.ctx = new MpContext(digits);
@@ -53,7 +53,7 @@ final class BesselRiccatiReference {
     }
 
     /** {w, w'} at a point of the surface whose coordinates are taken exactly. */
-    Apcomplex[] value(SurfacePoint p) {
+    public Apcomplex[] value(SurfacePoint p) {
         Apcomplex z = h.valueOf(ctx.toApcomplex(ctx.fromDouble(p.re(), p.im())));
         return value(z, p.sheet());
     }
