@@ -38,6 +38,8 @@ public final class FieldCommand implements Callable<Integer> {
     String grid;
     @Option(names = "--line", paramLabel = "A:B:N", description = "plot w along this segment instead")
     String line;
+    @Option(names = "--log-strip", paramLabel = "LOGR0:LOGR1:NX,ARG0:ARG1:NY", description = Regions.LOG_STRIP_HELP)
+    String logStrip;
     @Option(names = "--sheet", paramLabel = "K", description = "sheet (default 0)")
     Integer sheet;
     @Option(names = "--out", paramLabel = "FILE.png", required = true, description = "the PNG file")
@@ -52,9 +54,9 @@ public final class FieldCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         ProblemFile f = solution.file();
-        String gridSpec = grid != null ? grid : (line == null ? f.get("grid") : null);
-        String lineSpec = line != null ? line : (grid == null ? f.get("line") : null);
-        if ((gridSpec == null) == (lineSpec == null)) {
+        String gridSpec = grid != null ? grid : (line == null && logStrip == null ? f.get("grid") : null);
+        String lineSpec = line != null ? line : (grid == null && logStrip == null ? f.get("line") : null);
+        if ((gridSpec == null && logStrip == null) == (lineSpec == null)) {
             throw new InvalidInputException("--grid", "give exactly one of --grid RE0:RE1:NX,IM0:IM1:NY and --line A:B:N");
         }
         int[] wh = parseSize(size);
@@ -74,7 +76,7 @@ public final class FieldCommand implements Callable<Integer> {
         if (lineSpec != null) {
             return linePlot(s, Targets.line("--line", lineSpec, k), title, wh, err);
         }
-        Grid g = Grid.parse("--grid", gridSpec, k);
+        Grid g = Regions.region(gridSpec, logStrip, k);
         if (g.nx() < 2 || g.ny() < 2) {
             throw new InvalidInputException("--grid", "a picture needs at least 2 x 2 points");
         }

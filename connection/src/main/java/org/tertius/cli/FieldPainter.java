@@ -119,8 +119,8 @@ final class FieldPainter {
         }
         gr.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
         for (Singularity s : marks) {
-            int x = px(g, s.point().re(), width);
-            int y = py(g, s.point().im(), height);
+            int x = px(g, g.logarithmic() ? s.point().logRe() : s.point().re(), width);
+            int y = py(g, g.logarithmic() ? s.point().logIm() : s.point().im(), height);
             gr.setStroke(new BasicStroke(1.5f));
             gr.setColor(s.kind() == Singularity.Kind.POLE ? Color.BLACK : Color.WHITE);
             gr.drawOval(x - 5, y - 5, 10, 10);
@@ -130,8 +130,9 @@ final class FieldPainter {
         gr.setFont(new Font(Font.SANS_SERIF, Font.BOLD, 14));
         gr.drawString(title, LEFT, 22);
         gr.setFont(new Font(Font.SANS_SERIF, Font.PLAIN, 12));
-        gr.drawString(String.format(Locale.ROOT, "sheet %d: arg z in (-pi, pi] + 2 pi (%d);  %d poles, %d zeros marked",
-                g.sheet(), g.sheet(), marks.stream().filter(m -> m.kind() == Singularity.Kind.POLE).count(),
+        String where = g.logarithmic() ? "strip in log z (several sheets)"
+                : String.format(Locale.ROOT, "sheet %d: arg z in (-pi, pi] + 2 pi (%d)", g.sheet(), g.sheet());
+        gr.drawString(String.format(Locale.ROOT, "%s;  %d poles, %d zeros marked", where, marks.stream().filter(m -> m.kind() == Singularity.Kind.POLE).count(),
                 marks.stream().filter(m -> m.kind() == Singularity.Kind.ZERO).count()), LEFT, 40);
         legend(gr, width, height);
         gr.dispose();
@@ -158,8 +159,8 @@ final class FieldPainter {
             String s = label(t);
             gr.drawString(s, LEFT - 9 - fm.stringWidth(s), y + 4);
         }
-        gr.drawString("Re z", LEFT + pw / 2 - 12, height - 14);
-        gr.drawString("Im z", 8, TOP + ph / 2);
+        gr.drawString(g.logarithmic() ? "log |z|" : "Re z", LEFT + pw / 2 - 12, height - 14);
+        gr.drawString(g.logarithmic() ? "arg z" : "Im z", 8, TOP + ph / 2);
     }
 
     static double[] ticks(double lo, double hi) {

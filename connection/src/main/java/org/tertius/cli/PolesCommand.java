@@ -40,6 +40,8 @@ public final class PolesCommand implements Callable<Integer> {
     @Option(names = "--grid", paramLabel = "RE0:RE1:NX,IM0:IM1:NY",
             description = "the region; the counts set the resolution of the search (e.g. -10:10:201,-10:10:201)")
     String grid;
+    @Option(names = "--log-strip", paramLabel = "LOGR0:LOGR1:NX,ARG0:ARG1:NY", description = Regions.LOG_STRIP_HELP)
+    String logStrip;
     @Option(names = "--sheet", paramLabel = "K", description = "sheet (default 0)")
     Integer sheet;
     @Option(names = "--format", paramLabel = "csv|json", description = "output format (default csv)")
@@ -49,8 +51,8 @@ public final class PolesCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        String gridSpec = grid != null ? grid : solution.file().get("grid");
-        if (gridSpec == null) {
+        String gridSpec = grid != null ? grid : (logStrip == null ? solution.file().get("grid") : null);
+        if (gridSpec == null && logStrip == null) {
             throw new InvalidInputException("--grid", "a region is required: --grid RE0:RE1:NX,IM0:IM1:NY");
         }
         if (!format.equals("csv") && !format.equals("json")) {
@@ -59,7 +61,7 @@ public final class PolesCommand implements Callable<Integer> {
         if (out != null) {
             OutputFile.checkWritable("--out", out);
         }
-        Grid g = Grid.parse("--grid", gridSpec, solution.sheet(sheet));
+        Grid g = Regions.region(gridSpec, logStrip, solution.sheet(sheet));
         Painleve3Solution s = solution.solution();
         List<Singularity> found;
         try (Progress progress = new Progress("poles")) {
@@ -94,7 +96,11 @@ public final class PolesCommand implements Callable<Integer> {
         ObjectMapper m = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
         ObjectNode root = m.createObjectNode();
         root.put("equation", sol.equation().toString());
-        root.put("sheet", g.sheet());
+        if (g.logarithmic()) {
+            root.put("log_strip", true);
+        } else {
+            root.put("sheet", g.sheet());
+        }
         ArrayNode region = root.putArray("region");
         region.add(g.re0()).add(g.re1()).add(g.im0()).add(g.im1());
         ArrayNode list = root.putArray("singularities");

@@ -39,6 +39,8 @@ public final class TableCommand implements Callable<Integer> {
     String line;
     @Option(names = "--grid", paramLabel = "RE0:RE1:NX,IM0:IM1:NY", description = "a grid of one sheet")
     String grid;
+    @Option(names = "--log-strip", paramLabel = "LOGR0:LOGR1:NX,ARG0:ARG1:NY", description = Regions.LOG_STRIP_HELP)
+    String logStrip;
     @Option(names = "--sheet", paramLabel = "K", description = "sheet of the points (default 0)")
     Integer sheet;
     @Option(names = "--out", paramLabel = "FILE", description = "CSV file (default: standard output)")
@@ -55,10 +57,10 @@ public final class TableCommand implements Callable<Integer> {
     public Integer call() {
         ProblemFile f = solution.file();
         String lineSpec = line != null ? line : (grid == null ? f.get("line") : null);
-        String gridSpec = grid != null ? grid : (line == null ? f.get("grid") : null);
-        if ((lineSpec == null) == (gridSpec == null)) {
-            throw new InvalidInputException("--line", "give exactly one of --line A:B:N and --grid"
-                    + " RE0:RE1:NX,IM0:IM1:NY");
+        String gridSpec = grid != null ? grid : (line == null && logStrip == null ? f.get("grid") : null);
+        if ((lineSpec == null) == (gridSpec == null && logStrip == null)) {
+            throw new InvalidInputException("--line", "give exactly one of --line A:B:N, --grid"
+                    + " RE0:RE1:NX,IM0:IM1:NY and --log-strip");
         }
         int k = solution.sheet(sheet);
         member.defaults(f);
@@ -79,7 +81,7 @@ public final class TableCommand implements Callable<Integer> {
         }
         Painleve3Solution s = solution.solution();
         String signature = "tertius table " + solution.describe() + (lineSpec != null ? " line=" + lineSpec
-                : " grid=" + gridSpec) + " sheet=" + k;
+                : " grid=" + gridSpec + " log-strip=" + logStrip) + " sheet=" + k;
         List<String> comments = List.of(s.equation() + " [" + s.equation().type().describe() + "]",
                 "integrated in the " + s.formDescription(),
                 "err: the larger of the estimated absolute errors of w and w'");
@@ -92,7 +94,7 @@ public final class TableCommand implements Callable<Integer> {
             if (lineSpec != null) {
                 status = line(s, Targets.line("--line", lineSpec, k), w, progress, console);
             } else {
-                status = grid(s, Grid.parse("--grid", gridSpec, k), w, progress);
+                status = grid(s, Regions.region(gridSpec, logStrip, k), w, progress);
             }
         }
         if (out != null) {
@@ -207,7 +209,7 @@ public final class TableCommand implements Callable<Integer> {
         int failed = 0;
         for (int j0 = (int) (skip / nx); j0 < g.ny(); j0 += BAND) {
             int j1 = Math.min(g.ny() - 1, j0 + BAND - 1);
-            Grid band = Grid.of(g.re0(), g.re1(), nx, g.im(j0), g.im(j1), j1 - j0 + 1, g.sheet());
+            Grid band = g.rows(j0, j1);
             GridResult r = RegionSolver.solve(s, band, RegionSettings.defaults());
             failed += r.statistics().failed();
             for (int j = 0; j < band.ny(); j++) {
@@ -227,7 +229,7 @@ public final class TableCommand implements Callable<Integer> {
 
     private static String pointRow(Grid g, int i, int j) {
         SurfacePoint p = g.point(i, j);
-        return p == null ? String.format(Locale.ROOT, "%.17g,%.17g,%d,nan,nan,nan,nan,inf", g.re(i), g.im(j), g.sheet())
+        return p == null || g.logarithmic() && p == null ? String.format(Locale.ROOT, "%.17g,%.17g,%d,nan,nan,nan,nan,inf", g.re(i), g.im(j), g.sheet())
                 : ValueCsv.unreachedRow(p);
     }
 }

@@ -4,6 +4,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import org.hipparchus.complex.Complex;
+import org.tertius.connection.infinity.AlgebraicExpansion;
 import org.tertius.connection.match.DecayingConnection;
 import org.tertius.connection.num.Arith;
 import org.tertius.connection.zero.LocalValue;
@@ -22,12 +23,23 @@ import org.tertius.core.step.SolverSettings;
  *       |lambda| &lt; 1/pi);</li>
  *   <li>{@code power} (sigma, B, complex, |Re sigma| &lt; 1): w ~ B z^sigma at 0, any equation;</li>
  *   <li>{@code analytic} (w0 != 0): analytic at 0 with w(0) = w0, any equation (the power family with
- *       sigma = 0).</li>
+ *       sigma = 0);</li>
+ *   <li>{@code algebraic} (background: {@code c} a value with gamma c^4 + delta = 0, or {@code root} 0..3 the index
+ *       in {@link AlgebraicExpansion#backgrounds}; optional {@code x0} the start abscissa, default the smallest
+ *       x >= 4 where the expansion's estimate is below 1e-15 relative): w ~ c + sum a_k x^-k at +infinity, any
+ *       equation with gamma delta != 0 ({@link AlgebraicExpansion}). The expansion fixes the solution only up
+ *       to exponentially small terms O(e^(-|mu| x0)), mu = 2 sqrt(gamma) c: the member given here is the one
+ *       whose data at x0 are the optimally truncated series; integrating away from x0 can amplify that
+ *       ambiguity like e^(|Re mu| |x - x0|).</li>
  * </ul>
  */
 public final class Families {
     /** Family names. */
-    public static final List<String> NAMES = List.of("decaying", "power", "analytic");
+    public static final List<String> NAMES = List.of("decaying", "power", "analytic", "algebraic");
+    /** Error of the start data of the algebraic family at its default start abscissa, relative to 1 + |w|. */
+    static final double ALGEBRAIC_TOLERANCE = 1e-15;
+    /** Number of coefficients of the algebraic expansion (enough for optimal truncation up to |mu| x ~ 150). */
+    static final int ALGEBRAIC_TERMS = 160;
     /** Largest |z| tried for start data of the families at 0. */
     static final double START_RADIUS = 0.25;
     /** Error of the start data of the families at 0, relative to 1 + |w| (the floor of the conservative rounding estimate of w'). */
@@ -61,6 +73,8 @@ public final class Families {
                             + " there; use the power family for w ~ B z^sigma)");
                 }
                 return atZero(equation, Complex.ZERO, w0, settings);
+            case "algebraic":
+                return algebraic(equation, parameters, settings);
             default:
                 throw new InvalidInputException("family", "unknown family '" + name + "'; known: " + NAMES);
         }
@@ -79,6 +93,52 @@ public final class Families {
                     + " got " + lambda);
         }
         return DecayingConnection.solution(lambda.getReal(), settings);
+    }
+
+    private static Painleve3Solution algebraic(Painleve3 equation, Map<String, String> parameters,
+                                               SolverSettings settings) {
+        for (String k : parameters.keySet()) {
+            if (!Set.of("c", "root", "x0").contains(k)) {
+                throw new InvalidInputException(k, "is not a parameter of the algebraic family; its parameters are"
+                        + " c (a background, gamma c^4 + delta = 0) or root (0..3), and optionally x0");
+            }
+        }
+        if (parameters.containsKey("c") == parameters.containsKey("root")) {
+            throw new InvalidInputException("background", "the algebraic family needs exactly one of c (the value"
+                    + " of the background, gamma c^4 + delta = 0) or root (its index 0..3)");
+        }
+        List<Complex> roots = AlgebraicExpansion.backgrounds(equation.gamma(), equation.delta());
+        Complex c;
+        if (parameters.containsKey("root")) {
+            String r = parameters.get("root").trim();
+            if (!r.matches("[0-3]")) {
+                throw new InvalidInputException("root", "must be 0, 1, 2 or 3 (the backgrounds " + roots
+                        + "), got '" + r + "'");
+            }
+            c = roots.get(Integer.parseInt(r));
+        } else {
+            c = value(parameters, "c");
+        }
+        AlgebraicExpansion e = AlgebraicExpansion.create(equation.alpha(), equation.beta(), equation.gamma(),
+                equation.delta(), c, ALGEBRAIC_TERMS);
+        LocalValue<Complex> v;
+        if (parameters.containsKey("x0")) {
+            Complex x0 = value(parameters, "x0");
+            if (!(x0.getReal() > 0)) {
+                throw new InvalidInputException("x0", "must have a positive real part (the expansion is at"
+                        + " +infinity), got " + x0);
+            }
+            v = e.at(x0);
+            double rel = Math.max(v.errW() / (1 + v.w().norm()), v.errDw() / (1 + v.dw().norm()));
+            if (!(rel <= 1e-8)) {
+                throw new InvalidInputException("x0", "is too small for the algebraic expansion about c = "
+                        + e.background() + ": its error estimate there is " + rel + " (relative); start further"
+                        + " out, e.g. at x0 = " + e.startData(ALGEBRAIC_TOLERANCE).z().getReal());
+            }
+        } else {
+            v = e.startData(ALGEBRAIC_TOLERANCE);
+        }
+        return Painleve3Solution.builder(equation).start(v.z(), v.w(), v.dw()).settings(settings).build();
     }
 
     private static Painleve3Solution atZero(Painleve3 equation, Complex sigma, Complex b, SolverSettings settings) {

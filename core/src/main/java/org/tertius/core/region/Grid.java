@@ -4,8 +4,9 @@ import org.tertius.core.InvalidInputException;
 import org.tertius.core.number.SurfacePoint;
 
 /**
- * A rectangular grid of points of one sheet: nx points from re0 to re1 and ny points from im0 to im1 (both ends
- * included). Immutable.
+ * A rectangular grid of points: either of one sheet (nx points of Re z from re0 to re1 and ny points of Im z from
+ * im0 to im1, both ends included), or a strip in log z covering several sheets ({@link #logStrip}: the
+ * coordinates are log|z| and the continuous argument of z). Immutable.
  */
 public final class Grid {
     /** Bytes per grid point held by a {@link GridResult} (five doubles). */
@@ -18,8 +19,14 @@ public final class Grid {
     private final double im1;
     private final int ny;
     private final int sheet;
+    private final boolean logarithmic;
 
     private Grid(String arg, double re0, double re1, int nx, double im0, double im1, int ny, int sheet) {
+        this(arg, re0, re1, nx, im0, im1, ny, sheet, false);
+    }
+
+    private Grid(String arg, double re0, double re1, int nx, double im0, double im1, int ny, int sheet,
+                 boolean logarithmic) {
         for (double v : new double[] {re0, re1, im0, im1}) {
             InvalidInputException.requireFinite(arg, v);
         }
@@ -40,6 +47,46 @@ public final class Grid {
         this.im1 = im1;
         this.ny = ny;
         this.sheet = sheet;
+        this.logarithmic = logarithmic;
+    }
+
+    /**
+     * A strip in log z: nx values of log|z| from logR0 to logR1 and ny values of the argument from arg0 to arg1
+     * (the argument is continuous, so the strip may cover several sheets).
+     */
+    public static Grid logStrip(double logR0, double logR1, int nx, double arg0, double arg1, int ny) {
+        return new Grid("log strip", logR0, logR1, nx, arg0, arg1, ny, 0, true);
+    }
+
+    /** Parses "LOGR0:LOGR1:NX,ARG0:ARG1:NY" as a strip in log z. */
+    public static Grid parseLogStrip(String argument, String text) {
+        Grid g = parse(argument, text, 0);
+        return new Grid(argument, g.re0, g.re1, g.nx, g.im0, g.im1, g.ny, 0, true);
+    }
+
+    /** Whether this is a strip in log z (coordinates log|z| and arg z) rather than a rectangle of one sheet. */
+    public boolean logarithmic() {
+        return logarithmic;
+    }
+
+    /** Rows j0..j1 of this grid, as a grid of the same kind. */
+    public Grid rows(int j0, int j1) {
+        return new Grid("grid", re0, re1, nx, im(j0), im(j1), j1 - j0 + 1, sheet, logarithmic);
+    }
+
+    /** Whether a point of the surface lies in the grid's region. */
+    public boolean contains(SurfacePoint p) {
+        if (logarithmic) {
+            return p.logRe() >= re0 && p.logRe() <= re1 && p.logIm() >= im0 && p.logIm() <= im1;
+        }
+        return p.sheet() == sheet && contains(p.re(), p.im());
+    }
+
+    /**
+     * The spacing of the grid in |z|: the coordinate spacing, times the largest |z| of a log strip.
+     */
+    public double zSpacing() {
+        return logarithmic ? spacing() * Math.exp(re1) : spacing();
     }
 
     public static Grid of(double re0, double re1, int nx, double im0, double im1, int ny, int sheet) {
@@ -125,6 +172,9 @@ public final class Grid {
     public SurfacePoint point(int i, int j) {
         double x = re(i);
         double y = im(j);
+        if (logarithmic) {
+            return SurfacePoint.fromLog(x, y);
+        }
         if (x == 0 && y == 0) {
             return null;
         }

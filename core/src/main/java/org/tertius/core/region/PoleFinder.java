@@ -41,7 +41,7 @@ public final class PoleFinder {
     }
 
     /**
-     * Finds the poles and zeros of w in the closed rectangle of {@code grid} (its sheet). Grow the tree over the
+     * Finds the poles and zeros of w in the region of {@code grid} (a rectangle of one sheet or a strip in log z). Grow the tree over the
      * rectangle first (for example with {@link RegionSolver}); only singularities inside stored disks are seen.
      */
     public static List<Singularity> find(Painleve3Solution solution, Grid grid) {
@@ -93,6 +93,11 @@ public final class PoleFinder {
 
     /** Whether the node's search window (INSIDE radii) can reach the rectangle on the grid's sheet. */
     private static boolean near(Node n, Grid g) {
+        if (g.logarithmic()) {
+            double dx = Math.max(0, Math.max(g.re0() - n.tauRe(), n.tauRe() - g.re1()));
+            double dy = Math.max(0, Math.max(g.im0() - n.tauIm(), n.tauIm() - g.im1()));
+            return Math.hypot(dx, dy) <= INSIDE * n.radius();
+        }
         SurfacePoint c = SurfacePoint.fromLog(n.tauRe(), n.tauIm());
         double reach = Cx.abs(c.re(), c.im()) * (Math.exp(INSIDE * n.radius()) - 1) + 1e-12;
         if (Math.abs(c.sheet() - g.sheet()) > 1 || n.radius() * INSIDE > Math.PI) {
@@ -143,7 +148,7 @@ public final class PoleFinder {
             double tr = n.tauRe() + n.radius() * sr;
             double ti = n.tauIm() + n.radius() * si;
             SurfacePoint p = SurfacePoint.fromLog(tr, ti);
-            if (p.sheet() != grid.sheet() || !grid.contains(p.re(), p.im())) {
+            if (!grid.contains(p)) {
                 continue;
             }
             Complex z0 = p.z();

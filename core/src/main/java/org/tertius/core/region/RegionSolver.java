@@ -57,7 +57,7 @@ public final class RegionSolver {
 
         // pass 1: the tree, from a coarse subset in order of distance from the start
         long t0 = System.nanoTime();
-        int stride = Math.max(1, (int) Math.round(COARSE_SPACING / Math.max(grid.spacing(), 1e-300)));
+        int stride = Math.max(1, (int) Math.round(COARSE_SPACING / Math.max(grid.zSpacing(), 1e-300)));
         List<int[]> coarse = new ArrayList<>();
         for (int j = 0; j < ny; j += stride) {
             for (int i = 0; i < nx; i += stride) {
@@ -191,7 +191,12 @@ public final class RegionSolver {
     }
 
     private static double distance(Grid g, int i, int j, SurfacePoint start) {
-        return org.tertius.core.number.Cx.abs(g.re(i) - start.re(), g.im(j) - start.im()) + Math.abs(g.sheet() - start.sheet()) * 10.0;
+        SurfacePoint p = g.point(i, j);
+        if (p == null) {
+            return 0;
+        }
+        return org.tertius.core.number.Cx.abs(p.re() - start.re(), p.im() - start.im())
+                + Math.abs(p.sheet() - start.sheet()) * 10.0;
     }
 
     private static void checkCancelled(RegionSettings s) {

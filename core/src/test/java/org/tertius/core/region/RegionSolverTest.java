@@ -98,6 +98,30 @@ class RegionSolverTest {
     }
 
     @Test
+    void logStripCoversSeveralSheetsAndFindsEveryCopyOfAPole() {
+        // the rational solution is single-valued, so its pole at z = -1/2 appears on every sheet: at log|z| = log 1/2
+        // and arg z = pi + 2 pi k; a strip with arg in [-4, 10] holds k = -1, 0, 1
+        Complex z0 = new Complex(2, 1);
+        Painleve3Solution s = Painleve3Solution.builder(Painleve3.of(2, 2, 1, -1))
+                .start(z0, z0.subtract(0.5).divide(z0.add(0.5)), z0.add(0.5).pow(-2)).build();
+        Grid g = Grid.logStrip(-1.5, 0.5, 41, -4, 10, 141);
+        GridResult r = RegionSolver.solve(s, g, RegionSettings.defaults());
+        assertEquals(0, r.statistics().failed());
+        int poles = 0;
+        for (Singularity x : PoleFinder.find(s, g)) {
+            if (x.kind() == Singularity.Kind.POLE) {
+                poles++;
+                assertTrue(x.point().z().subtract(new Complex(-0.5)).norm() <= x.error() + 1e-12, x.toString());
+            }
+        }
+        assertEquals(3, poles);
+        // a value of the strip against the closed form
+        SurfacePoint p = g.point(20, 130);
+        Complex w = p.z().subtract(0.5).divide(p.z().add(0.5));
+        assertTrue(r.w(20, 130).subtract(w).norm() <= r.error(20, 130), "strip value at " + p);
+    }
+
+    @Test
     void polesOfABesselTypeSolutionAreZerosOfItsBesselDenominator() {
         // w = -u'/(a u) with u built from 0F1 (DLMF 10.16.9, §32.10): poles of w are zeros of u with residue -1/a.
         // Independent check: Newton's method on 1/w evaluated with Apfloat from each reported pole must move it
