@@ -10,12 +10,13 @@ import picocli.CommandLine.Option;
 
 /**
  * A solution given by connection data instead of start data: {@code --family NAME} with its parameters
- * (decaying: --lambda; power: --sigma --amplitude; analytic: --value-at-zero).
+ * (decaying: --lambda; power: --sigma --amplitude; analytic: --value-at-zero; algebraic: --background).
  */
 public final class FamilyOptions {
     @Option(names = "--family", paramLabel = "NAME",
             description = "solution by connection data: decaying (needs --lambda; alpha=0 beta=0 gamma=1 delta=-1),"
-                    + " power (--sigma, --amplitude: w ~ B z^sigma at 0), analytic (--value-at-zero: w(0))")
+                    + " power (--sigma, --amplitude: w ~ B z^sigma at 0), analytic (--value-at-zero: w(0)),"
+                    + " algebraic (--background: w ~ c + sum a_k x^-k at +infinity, gamma c^4 + delta = 0)")
     String family;
     @Option(names = "--lambda", paramLabel = "L", description = "decaying family: w ~ 1 - 2 lambda K0(2x) at +infinity")
     String lambda;
@@ -25,6 +26,10 @@ public final class FamilyOptions {
     String amplitude;
     @Option(names = "--value-at-zero", paramLabel = "W", description = "analytic family: w(0) != 0")
     String valueAtZero;
+    @Option(names = "--background", paramLabel = "C",
+            description = "algebraic family: the constant c at +infinity (gamma c^4 + delta = 0), a value or"
+                    + " root0..root3 (the fourth roots of -delta/gamma, principal root times i^k)")
+    String background;
 
     public boolean given() {
         return family != null;
@@ -37,6 +42,14 @@ public final class FamilyOptions {
         put(m, "sigma", sigma);
         put(m, "B", amplitude);
         put(m, "w0", valueAtZero);
+        if (background != null) {
+            String b = background.trim().toLowerCase(java.util.Locale.ROOT);
+            if (b.matches("root[0-3]")) {
+                m.put("root", b.substring(4));
+            } else {
+                m.put("c", background);
+            }
+        }
         return m;
     }
 

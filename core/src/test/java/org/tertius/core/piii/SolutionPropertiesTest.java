@@ -143,6 +143,32 @@ class SolutionPropertiesTest {
     }
 
     @Test
+    void oneSolutionSharedByThreadsGivesValuesWithinTheEstimates() throws Exception {
+        // four threads evaluate one solution at the same 40 points in different orders (the tree grows under a
+        // lock); every value must agree with a sequential evaluation within the two estimates
+        Painleve3Solution shared = generic(0.5, 0.3);
+        Painleve3Solution alone = generic(0.5, 0.3);
+        java.util.List<SurfacePoint> pts = new java.util.ArrayList<>();
+        java.util.Random rnd = new java.util.Random(SEED);
+        for (int k = 0; k < 40; k++) {
+            pts.add(SurfacePoint.of(rnd.nextDouble() * 12 - 6 + 0.01, rnd.nextDouble() * 12 - 6, rnd.nextInt(3) - 1));
+        }
+        java.util.concurrent.ExecutorService pool = java.util.concurrent.Executors.newFixedThreadPool(4);
+        java.util.List<java.util.concurrent.Future<java.util.List<Painleve3Value>>> futures = new java.util.ArrayList<>();
+        for (int t = 0; t < 4; t++) {
+            java.util.List<SurfacePoint> order = new java.util.ArrayList<>(pts);
+            java.util.Collections.shuffle(order, new java.util.Random(t));
+            futures.add(pool.submit(() -> shared.evaluate(order)));
+        }
+        for (java.util.concurrent.Future<java.util.List<Painleve3Value>> f : futures) {
+            for (Painleve3Value v : f.get()) {
+                agree(v, alone.evaluate(v.point()), "threads");
+            }
+        }
+        pool.shutdown();
+    }
+
+    @Test
     void residualOfTheEquationIsSmallAtRandomPoints() {
         // w'' by a 4th-order central difference of w' from the dense output (h = 1e-3: truncation about
         // h^4 |w^(5)| ~ 1e-12 away from poles, rounding about 1e-13/h): the residual z w w'' - z w'^2 + w w' -
