@@ -69,7 +69,9 @@ public final class MemberSolution {
             im[i] = startState.get(i).getImaginary();
         }
         double[] tau = tau(x0, x0Sheet);
-        this.engine = Solution.start(system, settings, StateProjection.NONE, tau[0], tau[1], re, im);
+        // the uncertainty of the start state (from a series or another flow) is carried by the flow like any error
+        this.engine = Solution.start(system, settings, StateProjection.NONE, tau[0], tau[1], re, im,
+                this.startError.clone(), new double[re.length]);
     }
 
     public static Builder builder(MemberParameters parameters) {
@@ -136,7 +138,7 @@ public final class MemberSolution {
         double[] err = new double[e.dimension()];
         for (int i = 0; i < e.dimension(); i++) {
             state.add(new Complex(e.re(i), e.im(i)));
-            err[i] = e.error(i) + startError[i];
+            err[i] = e.error(i);
         }
         List<Complex> values = ringValues(state, x);
         Complex[] qr = new Complex[4];
@@ -159,8 +161,7 @@ public final class MemberSolution {
             double[] err = new double[node.dimension()];
             for (int i = 0; i < node.dimension(); i++) {
                 state.add(new Complex(node.stateRe(i), node.stateIm(i)));
-                err[i] = Math.hypot(node.errorRe(i), node.errorIm(i)) + startError[i]
-                        + 4 * Math.ulp(1.0) * state.get(i).norm();
+                err[i] = Math.hypot(node.errorRe(i), node.errorIm(i)) + 4 * Math.ulp(1.0) * state.get(i).norm();
             }
             Complex x = member.variable() == IndependentVariable.LOG
                     ? new Complex(node.tauRe(), node.tauIm()).exp() : new Complex(node.tauRe(), node.tauIm());
