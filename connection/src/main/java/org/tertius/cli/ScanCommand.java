@@ -34,7 +34,7 @@ public final class ScanCommand implements Callable<Integer> {
     SolverOptions solver = new SolverOptions();
     @Option(names = "--range", paramLabel = "A:B:N", required = true, description = "lambda from A to B, N values")
     String range;
-    @Option(names = "--output", paramLabel = "FILE", description = "CSV file (rows already there are kept and"
+    @Option(names = {"--out", "--output"}, paramLabel = "FILE", description = "CSV file (rows already there are kept and"
             + " their tasks skipped); default standard output")
     Path output;
     @Option(names = "--plot", paramLabel = "FILE.png", description = "PNG plot of the first singularity and sigma")

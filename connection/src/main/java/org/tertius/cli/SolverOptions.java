@@ -8,7 +8,7 @@ public final class SolverOptions {
     @Option(names = "--tol", paramLabel = "TOL",
             description = "local error tolerance per step, relative to 1+|y| (default 1e-13; range 1e-16..1e-2)")
     Double tolerance;
-    @Option(names = "--order", paramLabel = "N", description = "Taylor order per step, even, 8..400 (default 40)")
+    @Option(names = "--order", paramLabel = "N", description = "Taylor order per step, even, 8..400 (default 32)")
     Integer order;
     @Option(names = "--max-steps", paramLabel = "N", description = "step budget per path (default 20000)")
     Integer maxSteps;
