@@ -49,7 +49,7 @@ public final class Main implements Runnable {
         cl.setExecutionExceptionHandler((ex, commandLine, parseResult) -> {
             Throwable t = ex;
             if (t instanceof InvalidInputException) {
-                commandLine.getErr().println("tertius: " + t.getMessage());
+                commandLine.getErr().println("tertius: " + optionName((InvalidInputException) t));
                 return EXIT_BAD_INPUT;
             }
             if (t instanceof TertiusException) {
@@ -63,6 +63,22 @@ public final class Main implements Runnable {
             throw ex;
         });
         return cl;
+    }
+
+    /** Library argument names and the options that set them. */
+    private static final java.util.Map<String, String> OPTIONS = java.util.Map.of("digits", "--digits", "tolerance",
+            "--tol", "order", "--order", "maxSteps", "--max-steps", "z", "--z0", "w0", "--w0", "dw0", "--dw0", "d3w0",
+            "--d3w0", "alpha", "--alpha", "beta", "--beta");
+
+    /** The message with the library's argument name replaced by the option that sets it. */
+    static String optionName(InvalidInputException e) {
+        String arg = e.argument();
+        String option = OPTIONS.get(arg);
+        String msg = e.getMessage();
+        if (option != null && msg.startsWith(arg + ":")) {
+            return option + msg.substring(arg.length());
+        }
+        return msg;
     }
 
     /** Version from the jar manifest or the build. */
