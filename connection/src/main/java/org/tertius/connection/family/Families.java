@@ -8,6 +8,7 @@ import org.tertius.connection.infinity.AlgebraicExpansion;
 import org.tertius.connection.match.DecayingConnection;
 import org.tertius.connection.num.Arith;
 import org.tertius.connection.zero.LocalValue;
+import org.tertius.connection.zero.LogarithmicAtZero;
 import org.tertius.connection.zero.PowerSeriesAtZero;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.number.ComplexText;
@@ -20,7 +21,9 @@ import org.tertius.core.step.SolverSettings;
  * <ul>
  *   <li>{@code decaying} (lambda, real): PIII(0, 0, 1, -1), w ~ 1 - 2 lambda K0(2x) at +infinity (McCoy, Tracy
  *       and Wu, J. Math. Phys. 18 (1977) 1058); every real lambda (pole-free on the positive axis only for
- *       |lambda| &lt; 1/pi);</li>
+ *       |lambda| &lt; 1/pi), started from its data at +infinity; for the logarithmic member lambda = 1/pi an
+ *       optional {@code x0} in (0, 0.2] starts it instead from the log-series at 0 ({@link LogarithmicAtZero},
+ *       error below 1e-15 relative for x0 &lt;= 0.01);</li>
  *   <li>{@code power} (sigma, B, complex, |Re sigma| &lt; 1): w ~ B z^sigma at 0, any equation;</li>
  *   <li>{@code analytic} (w0 != 0): analytic at 0 with w(0) = w0, any equation (the power family with
  *       sigma = 0);</li>
@@ -82,7 +85,9 @@ public final class Families {
 
     private static Painleve3Solution decaying(Painleve3 equation, Map<String, String> parameters,
                                               SolverSettings settings) {
-        allow(parameters, Set.of("lambda"));
+        Map<String, String> rest = new java.util.HashMap<>(parameters);
+        String x0text = rest.remove("x0");
+        allow(rest, Set.of("lambda"));
         if (!equation.equals(DecayingConnection.equation())) {
             throw new InvalidInputException("family", "the decaying family belongs to alpha = 0, beta = 0, gamma = 1,"
                     + " delta = -1, got " + equation + " (rescale z and w to reach that equation)");
@@ -92,7 +97,20 @@ public final class Families {
             throw new InvalidInputException("lambda", "must be real for the decaying family on the positive axis,"
                     + " got " + lambda);
         }
-        return DecayingConnection.solution(lambda.getReal(), settings);
+        if (x0text == null) {
+            return DecayingConnection.solution(lambda.getReal(), settings);
+        }
+        if (!(Math.abs(lambda.getReal() * Math.PI - 1) <= 1e-15)) {
+            throw new InvalidInputException("x0", "a start abscissa near 0 is available only for the logarithmic"
+                    + " member lambda = 1/pi (other members start from their data at +infinity), got lambda = "
+                    + lambda.getReal());
+        }
+        Complex x0 = value(parameters, "x0");
+        if (x0.getImaginary() != 0) {
+            throw new InvalidInputException("x0", "must be real, got " + x0);
+        }
+        LocalValue<Complex> v = LogarithmicAtZero.at(x0.getReal());
+        return Painleve3Solution.builder(equation).start(v.z(), v.w(), v.dw()).settings(settings).build();
     }
 
     private static Painleve3Solution algebraic(Painleve3 equation, Map<String, String> parameters,

@@ -162,7 +162,14 @@ class SolutionPropertiesTest {
         }
         for (java.util.concurrent.Future<java.util.List<Painleve3Value>> f : futures) {
             for (Painleve3Value v : f.get()) {
-                agree(v, alone.evaluate(v.point()), "threads");
+                // which thread grows which part of the tree varies from run to run, so only the honesty of the
+                // two estimates is asserted here (their size depends on the path taken)
+                Painleve3Value w = alone.evaluate(v.point());
+                double d = v.w().subtract(w.w()).norm();
+                if (!(d <= v.errW() + w.errW()) || !(v.errW() < 1e-6)) {
+                    throw new AssertionError("threads: |w1 - w2| = " + d + ", estimates " + v.errW() + " + " + w.errW()
+                            + " at " + v.point());
+                }
             }
         }
         pool.shutdown();
