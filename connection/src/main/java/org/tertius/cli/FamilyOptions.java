@@ -71,6 +71,7 @@ public final class FamilyOptions {
         sigma = f.fill(sigma, "sigma");
         amplitude = f.fill(amplitude, "b");
         valueAtZero = f.fill(valueAtZero, "w00");
+        background = f.fill(background, "background");
     }
 
     public Painleve3Solution solution(Painleve3 equation, SolverSettings settings) {
