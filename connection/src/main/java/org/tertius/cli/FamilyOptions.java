@@ -10,13 +10,16 @@ import picocli.CommandLine.Option;
 
 /**
  * A solution given by connection data instead of start data: {@code --family NAME} with its parameters
- * (decaying: --lambda; power: --sigma --amplitude; analytic: --value-at-zero; algebraic: --background).
+ * (decaying: --lambda; power: --sigma --amplitude; analytic: --value-at-zero; algebraic: --background;
+ * oscillating: --amplitude-infinity --phase).
  */
 public final class FamilyOptions {
     @Option(names = "--family", paramLabel = "NAME",
             description = "solution by connection data: decaying (needs --lambda; alpha=0 beta=0 gamma=1 delta=-1),"
                     + " power (--sigma, --amplitude: w ~ B z^sigma at 0), analytic (--value-at-zero: w(0)),"
-                    + " algebraic (--background: w ~ c + sum a_k x^-k at +infinity, gamma c^4 + delta = 0)")
+                    + " algebraic (--background: w ~ c + sum a_k x^-k at +infinity, gamma c^4 + delta = 0),"
+                    + " oscillating (--amplitude-infinity, --phase; alpha=0 beta=0 gamma=-1 delta=1:"
+                    + " log w ~ A x^(-1/2) cos(2x + (A^2/2) log x + phi))")
     String family;
     @Option(names = "--lambda", paramLabel = "L", description = "decaying family: w ~ 1 - 2 lambda K0(2x) at +infinity")
     String lambda;
@@ -31,6 +34,12 @@ public final class FamilyOptions {
                     + " root0..root3 (the fourth roots of -delta/gamma, principal root times i^k)")
     String background;
 
+    @Option(names = "--amplitude-infinity", paramLabel = "A",
+            description = "oscillating family: A in log w ~ A x^(-1/2) cos(2x + (A^2/2) log x + phi), real, |A| <= 3")
+    String amplitudeInfinity;
+    @Option(names = "--phase", paramLabel = "PHI", description = "oscillating family: the phase constant phi (real)")
+    String phase;
+
     public boolean given() {
         return family != null;
     }
@@ -42,6 +51,8 @@ public final class FamilyOptions {
         put(m, "sigma", sigma);
         put(m, "B", amplitude);
         put(m, "w0", valueAtZero);
+        put(m, "A", amplitudeInfinity);
+        put(m, "phi", phase);
         if (background != null) {
             String b = background.trim().toLowerCase(java.util.Locale.ROOT);
             if (b.matches("root[0-3]")) {
@@ -72,6 +83,8 @@ public final class FamilyOptions {
         amplitude = f.fill(amplitude, "b");
         valueAtZero = f.fill(valueAtZero, "w00");
         background = f.fill(background, "background");
+        amplitudeInfinity = f.fill(amplitudeInfinity, "amplitude-infinity");
+        phase = f.fill(phase, "phase");
     }
 
     public Painleve3Solution solution(Painleve3 equation, SolverSettings settings) {

@@ -5,6 +5,7 @@ import java.util.Map;
 import java.util.Set;
 import org.hipparchus.complex.Complex;
 import org.tertius.connection.infinity.AlgebraicExpansion;
+import org.tertius.connection.infinity.OscillatingExpansion;
 import org.tertius.connection.match.DecayingConnection;
 import org.tertius.connection.num.Arith;
 import org.tertius.connection.zero.LocalValue;
@@ -34,11 +35,19 @@ import org.tertius.core.step.SolverSettings;
  *       to exponentially small terms O(e^(-|mu| x0)), mu = 2 sqrt(gamma) c: the member given here is the one
  *       whose data at x0 are the optimally truncated series; integrating away from x0 can amplify that
  *       ambiguity like e^(|Re mu| |x - x0|).</li>
+ *   <li>{@code oscillating} (A, phi real, |A| &lt;= {@link OscillatingExpansion#MAX_AMPLITUDE}; optional {@code x0},
+ *       default {@value #OSCILLATING_X0}): PIII(0, 0, -1, 1), the real solutions with
+ *       log w ~ A x^(-1/2) cos(2x + (A^2/2) log x + phi) at +infinity ({@link OscillatingExpansion}), started
+ *       from the expansion at x0 (refused where its estimate exceeds 1e-8 relative).</li>
  * </ul>
  */
 public final class Families {
     /** Family names. */
-    public static final List<String> NAMES = List.of("decaying", "power", "analytic", "algebraic");
+    public static final List<String> NAMES = List.of("decaying", "power", "analytic", "algebraic", "oscillating");
+    /** Default start abscissa of the oscillating family (expansion estimate about 1e-15 there for |A| &lt;= 3). */
+    public static final double OSCILLATING_X0 = 30;
+    /** Orders of the oscillating expansion. */
+    static final int OSCILLATING_ORDERS = 40;
     /** Error of the start data of the algebraic family at its default start abscissa, relative to 1 + |w|. */
     static final double ALGEBRAIC_TOLERANCE = 1e-15;
     /** Number of coefficients of the algebraic expansion (enough for optimal truncation up to |mu| x ~ 150). */
@@ -78,6 +87,8 @@ public final class Families {
                 return atZero(equation, Complex.ZERO, w0, settings);
             case "algebraic":
                 return algebraic(equation, parameters, settings);
+            case "oscillating":
+                return oscillating(equation, parameters, settings);
             default:
                 throw new InvalidInputException("family", "unknown family '" + name + "'; known: " + NAMES);
         }
@@ -155,6 +166,43 @@ public final class Families {
             }
         } else {
             v = e.startData(ALGEBRAIC_TOLERANCE);
+        }
+        return Painleve3Solution.builder(equation).start(v.z(), v.w(), v.dw()).settings(settings).build();
+    }
+
+    private static Painleve3Solution oscillating(Painleve3 equation, Map<String, String> parameters,
+                                                SolverSettings settings) {
+        Map<String, String> rest = new java.util.HashMap<>(parameters);
+        String x0text = rest.remove("x0");
+        allow(rest, Set.of("A", "phi"));
+        if (!equation.equals(Painleve3.of(0, 0, -1, 1))) {
+            throw new InvalidInputException("family", "the oscillating family is implemented for alpha = 0, beta = 0,"
+                    + " gamma = -1, delta = 1 only (u = log w, u'' + u'/x = -2 sinh 2u), got " + equation
+                    + "; for other gamma < 0 < delta with alpha = beta = 0 rescale z and w (w -> s w, z -> t z) to"
+                    + " reach gamma = -1, delta = 1 and pass --alpha 0 --beta 0 --gamma -1 --delta 1");
+        }
+        Complex a = value(parameters, "A");
+        Complex phi = value(parameters, "phi");
+        if (a.getImaginary() != 0 || phi.getImaginary() != 0) {
+            throw new InvalidInputException("A", "A and phi must be real (the family describes real solutions on"
+                    + " the positive axis), got A = " + a + ", phi = " + phi);
+        }
+        double x0 = OSCILLATING_X0;
+        if (x0text != null) {
+            Complex z = value(parameters, "x0");
+            if (z.getImaginary() != 0 || !(z.getReal() > 0) || !Double.isFinite(z.getReal())) {
+                throw new InvalidInputException("x0", "must be a real x0 > 0 (the expansion is at +infinity), got "
+                        + z);
+            }
+            x0 = z.getReal();
+        }
+        OscillatingExpansion e = OscillatingExpansion.create(a.getReal(), phi.getReal(), OSCILLATING_ORDERS);
+        LocalValue<Complex> v = e.at(x0);
+        double rel = Math.max(v.errW() / (1 + v.w().norm()), v.errDw() / (1 + v.dw().norm()));
+        if (!(rel <= 1e-8)) {
+            throw new InvalidInputException("x0", "is too small for the oscillating expansion with A = "
+                    + a.getReal() + ": its error estimate there is " + rel + " (relative); start further out,"
+                    + " e.g. at the default x0 = " + OSCILLATING_X0);
         }
         return Painleve3Solution.builder(equation).start(v.z(), v.w(), v.dw()).settings(settings).build();
     }
