@@ -90,11 +90,21 @@ public final class TableCommand implements Callable<Integer> {
         try (TableWriter w = TableWriter.open(spec.commandLine().getOut(), out, resume, signature, comments,
                 ValueCsv.HEADER);
              Progress progress = new Progress("table")) {
-            Runtime.getRuntime().addShutdownHook(new Thread(w::flush));
-            if (lineSpec != null) {
-                status = line(s, Targets.line("--line", lineSpec, k), w, progress, console);
-            } else {
-                status = grid(s, Regions.region(gridSpec, logStrip, k), w, progress);
+            // on Ctrl-C the rows computed so far reach the file
+            Thread hook = new Thread(w::flushQuietly);
+            Runtime.getRuntime().addShutdownHook(hook);
+            try {
+                if (lineSpec != null) {
+                    status = line(s, Targets.line("--line", lineSpec, k), w, progress, console);
+                } else {
+                    status = grid(s, Regions.region(gridSpec, logStrip, k), w, progress);
+                }
+            } finally {
+                try {
+                    Runtime.getRuntime().removeShutdownHook(hook);
+                } catch (IllegalStateException shuttingDown) {
+                    // the hook runs anyway
+                }
             }
         }
         if (out != null) {

@@ -106,6 +106,11 @@ final class TableWriter implements AutoCloseable {
         }
     }
 
+    /** Flushes without reporting errors (for shutdown hooks). */
+    void flushQuietly() {
+        out.flush();
+    }
+
     long rowsWritten() {
         return rows;
     }
