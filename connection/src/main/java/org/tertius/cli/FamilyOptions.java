@@ -40,6 +40,11 @@ public final class FamilyOptions {
     @Option(names = "--phase", paramLabel = "PHI", description = "oscillating family: the phase constant phi (real)")
     String phase;
 
+    @Option(names = "--family-x0", paramLabel = "X",
+            description = "where the family's expansion hands over to the integrator (algebraic, oscillating: at"
+                    + " +infinity; decaying at lambda = 1/pi: in (0, 0.2]); default: chosen from the error estimate")
+    String familyX0;
+
     public boolean given() {
         return family != null;
     }
@@ -51,6 +56,7 @@ public final class FamilyOptions {
         put(m, "sigma", sigma);
         put(m, "B", amplitude);
         put(m, "w0", valueAtZero);
+        put(m, "x0", familyX0);
         put(m, "A", amplitudeInfinity);
         put(m, "phi", phase);
         if (background != null) {
@@ -85,6 +91,7 @@ public final class FamilyOptions {
         background = f.fill(background, "background");
         amplitudeInfinity = f.fill(amplitudeInfinity, "amplitude-infinity");
         phase = f.fill(phase, "phase");
+        familyX0 = f.fill(familyX0, "family-x0");
     }
 
     public Painleve3Solution solution(Painleve3 equation, SolverSettings settings) {

@@ -66,9 +66,12 @@ public final class Main implements Runnable {
     }
 
     /** Library argument names and the options that set them. */
-    private static final java.util.Map<String, String> OPTIONS = java.util.Map.of("digits", "--digits", "tolerance",
-            "--tol", "order", "--order", "maxSteps", "--max-steps", "z", "--z0", "w0", "--w0", "dw0", "--dw0", "d3w0",
-            "--d3w0", "alpha", "--alpha", "beta", "--beta");
+    private static final java.util.Map<String, String> OPTIONS = java.util.Map.ofEntries(
+            java.util.Map.entry("digits", "--digits"), java.util.Map.entry("tolerance", "--tol"),
+            java.util.Map.entry("order", "--order"), java.util.Map.entry("maxSteps", "--max-steps"),
+            java.util.Map.entry("z", "--z0"), java.util.Map.entry("w0", "--w0"), java.util.Map.entry("dw0", "--dw0"),
+            java.util.Map.entry("d3w0", "--d3w0"), java.util.Map.entry("alpha", "--alpha"),
+            java.util.Map.entry("beta", "--beta"), java.util.Map.entry("x0", "--family-x0"));
 
     /** The message with the library's argument name replaced by the option that sets it. */
     static String optionName(InvalidInputException e) {

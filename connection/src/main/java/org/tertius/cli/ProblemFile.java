@@ -17,7 +17,7 @@ import org.tertius.core.InvalidInputException;
 final class ProblemFile {
     static final Set<String> KEYS = Set.of("alpha", "beta", "gamma", "delta", "z0", "w0", "dw0", "d3w0", "sheet",
             "at", "line", "grid", "tolerance", "order", "digits", "family", "lambda", "sigma", "b", "w00",
-            "member", "times", "s", "m", "x0", "state", "title", "background", "amplitude-infinity", "phase");
+            "member", "times", "s", "m", "x0", "state", "title", "background", "amplitude-infinity", "phase", "family-x0");
     private final Properties props;
     private final String name;
 
