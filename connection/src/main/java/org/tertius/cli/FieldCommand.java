@@ -26,7 +26,7 @@ import picocli.CommandLine.Spec;
 
 /** A PNG picture of a solution over a region, or a line plot of w along a segment. */
 @Command(name = "field", mixinStandardHelpOptions = true,
-        description = "Draw the solution over a region of one sheet (--grid) as a PNG: colour shows the phase, lightness"
+        description = "Draw the solution over a region of one sheet (--grid) or a strip in log z (--log-strip) as a PNG: colour shows the phase, lightness"
                 + " the modulus (zeros black, poles white), located poles and zeros ringed; or plot Re w and Im w"
                 + " along a segment (--line) with its poles marked.")
 public final class FieldCommand implements Callable<Integer> {

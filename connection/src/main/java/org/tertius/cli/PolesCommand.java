@@ -27,7 +27,7 @@ import picocli.CommandLine.Spec;
 
 /** The poles and zeros of w in a region. */
 @Command(name = "poles", mixinStandardHelpOptions = true,
-        description = "List the poles and zeros of w in a region of one sheet: CSV columns kind,z_re,z_im,sheet,"
+        description = "List the poles and zeros of w in a region of one sheet (--grid) or a strip in log z (--log-strip): CSV columns kind,z_re,z_im,sheet,"
                 + "lead_re,lead_im,err (lead: the residue at a pole, w' at a zero; err: estimated error of the"
                 + " position), or JSON.")
 public final class PolesCommand implements Callable<Integer> {

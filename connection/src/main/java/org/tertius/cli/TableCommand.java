@@ -24,8 +24,8 @@ import picocli.CommandLine.Spec;
 
 /** Values on a line or a grid, streamed to CSV, resumable. */
 @Command(name = "table", mixinStandardHelpOptions = true,
-        description = "Tabulate a solution on a line (--line A:B:N) or a grid (--grid RE0:RE1:NX,IM0:IM1:NY) of one"
-                + " sheet to CSV (columns as eval). Rows are written as they are computed; an interrupted run keeps"
+        description = "Tabulate a solution on a line (--line A:B:N), a grid of one sheet (--grid RE0:RE1:NX,IM0:IM1:NY)"
+                + " or a strip in log z (--log-strip) to CSV (columns as eval). Rows are written as computed; an interrupted run keeps"
                 + " them and --resume continues it. Poles met along a line are reported.")
 public final class TableCommand implements Callable<Integer> {
     /** Grid rows per band: a band is computed, then written. */
