@@ -256,7 +256,19 @@ final class SegmentIntegrator {
      * says that the guess was far off), so that the fixed-point coefficients neither grow nor shrink fast.
      */
     private TaylorSeries expandScaled(MpComplex tau, MpComplex[] y, double r) {
-        TaylorSeries series = expand(tau, y, r);
+        TaylorSeries series = null;
+        // a scale far beyond the radius of convergence makes the scaled coefficients overflow at high orders
+        // (they grow like (r / rho)^k): shrink the scale and expand again
+        for (int shrink = 0; series == null; shrink++) {
+            try {
+                series = expand(tau, y, r);
+            } catch (org.tertius.core.UnreachableTargetException e) {
+                if (shrink >= 8) {
+                    throw e;
+                }
+                r *= 0.25;
+            }
+        }
         for (int attempt = 0; attempt < 3; attempt++) {
             double q = rootRadius(series);
             if (q >= 0.4 && q <= 2.5 || !Double.isFinite(q) || q <= 0) {
