@@ -77,11 +77,14 @@ public final class DemoCommand implements Callable<Integer> {
         List<SurfacePoint> line = Targets.line("line", "0.25:10:400", 0);
         Path table = out.resolve("real-axis.csv");
         List<Singularity> onLine;
+        List<Painleve3Value> lineValues = new java.util.ArrayList<>();
         try (PrintWriter w = new PrintWriter(Files.newBufferedWriter(table, StandardCharsets.UTF_8))) {
             ValueCsv.header(w, s.equation().toString(), "the positive real axis, 400 points from 0.25 to 10");
             RegionSolver.growTowards(s, line);
             for (SurfacePoint p : line) {
-                w.println(ValueCsv.row(s.evaluate(p)));
+                Painleve3Value v = s.evaluate(p);
+                lineValues.add(v);
+                w.println(ValueCsv.row(v));
             }
             onLine = TableCommand.polesAlong(s, line);
             for (Singularity p : onLine) {
@@ -102,7 +105,7 @@ public final class DemoCommand implements Callable<Integer> {
         double[] re = new double[line.size()];
         double[] im = new double[line.size()];
         for (int i = 0; i < x.length; i++) {
-            Painleve3Value v = s.evaluate(line.get(i));
+            Painleve3Value v = lineValues.get(i);
             x[i] = line.get(i).re();
             re[i] = v.w().getReal();
             im[i] = v.w().getImaginary();

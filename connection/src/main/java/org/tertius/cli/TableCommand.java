@@ -239,7 +239,7 @@ public final class TableCommand implements Callable<Integer> {
 
     private static String pointRow(Grid g, int i, int j) {
         SurfacePoint p = g.point(i, j);
-        return p == null || g.logarithmic() && p == null ? String.format(Locale.ROOT, "%.17g,%.17g,%d,nan,nan,nan,nan,inf", g.re(i), g.im(j), g.sheet())
+        return p == null ? String.format(Locale.ROOT, "%.17g,%.17g,%d,nan,nan,nan,nan,inf", g.re(i), g.im(j), g.sheet())
                 : ValueCsv.unreachedRow(p);
     }
 }
