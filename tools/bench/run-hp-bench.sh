@@ -14,12 +14,12 @@ rm -f "$CPFILE"
 JAVA_OPTS="-XX:+UseSerialGC -XX:TieredStopAtLevel=4 -Xshare:auto"
 echo "== machine: $(nproc) cores, load $(cut -d' ' -f1-3 /proc/loadavg)"
 echo "== Apfloat and BigInteger product costs"
-java $JAVA_OPTS -cp "$CP" org.tertius.core.mp.HighPrecisionBench apfloat
+java $JAVA_OPTS -cp "$CP" org.tertius.core.piii.HighPrecisionBench apfloat
 for d in 50 100; do
   echo "== $d digits, whole process: Tertius"
-  /usr/bin/time -f "wall %e s" java $JAVA_OPTS -cp "$CP" org.tertius.core.mp.HighPrecisionBench once "$d"
+  /usr/bin/time -f "wall %e s" java $JAVA_OPTS -cp "$CP" org.tertius.core.piii.HighPrecisionBench once "$d"
   echo "== $d digits, whole process: mpmath peer"
   /usr/bin/time -f "wall %e s" python3 tools/bench/mp_peer.py --digits "$d"
 done
 echo "== time per step against digits (warm JVM)"
-java $JAVA_OPTS -cp "$CP" org.tertius.core.mp.HighPrecisionBench table 30 50 100 200 "$@"
+java $JAVA_OPTS -cp "$CP" org.tertius.core.piii.HighPrecisionBench table 30 50 100 200 "$@"

@@ -47,7 +47,7 @@ public final class EvalCommand implements Callable<Integer> {
         }
         if (digits != null) {
             try (Progress progress = new Progress("eval")) {
-                org.tertius.core.mp.HighPrecisionSolution hp = HighPrecisionRows.solution(solution, digits, progress);
+                org.tertius.core.piii.HighPrecisionSolution hp = HighPrecisionRows.solution(solution, digits, progress);
                 out.println("# " + solution.equationValue() + ", " + digits + " digits; digits: estimated correct"
                         + " significant digits of w and w'");
                 out.println(HighPrecisionRows.HEADER);

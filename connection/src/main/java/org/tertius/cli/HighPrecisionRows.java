@@ -1,8 +1,8 @@
 package org.tertius.cli;
 
 import java.util.List;
-import org.tertius.core.mp.HighPrecisionSolution;
-import org.tertius.core.mp.HighPrecisionValue;
+import org.tertius.core.piii.HighPrecisionSolution;
+import org.tertius.core.piii.HighPrecisionValue;
 import org.tertius.core.number.SurfacePoint;
 
 /** Rows of the high-precision output: values as decimal strings and the estimated correct digits. */

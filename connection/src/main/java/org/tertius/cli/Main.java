@@ -13,13 +13,31 @@ import picocli.CommandLine.Command;
  */
 @Command(name = "tertius", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
         description = "Painleve III transcendents on their Riemann surface: values, tables, pole fields,"
-                + " connection problems and solution scans, with error estimates.",
-        subcommands = {EvalCommand.class, TableCommand.class, FieldCommand.class, PolesCommand.class,
-            DescribeCommand.class, ConnectCommand.class, ScanCommand.class, DemoCommand.class})
+                + " connection problems and solution scans, with error estimates.")
 public final class Main implements Runnable {
     public static final int EXIT_BAD_INPUT = 2;
     public static final int EXIT_UNREACHED = 3;
     public static final int EXIT_INTERRUPTED = 130;
+
+    /**
+     * The subcommands in the order of the help text. They are built on demand: picocli reflects over every
+     * option of a command it is given, and doing so for all eight costs about 0.3 s of a cold JVM, most of the
+     * start-up of a one-point evaluation.
+     */
+    private static final java.util.Map<String, java.util.function.Supplier<Object>> COMMANDS = commands();
+
+    private static java.util.Map<String, java.util.function.Supplier<Object>> commands() {
+        java.util.Map<String, java.util.function.Supplier<Object>> m = new java.util.LinkedHashMap<>();
+        m.put("eval", EvalCommand::new);
+        m.put("table", TableCommand::new);
+        m.put("field", FieldCommand::new);
+        m.put("poles", PolesCommand::new);
+        m.put("describe", DescribeCommand::new);
+        m.put("connect", ConnectCommand::new);
+        m.put("scan", ScanCommand::new);
+        m.put("demo", DemoCommand::new);
+        return java.util.Collections.unmodifiableMap(m);
+    }
 
     @Override
     public void run() {
@@ -32,18 +50,32 @@ public final class Main implements Runnable {
 
     /** Runs the tool with the given streams (used by tests); returns the exit status. */
     public static int execute(String[] args, PrintWriter out, PrintWriter err) {
-        CommandLine cl = commandLine();
+        CommandLine cl = commandLine(args.length > 0 ? args[0] : null);
         cl.setOut(out);
         cl.setErr(err);
         return cl.execute(args);
     }
 
-    /** The command line with its subcommands and error handling. */
+    /** The command line with all its subcommands and error handling. */
     public static CommandLine commandLine() {
+        return commandLine(null);
+    }
+
+    /**
+     * The command line with error handling; when {@code first} names a subcommand only that one is built
+     * (a run of one command needs no other), otherwise all of them (help text, unknown-command messages).
+     */
+    static CommandLine commandLine(String first) {
         CommandLine cl = new CommandLine(new Main());
+        if (first != null && COMMANDS.containsKey(first)) {
+            cl.addSubcommand(COMMANDS.get(first).get());
+        } else {
+            COMMANDS.values().forEach(c -> cl.addSubcommand(c.get()));
+        }
         cl.setParameterExceptionHandler((ex, args) -> {
-            ex.getCommandLine().getErr().println("tertius: " + ex.getMessage()
-                    + " (see 'tertius " + ex.getCommandLine().getCommandName() + " --help')");
+            CommandLine where = ex.getCommandLine();
+            String help = where.getParent() == null ? "tertius --help" : "tertius " + where.getCommandName() + " --help";
+            where.getErr().println("tertius: " + ex.getMessage() + " (see '" + help + "')");
             return EXIT_BAD_INPUT;
         });
         cl.setExecutionExceptionHandler((ex, commandLine, parseResult) -> {

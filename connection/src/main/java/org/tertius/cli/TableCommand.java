@@ -146,7 +146,7 @@ public final class TableCommand implements Callable<Integer> {
              TableWriter w = TableWriter.open(spec.commandLine().getOut(), out, resume, signature,
                      List.of(solution.equationValue() + ", " + digits + " digits; digits: estimated correct significant"
                              + " digits of w and w'"), HighPrecisionRows.HEADER)) {
-            org.tertius.core.mp.HighPrecisionSolution hp = HighPrecisionRows.solution(solution, digits, progress);
+            org.tertius.core.piii.HighPrecisionSolution hp = HighPrecisionRows.solution(solution, digits, progress);
             for (int i = (int) w.existingRows(); i < points.size(); i++) {
                 w.row(HighPrecisionRows.row(hp.evaluate(points.get(i))));
                 w.flush();

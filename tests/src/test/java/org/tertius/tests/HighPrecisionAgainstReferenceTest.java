@@ -6,8 +6,8 @@ import java.math.BigDecimal;
 import java.math.MathContext;
 import org.apfloat.Apcomplex;
 import org.junit.jupiter.api.Test;
-import org.tertius.core.mp.HighPrecisionSolution;
-import org.tertius.core.mp.HighPrecisionValue;
+import org.tertius.core.piii.HighPrecisionSolution;
+import org.tertius.core.piii.HighPrecisionValue;
 
 /**
  * The high-precision engine against the independent reference data (tests/src/test/resources/reference/

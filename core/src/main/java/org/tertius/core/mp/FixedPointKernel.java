@@ -65,6 +65,10 @@ final class FixedPointKernel {
         return order;
     }
 
+    int fractionBits() {
+        return f;
+    }
+
     RecurrencePlan plan() {
         return plan;
     }

@@ -16,7 +16,7 @@ import org.tertius.core.InvalidInputException;
  */
 public final class MpContext {
     /** log2(10). */
-    static final double LOG2_10 = Math.log(10) / Math.log(2);
+    public static final double LOG2_10 = Math.log(10) / Math.log(2);
     /** Extra bits carried beyond the decimal digits (so that the last decimal digit is not at the edge). */
     private static final int GUARD_BITS = 8;
 
@@ -274,6 +274,81 @@ public final class MpContext {
             sum = w.multiply(sum, sum);
         }
         return round(sum);
+    }
+
+    /**
+     * The principal square root, from the double-precision root refined by Newton's iteration s = (s + x/s)/2,
+     * which doubles the correct bits per step (common practice); worked with 16 extra bits.
+     */
+    public MpComplex sqrt(MpComplex x) {
+        if (x.isZero()) {
+            return MpComplex.ZERO;
+        }
+        int e = 2 * (int) Math.floor(x.log2Abs() / 2);
+        MpContext w = widenBits(16);
+        MpComplex y = w.round(x.scalb(-e));
+        org.hipparchus.complex.Complex seed = y.toComplex().sqrt();
+        MpComplex s = w.fromDouble(seed.getReal(), seed.getImaginary());
+        for (int good = 50; ; good *= 2) {
+            s = w.divide(w.add(s, w.divide(y, s)), 2);
+            if (good >= w.bits) {
+                break;
+            }
+        }
+        return round(s.scalb(e / 2));
+    }
+
+    /**
+     * The principal logarithm (imaginary part in (-pi, pi]): from the double-precision logarithm l0 of x 2^-e,
+     * log x = l0 + log1p(u) + e log 2 with u = x 2^-e exp(-l0) - 1 of about 1e-16, log1p by its series (common
+     * practice); worked with 16 extra bits plus the bits lost to e log 2.
+     */
+    public MpComplex log(MpComplex x) {
+        if (x.isZero()) {
+            throw new ArithmeticException("logarithm of zero");
+        }
+        int e = (int) Math.round(x.log2Abs());
+        MpContext w = widenBits(16 + (e == 0 ? 0 : 32 - Integer.numberOfLeadingZeros(Math.abs(e))));
+        MpComplex l = w.logNearOne(w.round(x.scalb(-e)));
+        if (e != 0) {
+            l = w.add(l, w.multiply(w.logNearOne(w.fromLong(2)), e));
+        }
+        return round(l);
+    }
+
+    /** log y for |y| within a factor 2 of 1 (no scaling). */
+    private MpComplex logNearOne(MpComplex y) {
+        org.hipparchus.complex.Complex seed = y.toComplex().log();
+        MpComplex l0 = fromDouble(seed.getReal(), seed.getImaginary());
+        MpComplex u = subtract(multiply(y, exp(l0.negate())), fromLong(1));
+        MpComplex sum = MpComplex.ZERO;
+        MpComplex power = u;
+        for (int k = 1; !power.isZero() && power.log2Abs() - Math.log(k) / Math.log(2) > -bits - 4; k++) {
+            MpComplex term = divide(power, k);
+            sum = (k % 2 == 1) ? add(sum, term) : subtract(sum, term);
+            power = multiply(power, u);
+        }
+        return add(l0, sum);
+    }
+
+    /** pi, as the imaginary part of log(-1). */
+    public MpComplex pi() {
+        MpComplex l = log(fromLong(-1));
+        return new MpComplex(l.im, BigInteger.ZERO, l.exp);
+    }
+
+    /** The same helper with {@code extra} more bits (at least). */
+    private MpContext widenBits(int extra) {
+        return widen((int) Math.ceil(extra / LOG2_10));
+    }
+
+    /** The exact decimal values of the real and the imaginary part (a binary number has a finite expansion). */
+    public static BigDecimal[] exactDecimal(MpComplex x) {
+        return new BigDecimal[] {exactDecimal(x.re, x.exp), exactDecimal(x.im, x.exp)};
+    }
+
+    private static BigDecimal exactDecimal(BigInteger m, int e) {
+        return e >= 0 ? new BigDecimal(m.shiftLeft(e)) : new BigDecimal(m.multiply(BigInteger.valueOf(5).pow(-e)), -e);
     }
 
     @Override

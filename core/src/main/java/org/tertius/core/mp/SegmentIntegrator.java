@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import org.tertius.core.TertiusException;
 import org.tertius.core.UnreachableTargetException;
+import org.tertius.core.taylor.RecurrencePlan;
 
 /**
  * Integrates a polynomial system in arbitrary precision along a straight segment in the integration variable,
@@ -14,9 +15,13 @@ import org.tertius.core.UnreachableTargetException;
  * a Pade step (pole vaulting) with continued fractions, accepted where the last convergents agree to the
  * tolerance.
  *
+ * <p>This is the high-precision engine shared by every equation: it runs the equation's {@link RecurrencePlan}
+ * (the same compiled recurrence as the double-precision kernel) in fixed-point arithmetic; the equation layer
+ * plans the path in double precision and converts its data to and from the polynomial form.
+ *
  * <p>Immutable; a run allocates its own work arrays, so one integrator serves several threads.
  */
-final class SegmentIntegrator {
+public final class SegmentIntegrator {
     /** Safety factor on the Taylor step (the truncation error then lies a few digits below the tolerance). */
     private static final double TAYLOR_SAFETY = 0.95;
     /** Pade is tried when Taylor would need more than this many steps for the rest of the segment (Pade steps are typically several times longer than Taylor steps of the same order). */
@@ -48,29 +53,51 @@ final class SegmentIntegrator {
         this.tolerance = Math.pow(10, -toleranceDigits);
     }
 
-    MpContext context() {
+    /**
+     * An integrator for the system compiled into {@code plan}, with the Taylor order chosen from the tolerance
+     * ({@link #orderFor(int)}).
+     *
+     * @param coefficients the coefficient values of the system (its coefficient order), rounded to {@code ctx}
+     * @param ctx the working precision (a few digits above the tolerance)
+     * @param toleranceDigits the local tolerance is 10^-toleranceDigits relative to 1 + |y_i|
+     */
+    public SegmentIntegrator(RecurrencePlan plan, MpComplex[] coefficients, MpContext ctx, int toleranceDigits) {
+        this(new FixedPointKernel(plan, coefficients, orderFor(toleranceDigits), ctx), ctx, toleranceDigits);
+    }
+
+    /** The Taylor order for a tolerance of 10^-d: about 1.15 d (Jorba and Zou 2005, as above). */
+    public static int orderFor(int toleranceDigits) {
+        return (int) Math.ceil(1.1513 * toleranceDigits) + 2;
+    }
+
+    public MpContext context() {
         return ctx;
     }
 
-    double tolerance() {
+    public double tolerance() {
         return tolerance;
     }
 
-    int toleranceDigits() {
+    public int toleranceDigits() {
         return toleranceDigits;
     }
 
-    int order() {
+    public int order() {
         return kernel.order();
     }
 
+    /** Fractional bits of the fixed-point Taylor coefficients. */
+    public int fractionBits() {
+        return kernel.fractionBits();
+    }
+
     /** Complex products of coefficients done so far by this integrator (for the cost model of benchmarks). */
-    long products() {
+    public long products() {
         return products.get();
     }
 
     /** Taylor expansions done so far by this integrator. */
-    long expansions() {
+    public long expansions() {
         return expansions.get();
     }
 
@@ -80,8 +107,8 @@ final class SegmentIntegrator {
         return kernel.expand(tau, y, r);
     }
 
-    /** The state at the end of a segment, with the steps taken (and their nodes when asked for). */
-    static final class Result {
+    /** The state at the end of a segment, with the steps taken (and their nodes when asked for). Immutable. */
+    public static final class Result {
         final MpComplex[] y;
         final double scale;
         final int steps;
@@ -91,18 +118,79 @@ final class SegmentIntegrator {
             this.y = y;
             this.scale = scale;
             this.steps = steps;
-            this.nodes = nodes;
+            this.nodes = nodes == null ? null : List.copyOf(nodes);
+        }
+
+        /** The state reached. */
+        public MpComplex[] state() {
+            return y.clone();
+        }
+
+        /** The series scale at the end (a good first scale for a following run). */
+        public double scale() {
+            return scale;
+        }
+
+        /** The steps taken. */
+        public int steps() {
+            return steps;
         }
     }
 
     /** Receives the distance advanced along the segment (for progress reports). */
-    interface Advance {
+    public interface Advance {
         void advanced(double distance);
     }
 
     /** Receives the states reached at waypoints (for caching them). */
-    interface Landing {
+    public interface Landing {
         void landed(int waypoint, MpComplex[] y, double scale, int steps);
+    }
+
+    /**
+     * The state at t on the line of a run made with {@code keepNodes} from {@code from}, from the kept step that
+     * covers t (its Taylor series or Pade approximants); where the approximants of that step miss the tolerance
+     * at t, a short run from the step's centre reaches t. The steps of the result count from the start of the run.
+     *
+     * @throws org.tertius.core.InvalidInputException if the run kept no nodes
+     */
+    public Result denseState(Result run, MpComplex from, MpComplex t) {
+        if (run.nodes == null) {
+            throw new org.tertius.core.InvalidInputException("run", "was made without keepNodes: no dense output");
+        }
+        if (run.nodes.isEmpty()) {
+            return new Result(run.y, run.scale, 0, null);
+        }
+        // the nodes follow each other along the line: the first whose end lies beyond t covers it
+        double dt = ctx.subtract(t, from).abs();
+        int lo = 0;
+        int hi = run.nodes.size() - 1;
+        while (lo < hi) {
+            int mid = (lo + hi) >>> 1;
+            if (ctx.subtract(end(run.nodes.get(mid)), from).abs() >= dt) {
+                hi = mid;
+            } else {
+                lo = mid + 1;
+            }
+        }
+        HpNode node = run.nodes.get(lo);
+        TaylorSeries ts = node.series();
+        MpComplex sp = ctx.divide(ctx.subtract(t, ts.center()), ctx.fromDouble(ts.scale(), 0));
+        MpComplex[] y = node.evaluate(ctx, sp, tolerance);
+        if (y != null) {
+            return new Result(y, ts.scale(), lo + 1, null);
+        }
+        MpComplex[] y0 = new MpComplex[ts.dimension()];
+        for (int c = 0; c < y0.length; c++) {
+            y0[c] = ts.coefficient(ctx, c, 0);
+        }
+        Result q = run(ts.center(), y0, t, ts.scale(), false, null);
+        return new Result(q.y, q.scale, lo + 1 + q.steps, null);
+    }
+
+    private MpComplex end(HpNode n) {
+        TaylorSeries ts = n.series();
+        return ctx.add(ts.center(), ctx.multiply(n.endS(), ctx.fromDouble(ts.scale(), 0)));
     }
 
     /**
@@ -113,7 +201,7 @@ final class SegmentIntegrator {
      * @throws UnreachableTargetException if the step size collapses (the line runs into a singularity)
      * @throws TertiusException if the thread is interrupted (cancellation)
      */
-    Result run(MpComplex tau, MpComplex[] y, MpComplex target, double scaleGuess, boolean keepNodes,
+    public Result run(MpComplex tau, MpComplex[] y, MpComplex target, double scaleGuess, boolean keepNodes,
                Advance advance) {
         return run(tau, y, List.of(target), scaleGuess, keepNodes, advance, null);
     }
@@ -127,7 +215,7 @@ final class SegmentIntegrator {
      * @throws UnreachableTargetException if the step size collapses (the line runs into a singularity)
      * @throws TertiusException if the thread is interrupted (cancellation)
      */
-    Result run(MpComplex tau, MpComplex[] y, List<MpComplex> waypoints, double scaleGuess, boolean keepNodes,
+    public Result run(MpComplex tau, MpComplex[] y, List<MpComplex> waypoints, double scaleGuess, boolean keepNodes,
                Advance advance, Landing landing) {
         List<HpNode> nodes = keepNodes ? new ArrayList<>() : null;
         double r = scaleGuess;

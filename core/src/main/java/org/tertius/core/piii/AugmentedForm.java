@@ -4,6 +4,8 @@ import org.hipparchus.complex.Complex;
 import org.tertius.core.equation.IndependentVariable;
 import org.tertius.core.equation.PolynomialSystem;
 import org.tertius.core.equation.StateProjection;
+import org.tertius.core.mp.MpComplex;
+import org.tertius.core.mp.MpContext;
 
 /**
  * A polynomial form of Painleve III valid for all parameters, used when delta = gamma = 0 (D8 and the
@@ -81,30 +83,27 @@ final class AugmentedForm implements Painleve3Form {
     }
 
     @Override
-    public org.apfloat.Apcomplex[] coefficients(HighPrecisionParameters p) {
-        org.apfloat.FixedPrecisionApcomplexHelper h = p.helper();
-        org.apfloat.Apcomplex one = h.valueOf(org.apfloat.Apcomplex.ONE);
+    public MpComplex[] coefficients(HighPrecisionParameters p) {
+        MpContext h = p.context();
+        MpComplex one = h.fromLong(1);
         // same order as the terms of the constructor
-        return new org.apfloat.Apcomplex[] {one, one, p.alpha(), p.beta(), p.gamma(), p.delta(), h.negate(one)};
+        return new MpComplex[] {one, one, p.alpha(), p.beta(), p.gamma(), p.delta(), one.negate()};
     }
 
     @Override
-    public org.apfloat.Apcomplex[] toState(HighPrecisionParameters p, org.apfloat.Apcomplex z,
-                                           org.apfloat.Apcomplex w, org.apfloat.Apcomplex dw) {
-        org.apfloat.FixedPrecisionApcomplexHelper h = p.helper();
-        return new org.apfloat.Apcomplex[] {h.valueOf(w), h.multiply(z, dw),
-            h.divide(h.valueOf(org.apfloat.Apcomplex.ONE), w)};
+    public MpComplex[] toState(HighPrecisionParameters p, MpComplex z, MpComplex w, MpComplex dw) {
+        MpContext h = p.context();
+        return new MpComplex[] {h.round(w), h.multiply(z, dw), h.reciprocal(w)};
     }
 
     @Override
-    public org.apfloat.Apcomplex[] fromState(HighPrecisionParameters p, org.apfloat.Apcomplex z,
-                                             org.apfloat.Apcomplex[] y) {
-        org.apfloat.FixedPrecisionApcomplexHelper h = p.helper();
-        org.apfloat.Apcomplex w = y[0];
-        if (org.apfloat.ApcomplexMath.abs(w).compareTo(org.apfloat.Apfloat.ONE) < 0) {
-            w = h.divide(h.valueOf(org.apfloat.Apcomplex.ONE), y[2]);
+    public MpComplex[] fromState(HighPrecisionParameters p, MpComplex z, MpComplex[] y) {
+        MpContext h = p.context();
+        MpComplex w = y[0];
+        if (w.abs() < 1) {
+            w = h.reciprocal(y[2]);
         }
-        return new org.apfloat.Apcomplex[] {w, h.divide(y[1], z)};
+        return new MpComplex[] {w, h.divide(y[1], z)};
     }
 
     @Override

@@ -1,6 +1,6 @@
 package org.tertius.core.piii;
 
-import org.apfloat.Apcomplex;
+import org.tertius.core.mp.MpComplex;
 import org.tertius.core.solution.Solution;
 
 /**
@@ -33,17 +33,17 @@ public final class EngineView {
     }
 
     /** Coefficients of the form's system in arbitrary precision (order of the system's coefficient list). */
-    public Apcomplex[] coefficients(HighPrecisionParameters p) {
+    public MpComplex[] coefficients(HighPrecisionParameters p) {
         return solution.form().coefficients(p);
     }
 
     /** The state of the form for (z, w, w'), w != 0, in arbitrary precision. */
-    public Apcomplex[] toState(HighPrecisionParameters p, Apcomplex z, Apcomplex w, Apcomplex dw) {
+    public MpComplex[] toState(HighPrecisionParameters p, MpComplex z, MpComplex w, MpComplex dw) {
         return solution.form().toState(p, z, w, dw);
     }
 
     /** {w, w'} from a state of the form, in arbitrary precision. */
-    public Apcomplex[] fromState(HighPrecisionParameters p, Apcomplex z, Apcomplex[] y) {
+    public MpComplex[] fromState(HighPrecisionParameters p, MpComplex z, MpComplex[] y) {
         return solution.form().fromState(p, z, y);
     }
 

@@ -5,6 +5,8 @@ import org.tertius.core.InvalidInputException;
 import org.tertius.core.equation.IndependentVariable;
 import org.tertius.core.equation.PolynomialSystem;
 import org.tertius.core.equation.StateProjection;
+import org.tertius.core.mp.MpComplex;
+import org.tertius.core.mp.MpContext;
 
 /**
  * A polynomial Hamiltonian form of Painleve III for delta != 0, in the log variable (derived for this project
@@ -128,34 +130,32 @@ final class HamiltonianForm implements Painleve3Form {
     }
 
     @Override
-    public org.apfloat.Apcomplex[] coefficients(HighPrecisionParameters hp) {
-        org.apfloat.FixedPrecisionApcomplexHelper h = hp.helper();
-        org.apfloat.Apcomplex cc = hp.c(c);
-        org.apfloat.Apcomplex bb = h.subtract(h.valueOf(org.apfloat.Apcomplex.ONE), h.divide(hp.beta(), cc));
-        org.apfloat.Apcomplex two = h.valueOf(new org.apfloat.Apfloat(2));
+    public MpComplex[] coefficients(HighPrecisionParameters hp) {
+        MpContext h = hp.context();
+        MpComplex cc = hp.c(c);
+        MpComplex bb = h.subtract(h.fromLong(1), h.divide(hp.beta(), cc));
+        MpComplex two = h.fromLong(2);
         // same order as the terms of the constructor
-        return new org.apfloat.Apcomplex[] {two, bb, cc, h.negate(two), h.negate(bb), h.divide(hp.alpha(), two),
-            h.divide(hp.gamma(), two)};
+        return new MpComplex[] {two, bb, cc, two.negate(), bb.negate(), h.divide(hp.alpha(), 2),
+            h.divide(hp.gamma(), 2)};
     }
 
     @Override
-    public org.apfloat.Apcomplex[] toState(HighPrecisionParameters hp, org.apfloat.Apcomplex z,
-                                           org.apfloat.Apcomplex w, org.apfloat.Apcomplex dw) {
-        org.apfloat.FixedPrecisionApcomplexHelper h = hp.helper();
-        org.apfloat.Apcomplex[] k = coefficients(hp);
-        org.apfloat.Apcomplex p = h.divide(h.subtract(h.subtract(h.multiply(z, dw), h.multiply(k[1], w)),
-                h.multiply(k[2], z)), h.multiply(k[0], h.multiply(w, w)));
-        return new org.apfloat.Apcomplex[] {h.valueOf(w), p};
+    public MpComplex[] toState(HighPrecisionParameters hp, MpComplex z, MpComplex w, MpComplex dw) {
+        MpContext h = hp.context();
+        MpComplex[] k = coefficients(hp);
+        MpComplex p = h.divide(h.subtract(h.subtract(h.multiply(z, dw), h.multiply(k[1], w)), h.multiply(k[2], z)),
+                h.multiply(k[0], h.multiply(w, w)));
+        return new MpComplex[] {h.round(w), p};
     }
 
     @Override
-    public org.apfloat.Apcomplex[] fromState(HighPrecisionParameters hp, org.apfloat.Apcomplex z,
-                                             org.apfloat.Apcomplex[] y) {
-        org.apfloat.FixedPrecisionApcomplexHelper h = hp.helper();
-        org.apfloat.Apcomplex[] k = coefficients(hp);
-        org.apfloat.Apcomplex w = y[0];
-        org.apfloat.Apcomplex dw = h.divide(h.add(h.add(h.multiply(k[0], h.multiply(h.multiply(w, w), y[1])),
+    public MpComplex[] fromState(HighPrecisionParameters hp, MpComplex z, MpComplex[] y) {
+        MpContext h = hp.context();
+        MpComplex[] k = coefficients(hp);
+        MpComplex w = y[0];
+        MpComplex dw = h.divide(h.add(h.add(h.multiply(k[0], h.multiply(h.multiply(w, w), y[1])),
                 h.multiply(k[1], w)), h.multiply(k[2], z)), z);
-        return new org.apfloat.Apcomplex[] {w, dw};
+        return new MpComplex[] {w, dw};
     }
 }

@@ -40,14 +40,15 @@ interface Painleve3Form {
      * The coefficient values of {@link #system()} (same order) computed in arbitrary precision from
      * high-precision parameters, for kernels that run the same recurrence plan at higher precision.
      */
-    org.apfloat.Apcomplex[] coefficients(HighPrecisionParameters p);
+    org.tertius.core.mp.MpComplex[] coefficients(HighPrecisionParameters p);
 
     /**
      * The state for (z, w, w') in arbitrary precision (same layout as {@link #toState}); w != 0.
      */
-    org.apfloat.Apcomplex[] toState(HighPrecisionParameters p, org.apfloat.Apcomplex z, org.apfloat.Apcomplex w,
-                                    org.apfloat.Apcomplex dw);
+    org.tertius.core.mp.MpComplex[] toState(HighPrecisionParameters p, org.tertius.core.mp.MpComplex z,
+                                            org.tertius.core.mp.MpComplex w, org.tertius.core.mp.MpComplex dw);
 
     /** {w, w'} from a high-precision state. */
-    org.apfloat.Apcomplex[] fromState(HighPrecisionParameters p, org.apfloat.Apcomplex z, org.apfloat.Apcomplex[] y);
+    org.tertius.core.mp.MpComplex[] fromState(HighPrecisionParameters p, org.tertius.core.mp.MpComplex z,
+                                              org.tertius.core.mp.MpComplex[] y);
 }

@@ -3,6 +3,8 @@ package org.tertius.core.piii;
 import org.hipparchus.complex.Complex;
 import org.tertius.core.equation.PolynomialSystem;
 import org.tertius.core.equation.StateProjection;
+import org.tertius.core.mp.MpComplex;
+import org.tertius.core.mp.MpContext;
 
 /**
  * Integrates W = 1/w with another form (for delta = 0, gamma != 0, where 1/w has delta' = -gamma != 0) and
@@ -44,25 +46,21 @@ final class ReciprocalForm implements Painleve3Form {
     }
 
     @Override
-    public org.apfloat.Apcomplex[] coefficients(HighPrecisionParameters p) {
+    public MpComplex[] coefficients(HighPrecisionParameters p) {
         return inner.coefficients(p.reciprocal());
     }
 
     @Override
-    public org.apfloat.Apcomplex[] toState(HighPrecisionParameters p, org.apfloat.Apcomplex z,
-                                           org.apfloat.Apcomplex w, org.apfloat.Apcomplex dw) {
-        org.apfloat.FixedPrecisionApcomplexHelper h = p.helper();
-        return inner.toState(p.reciprocal(), z, h.divide(h.valueOf(org.apfloat.Apcomplex.ONE), w),
-                h.negate(h.divide(dw, h.multiply(w, w))));
+    public MpComplex[] toState(HighPrecisionParameters p, MpComplex z, MpComplex w, MpComplex dw) {
+        MpContext h = p.context();
+        return inner.toState(p.reciprocal(), z, h.reciprocal(w), h.divide(dw, h.multiply(w, w)).negate());
     }
 
     @Override
-    public org.apfloat.Apcomplex[] fromState(HighPrecisionParameters p, org.apfloat.Apcomplex z,
-                                             org.apfloat.Apcomplex[] y) {
-        org.apfloat.FixedPrecisionApcomplexHelper h = p.helper();
-        org.apfloat.Apcomplex[] v = inner.fromState(p.reciprocal(), z, y);
-        return new org.apfloat.Apcomplex[] {h.divide(h.valueOf(org.apfloat.Apcomplex.ONE), v[0]),
-            h.negate(h.divide(v[1], h.multiply(v[0], v[0])))};
+    public MpComplex[] fromState(HighPrecisionParameters p, MpComplex z, MpComplex[] y) {
+        MpContext h = p.context();
+        MpComplex[] v = inner.fromState(p.reciprocal(), z, y);
+        return new MpComplex[] {h.reciprocal(v[0]), h.divide(v[1], h.multiply(v[0], v[0])).negate()};
     }
 
     @Override

@@ -54,6 +54,28 @@ class MpArithmeticTest {
     }
 
     @Test
+    void squareRootsAndLogarithmsAgreeWithApfloatOnThePrincipalBranch() {
+        // reference: Apfloat's ApcomplexMath.sqrt and log at 90 digits (principal branches, Im log in (-pi, pi]);
+        // the moduli span 1e-30..1e30 so that the scaling by powers of 2 (and e log 2) is exercised
+        qt().withExamples(100).forAll(doubles().between(-30, 30), doubles().between(-1, 1), doubles().between(-1, 1))
+                .checkAssert((e, a, b) -> {
+                    if (a == 0 && b == 0) {
+                        return;
+                    }
+                    double m = Math.pow(10, e);
+                    MpComplex x = C.fromDouble(a * m, b * m);
+                    Apcomplex ax = ap(a * m, b * m);
+                    assertTrue(error(C.sqrt(x), ApcomplexMath.sqrt(ax)) < -DIGITS, "sqrt of " + x);
+                    assertTrue(error(C.log(x), ApcomplexMath.log(ax)) < -DIGITS + 1, "log of " + x);
+                });
+        // the negative real axis lies on the cut: log(-4) = log 4 + i pi, sqrt(-4) = 2i
+        Apcomplex minusFour = ap(-4, 0);
+        assertTrue(error(C.log(C.fromLong(-4)), ApcomplexMath.log(minusFour)) < -DIGITS);
+        assertTrue(error(C.sqrt(C.fromLong(-4)), ApcomplexMath.sqrt(minusFour)) < -DIGITS);
+        assertTrue(error(C.pi(), new Apcomplex(org.apfloat.ApfloatMath.pi(DIGITS + 30))) < -DIGITS);
+    }
+
+    @Test
     void rationalsAndApfloatNumbersConvertWithOneRounding() {
         MpComplex third = C.fromExact(ExactNumber.parse("x", "1/3-2/7i"));
         Apcomplex ref = new Apcomplex(new Apfloat(1, 100).divide(new Apfloat(3, 100)),

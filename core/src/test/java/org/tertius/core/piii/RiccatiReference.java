@@ -3,7 +3,6 @@ package org.tertius.core.piii;
 import java.math.BigDecimal;
 import org.apfloat.Apcomplex;
 import org.hipparchus.complex.Complex;
-import org.tertius.core.mp.BesselRiccatiReference;
 import org.tertius.core.number.SurfacePoint;
 
 /**

@@ -1,11 +1,12 @@
-package org.tertius.core.mp;
+package org.tertius.core.piii;
 
-import java.math.BigInteger;
 import java.util.Locale;
 import org.apfloat.Apcomplex;
 import org.apfloat.ApcomplexMath;
 import org.apfloat.Apfloat;
 import org.apfloat.ApfloatMath;
+import org.tertius.core.mp.KernelCost;
+import org.tertius.core.mp.MpContext;
 import org.tertius.core.number.SurfacePoint;
 
 /**
@@ -13,9 +14,9 @@ import org.tertius.core.number.SurfacePoint;
  * delta = -1, w(1) = 1/2, w'(1) = 1/3, evaluated at z = 3+2i.
  *
  * <pre>
- *   java -cp ... org.tertius.core.mp.HighPrecisionBench once 50        # one evaluation, as a whole process
- *   java -cp ... org.tertius.core.mp.HighPrecisionBench table 30 50 100 200 1000
- *   java -cp ... org.tertius.core.mp.HighPrecisionBench apfloat        # cost of Apfloat and BigInteger products
+ *   java -cp ... org.tertius.core.piii.HighPrecisionBench once 50        # one evaluation, as a whole process
+ *   java -cp ... org.tertius.core.piii.HighPrecisionBench table 30 50 100 200 1000
+ *   java -cp ... org.tertius.core.piii.HighPrecisionBench apfloat        # cost of Apfloat and BigInteger products
  * </pre>
  * The table reports, per number of digits, the wall time of a fresh solution (in a warm JVM), the steps and
  * order of the accurate pass, the time per step, and the ratio of the time to the multiplication-count bound
@@ -71,57 +72,12 @@ public final class HighPrecisionBench {
             HighPrecisionValue v = s.evaluate(SurfacePoint.of(3, 2));
             double t = (System.nanoTime() - t0) / 1e9;
             HighPrecisionSolution.Statistics st = s.statistics();
-            double mul = complexProductSeconds(st.fractionBits());
+            double mul = KernelCost.complexProductSeconds(st.fractionBits());
             double bound = st.productCount() * mul;
             System.out.printf(Locale.ROOT, "%6d  %5d  %5d  %7.3f  %12.2f  %19.3f  %8.3f  %5.2f   (%d correct)%n", d,
                     st.order(), st.steps(), t, 1e3 * t / Math.max(1, st.totalSteps()), mul * 1e6, bound,
                     t / bound, v.correctDigits());
         }
-    }
-
-    /** Time of one fixed-point complex product accumulated in limb columns (the kernel's unit of work). */
-    static double complexProductSeconds(int bits) {
-        LimbFormat fmt = new LimbFormat(bits, 1);
-        int n = 32;
-        LimbVector v = new LimbVector(fmt, n + 1);
-        java.util.Random r = new java.util.Random(1);
-        for (int i = 0; i < n; i++) {
-            v.set(i, new BigInteger(fmt.fractionBits(), r), new BigInteger(fmt.fractionBits(), r).negate());
-        }
-        LimbAccumulator acc = new LimbAccumulator(fmt);
-        int reps = Math.max(20, 20_000_000 / (fmt.limbs() * fmt.limbs() * n));
-        for (int i = 0; i < reps; i++) {
-            acc.clear();
-            acc.convolve(v, 0, v, 0, n - 1);
-        }
-        long t0 = System.nanoTime();
-        for (int i = 0; i < reps; i++) {
-            acc.clear();
-            acc.convolve(v, 0, v, 0, n - 1);
-        }
-        double t = (System.nanoTime() - t0) / 1e9 / reps / n;
-        acc.store(v, n);
-        return t;
-    }
-
-    /** Time of one fixed-point complex product with three BigInteger products and their accumulation. */
-    static double bigIntegerProductSeconds(int bits) {
-        BigInteger a = BigInteger.ONE.shiftLeft(bits).subtract(BigInteger.valueOf(987654321));
-        BigInteger b = a.add(BigInteger.valueOf(123456789));
-        BigInteger acc = BigInteger.ZERO;
-        int n = Math.max(2000, 4_000_000 / Math.max(1, bits));
-        for (int i = 0; i < n; i++) {
-            acc = acc.add(a.multiply(b));
-        }
-        long t0 = System.nanoTime();
-        for (int i = 0; i < n; i++) {
-            acc = acc.add(a.multiply(b)).add(b.multiply(a)).add(a.multiply(a));
-        }
-        double t = (System.nanoTime() - t0) / 1e9 / n;
-        if (acc.signum() == 0) {
-            System.out.print("");
-        }
-        return t;
     }
 
     private static void apfloat() {
@@ -140,8 +96,8 @@ public final class HighPrecisionBench {
             }
             double t = (System.nanoTime() - t0) / 1e3 / n;
             int bits = (int) Math.ceil(d * MpContext.LOG2_10);
-            System.out.printf(Locale.ROOT, "%6d  %28.2f  %25.3f  %16.3f%n", d, t, 1e6 * bigIntegerProductSeconds(bits),
-                    1e6 * complexProductSeconds(bits));
+            System.out.printf(Locale.ROOT, "%6d  %28.2f  %25.3f  %16.3f%n", d, t, 1e6 * KernelCost.bigIntegerProductSeconds(bits),
+                    1e6 * KernelCost.complexProductSeconds(bits));
             if (acc.real().signum() == 2) {
                 System.out.print("");
             }

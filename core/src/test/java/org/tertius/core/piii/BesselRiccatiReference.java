@@ -1,10 +1,12 @@
-package org.tertius.core.mp;
+package org.tertius.core.piii;
 
 import org.apfloat.Apcomplex;
 import org.apfloat.ApcomplexMath;
 import org.apfloat.Apfloat;
 import org.apfloat.ApfloatMath;
 import org.apfloat.FixedPrecisionApcomplexHelper;
+import org.tertius.core.mp.ExactNumber;
+import org.tertius.core.mp.MpContext;
 import org.tertius.core.number.SurfacePoint;
 
 /**

@@ -1,25 +1,30 @@
-package org.tertius.core.mp;
+package org.tertius.core.piii;
 
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.math.RoundingMode;
 import org.apfloat.Apcomplex;
+import org.tertius.core.mp.MpComplex;
+import org.tertius.core.mp.MpContext;
 import org.tertius.core.number.SurfacePoint;
 
 /**
- * A high-precision value of a Painleve III solution at a point: w and w' (as Apfloat numbers carrying a few
- * more digits than requested, and as decimal strings with the requested number of significant digits) and the
- * estimated number of correct significant digits. Immutable.
+ * A high-precision value of a Painleve III solution at a point: w and w' (binary numbers carrying a few more
+ * digits than requested, available as Apfloat numbers and as decimal strings with the requested number of
+ * significant digits) and the estimated number of correct significant digits. Immutable.
  */
 public final class HighPrecisionValue {
     private final SurfacePoint point;
-    private final Apcomplex w;
-    private final Apcomplex dw;
+    private final MpContext ctx;
+    private final MpComplex w;
+    private final MpComplex dw;
     private final int requestedDigits;
     private final int correctDigits;
 
-    HighPrecisionValue(SurfacePoint point, Apcomplex w, Apcomplex dw, int requestedDigits, int correctDigits) {
+    HighPrecisionValue(SurfacePoint point, MpContext ctx, MpComplex w, MpComplex dw, int requestedDigits,
+                       int correctDigits) {
         this.point = point;
+        this.ctx = ctx;
         this.w = w;
         this.dw = dw;
         this.requestedDigits = requestedDigits;
@@ -30,14 +35,14 @@ public final class HighPrecisionValue {
         return point;
     }
 
-    /** w at the point (with the working digits of the run that produced it). */
+    /** w at the point as an Apfloat number (with the working digits of the run that produced it). */
     public Apcomplex w() {
-        return w;
+        return ctx.toApcomplex(w);
     }
 
-    /** w' at the point. */
+    /** w' at the point as an Apfloat number. */
     public Apcomplex dw() {
-        return dw;
+        return ctx.toApcomplex(dw);
     }
 
     /** w as a+bi with the requested number of significant digits (relative to |w|). */
@@ -66,9 +71,10 @@ public final class HighPrecisionValue {
      * Formats a complex number with n significant digits relative to its modulus: the smaller part gets fewer
      * digits, so that both are given to the same absolute resolution.
      */
-    static String format(Apcomplex x, int n) {
-        BigDecimal re = new BigDecimal(x.real().toString(true));
-        BigDecimal im = new BigDecimal(x.imag().toString(true));
+    static String format(MpComplex x, int n) {
+        BigDecimal[] parts = MpContext.exactDecimal(x);
+        BigDecimal re = parts[0];
+        BigDecimal im = parts[1];
         int top = Math.max(exponent10(re), exponent10(im));
         return part(re, n, top) + (im.signum() < 0 ? "-" : "+") + part(im.abs(), n, top) + "i";
     }

@@ -1,20 +1,16 @@
-package org.tertius.core.mp;
+package org.tertius.core.piii;
 
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.ConcurrentHashMap;
 import java.util.function.DoubleConsumer;
-import org.apfloat.Apcomplex;
-import org.apfloat.ApcomplexMath;
-import org.apfloat.Apfloat;
-import org.apfloat.ApfloatMath;
 import org.tertius.core.InvalidInputException;
+import org.tertius.core.mp.ExactNumber;
+import org.tertius.core.mp.MpComplex;
+import org.tertius.core.mp.MpContext;
+import org.tertius.core.mp.SegmentIntegrator;
 import org.tertius.core.number.SurfacePoint;
-import org.tertius.core.piii.EngineView;
-import org.tertius.core.piii.HighPrecisionParameters;
-import org.tertius.core.piii.Painleve3;
-import org.tertius.core.piii.Painleve3Solution;
 import org.tertius.core.solution.Solution;
 import org.tertius.core.step.Node;
 import org.tertius.core.step.SolverSettings;
@@ -173,13 +169,15 @@ public final class HighPrecisionSolution {
         List<Outcome> run(Level level);
     }
 
-    /** {w, w'} of one point from one pass, with the number of steps on its path. */
+    /** {w, w'} of one point from one pass (at the pass's precision), with the number of steps on its path. */
     static final class Outcome {
-        final Apcomplex w;
-        final Apcomplex dw;
+        final MpContext ctx;
+        final MpComplex w;
+        final MpComplex dw;
         final int steps;
 
-        Outcome(Apcomplex w, Apcomplex dw, int steps) {
+        Outcome(MpContext ctx, MpComplex w, MpComplex dw, int steps) {
+            this.ctx = ctx;
             this.w = w;
             this.dw = dw;
             this.steps = steps;
@@ -192,15 +190,6 @@ public final class HighPrecisionSolution {
      * 10 * steps * tol * max(1, A) (each step contributes at most the local tolerance, amplified alike).
      */
     private List<HighPrecisionValue> compute(Pass pass, List<SurfacePoint> points) {
-        try {
-            return computeUninterrupted(pass, points);
-        } catch (org.apfloat.ApfloatInterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw new org.tertius.core.TertiusException("high-precision computation cancelled (thread interrupted)", e);
-        }
-    }
-
-    private List<HighPrecisionValue> computeUninterrupted(Pass pass, List<SurfacePoint> points) {
         int cheapDigits = Math.max(20, digits / 2 + 5);
         Progress meter = new Progress(progress);
         meter.phase(0, 0.15);
@@ -217,19 +206,19 @@ public final class HighPrecisionSolution {
             long products = level.integrator.products();
             List<Outcome> accurate = pass.run(level);
             statistics.set(new Statistics(level.integrator.order(), accurate.get(0).steps,
-                    accurate.get(0).steps + cheap.get(0).steps, LimbFormat.fractionBits(level.ctx.bits() + 16),
+                    accurate.get(0).steps + cheap.get(0).steps, level.integrator.fractionBits(),
                     level.integrator.products() - products));
             int worst = Integer.MAX_VALUE;
             result = new ArrayList<>();
             for (int i = 0; i < accurate.size(); i++) {
                 Outcome a = accurate.get(i);
                 Outcome c = cheap.get(i);
-                double log10Diff = Math.max(relativeDifference(a.w, c.w), relativeDifference(a.dw, c.dw));
+                double log10Diff = Math.max(relativeDifference(a.ctx, a.w, c.w), relativeDifference(a.ctx, a.dw, c.dw));
                 double log10Amp = Math.max(0, log10Diff + cheapDigits - Math.log10(c.steps + 1.0));
                 double log10Err = 1 + Math.log10(a.steps + 1.0) - accurateDigits + log10Amp;
                 int correct = (int) Math.max(0, Math.min(digits, Math.floor(-log10Err)));
                 worst = Math.min(worst, correct);
-                result.add(new HighPrecisionValue(points.get(i), a.w, a.dw, digits, correct));
+                result.add(new HighPrecisionValue(points.get(i), a.ctx, a.w, a.dw, digits, correct));
             }
             if (worst >= digits) {
                 break;
@@ -242,15 +231,13 @@ public final class HighPrecisionSolution {
         return result;
     }
 
-    /** log10 of |a - b| / |a| (or of |a - b| when a = 0). */
-    private static double relativeDifference(Apcomplex a, Apcomplex b) {
-        MpContext c = new MpContext((int) Math.min(100000, Math.max(20, Math.min(a.precision(), 1000000))));
-        MpComplex x = c.fromApcomplex(a);
-        MpComplex d = c.subtract(x, c.fromApcomplex(b));
+    /** log10 of |a - b| / |a| (or of |a - b| when a = 0), a at the precision of c. */
+    private static double relativeDifference(MpContext c, MpComplex a, MpComplex b) {
+        MpComplex d = c.subtract(a, b);
         if (d.isZero()) {
             return -c.digits();
         }
-        double l = d.log2Abs() - (x.isZero() ? 0 : x.log2Abs());
+        double l = d.log2Abs() - (a.isZero() ? 0 : a.log2Abs());
         return l / MpContext.LOG2_10;
     }
 
@@ -339,34 +326,17 @@ public final class HighPrecisionSolution {
         Level(int tolDigits) {
             this.tolDigits = tolDigits;
             this.ctx = new MpContext(tolDigits + 6);
-            long apDigits = ctx.digits() + 4;
-            this.hp = new HighPrecisionParameters(apDigits, ap(parameters[0]), ap(parameters[1]), ap(parameters[2]),
-                    ap(parameters[3]));
-            Apcomplex[] k = view.coefficients(hp);
-            MpComplex[] coefficients = new MpComplex[k.length];
-            for (int i = 0; i < k.length; i++) {
-                coefficients[i] = ctx.fromApcomplex(k[i]);
-            }
-            int order = (int) Math.ceil(1.1513 * tolDigits) + 2;
-            FixedPointKernel kernel = new FixedPointKernel(plan, coefficients, order, ctx);
-            this.integrator = new SegmentIntegrator(kernel, ctx, tolDigits);
-            Apcomplex z = ap(z0);
-            Apcomplex[] y = view.toState(hp, z, ap(w0), ap(dw0));
-            MpComplex[] y0 = new MpComplex[y.length];
-            for (int i = 0; i < y.length; i++) {
-                y0[i] = ctx.fromApcomplex(y[i]);
-            }
-            MpComplex tau0 = ctx.fromApcomplex(ApcomplexMath.log(z));
-            this.root = new PathState(tau0, y0, engine.root().radius(), 0);
+            this.hp = new HighPrecisionParameters(ctx, ctx.fromExact(parameters[0]), ctx.fromExact(parameters[1]),
+                    ctx.fromExact(parameters[2]), ctx.fromExact(parameters[3]));
+            this.integrator = new SegmentIntegrator(plan, view.coefficients(hp), ctx, tolDigits);
+            MpComplex z = ctx.fromExact(z0);
+            MpComplex[] y0 = view.toState(hp, z, ctx.fromExact(w0), ctx.fromExact(dw0));
+            this.root = new PathState(ctx.log(z), y0, engine.root().radius(), 0);
         }
 
         Level withProgress(Progress p) {
             meter.set(p);
             return this;
-        }
-
-        private Apcomplex ap(ExactNumber x) {
-            return ctx.toApcomplex(ctx.fromExact(x));
         }
 
         private SegmentIntegrator.Advance advance() {
@@ -420,31 +390,26 @@ public final class HighPrecisionSolution {
                                     new PathState(waypoints.get(j), y, scale, start.steps + steps));
                         }
                     });
-            return new PathState(target, r.y, r.scale, s.steps + r.steps);
+            return new PathState(target, r.state(), r.scale(), s.steps + r.steps());
         }
 
         /** tau = log|z| + i (Arg z + 2 pi k) of a point, at this precision. */
         MpComplex tau(SurfacePoint p) {
-            Apcomplex z = ctx.toApcomplex(ctx.fromDouble(p.re(), p.im()));
-            Apcomplex l = ApcomplexMath.log(z);
+            MpComplex l = ctx.log(ctx.fromDouble(p.re(), p.im()));
             if (p.sheet() != 0) {
-                Apfloat twoPiK = ApfloatMath.pi(ctx.digits() + 10).multiply(new Apfloat(2L * p.sheet()));
-                l = l.add(new Apcomplex(Apfloat.ZERO, twoPiK));
+                MpComplex twoPiK = ctx.multiply(ctx.pi(), 2L * p.sheet());
+                l = ctx.add(l, ctx.multiply(twoPiK, ctx.fromDouble(0, 1)));
             }
-            return ctx.fromApcomplex(l);
+            return l;
         }
 
         Outcome outcome(SurfacePoint point, MpComplex[] y, int steps) {
-            return outcome(ctx.toApcomplex(ctx.fromDouble(point.re(), point.im())), y, steps);
+            return outcome(ctx.fromDouble(point.re(), point.im()), y, steps);
         }
 
-        Outcome outcome(Apcomplex z, MpComplex[] y, int steps) {
-            Apcomplex[] s = new Apcomplex[y.length];
-            for (int i = 0; i < y.length; i++) {
-                s[i] = ctx.toApcomplex(y[i]);
-            }
-            Apcomplex[] v = view.fromState(hp, z, s);
-            return new Outcome(v[0], v[1], steps);
+        Outcome outcome(MpComplex z, MpComplex[] y, int steps) {
+            MpComplex[] v = view.fromState(hp, z, y);
+            return new Outcome(ctx, v[0], v[1], steps);
         }
 
         /** n equally spaced points of the line from a to b in tau, from one pass of steps with their nodes kept. */
@@ -458,42 +423,12 @@ public final class HighPrecisionSolution {
             SegmentIntegrator.Result r = integrator.run(s.tau, s.y, tb, s.scale, true, advance());
             MpComplex delta = ctx.subtract(tb, s.tau);
             List<Outcome> out = new ArrayList<>();
-            int node = 0;
-            MpComplex nodeEnd = r.nodes.isEmpty() ? tb : end(r.nodes.get(0));
             for (int i = 0; i < n; i++) {
                 MpComplex t = i == n - 1 ? tb : ctx.add(s.tau, ctx.divide(ctx.multiply(delta, i), n - 1));
-                // advance to the node whose step covers t (nodes follow each other along the line)
-                while (node < r.nodes.size() - 1 && ctx.subtract(t, s.tau).abs() > ctx.subtract(nodeEnd, s.tau).abs()) {
-                    node++;
-                    nodeEnd = end(r.nodes.get(node));
-                }
-                MpComplex[] y;
-                int steps = s.steps + node + 1;
-                if (r.nodes.isEmpty()) {
-                    y = s.y;
-                } else {
-                    HpNode hn = r.nodes.get(node);
-                    TaylorSeries ts = hn.series();
-                    MpComplex sp = ctx.divide(ctx.subtract(t, ts.center()), ctx.fromDouble(ts.scale(), 0));
-                    y = hn.evaluate(ctx, sp, integrator.tolerance());
-                    if (y == null) {
-                        MpComplex[] y0 = new MpComplex[ts.dimension()];
-                        for (int c = 0; c < y0.length; c++) {
-                            y0[c] = ts.coefficient(ctx, c, 0);
-                        }
-                        SegmentIntegrator.Result q = integrator.run(ts.center(), y0, t, ts.scale(), false, null);
-                        y = q.y;
-                        steps += q.steps;
-                    }
-                }
-                out.add(outcome(ctx.toApcomplex(ctx.exp(t)), y, steps));
+                SegmentIntegrator.Result d = integrator.denseState(r, s.tau, t);
+                out.add(outcome(ctx.exp(t), d.state(), s.steps + d.steps()));
             }
             return out;
-        }
-
-        private MpComplex end(HpNode n) {
-            TaylorSeries ts = n.series();
-            return ctx.add(ts.center(), ctx.multiply(n.endS(), ctx.fromDouble(ts.scale(), 0)));
         }
     }
 

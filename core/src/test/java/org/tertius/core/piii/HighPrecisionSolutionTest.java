@@ -1,4 +1,4 @@
-package org.tertius.core.mp;
+package org.tertius.core.piii;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
@@ -11,10 +11,10 @@ import org.hipparchus.complex.Complex;
 import org.junit.jupiter.api.Test;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.TertiusException;
+import org.tertius.core.mp.ExactNumber;
+import org.tertius.core.mp.MpComplex;
+import org.tertius.core.mp.MpContext;
 import org.tertius.core.number.SurfacePoint;
-import org.tertius.core.piii.Painleve3;
-import org.tertius.core.piii.Painleve3Solution;
-import org.tertius.core.piii.Painleve3Value;
 
 class HighPrecisionSolutionTest {
     /** The generic D6 case of the benchmark. */
