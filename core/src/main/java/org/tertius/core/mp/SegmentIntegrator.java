@@ -32,6 +32,13 @@ public final class SegmentIntegrator {
     /** Later waypoints a Pade step tries to reach directly, and their largest distance in units of the scale. */
     private static final int SHORTCUT_CANDIDATES = 3;
     private static final double SHORTCUT_REACH = 1.2;
+    /** First Pade trial length in units of the scale, before any step has told how far the fractions reach. */
+    private static final double FIRST_REACH = 0.8;
+    /** Factors by which the trial length shrinks after a rejected trial and grows for the next step. */
+    private static final double SHRINK = 0.75;
+    private static final double GROW = 1.25;
+    /** Orders from which the continued fractions of the components are built in parallel. */
+    private static final int PARALLEL_ORDER = 40;
 
     private final FixedPointKernel kernel;
     private final MpContext ctx;
@@ -219,6 +226,8 @@ public final class SegmentIntegrator {
                Advance advance, Landing landing) {
         List<HpNode> nodes = keepNodes ? new ArrayList<>() : null;
         double r = scaleGuess;
+        // the last accepted Pade length in units of the scale: the next step starts its trials near it
+        double[] reach = {FIRST_REACH};
         int steps = 0;
         int next = 0;
         while (true) {
@@ -248,7 +257,7 @@ public final class SegmentIntegrator {
                 throw new UnreachableTargetException("the high-precision step size collapsed near tau = "
                         + tau.toComplex() + ": the path runs into a singularity");
             }
-            Step step = hT >= dist ? null : padeStep(series, tau, waypoints, next, dist, hT);
+            Step step = hT >= dist ? null : padeStep(series, tau, waypoints, next, dist, hT, reach);
             if (step == null) {
                 boolean last = hT >= dist;
                 MpComplex s = last ? ctx.divide(remaining, ctx.fromDouble(r, 0))
@@ -290,11 +299,12 @@ public final class SegmentIntegrator {
 
     /**
      * A Pade step when Taylor steps would be short: to the farthest of the next few waypoints within reach whose
-     * convergents meet the tolerance, else along the current line to its target or to 0.7^m of the way; null
-     * when no Pade value is accepted farther than 1.5 Taylor steps.
+     * convergents meet the tolerance, else along the current line, first to the target or to GROW times the last
+     * accepted reach (whichever is nearer), then shrinking by SHRINK; null when no Pade value is accepted farther
+     * than 1.5 Taylor steps. {@code reach[0]} carries the accepted length (in units of the scale) to the next step.
      */
     private Step padeStep(TaylorSeries series, MpComplex tau, List<MpComplex> waypoints, int next, double dist,
-                          double hT) {
+                          double hT, double[] reach) {
         if (dist <= PADE_TRIGGER * hT) {
             return null;
         }
@@ -317,11 +327,22 @@ public final class SegmentIntegrator {
         }
         MpComplex remaining = ctx.subtract(waypoints.get(next), tau);
         MpComplex dir = ctx.divide(remaining, ctx.fromDouble(dist, 0));
-        for (double len = dist; len > 1.5 * hT; len *= 0.7) {
-            MpComplex sp = len == dist ? ctx.divide(remaining, r) : ctx.divide(ctx.multiply(dir, ctx.fromDouble(len, 0)), r);
+        double first = Math.min(dist, Math.max(GROW * reach[0] * series.scale(), PADE_TRIGGER * hT));
+        if (dist - first < PADE_TRIGGER * hT) {
+            first = dist; // a short remainder would cost a step of its own
+        }
+        for (double len = first; len > PADE_TRIGGER * hT || len == first; len *= SHRINK) {
+            boolean whole = len == dist;
+            MpComplex sp = whole ? ctx.divide(remaining, r) : ctx.divide(ctx.multiply(dir, ctx.fromDouble(len, 0)), r);
             MpComplex[] v = padeValue(ctx, fractions, sp, tolerance);
             if (v != null) {
-                return new Step(sp, v, fractions, len == dist ? next : -1);
+                if (!whole || len >= reach[0] * series.scale()) {
+                    reach[0] = len / series.scale();
+                }
+                return new Step(sp, v, fractions, whole ? next : -1);
+            }
+            if (len <= PADE_TRIGGER * hT) {
+                break;
             }
         }
         return null;
@@ -414,22 +435,50 @@ public final class SegmentIntegrator {
         return log2x > 60 ? log2x : Math.log(1 + Math.pow(2, log2x)) / Math.log(2);
     }
 
+    /**
+     * The continued fractions of every component (computed in parallel when the order makes it worth a thread),
+     * or null when one of them stops before half the order (a Taylor step is taken then).
+     */
     private ContinuedFraction[] fractions(TaylorSeries series) {
         MpContext wide = ctx.widen(PADE_EXTRA_DIGITS);
         int n = series.order();
         ContinuedFraction[] out = new ContinuedFraction[series.dimension()];
-        for (int i = 0; i < out.length; i++) {
-            MpComplex[] c = new MpComplex[n + 1];
-            for (int k = 0; k <= n; k++) {
-                c[k] = series.coefficient(wide, i, k);
+        if (Workers.PARALLEL && out.length > 1 && n >= PARALLEL_ORDER) {
+            List<java.util.concurrent.Future<ContinuedFraction>> others = new ArrayList<>();
+            for (int i = 1; i < out.length; i++) {
+                int component = i;
+                others.add(Workers.submit(() -> fraction(series, wide, component)));
             }
-            out[i] = ContinuedFraction.of(wide, c);
-            products.addAndGet(out[i].productCount());
-            if (out[i].depth() < n / 2) {
+            out[0] = fraction(series, wide, 0);
+            for (int i = 1; i < out.length; i++) {
+                out[i] = Workers.join(others.get(i - 1));
+            }
+            for (ContinuedFraction f : out) {
+                products.addAndGet(f.productCount());
+            }
+        } else {
+            for (int i = 0; i < out.length; i++) {
+                out[i] = fraction(series, wide, i);
+                products.addAndGet(out[i].productCount());
+                if (out[i].depth() < n / 2) {
+                    return null;
+                }
+            }
+        }
+        for (ContinuedFraction f : out) {
+            if (f.depth() < n / 2) {
                 return null;
             }
         }
         return out;
+    }
+
+    private static ContinuedFraction fraction(TaylorSeries series, MpContext wide, int component) {
+        MpComplex[] c = new MpComplex[series.order() + 1];
+        for (int k = 0; k < c.length; k++) {
+            c[k] = series.coefficient(wide, component, k);
+        }
+        return ContinuedFraction.of(wide, c);
     }
 
     /**

@@ -10,6 +10,7 @@ import org.tertius.core.mp.ExactNumber;
 import org.tertius.core.mp.MpComplex;
 import org.tertius.core.mp.MpContext;
 import org.tertius.core.mp.SegmentIntegrator;
+import org.tertius.core.mp.Workers;
 import org.tertius.core.number.SurfacePoint;
 import org.tertius.core.solution.Solution;
 import org.tertius.core.step.Node;
@@ -192,19 +193,58 @@ public final class HighPrecisionSolution {
     private List<HighPrecisionValue> compute(Pass pass, List<SurfacePoint> points) {
         int cheapDigits = Math.max(20, digits / 2 + 5);
         Progress meter = new Progress(progress);
-        meter.phase(0, 0.15);
-        List<Outcome> cheap = pass.run(level(cheapDigits, meter));
-        int maxSteps = 1;
-        for (Outcome o : cheap) {
-            maxSteps = Math.max(maxSteps, o.steps);
+        // the two accuracies run side by side when there is more than one processor; the guard digits of the
+        // accurate pass then come from the planned path (its nodes, doubled for the extra Pade and Taylor steps)
+        // instead of the steps of the cheap pass, and a shortfall is caught by the refinement rounds below
+        java.util.concurrent.Future<List<Outcome>> cheapRun = null;
+        List<Outcome> cheap = null;
+        int expectedSteps;
+        if (Workers.PARALLEL) {
+            int cd = cheapDigits;
+            cheapRun = Workers.submit(() -> pass.run(level(cd, null)));
+            expectedSteps = 2 * plannedSteps(points) + 2;
+            meter.phase(0, 1);
+        } else {
+            meter.phase(0, 0.15);
+            cheap = pass.run(level(cheapDigits, meter));
+            expectedSteps = 1;
+            for (Outcome o : cheap) {
+                expectedSteps = Math.max(expectedSteps, o.steps);
+            }
         }
-        int accurateDigits = digits + 4 + (int) Math.ceil(Math.log10(maxSteps + 1.0));
+        try {
+            return refine(pass, points, meter, cheapRun, cheap, cheapDigits,
+                    digits + 4 + (int) Math.ceil(Math.log10(expectedSteps + 1.0)));
+        } finally {
+            if (cheapRun != null && !cheapRun.isDone()) {
+                cheapRun.cancel(true);
+            }
+        }
+    }
+
+    /** The most nodes of the planned path from the start to one of the points. */
+    private int plannedSteps(List<SurfacePoint> points) {
+        int most = 1;
+        for (SurfacePoint p : points) {
+            most = Math.max(most, chain(p.logRe(), p.logIm()).length);
+        }
+        return most;
+    }
+
+    private List<HighPrecisionValue> refine(Pass pass, List<SurfacePoint> points, Progress meter,
+                                            java.util.concurrent.Future<List<Outcome>> cheapRun, List<Outcome> cheap,
+                                            int cheapDigits, int accurateDigits) {
         List<HighPrecisionValue> result = null;
         for (int round = 0; round < MAX_REFINEMENTS; round++) {
-            meter.phase(0.15 + 0.85 * round / MAX_REFINEMENTS, round == 0 ? 0.85 : 0.85 / MAX_REFINEMENTS);
+            if (round > 0 || cheapRun == null) {
+                meter.phase(0.15 + 0.85 * round / MAX_REFINEMENTS, round == 0 ? 0.85 : 0.85 / MAX_REFINEMENTS);
+            }
             Level level = level(accurateDigits, meter);
             long products = level.integrator.products();
             List<Outcome> accurate = pass.run(level);
+            if (cheap == null) {
+                cheap = Workers.join(cheapRun);
+            }
             statistics.set(new Statistics(level.integrator.order(), accurate.get(0).steps,
                     accurate.get(0).steps + cheap.get(0).steps, level.integrator.fractionBits(),
                     level.integrator.products() - products));
@@ -259,6 +299,55 @@ public final class HighPrecisionSolution {
             out[i] = ids.get(i);
         }
         return out;
+    }
+
+    /** Largest distance of a dropped node from the straight line that replaces it, relative to that line's length. */
+    private static final double STRAIGHT = 0.01;
+
+    /**
+     * The indices (after the first point) of the points of a polyline that are kept when runs of nearly collinear
+     * points are replaced by one straight line: a point is dropped when it and every point dropped before it lie
+     * within STRAIGHT times the length of the new line from it; the last point is always kept. The planner keeps
+     * its nodes at about half a radius of convergence from every pole, so a line this close to the planned path
+     * passes the poles on the same side.
+     */
+    static int[] straightenedPath(List<double[]> p) {
+        List<Integer> kept = new ArrayList<>();
+        int anchor = 0;
+        int end = 1;
+        while (end < p.size()) {
+            int far = end;
+            while (far + 1 < p.size() && withinBand(p, anchor, far + 1)) {
+                far++;
+            }
+            kept.add(far);
+            anchor = far;
+            end = far + 1;
+        }
+        return kept.stream().mapToInt(Integer::intValue).toArray();
+    }
+
+    /** Whether all points strictly between a and b lie within STRAIGHT |b - a| of the segment from a to b. */
+    private static boolean withinBand(List<double[]> p, int a, int b) {
+        double ax = p.get(a)[0];
+        double ay = p.get(a)[1];
+        double dx = p.get(b)[0] - ax;
+        double dy = p.get(b)[1] - ay;
+        double len2 = dx * dx + dy * dy;
+        if (len2 == 0) {
+            return false;
+        }
+        for (int i = a + 1; i < b; i++) {
+            double px = p.get(i)[0] - ax;
+            double py = p.get(i)[1] - ay;
+            double t = Math.max(0, Math.min(1, (px * dx + py * dy) / len2));
+            double ex = px - t * dx;
+            double ey = py - t * dy;
+            if (ex * ex + ey * ey > STRAIGHT * STRAIGHT * len2) {
+                return false;
+            }
+        }
+        return true;
     }
 
     /** A state reached at a node of the path tree: tau, the state, the scale to start from, steps from the root. */
@@ -374,19 +463,30 @@ public final class HighPrecisionSolution {
                 len += Math.hypot(point.logRe() - prev[0], point.logIm() - prev[1]);
                 p.expect(len);
             }
-            // the nodes after the start, then the point; states reached at nodes are kept for later calls
-            List<MpComplex> waypoints = new ArrayList<>();
+            // the nodes after the start, then the point; nodes that lie on the straight line between their
+            // neighbours are dropped (a step need not stop there); states reached at kept nodes are kept for
+            // later calls
+            List<double[]> planned = new ArrayList<>();
+            planned.add(new double[] {s.tau.toComplex().getReal(), s.tau.toComplex().getImaginary()});
             for (int i = from + 1; i < ids.length; i++) {
                 Node n = nodes.get(ids[i]);
-                waypoints.add(ctx.fromDouble(n.tauRe(), n.tauIm()));
+                planned.add(new double[] {n.tauRe(), n.tauIm()});
             }
-            waypoints.add(target);
+            planned.add(new double[] {point.logRe(), point.logIm()});
+            int[] kept = straightenedPath(planned);
+            List<MpComplex> waypoints = new ArrayList<>();
+            int[] nodeOf = new int[kept.length];
+            for (int k = 0; k < kept.length; k++) {
+                int i = kept[k];
+                boolean isTarget = i == planned.size() - 1;
+                waypoints.add(isTarget ? target : ctx.fromDouble(planned.get(i)[0], planned.get(i)[1]));
+                nodeOf[k] = isTarget ? -1 : ids[from + i];
+            }
             PathState start = s;
-            int first = from + 1;
             SegmentIntegrator.Result r = integrator.run(s.tau, s.y, waypoints, s.scale, false, advance(),
                     (j, y, scale, steps) -> {
-                        if (first + j < ids.length) {
-                            reached.putIfAbsent(ids[first + j],
+                        if (nodeOf[j] >= 0) {
+                            reached.putIfAbsent(nodeOf[j],
                                     new PathState(waypoints.get(j), y, scale, start.steps + steps));
                         }
                     });

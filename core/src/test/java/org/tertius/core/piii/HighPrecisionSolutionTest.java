@@ -49,6 +49,30 @@ class HighPrecisionSolutionTest {
     }
 
     @Test
+    void straighteningDropsCollinearNodesAndKeepsCornersAndTheTarget() {
+        // common practice (polyline simplification): points on the line between their neighbours are dropped
+        List<double[]> straight = List.of(new double[] {0, 0}, new double[] {1, 0.001}, new double[] {2, 0},
+                new double[] {3, -0.002}, new double[] {4, 0});
+        assertEquals(List.of(4), toList(HighPrecisionSolution.straightenedPath(straight)));
+        // a corner that bends around a pole stays
+        List<double[]> bent = List.of(new double[] {0, 0}, new double[] {1, 0}, new double[] {2, 1},
+                new double[] {3, 2});
+        assertEquals(List.of(1, 3), toList(HighPrecisionSolution.straightenedPath(bent)));
+        // repeated points are kept as they are (no line through them)
+        List<double[]> repeated = List.of(new double[] {0, 0}, new double[] {0, 0}, new double[] {1, 1});
+        assertEquals(2, toList(HighPrecisionSolution.straightenedPath(repeated)).get(
+                toList(HighPrecisionSolution.straightenedPath(repeated)).size() - 1));
+    }
+
+    private static List<Integer> toList(int[] a) {
+        List<Integer> l = new ArrayList<>();
+        for (int x : a) {
+            l.add(x);
+        }
+        return l;
+    }
+
+    @Test
     void besselRiccatiSolutionAt50DigitsMatchesApfloat0F1() {
         // reference: Apfloat's hypergeometric0F1 at 120 digits (DLMF 10.16.9 and 32.10(iii)); start data given to
         // 120 digits, far more than the 50 requested
