@@ -43,11 +43,19 @@ final class ContinuedFraction {
      * next row is formed exactly from its two products and rounded once. Nothing is allocated per product.
      */
     static ContinuedFraction of(MpContext ctx, MpComplex[] c) {
+        // two limbs more than the working bits: an entry normalised to whole limbs keeps all of them
+        return of(ctx, c, new LimbFormat(ctx.bits() + 2 * LimbFormat.BITS, 1));
+    }
+
+    /** As above, with the way products are formed chosen by the caller (tests). */
+    static ContinuedFraction of(MpContext ctx, MpComplex[] c, boolean bigProducts) {
+        return of(ctx, c, new LimbFormat(ctx.bits() + 2 * LimbFormat.BITS, 1, bigProducts));
+    }
+
+    private static ContinuedFraction of(MpContext ctx, MpComplex[] c, LimbFormat fmt) {
         int n = c.length;
         List<MpComplex> es = new ArrayList<>();
         es.add(ctx.fromLong(1));
-        // two limbs more than the working bits: an entry normalised to whole limbs keeps all of them
-        LimbFormat fmt = new LimbFormat(ctx.bits() + 2 * LimbFormat.BITS, 1);
         ScaledRow prev = ScaledRow.unit(fmt, n);
         ScaledRow cur = ScaledRow.of(fmt, c);
         ScaledRow next = new ScaledRow(fmt, n);

@@ -1,6 +1,8 @@
 package org.tertius.core.mp;
 
 import java.math.BigInteger;
+import java.util.ArrayList;
+import java.util.List;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.UnreachableTargetException;
 import org.tertius.core.equation.IndependentVariable;
@@ -131,11 +133,33 @@ final class FixedPointKernel {
         for (int i = 0; i < n; i++) {
             rhs[i] = new LimbAccumulator(fmt);
         }
+        // with BigInteger products (many digits) the terms of every convolution whose factors are known before
+        // order k are summed in two threads first; the one or two terms with an order-k factor follow in order
+        boolean split = fmt.bigProducts() && Workers.PARALLEL;
+        LimbAccumulator[] known = split ? new LimbAccumulator[np + ng] : null;
+        if (split) {
+            for (int t = 0; t < known.length; t++) {
+                known[t] = new LimbAccumulator(fmt);
+            }
+        }
         for (int k = 0; k < order; k++) {
+            boolean splitHere = split && k >= 1;
+            if (splitHere) {
+                knownTerms(w, base, known, k);
+            }
             for (int p = 0; p < np; p++) {
-                acc.clear();
-                acc.convolve(w, plan.productFirst(p) * st, w, plan.productSecond(p) * st, k);
-                acc.store(w, (n + p) * st + k);
+                int a = plan.productFirst(p) * st;
+                int b = plan.productSecond(p) * st;
+                LimbAccumulator sum = acc;
+                if (splitHere) {
+                    sum = known[p];
+                    sum.multiplyAdd(w, a, w, b + k);
+                    sum.multiplyAdd(w, a + k, w, b);
+                } else {
+                    acc.clear();
+                    acc.convolve(w, a, w, b, k);
+                }
+                sum.store(w, (n + p) * st + k);
             }
             for (int i = 0; i < n; i++) {
                 rhs[i].clear();
@@ -161,6 +185,9 @@ final class FixedPointKernel {
                     r.add(w, gs + k);
                 } else if (constantGroup[g]) {
                     r.multiplyAdd(base, b * st + k, w, gs);
+                } else if (splitHere) {
+                    r.addSum(known[np + g]);
+                    r.multiplyAdd(base, b * st, w, gs + k);
                 } else {
                     r.convolve(base, b * st, w, gs, k);
                 }
@@ -189,6 +216,52 @@ final class FixedPointKernel {
      * Series in s of b^j for each distinct power j of the base: for tau = log z, e^{j tau0} (j r)^k / k!; for the
      * plain variable, x0^j binom(j, k) (r / x0)^k. Both are c_k = c_{k-1} * m * a_k / k with a_k = 1 or j-k+1.
      */
+    /**
+     * For order k >= 1, in two threads: known[p] = sum_{i=1..k-1} of the products of product p, and
+     * known[np + g] = sum_{i=0..k-1} base_{k-i} g_i for the groups with a base convolution (all factors of
+     * order below k).
+     */
+    private void knownTerms(LimbVector w, LimbVector base, LimbAccumulator[] known, int k) {
+        final int st = order + 1;
+        final int np = plan.productCount();
+        List<Runnable> tasks = new ArrayList<>();
+        for (int p = 0; p < np; p++) {
+            int a = plan.productFirst(p) * st;
+            int b = plan.productSecond(p) * st;
+            LimbAccumulator sum = known[p];
+            tasks.add(() -> {
+                sum.clear();
+                for (int i = 1; i < k; i++) {
+                    sum.multiplyAdd(w, a + i, w, b + k - i);
+                }
+            });
+        }
+        for (int g = 0; g < plan.groupCount(); g++) {
+            if (plan.groupBaseIndex(g) >= 0 && !constantGroup[g]) {
+                int b = plan.groupBaseIndex(g) * st;
+                int gs = plan.groupSeries(g) * st;
+                LimbAccumulator sum = known[np + g];
+                tasks.add(() -> {
+                    sum.clear();
+                    for (int i = 0; i < k; i++) {
+                        sum.multiplyAdd(base, b + k - i, w, gs + i);
+                    }
+                });
+            }
+        }
+        // alternate the tasks between a pool thread and this one (they are of about equal size)
+        java.util.concurrent.Future<Object> other = Workers.submit(() -> {
+            for (int t = 1; t < tasks.size(); t += 2) {
+                tasks.get(t).run();
+            }
+            return null;
+        });
+        for (int t = 0; t < tasks.size(); t += 2) {
+            tasks.get(t).run();
+        }
+        Workers.join(other);
+    }
+
     private LimbVector baseSeries(MpComplex tau0, double scale, LimbFormat fmt) {
         final int st = order + 1;
         int q = plan.basePowerCount();

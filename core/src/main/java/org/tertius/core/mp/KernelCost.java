@@ -12,7 +12,15 @@ public final class KernelCost {
 
     /** Time of one fixed-point complex product accumulated in limb columns (the kernel's unit of work). */
     public static double complexProductSeconds(int bits) {
-        LimbFormat fmt = new LimbFormat(bits, 1);
+        return complexProductSeconds(new LimbFormat(bits, 1));
+    }
+
+    /** As above, with limb-column products ({@code big} false) or BigInteger products. */
+    public static double complexProductSeconds(int bits, boolean big) {
+        return complexProductSeconds(new LimbFormat(bits, 1, big));
+    }
+
+    private static double complexProductSeconds(LimbFormat fmt) {
         int n = 32;
         LimbVector v = new LimbVector(fmt, n + 1);
         java.util.Random r = new java.util.Random(1);

@@ -5,8 +5,10 @@ package org.tertius.core.mp;
  * complex product (Gauss), t1 = sum ar br, t2 = sum ai bi, t3 = sum (ar + ai)(br + bi), so that re = t1 - t2 and
  * im = t3 - t1 - t2. A sum of products is rounded once, when it is stored; nothing is allocated per product.
  * Columns below a low column are not formed (short products). A product may be placed some whole limbs lower
- * (a smaller binary exponent), for floating values with limb-granular exponents ({@link ScaledRow}). Mutable
- * scratch space of one computation.
+ * (a smaller binary exponent), for floating values with limb-granular exponents ({@link ScaledRow}). When the
+ * format asks for BigInteger products (many limbs), the products are formed exactly with BigInteger and summed
+ * as two integers (real and imaginary part), which are spread into the same columns when the sum is stored.
+ * Mutable scratch space of one computation.
  */
 final class LimbAccumulator {
     private final LimbFormat format;
@@ -21,6 +23,10 @@ final class LimbAccumulator {
     private final long[] column;
     private final long[] column2;
     private int load;
+    private final boolean big;
+    /** With BigInteger products: the real and imaginary sums, in units of column 0. */
+    private java.math.BigInteger sumRe = java.math.BigInteger.ZERO;
+    private java.math.BigInteger sumIm = java.math.BigInteger.ZERO;
 
     /** An accumulator of fixed-point products rounded at 2^-F, forming the columns from the format's low one. */
     LimbAccumulator(LimbFormat format) {
@@ -43,9 +49,15 @@ final class LimbAccumulator {
         t3 = new long[n];
         column = new long[n];
         column2 = new long[n];
+        big = format.bigProducts();
     }
 
     void clear() {
+        if (big) {
+            sumRe = java.math.BigInteger.ZERO;
+            sumIm = java.math.BigInteger.ZERO;
+            return;
+        }
         java.util.Arrays.fill(t1, 0);
         java.util.Arrays.fill(t2, 0);
         java.util.Arrays.fill(t3, 0);
@@ -66,6 +78,17 @@ final class LimbAccumulator {
 
     /** Adds a[i] b[j] 2^(BITS shift), shift <= 0 and -shift <= base. */
     void multiplyAdd(LimbVector a, int i, LimbVector b, int j, int shift) {
+        if (big) {
+            java.math.BigInteger p1 = a.bigRe(i).multiply(b.bigRe(j));
+            java.math.BigInteger p2 = a.bigIm(i).multiply(b.bigIm(j));
+            java.math.BigInteger p3 = a.bigSum(i).multiply(b.bigSum(j));
+            java.math.BigInteger re = p1.subtract(p2);
+            java.math.BigInteger im = p3.subtract(p1).subtract(p2);
+            int at = LimbFormat.BITS * (base + shift);
+            sumRe = sumRe.add(at == 0 ? re : re.shiftLeft(at));
+            sumIm = sumIm.add(at == 0 ? im : im.shiftLeft(at));
+            return;
+        }
         final int n = limbs;
         final long[] ar = a.re;
         final long[] ai = a.im;
@@ -103,10 +126,24 @@ final class LimbAccumulator {
         }
     }
 
+    /** Adds the sum held by another accumulator of the same format (BigInteger products only). */
+    void addSum(LimbAccumulator other) {
+        if (!big || !other.big) {
+            throw new IllegalStateException("sums are merged only with BigInteger products");
+        }
+        sumRe = sumRe.add(other.sumRe);
+        sumIm = sumIm.add(other.sumIm);
+    }
+
     /** Adds the value a[i] itself (scale 2^-F). */
     void add(LimbVector a, int i) {
         int o = i * limbs;
         int f = base + format.fractionLimbs();
+        if (big) {
+            sumRe = sumRe.add(a.bigRe(i).shiftLeft(LimbFormat.BITS * f));
+            sumIm = sumIm.add(a.bigIm(i).shiftLeft(LimbFormat.BITS * f));
+            return;
+        }
         for (int x = 0; x < limbs; x++) {
             // re goes to t1; im = t3 - t1 - t2 then needs re + im in t3
             t1[f + x] += a.re[o + x];
@@ -152,6 +189,11 @@ final class LimbAccumulator {
 
     /** re = t1 - t2 into column, im = t3 - t1 - t2 into column2. */
     private void compose() {
+        if (big) {
+            LimbFormat.spill(sumRe, column);
+            LimbFormat.spill(sumIm, column2);
+            return;
+        }
         for (int c = low; c < column.length; c++) {
             column[c] = t1[c] - t2[c];
             column2[c] = t3[c] - t1[c] - t2[c];

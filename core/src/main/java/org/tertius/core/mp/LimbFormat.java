@@ -20,17 +20,30 @@ final class LimbFormat {
     /** Columns computed below the rounding position: the dropped ones change the result by far less than 2^-F. */
     private static final int GUARD_COLUMNS = 3;
     private static final RuntimeException OVERFLOW = new Overflow();
+    /**
+     * Limbs from which products are formed with BigInteger (Karatsuba above about 2500 bits, 64-bit multiplier
+     * intrinsics) rather than limb by limb: measured with {@code KernelCost}, the limb columns win below about
+     * 250 digits and BigInteger wins above (twice as fast at 1000 digits).
+     */
+    static final int BIG_PRODUCT_LIMBS = 40;
 
     private final int fractionLimbs;
     private final int limbs;
     private final int lowColumn;
     private final int flushEvery;
+    private final boolean bigProducts;
 
     /**
      * @param fractionBits at least this many fractional bits (rounded up to whole limbs)
      * @param headroom limbs for the integer part (values up to about 2^(BITS headroom - 2))
      */
     LimbFormat(int fractionBits, int headroom) {
+        this(fractionBits, headroom, (fractionBits + BITS - 1) / BITS + headroom >= BIG_PRODUCT_LIMBS);
+    }
+
+    /** As above, with the way products are formed chosen by the caller (tests and benchmarks). */
+    LimbFormat(int fractionBits, int headroom, boolean bigProducts) {
+        this.bigProducts = bigProducts;
         this.fractionLimbs = (fractionBits + BITS - 1) / BITS;
         this.limbs = fractionLimbs + headroom;
         this.lowColumn = Math.max(0, fractionLimbs - GUARD_COLUMNS);
@@ -45,6 +58,11 @@ final class LimbFormat {
 
     int fractionBits() {
         return fractionLimbs * BITS;
+    }
+
+    /** Whether products are formed with BigInteger (exact, all columns) rather than limb by limb. */
+    boolean bigProducts() {
+        return bigProducts;
     }
 
     int fractionLimbs() {
@@ -89,6 +107,27 @@ final class LimbFormat {
             }
             dst[off + i] = v;
         }
+    }
+
+    /**
+     * Spreads the integer x into columns: col[c] = the BITS-bit limb c of x for c < length - 1, and the last
+     * column the (signed) rest; when the rest does not fit a column it is replaced by a value that makes
+     * {@link #round} report an overflow.
+     */
+    static void spill(BigInteger x, long[] col) {
+        int last = col.length - 1;
+        byte[] b = x.toByteArray();
+        long fill = x.signum() < 0 ? 0xff : 0;
+        for (int c = 0; c < last; c++) {
+            long v = 0;
+            for (int j = 2; j >= 0; j--) {
+                int p = b.length - 1 - (3 * c + j);
+                v = (v << 8) | (p >= 0 ? b[p] & 0xff : fill);
+            }
+            col[c] = v;
+        }
+        BigInteger rest = x.shiftRight(BITS * last);
+        col[last] = rest.bitLength() < 62 ? rest.longValue() : (rest.signum() < 0 ? -(1L << 61) : 1L << 61);
     }
 
     /** The fixed-point integer (scale 2^-F) held in src[off .. off+L-1]. */

@@ -13,6 +13,10 @@ final class LimbVector {
     final long[] re;
     final long[] im;
     final long[] sum;
+    /** With BigInteger products: the values as integers, formed when first needed after each change. */
+    private final BigInteger[] bigRe;
+    private final BigInteger[] bigIm;
+    private final BigInteger[] bigSum;
 
     LimbVector(LimbFormat format, int size) {
         this.format = format;
@@ -20,6 +24,10 @@ final class LimbVector {
         this.re = new long[size * limbs];
         this.im = new long[size * limbs];
         this.sum = new long[size * limbs];
+        boolean big = format.bigProducts();
+        this.bigRe = big ? new BigInteger[size] : null;
+        this.bigIm = big ? new BigInteger[size] : null;
+        this.bigSum = big ? new BigInteger[size] : null;
     }
 
     /** Sets value i to (r + i m) 2^-F from fixed-point integers. */
@@ -29,12 +37,46 @@ final class LimbVector {
         updateSum(i);
     }
 
-    /** Recomputes re + im of value i (limb by limb, without carries). */
+    /** Recomputes re + im of value i (limb by limb, without carries); every change of a value ends here. */
     void updateSum(int i) {
         int o = i * limbs;
         for (int x = o; x < o + limbs; x++) {
             sum[x] = re[x] + im[x];
         }
+        if (bigRe != null) {
+            bigRe[i] = null;
+            bigIm[i] = null;
+            bigSum[i] = null;
+        }
+    }
+
+    /** The real part of value i as an integer (BigInteger products only; cached until the value changes). */
+    BigInteger bigRe(int i) {
+        BigInteger v = bigRe[i];
+        if (v == null) {
+            v = format.read(re, i * limbs);
+            bigRe[i] = v;
+        }
+        return v;
+    }
+
+    BigInteger bigIm(int i) {
+        BigInteger v = bigIm[i];
+        if (v == null) {
+            v = format.read(im, i * limbs);
+            bigIm[i] = v;
+        }
+        return v;
+    }
+
+    /** re + im of value i as an integer. */
+    BigInteger bigSum(int i) {
+        BigInteger v = bigSum[i];
+        if (v == null) {
+            v = bigRe(i).add(bigIm(i));
+            bigSum[i] = v;
+        }
+        return v;
     }
 
     BigInteger re(int i) {

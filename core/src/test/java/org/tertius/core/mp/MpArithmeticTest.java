@@ -115,6 +115,40 @@ class MpArithmeticTest {
     }
 
     @Test
+    void kernelWithBigIntegerProductsAgreesWithTheLimbKernel() {
+        // the same plan at 400 digits (BigInteger products, the known terms summed in two threads) and at 60
+        // digits (limb columns): the coefficients agree to the 60-digit rounding (common practice: two
+        // implementations of one recurrence checked against each other)
+        PolynomialSystem sys = PolynomialSystem.builder(IndependentVariable.LOG, "y", "p")
+                .term(0, new Complex(1), 0, 2, 1).term(0, new Complex(0.5), 1, 1, 0)
+                .term(1, new Complex(-1), 0, 1, 2).term(1, new Complex(0, 1), 2, 0, 0)
+                .term(1, new Complex(0.25), 2, 1, 0).build();
+        RecurrencePlan plan = RecurrencePlan.compile(sys);
+        int order = 30;
+        MpContext big = new MpContext(400);
+        assertTrue(new LimbFormat(big.bits() + 16, 1).bigProducts(), "400 digits should use BigInteger products");
+        TaylorSeries[] s = new TaylorSeries[2];
+        MpContext[] ctx = {C, big};
+        for (int m = 0; m < 2; m++) {
+            MpContext c = ctx[m];
+            MpComplex[] coef = new MpComplex[sys.coefficientValues().size()];
+            for (int i = 0; i < coef.length; i++) {
+                Complex v = sys.coefficientValues().get(i);
+                coef[i] = c.fromDouble(v.getReal(), v.getImaginary());
+            }
+            s[m] = new FixedPointKernel(plan, coef, order, c).expand(c.fromDouble(0.1, 0.2),
+                    new MpComplex[] {c.fromDouble(0.5, 0.25), c.fromDouble(-0.3, 0.1)}, 0.2);
+        }
+        for (int i = 0; i < 2; i++) {
+            for (int j = 0; j <= order; j++) {
+                MpComplex d = C.subtract(s[0].coefficient(C, i, j), s[1].coefficient(C, i, j));
+                assertTrue(d.isZero() || d.log2Abs() < -(DIGITS - 2) * MpContext.LOG2_10, "coefficient " + i + ","
+                        + j + " differs by 2^" + d.log2Abs());
+            }
+        }
+    }
+
+    @Test
     void continuedFractionReproducesARationalFunctionBeyondItsRadiusOfConvergence() {
         // f = (1 + 2s) / (1 - s/2 - 3 s^2 / 10): its [1/2] Pade approximant is f itself, so the convergents agree
         // with f far outside the disk of convergence of the series (radius about 1.5)

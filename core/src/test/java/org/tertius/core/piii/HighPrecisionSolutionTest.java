@@ -93,6 +93,17 @@ class HighPrecisionSolutionTest {
     }
 
     @Test
+    @org.junit.jupiter.api.Tag("slow")
+    void besselRiccatiSolutionAt400DigitsWithBigIntegerProductsMatchesApfloat0F1() {
+        // reference: Apfloat's hypergeometric0F1 at 460 digits (DLMF 10.16.9 and 32.10(iii)); 400 digits are past
+        // the limb count where the kernel and the continued fractions form their products with BigInteger
+        BesselRiccatiReference ref = new BesselRiccatiReference("1", "3/10", "1", "1", "7/10+1/5i", 460);
+        HighPrecisionSolution s = riccati(ref, 400);
+        SurfacePoint p = SurfacePoint.of(1.5, 0.75);
+        assertHonest(s.evaluate(p), ref.value(p), 400);
+    }
+
+    @Test
     void resultsAtDAndTwiceDAgreeToDDigits() {
         SurfacePoint p = SurfacePoint.of(3, 2);
         HighPrecisionValue v30 = generic(30).evaluate(p);
