@@ -17,6 +17,11 @@ import org.tertius.core.taylor.RecurrencePlan;
  * several threads.
  */
 final class FixedPointKernel {
+    /**
+     * Limb products (limbs^2 x order) from which the known terms of one order are summed in two threads: about
+     * 100 microseconds of work, well above the cost of handing a task to another thread.
+     */
+    private static final long SPLIT_WORK = 16L * 16 * 40;
     /** Integer limbs beyond which a growing solution is refused (values near 2^1500). */
     private static final int MAX_HEADROOM = 64;
     private final RecurrencePlan plan;
@@ -133,9 +138,10 @@ final class FixedPointKernel {
         for (int i = 0; i < n; i++) {
             rhs[i] = new LimbAccumulator(fmt);
         }
-        // with BigInteger products (many digits) the terms of every convolution whose factors are known before
-        // order k are summed in two threads first; the one or two terms with an order-k factor follow in order
-        boolean split = fmt.bigProducts() && Workers.PARALLEL;
+        // when an order is worth two threads (BigInteger products, or limb products of high order) the terms of
+        // every convolution whose factors are known before order k are summed in two threads first; the one or
+        // two terms with an order-k factor follow in order
+        boolean split = Workers.PARALLEL && (fmt.bigProducts() || (long) fmt.limbs() * fmt.limbs() * order >= 2 * SPLIT_WORK);
         LimbAccumulator[] known = split ? new LimbAccumulator[np + ng] : null;
         if (split) {
             for (int t = 0; t < known.length; t++) {
@@ -143,7 +149,7 @@ final class FixedPointKernel {
             }
         }
         for (int k = 0; k < order; k++) {
-            boolean splitHere = split && k >= 1;
+            boolean splitHere = split && k >= 1 && (fmt.bigProducts() || (long) fmt.limbs() * fmt.limbs() * k >= SPLIT_WORK);
             if (splitHere) {
                 knownTerms(w, base, known, k);
             }

@@ -126,13 +126,26 @@ final class LimbAccumulator {
         }
     }
 
-    /** Adds the sum held by another accumulator of the same format (BigInteger products only). */
+    /** Adds the sum held by another accumulator of the same format and placement. */
     void addSum(LimbAccumulator other) {
-        if (!big || !other.big) {
-            throw new IllegalStateException("sums are merged only with BigInteger products");
+        if (big) {
+            sumRe = sumRe.add(other.sumRe);
+            sumIm = sumIm.add(other.sumIm);
+            return;
         }
-        sumRe = sumRe.add(other.sumRe);
-        sumIm = sumIm.add(other.sumIm);
+        // carried columns lie below 2^BITS (the top one holds the rest), so the sum of two stays in budget
+        format.carry(t1, low);
+        format.carry(t2, low);
+        format.carry(t3, low);
+        format.carry(other.t1, low);
+        format.carry(other.t2, low);
+        format.carry(other.t3, low);
+        for (int c = low; c < t1.length; c++) {
+            t1[c] += other.t1[c];
+            t2[c] += other.t2[c];
+            t3[c] += other.t3[c];
+        }
+        load = 1;
     }
 
     /** Adds the value a[i] itself (scale 2^-F). */

@@ -116,8 +116,8 @@ class MpArithmeticTest {
 
     @Test
     void kernelWithBigIntegerProductsAgreesWithTheLimbKernel() {
-        // the same plan at 400 digits (BigInteger products, the known terms summed in two threads) and at 60
-        // digits (limb columns): the coefficients agree to the 60-digit rounding (common practice: two
+        // the same plan at 400 digits (BigInteger products, the known terms summed in two threads), at 200 digits
+        // and at 60 digits (limb columns): the coefficients agree to the 60-digit rounding (common practice: two
         // implementations of one recurrence checked against each other)
         PolynomialSystem sys = PolynomialSystem.builder(IndependentVariable.LOG, "y", "p")
                 .term(0, new Complex(1), 0, 2, 1).term(0, new Complex(0.5), 1, 1, 0)
@@ -127,9 +127,10 @@ class MpArithmeticTest {
         int order = 30;
         MpContext big = new MpContext(400);
         assertTrue(new LimbFormat(big.bits() + 16, 1).bigProducts(), "400 digits should use BigInteger products");
-        TaylorSeries[] s = new TaylorSeries[2];
-        MpContext[] ctx = {C, big};
-        for (int m = 0; m < 2; m++) {
+        // 200 digits: limb products with the known terms of the higher orders summed in two threads
+        TaylorSeries[] s = new TaylorSeries[3];
+        MpContext[] ctx = {C, big, new MpContext(200)};
+        for (int m = 0; m < 3; m++) {
             MpContext c = ctx[m];
             MpComplex[] coef = new MpComplex[sys.coefficientValues().size()];
             for (int i = 0; i < coef.length; i++) {
@@ -141,9 +142,11 @@ class MpArithmeticTest {
         }
         for (int i = 0; i < 2; i++) {
             for (int j = 0; j <= order; j++) {
-                MpComplex d = C.subtract(s[0].coefficient(C, i, j), s[1].coefficient(C, i, j));
-                assertTrue(d.isZero() || d.log2Abs() < -(DIGITS - 2) * MpContext.LOG2_10, "coefficient " + i + ","
-                        + j + " differs by 2^" + d.log2Abs());
+                for (int m = 1; m < 3; m++) {
+                    MpComplex d = C.subtract(s[0].coefficient(C, i, j), s[m].coefficient(C, i, j));
+                    assertTrue(d.isZero() || d.log2Abs() < -(DIGITS - 2) * MpContext.LOG2_10, "coefficient " + i
+                            + "," + j + " differs by 2^" + d.log2Abs() + " at " + ctx[m]);
+                }
             }
         }
     }
