@@ -52,19 +52,18 @@ final class LimbVector {
 
     /** The real part of value i as an integer (BigInteger products only; cached until the value changes). */
     BigInteger bigRe(int i) {
-        BigInteger v = bigRe[i];
-        if (v == null) {
-            v = format.read(re, i * limbs);
-            bigRe[i] = v;
-        }
-        return v;
+        return cached(bigRe, re, i);
     }
 
     BigInteger bigIm(int i) {
-        BigInteger v = bigIm[i];
+        return cached(bigIm, im, i);
+    }
+
+    private BigInteger cached(BigInteger[] cache, long[] limbArray, int i) {
+        BigInteger v = cache[i];
         if (v == null) {
-            v = format.read(im, i * limbs);
-            bigIm[i] = v;
+            v = format.read(limbArray, i * limbs);
+            cache[i] = v;
         }
         return v;
     }

@@ -86,10 +86,7 @@ class HighPrecisionSolutionTest {
     @Test
     void besselRiccatiSolutionAt200DigitsMatchesApfloat0F1() {
         // reference: Apfloat's hypergeometric0F1 at 260 digits (DLMF 10.16.9 and 32.10(iii))
-        BesselRiccatiReference ref = new BesselRiccatiReference("1", "3/10", "1", "1", "7/10+1/5i", 260);
-        HighPrecisionSolution s = riccati(ref, 200);
-        SurfacePoint p = SurfacePoint.of(1.5, 0.75);
-        assertHonest(s.evaluate(p), ref.value(p), 200);
+        assertRiccatiAt(200, 260);
     }
 
     @Test
@@ -97,10 +94,14 @@ class HighPrecisionSolutionTest {
     void besselRiccatiSolutionAt400DigitsWithBigIntegerProductsMatchesApfloat0F1() {
         // reference: Apfloat's hypergeometric0F1 at 460 digits (DLMF 10.16.9 and 32.10(iii)); 400 digits are past
         // the limb count where the kernel and the continued fractions form their products with BigInteger
-        BesselRiccatiReference ref = new BesselRiccatiReference("1", "3/10", "1", "1", "7/10+1/5i", 460);
-        HighPrecisionSolution s = riccati(ref, 400);
+        assertRiccatiAt(400, 460);
+    }
+
+    private static void assertRiccatiAt(int digits, int referenceDigits) {
+        BesselRiccatiReference ref = new BesselRiccatiReference("1", "3/10", "1", "1", "7/10+1/5i", referenceDigits);
+        HighPrecisionSolution s = riccati(ref, digits);
         SurfacePoint p = SurfacePoint.of(1.5, 0.75);
-        assertHonest(s.evaluate(p), ref.value(p), 400);
+        assertHonest(s.evaluate(p), ref.value(p), digits);
     }
 
     @Test
