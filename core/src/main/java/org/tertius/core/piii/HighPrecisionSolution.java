@@ -24,8 +24,9 @@ import org.tertius.core.taylor.RecurrencePlan;
  * arbitrary precision with the same recurrence plan, the same polynomial form and its conversions.
  *
  * <p>Every value comes with its estimated number of correct digits: the path is integrated at two accuracies
- * (about D/2 and D plus guard digits); their difference measures how much the path amplifies errors, and the
- * guard digits of the accurate run are widened and the run repeated when the estimate falls short of D.
+ * (about D/3 and D plus guard digits, side by side on two processors); their difference measures how much the
+ * path amplifies errors, and the guard digits of the accurate run are widened and the run repeated when the
+ * estimate falls short of D.
  *
  * <p>The states reached at the nodes of the path tree are kept (per accuracy), so later evaluations and
  * tabulations start from the nearest of them instead of from the start point. Thread-safe; a long run can be
@@ -191,7 +192,7 @@ public final class HighPrecisionSolution {
      * 10 * steps * tol * max(1, A) (each step contributes at most the local tolerance, amplified alike).
      */
     private List<HighPrecisionValue> compute(Pass pass, List<SurfacePoint> points) {
-        int cheapDigits = Math.max(20, digits / 2 + 5);
+        int cheapDigits = Math.max(20, digits / 3 + 5);
         Progress meter = new Progress(progress);
         // the two accuracies run side by side when there is more than one processor; the guard digits of the
         // accurate pass then come from the planned path (its nodes, doubled for the extra Pade and Taylor steps)
