@@ -100,20 +100,64 @@ final class FixedPointKernel {
      * The Taylor coefficients at tau0 of the solution through y0, in s with tau = tau0 + scale * s.
      */
     TaylorSeries expand(MpComplex tau0, MpComplex[] y0, double scale) {
-        for (int headroom = 1; ; headroom *= 2) {
+        for (int headroom = 1; ; ) {
             try {
                 return expand(tau0, y0, scale, new LimbFormat(f, headroom));
-            } catch (RuntimeException e) {
-                if (e != LimbFormat.overflow()) {
-                    throw e;
-                }
+            } catch (HeadroomShort e) {
                 if (headroom >= MAX_HEADROOM) {
                     throw new UnreachableTargetException("the high-precision Taylor coefficients near tau = "
                             + tau0.toComplex() + " exceed 2^" + (LimbFormat.BITS * headroom) + ": the solution is too"
                             + " large there");
                 }
+                headroom = Math.min(MAX_HEADROOM, Math.max(2 * headroom, e.limbs));
             }
         }
+    }
+
+    /**
+     * Raised when the scaled coefficients grow by more than GROWTH_LIMIT per order (a root test at orders 16, 32,
+     * 64, ...): the scale lies well beyond the radius of convergence, and finishing the expansion would only fill
+     * integer limbs (and cost their products). Carries the growth factor seen, so that the caller can shrink the
+     * scale at once.
+     */
+    static final class ScaleTooLarge extends RuntimeException {
+        private static final long serialVersionUID = 1L;
+        final double growth;
+
+        ScaleTooLarge(double growth) {
+            super("scaled Taylor coefficients grow by " + growth + " per order", null, false, false);
+            this.growth = growth;
+        }
+    }
+
+    /** An expansion ran out of integer limbs; carries the limbs its coefficients are estimated to need. */
+    private static final class HeadroomShort extends RuntimeException {
+        private static final long serialVersionUID = 1L;
+        final int limbs;
+
+        HeadroomShort(int limbs) {
+            super(null, null, false, false);
+            this.limbs = limbs;
+        }
+    }
+
+    /** Largest growth per order of the scaled coefficients accepted at the root-test checkpoints. */
+    private static final double GROWTH_LIMIT = 1.5;
+
+    /**
+     * log2 of the growth per order shown by coefficient m: max over the components of
+     * (log2 |y_{i,m}| - log2(1 + |y_{i,0}|)) / m.
+     */
+    private static double growthBits(LimbVector w, LimbFormat fmt, int n, int st, int m, double[] log2Start) {
+        double g = Double.NEGATIVE_INFINITY;
+        for (int i = 0; i < n; i++) {
+            int o = (i * st + m) * fmt.limbs();
+            double a = Math.hypot(fmt.approximate(w.re, o), fmt.approximate(w.im, o));
+            if (a > 0) {
+                g = Math.max(g, (Math.log(a) / Math.log(2) - log2Start[i]) / m);
+            }
+        }
+        return g;
     }
 
     private TaylorSeries expand(MpComplex tau0, MpComplex[] y0, double scale, LimbFormat fmt) {
@@ -148,74 +192,108 @@ final class FixedPointKernel {
                 known[t] = new LimbAccumulator(fmt);
             }
         }
-        for (int k = 0; k < order; k++) {
-            boolean splitHere = split && k >= 1 && (fmt.bigProducts() || (long) fmt.limbs() * fmt.limbs() * k >= SPLIT_WORK);
-            if (splitHere) {
-                knownTerms(w, base, known, k);
-            }
-            for (int p = 0; p < np; p++) {
-                int a = plan.productFirst(p) * st;
-                int b = plan.productSecond(p) * st;
-                LimbAccumulator sum = acc;
-                if (splitHere) {
-                    sum = known[p];
-                    sum.multiplyAdd(w, a, w, b + k);
-                    sum.multiplyAdd(w, a + k, w, b);
-                } else {
-                    acc.clear();
-                    acc.convolve(w, a, w, b, k);
-                }
-                sum.store(w, (n + p) * st + k);
-            }
-            for (int i = 0; i < n; i++) {
-                rhs[i].clear();
-            }
-            for (int g = 0; g < ng; g++) {
-                acc.clear();
-                for (int t = plan.groupStart(g); t < plan.groupStart(g + 1); t++) {
-                    int s = plan.termSeries(t);
-                    int c = plan.termCoefficient(t);
-                    if (s < 0) {
-                        if (k == 0) {
-                            acc.add(coef, c);
-                        }
-                    } else {
-                        acc.multiplyAdd(coef, c, w, s * st + k);
+        double[] log2Start = new double[n];
+        for (int i = 0; i < n; i++) {
+            double l = y0[i].log2Abs();
+            log2Start[i] = l == Double.NEGATIVE_INFINITY ? 0 : Math.max(0, l) + Math.log1p(Math.pow(2, -Math.abs(l)))
+                    / Math.log(2);
+        }
+        int k = 0;
+        try {
+            for (; k < order; k++) {
+                expandOrder(k, w, base, coef, aux, acc, rhs, known, split, fmt);
+                int m = k + 1;
+                if (m >= 16 && m < order && (m & (m - 1)) == 0) {
+                    double g = growthBits(w, fmt, n, st, m, log2Start);
+                    if (g > Math.log(GROWTH_LIMIT) / Math.log(2)) {
+                        throw new ScaleTooLarge(Math.pow(2, g));
                     }
                 }
-                int gs = plan.groupSeries(g) * st;
-                acc.store(w, gs + k);
-                LimbAccumulator r = rhs[plan.groupEquation(g)];
-                int b = plan.groupBaseIndex(g);
-                if (b < 0) {
-                    r.add(w, gs + k);
-                } else if (constantGroup[g]) {
-                    r.multiplyAdd(base, b * st + k, w, gs);
-                } else if (splitHere) {
-                    r.addSum(known[np + g]);
-                    r.multiplyAdd(base, b * st, w, gs + k);
-                } else {
-                    r.convolve(base, b * st, w, gs, k);
-                }
             }
-            for (int i = 0; i < n; i++) {
-                // y_{k+1} = r F_k / (k + 1)
-                rhs[i].store(aux, 1);
-                acc.clear();
-                acc.multiplyAdd(aux, 0, aux, 1);
-                acc.store(w, i * st + k + 1);
-                w.divide(i * st + k + 1, k + 1);
+        } catch (RuntimeException e) {
+            if (e != LimbFormat.overflow()) {
+                throw e;
             }
+            // the growth seen at the last complete order, carried to the full order, plus a margin
+            double g = k >= 4 ? Math.max(0, growthBits(w, fmt, n, st, k, log2Start)) : 1;
+            throw new HeadroomShort((int) Math.ceil((g * order + 2.0 * LimbFormat.BITS) / LimbFormat.BITS) + 1);
         }
         BigInteger[][] outRe = new BigInteger[n][st];
         BigInteger[][] outIm = new BigInteger[n][st];
         for (int i = 0; i < n; i++) {
-            for (int k = 0; k < st; k++) {
-                outRe[i][k] = w.re(i * st + k);
-                outIm[i][k] = w.im(i * st + k);
+            for (int j = 0; j < st; j++) {
+                outRe[i][j] = w.re(i * st + j);
+                outIm[i][j] = w.im(i * st + j);
             }
         }
         return new TaylorSeries(tau0, scale, f, outRe, outIm);
+    }
+
+    /** One order of the recurrence: the products, the term groups and y_{k+1} of every component. */
+    private void expandOrder(int k, LimbVector w, LimbVector base, LimbVector coef, LimbVector aux,
+                             LimbAccumulator acc, LimbAccumulator[] rhs, LimbAccumulator[] known, boolean split,
+                             LimbFormat fmt) {
+        final int n = plan.dimension();
+        final int st = order + 1;
+        final int np = plan.productCount();
+        final int ng = plan.groupCount();
+        boolean splitHere = split && k >= 1 && (fmt.bigProducts() || (long) fmt.limbs() * fmt.limbs() * k >= SPLIT_WORK);
+        if (splitHere) {
+            knownTerms(w, base, known, k);
+        }
+        for (int p = 0; p < np; p++) {
+            int a = plan.productFirst(p) * st;
+            int b = plan.productSecond(p) * st;
+            LimbAccumulator sum = acc;
+            if (splitHere) {
+                sum = known[p];
+                sum.multiplyAdd(w, a, w, b + k);
+                sum.multiplyAdd(w, a + k, w, b);
+            } else {
+                acc.clear();
+                acc.convolve(w, a, w, b, k);
+            }
+            sum.store(w, (n + p) * st + k);
+        }
+        for (int i = 0; i < n; i++) {
+            rhs[i].clear();
+        }
+        for (int g = 0; g < ng; g++) {
+            acc.clear();
+            for (int t = plan.groupStart(g); t < plan.groupStart(g + 1); t++) {
+                int s = plan.termSeries(t);
+                int c = plan.termCoefficient(t);
+                if (s < 0) {
+                    if (k == 0) {
+                        acc.add(coef, c);
+                    }
+                } else {
+                    acc.multiplyAdd(coef, c, w, s * st + k);
+                }
+            }
+            int gs = plan.groupSeries(g) * st;
+            acc.store(w, gs + k);
+            LimbAccumulator r = rhs[plan.groupEquation(g)];
+            int b = plan.groupBaseIndex(g);
+            if (b < 0) {
+                r.add(w, gs + k);
+            } else if (constantGroup[g]) {
+                r.multiplyAdd(base, b * st + k, w, gs);
+            } else if (splitHere) {
+                r.addSum(known[np + g]);
+                r.multiplyAdd(base, b * st, w, gs + k);
+            } else {
+                r.convolve(base, b * st, w, gs, k);
+            }
+        }
+        for (int i = 0; i < n; i++) {
+            // y_{k+1} = r F_k / (k + 1)
+            rhs[i].store(aux, 1);
+            acc.clear();
+            acc.multiplyAdd(aux, 0, aux, 1);
+            acc.store(w, i * st + k + 1);
+            w.divide(i * st + k + 1, k + 1);
+        }
     }
 
     /**

@@ -6,8 +6,8 @@ package org.tertius.core.mp;
  * im = t3 - t1 - t2. A sum of products is rounded once, when it is stored; nothing is allocated per product.
  * Columns below a low column are not formed (short products). A product may be placed some whole limbs lower
  * (a smaller binary exponent), for floating values with limb-granular exponents ({@link ScaledRow}). When the
- * format asks for BigInteger products (many limbs), the products are formed exactly with BigInteger and summed
- * as two integers (real and imaginary part), which are spread into the same columns when the sum is stored.
+ * format asks for BigInteger products (many limbs), the three products are formed exactly with BigInteger and
+ * summed as three integers, composed and spread into the same columns when the sum is stored.
  * Mutable scratch space of one computation.
  */
 final class LimbAccumulator {
@@ -24,9 +24,10 @@ final class LimbAccumulator {
     private final long[] column2;
     private int load;
     private final boolean big;
-    /** With BigInteger products: the real and imaginary sums, in units of column 0. */
-    private java.math.BigInteger sumRe = java.math.BigInteger.ZERO;
-    private java.math.BigInteger sumIm = java.math.BigInteger.ZERO;
+    /** With BigInteger products: the sums of ar br, ai bi and (ar + ai)(br + bi), in units of column 0. */
+    private java.math.BigInteger sum1 = java.math.BigInteger.ZERO;
+    private java.math.BigInteger sum2 = java.math.BigInteger.ZERO;
+    private java.math.BigInteger sum3 = java.math.BigInteger.ZERO;
 
     /** An accumulator of fixed-point products rounded at 2^-F, forming the columns from the format's low one. */
     LimbAccumulator(LimbFormat format) {
@@ -54,8 +55,9 @@ final class LimbAccumulator {
 
     void clear() {
         if (big) {
-            sumRe = java.math.BigInteger.ZERO;
-            sumIm = java.math.BigInteger.ZERO;
+            sum1 = java.math.BigInteger.ZERO;
+            sum2 = java.math.BigInteger.ZERO;
+            sum3 = java.math.BigInteger.ZERO;
             return;
         }
         java.util.Arrays.fill(t1, 0);
@@ -82,11 +84,10 @@ final class LimbAccumulator {
             java.math.BigInteger p1 = a.bigRe(i).multiply(b.bigRe(j));
             java.math.BigInteger p2 = a.bigIm(i).multiply(b.bigIm(j));
             java.math.BigInteger p3 = a.bigSum(i).multiply(b.bigSum(j));
-            java.math.BigInteger re = p1.subtract(p2);
-            java.math.BigInteger im = p3.subtract(p1).subtract(p2);
             int at = LimbFormat.BITS * (base + shift);
-            sumRe = sumRe.add(at == 0 ? re : re.shiftLeft(at));
-            sumIm = sumIm.add(at == 0 ? im : im.shiftLeft(at));
+            sum1 = sum1.add(at == 0 ? p1 : p1.shiftLeft(at));
+            sum2 = sum2.add(at == 0 ? p2 : p2.shiftLeft(at));
+            sum3 = sum3.add(at == 0 ? p3 : p3.shiftLeft(at));
             return;
         }
         final int n = limbs;
@@ -129,8 +130,9 @@ final class LimbAccumulator {
     /** Adds the sum held by another accumulator of the same format and placement. */
     void addSum(LimbAccumulator other) {
         if (big) {
-            sumRe = sumRe.add(other.sumRe);
-            sumIm = sumIm.add(other.sumIm);
+            sum1 = sum1.add(other.sum1);
+            sum2 = sum2.add(other.sum2);
+            sum3 = sum3.add(other.sum3);
             return;
         }
         // carried columns lie below 2^BITS (the top one holds the rest), so the sum of two stays in budget
@@ -153,8 +155,9 @@ final class LimbAccumulator {
         int o = i * limbs;
         int f = base + format.fractionLimbs();
         if (big) {
-            sumRe = sumRe.add(a.bigRe(i).shiftLeft(LimbFormat.BITS * f));
-            sumIm = sumIm.add(a.bigIm(i).shiftLeft(LimbFormat.BITS * f));
+            // as in the columns: re goes to the first sum, re + im to the third
+            sum1 = sum1.add(a.bigRe(i).shiftLeft(LimbFormat.BITS * f));
+            sum3 = sum3.add(a.bigSum(i).shiftLeft(LimbFormat.BITS * f));
             return;
         }
         for (int x = 0; x < limbs; x++) {
@@ -203,8 +206,9 @@ final class LimbAccumulator {
     /** re = t1 - t2 into column, im = t3 - t1 - t2 into column2. */
     private void compose() {
         if (big) {
-            LimbFormat.spill(sumRe, column);
-            LimbFormat.spill(sumIm, column2);
+            java.math.BigInteger re = sum1.subtract(sum2);
+            LimbFormat.spill(re, column);
+            LimbFormat.spill(sum3.subtract(sum1).subtract(sum2), column2);
             return;
         }
         for (int c = low; c < column.length; c++) {

@@ -33,7 +33,7 @@ public final class SegmentIntegrator {
     private static final int SHORTCUT_CANDIDATES = 3;
     private static final double SHORTCUT_REACH = 1.2;
     /** First Pade trial length in units of the scale, before any step has told how far the fractions reach. */
-    private static final double FIRST_REACH = 0.8;
+    private static final double FIRST_REACH = 2.0;
     /** Factors by which the trial length shrinks after a rejected trial and grows for the next step. */
     private static final double SHRINK = 0.75;
     private static final double GROW = 1.25;
@@ -227,7 +227,7 @@ public final class SegmentIntegrator {
         List<HpNode> nodes = keepNodes ? new ArrayList<>() : null;
         double r = scaleGuess;
         // the last accepted Pade length in units of the scale: the next step starts its trials near it
-        double[] reach = {FIRST_REACH};
+        double[] reach = {Double.NaN};
         int steps = 0;
         int next = 0;
         while (true) {
@@ -301,7 +301,9 @@ public final class SegmentIntegrator {
      * A Pade step when Taylor steps would be short: to the farthest of the next few waypoints within reach whose
      * convergents meet the tolerance, else along the current line, first to the target or to GROW times the last
      * accepted reach (whichever is nearer), then shrinking by SHRINK; null when no Pade value is accepted farther
-     * than 1.5 Taylor steps. {@code reach[0]} carries the accepted length (in units of the scale) to the next step.
+     * than 1.5 Taylor steps. {@code reach[0]} carries the accepted length to the next step (NaN before the first:
+     * FIRST_REACH times the scale is tried then). The length, not its ratio to the scale, is carried: at high
+     * orders the fractions reach well past the radius of convergence, and the scale follows that radius.
      */
     private Step padeStep(TaylorSeries series, MpComplex tau, List<MpComplex> waypoints, int next, double dist,
                           double hT, double[] reach) {
@@ -327,22 +329,29 @@ public final class SegmentIntegrator {
         }
         MpComplex remaining = ctx.subtract(waypoints.get(next), tau);
         MpComplex dir = ctx.divide(remaining, ctx.fromDouble(dist, 0));
-        double first = Math.min(dist, Math.max(GROW * reach[0] * series.scale(), PADE_TRIGGER * hT));
-        if (dist - first < PADE_TRIGGER * hT) {
-            first = dist; // a short remainder would cost a step of its own
+        double guess = Double.isNaN(reach[0]) ? FIRST_REACH * series.scale() : GROW * reach[0];
+        double first = Math.min(dist, Math.max(guess, PADE_TRIGGER * hT));
+        // the whole remaining distance first when it is not far beyond the guess: a remainder costs a step of its
+        // own (an expansion and its fractions), a failed trial only an evaluation of the fractions
+        List<Double> trials = new ArrayList<>();
+        if (first < dist && (dist <= 2 * first || dist - first < PADE_TRIGGER * hT)) {
+            trials.add(dist);
         }
-        for (double len = first; len > PADE_TRIGGER * hT || len == first; len *= SHRINK) {
+        for (double len = first; ; len *= SHRINK) {
+            trials.add(len);
+            if (len <= PADE_TRIGGER * hT) {
+                break;
+            }
+        }
+        for (double len : trials) {
             boolean whole = len == dist;
             MpComplex sp = whole ? ctx.divide(remaining, r) : ctx.divide(ctx.multiply(dir, ctx.fromDouble(len, 0)), r);
             MpComplex[] v = padeValue(ctx, fractions, sp, tolerance);
             if (v != null) {
-                if (!whole || len >= reach[0] * series.scale()) {
-                    reach[0] = len / series.scale();
+                if (!whole || Double.isNaN(reach[0]) || len >= reach[0]) {
+                    reach[0] = len;
                 }
                 return new Step(sp, v, fractions, whole ? next : -1);
-            }
-            if (len <= PADE_TRIGGER * hT) {
-                break;
             }
         }
         return null;
@@ -366,13 +375,19 @@ public final class SegmentIntegrator {
      */
     private TaylorSeries expandScaled(MpComplex tau, MpComplex[] y, double r) {
         TaylorSeries series = null;
-        // a scale far beyond the radius of convergence makes the scaled coefficients overflow at high orders
-        // (they grow like (r / rho)^k): shrink the scale and expand again
+        // a scale beyond the radius of convergence makes the scaled coefficients grow like (r / rho)^k: the kernel
+        // stops early when they grow too fast (or overflow), and the scale shrinks by the growth seen
         for (int shrink = 0; series == null; shrink++) {
             try {
                 series = expand(tau, y, r);
-            } catch (org.tertius.core.UnreachableTargetException e) {
-                if (shrink >= 8) {
+            } catch (FixedPointKernel.ScaleTooLarge e) {
+                if (shrink >= 12) {
+                    throw new UnreachableTargetException("the high-precision series near tau = " + tau.toComplex()
+                            + " keeps growing as its scale shrinks: the path runs into a singularity");
+                }
+                r /= 1.2 * e.growth;
+            } catch (UnreachableTargetException e) {
+                if (shrink >= 12) {
                     throw e;
                 }
                 r *= 0.25;

@@ -18,9 +18,11 @@ import org.tertius.core.number.SurfacePoint;
  *   java -cp ... org.tertius.core.piii.HighPrecisionBench table 30 50 100 200 1000
  *   java -cp ... org.tertius.core.piii.HighPrecisionBench apfloat        # cost of Apfloat and BigInteger products
  * </pre>
- * The table reports, per number of digits, the wall time of a fresh solution (in a warm JVM), the steps and
- * order of the accurate pass, the time per step, and the ratio of the time to the multiplication-count bound
- * order^2 x products per order x steps x (time of one complex product at that precision).
+ * The table reports, per number of digits, the wall and process CPU time of a fresh solution (in a warm JVM),
+ * the steps and order of the accurate pass, the wall time per step (both passes), and the ratio of the times
+ * to the multiplication-count bound: the complex products of the accurate pass (recurrence, order^2/2 per
+ * convolution, and continued fractions) times the time of one complex product at that precision. The two
+ * passes and the continued fractions run in parallel, so wall/bound can fall below 1 on two processors.
  */
 public final class HighPrecisionBench {
     private HighPrecisionBench() {
@@ -63,21 +65,36 @@ public final class HighPrecisionBench {
     }
 
     private static void table(int[] digits) {
-        // warm the JIT on a small case first
-        scenario(30).evaluate(SurfacePoint.of(3, 2));
-        System.out.println("digits  order  steps  time[s]  per-step[ms]  complex-product[us]  bound[s]  ratio");
+        // warm the JIT on small cases first
+        for (int w = 0; w < 3; w++) {
+            scenario(30).evaluate(SurfacePoint.of(3, 2));
+            scenario(60).evaluate(SurfacePoint.of(3, 2));
+        }
+        System.out.println("digits  order  steps  wall[s]  cpu[s]  per-step[ms]  complex-product[us]  bound[s]"
+                + "  wall/bound  cpu/bound");
         for (int d : digits) {
             HighPrecisionSolution s = scenario(d);
+            long c0 = processCpuNanos();
             long t0 = System.nanoTime();
             HighPrecisionValue v = s.evaluate(SurfacePoint.of(3, 2));
             double t = (System.nanoTime() - t0) / 1e9;
+            double cpu = (processCpuNanos() - c0) / 1e9;
             HighPrecisionSolution.Statistics st = s.statistics();
             double mul = KernelCost.complexProductSeconds(st.fractionBits());
             double bound = st.productCount() * mul;
-            System.out.printf(Locale.ROOT, "%6d  %5d  %5d  %7.3f  %12.2f  %19.3f  %8.3f  %5.2f   (%d correct)%n", d,
-                    st.order(), st.steps(), t, 1e3 * t / Math.max(1, st.totalSteps()), mul * 1e6, bound,
-                    t / bound, v.correctDigits());
+            System.out.printf(Locale.ROOT, "%6d  %5d  %5d  %7.3f  %6.3f  %12.2f  %19.3f  %8.3f  %10.2f  %9.2f   (%d"
+                    + " correct)%n", d, st.order(), st.steps(), t, cpu, 1e3 * t / Math.max(1, st.totalSteps()),
+                    mul * 1e6, bound, t / bound, cpu / bound, v.correctDigits());
         }
+    }
+
+    /** CPU time of the whole process (all threads, the JIT's included), or -1 where the JVM does not tell. */
+    private static long processCpuNanos() {
+        java.lang.management.OperatingSystemMXBean os = java.lang.management.ManagementFactory.getOperatingSystemMXBean();
+        if (os instanceof com.sun.management.OperatingSystemMXBean) {
+            return ((com.sun.management.OperatingSystemMXBean) os).getProcessCpuTime();
+        }
+        return -1;
     }
 
     private static void apfloat() {
