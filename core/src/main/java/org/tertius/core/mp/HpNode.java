@@ -33,10 +33,10 @@ final class HpNode {
      * The state at the scaled point s, or null when s lies on a Pade step and the approximants do not meet the
      * tolerance there (the caller then steps to the point).
      */
-    MpComplex[] evaluate(MpContext ctx, MpComplex s, double tolerance) {
+    MpComplex[] evaluate(MpContext ctx, MpComplex s, double log2Tolerance) {
         if (fractions == null) {
             return series.evaluate(ctx, s);
         }
-        return SegmentIntegrator.padeValue(ctx, fractions, s, tolerance);
+        return SegmentIntegrator.padeValue(ctx, fractions, s, log2Tolerance);
     }
 }

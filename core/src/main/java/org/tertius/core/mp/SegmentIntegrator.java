@@ -42,7 +42,8 @@ public final class SegmentIntegrator {
 
     private final FixedPointKernel kernel;
     private final MpContext ctx;
-    private final double tolerance;
+    /** log2 of the local tolerance (kept as a logarithm: 10^-D underflows a double beyond D = 307). */
+    private final double log2Tolerance;
     private final int toleranceDigits;
     /** Complex products of series coefficients done so far (recurrence and continued fractions), and expansions. */
     private final java.util.concurrent.atomic.AtomicLong products = new java.util.concurrent.atomic.AtomicLong();
@@ -57,7 +58,7 @@ public final class SegmentIntegrator {
         this.kernel = kernel;
         this.ctx = ctx;
         this.toleranceDigits = toleranceDigits;
-        this.tolerance = Math.pow(10, -toleranceDigits);
+        this.log2Tolerance = -toleranceDigits * MpContext.LOG2_10;
     }
 
     /**
@@ -81,8 +82,9 @@ public final class SegmentIntegrator {
         return ctx;
     }
 
-    public double tolerance() {
-        return tolerance;
+    /** log2 of the local tolerance 10^-toleranceDigits. */
+    public double log2Tolerance() {
+        return log2Tolerance;
     }
 
     public int toleranceDigits() {
@@ -183,7 +185,7 @@ public final class SegmentIntegrator {
         HpNode node = run.nodes.get(lo);
         TaylorSeries ts = node.series();
         MpComplex sp = ctx.divide(ctx.subtract(t, ts.center()), ctx.fromDouble(ts.scale(), 0));
-        MpComplex[] y = node.evaluate(ctx, sp, tolerance);
+        MpComplex[] y = node.evaluate(ctx, sp, log2Tolerance);
         if (y != null) {
             return new Result(y, ts.scale(), lo + 1, null);
         }
@@ -322,7 +324,7 @@ public final class SegmentIntegrator {
                 continue;
             }
             MpComplex sp = ctx.divide(d, r);
-            MpComplex[] v = padeValue(ctx, fractions, sp, tolerance);
+            MpComplex[] v = padeValue(ctx, fractions, sp, log2Tolerance);
             if (v != null) {
                 return new Step(sp, v, fractions, j);
             }
@@ -346,7 +348,7 @@ public final class SegmentIntegrator {
         for (double len : trials) {
             boolean whole = len == dist;
             MpComplex sp = whole ? ctx.divide(remaining, r) : ctx.divide(ctx.multiply(dir, ctx.fromDouble(len, 0)), r);
-            MpComplex[] v = padeValue(ctx, fractions, sp, tolerance);
+            MpComplex[] v = padeValue(ctx, fractions, sp, log2Tolerance);
             if (v != null) {
                 if (!whole || Double.isNaN(reach[0]) || len >= reach[0]) {
                     reach[0] = len;
@@ -498,9 +500,10 @@ public final class SegmentIntegrator {
 
     /**
      * The Pade value at s of every component: the last convergent, accepted when it differs from the two before
-     * by at most tol (1 + |value|); null otherwise.
+     * by at most tol (1 + |value|), compared as base-2 logarithms (tol = 2^log2Tol may lie far below the double
+     * range); null otherwise.
      */
-    static MpComplex[] padeValue(MpContext ctx, ContinuedFraction[] fractions, MpComplex s, double tol) {
+    static MpComplex[] padeValue(MpContext ctx, ContinuedFraction[] fractions, MpComplex s, double log2Tol) {
         MpContext wide = ctx.widen(PADE_EXTRA_DIGITS);
         MpComplex[] out = new MpComplex[fractions.length];
         for (int i = 0; i < fractions.length; i++) {
@@ -508,9 +511,9 @@ public final class SegmentIntegrator {
             if (c == null) {
                 return null;
             }
-            double scale = 1 + c[2].abs();
-            double e = Math.max(wide.subtract(c[2], c[1]).abs(), wide.subtract(c[2], c[0]).abs());
-            if (!(e <= tol * scale)) {
+            double log2Scale = log2OnePlus(c[2].log2Abs());
+            double log2E = Math.max(wide.subtract(c[2], c[1]).log2Abs(), wide.subtract(c[2], c[0]).log2Abs());
+            if (!(log2E <= log2Tol + log2Scale)) {
                 return null;
             }
             out[i] = ctx.round(c[2]);

@@ -180,6 +180,31 @@ class MpArithmeticTest {
     }
 
     @Test
+    void padeAcceptanceHoldsForTolerancesBelowTheDoubleRange() {
+        // e^s (c_k = 1/k!, common practice) at s = 1e-11 with 30 coefficients: the last convergents differ by
+        // about 1e-370, which is far above a tolerance of 1e-400 but below the smallest double; the acceptance
+        // test works with base-2 logarithms, so the value is refused (a test in doubles would see 0 <= 0)
+        MpContext c400 = new MpContext(420);
+        int n = 30;
+        MpComplex[] c = new MpComplex[n + 1];
+        MpComplex term = c400.fromLong(1);
+        for (int k = 0; k <= n; k++) {
+            c[k] = term;
+            term = c400.divide(term, k + 1);
+        }
+        ContinuedFraction[] f = {ContinuedFraction.of(c400, c)};
+        MpComplex s = c400.fromDouble(1e-11, 0);
+        MpComplex[] conv = f[0].lastConvergents(c400, s);
+        double log2Diff = c400.subtract(conv[2], conv[1]).log2Abs();
+        assertTrue(log2Diff < -1023 && log2Diff > -400 * MpContext.LOG2_10, "difference 2^" + log2Diff
+                + " should lie between 1e-400 and the double range");
+        assertTrue(SegmentIntegrator.padeValue(c400, f, s, -400 * MpContext.LOG2_10) == null,
+                "a Pade value 1e-370 off was accepted at a tolerance of 1e-400");
+        assertTrue(SegmentIntegrator.padeValue(c400, f, s, -300 * MpContext.LOG2_10) != null,
+                "the same value must pass a tolerance of 1e-300");
+    }
+
+    @Test
     void continuedFractionStopsAtASingularMinorInsteadOfFailing() {
         // 1 + s^2: u_2(0) = 0 (the [0/1] approximant does not exist); the fraction is cut there
         MpComplex[] c = {C.fromLong(1), MpComplex.ZERO, C.fromLong(1), MpComplex.ZERO, MpComplex.ZERO};
