@@ -185,7 +185,9 @@ final class FixedPointKernel {
         // when an order is worth two threads (BigInteger products, or limb products of high order) the terms of
         // every convolution whose factors are known before order k are summed in two threads first; the one or
         // two terms with an order-k factor follow in order
-        boolean split = Workers.PARALLEL && (fmt.bigProducts() || (long) fmt.limbs() * fmt.limbs() * order >= 2 * SPLIT_WORK);
+        long perOrder = (long) fmt.limbs() * fmt.limbs();
+        int splitFrom = fmt.bigProducts() ? 1 : (int) Math.max(1, Math.min(order, (SPLIT_WORK + perOrder - 1) / perOrder));
+        boolean split = Workers.PARALLEL && splitFrom <= order / 2;
         LimbAccumulator[] known = split ? new LimbAccumulator[np + ng] : null;
         if (split) {
             for (int t = 0; t < known.length; t++) {
@@ -201,7 +203,7 @@ final class FixedPointKernel {
         int k = 0;
         try {
             for (; k < order; k++) {
-                expandOrder(k, w, base, coef, aux, acc, rhs, known, split, fmt);
+                expandOrder(k, w, base, coef, aux, acc, rhs, known, split && k >= splitFrom);
                 int m = k + 1;
                 if (m >= 16 && m < order && (m & (m - 1)) == 0) {
                     double g = growthBits(w, fmt, n, st, m, log2Start);
@@ -231,13 +233,12 @@ final class FixedPointKernel {
 
     /** One order of the recurrence: the products, the term groups and y_{k+1} of every component. */
     private void expandOrder(int k, LimbVector w, LimbVector base, LimbVector coef, LimbVector aux,
-                             LimbAccumulator acc, LimbAccumulator[] rhs, LimbAccumulator[] known, boolean split,
-                             LimbFormat fmt) {
+                             LimbAccumulator acc, LimbAccumulator[] rhs, LimbAccumulator[] known,
+                             boolean splitHere) {
         final int n = plan.dimension();
         final int st = order + 1;
         final int np = plan.productCount();
         final int ng = plan.groupCount();
-        boolean splitHere = split && k >= 1 && (fmt.bigProducts() || (long) fmt.limbs() * fmt.limbs() * k >= SPLIT_WORK);
         if (splitHere) {
             knownTerms(w, base, known, k);
         }

@@ -172,37 +172,6 @@ final class LimbFormat {
     }
 
     /**
-     * Multiplies the value in a[off ..] by 2^(BITS s) in place: s > 0 shifts in zero limbs (the value must fit),
-     * s = -1 drops the lowest limb with rounding to nearest.
-     */
-    void shiftLimbs(long[] a, int off, int s) {
-        int top = off + limbs - 1;
-        if (s > 0) {
-            long sign = a[top] < 0 ? MASK + 1 : 0;
-            for (int x = top; x >= off + s; x--) {
-                a[x] = a[x - s];
-            }
-            for (int x = off; x < off + s && x <= top; x++) {
-                a[x] = 0;
-            }
-            a[top] -= sign;
-            if (Math.abs(a[top]) >= TOP_BOUND) {
-                throw OVERFLOW;
-            }
-        } else if (s == -1) {
-            long carry = (a[off] + (1L << (BITS - 1))) >> BITS;
-            for (int x = off; x < top; x++) {
-                long v = a[x + 1] + carry;
-                a[x] = v & MASK;
-                carry = v >> BITS;
-            }
-            a[top] = carry;
-        } else if (s != 0) {
-            throw new IllegalArgumentException("shift " + s);
-        }
-    }
-
-    /**
      * Rounds exact column sums to nearest at column {@code from} (the column of limb 0 of the result) into
      * out[off .. off+L-1]; the columns below {@code low} count as zero.
      *

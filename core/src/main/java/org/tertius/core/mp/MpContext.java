@@ -206,27 +206,7 @@ public final class MpContext {
         if (m.signum() == 0) {
             return new Apfloat(0, digits);
         }
-        BigDecimal d = e >= 0 ? new BigDecimal(m.shiftLeft(e))
-                : new BigDecimal(m.multiply(BigInteger.valueOf(5).pow(-e)), -e);
-        return new Apfloat(d, digits);
-    }
-
-    /** A decimal string of {@code n} significant digits of the real number m 2^e (round half even). */
-    static String decimal(BigInteger m, int e, int n) {
-        if (m.signum() == 0) {
-            return "0";
-        }
-        BigDecimal d = e >= 0 ? new BigDecimal(m.shiftLeft(e))
-                : new BigDecimal(m.multiply(BigInteger.valueOf(5).pow(-e)), -e);
-        BigDecimal r = d.round(new java.math.MathContext(n, java.math.RoundingMode.HALF_EVEN));
-        return r.toString().replace("E+", "e").replace("E", "e");
-    }
-
-    /** "a+bi" with n significant digits per part. */
-    public String format(MpComplex x, int n) {
-        String re = decimal(x.re, x.exp, n);
-        String im = decimal(x.im.abs(), x.exp, n);
-        return re + (x.im.signum() < 0 ? "-" : "+") + im + "i";
+        return new Apfloat(exactDecimal(m, e), digits);
     }
 
     // ---- fixed point ------------------------------------------------------------------------------------------

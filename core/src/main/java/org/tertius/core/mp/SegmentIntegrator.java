@@ -45,9 +45,8 @@ public final class SegmentIntegrator {
     /** log2 of the local tolerance (kept as a logarithm: 10^-D underflows a double beyond D = 307). */
     private final double log2Tolerance;
     private final int toleranceDigits;
-    /** Complex products of series coefficients done so far (recurrence and continued fractions), and expansions. */
+    /** Complex products of series coefficients done so far (recurrence and continued fractions). */
     private final java.util.concurrent.atomic.AtomicLong products = new java.util.concurrent.atomic.AtomicLong();
-    private final java.util.concurrent.atomic.AtomicLong expansions = new java.util.concurrent.atomic.AtomicLong();
 
     /**
      * @param kernel the recurrence kernel
@@ -105,13 +104,8 @@ public final class SegmentIntegrator {
         return products.get();
     }
 
-    /** Taylor expansions done so far by this integrator. */
-    public long expansions() {
-        return expansions.get();
-    }
 
     private TaylorSeries expand(MpComplex tau, MpComplex[] y, double r) {
-        expansions.incrementAndGet();
         products.addAndGet(kernel.productsPerExpansion());
         return kernel.expand(tau, y, r);
     }
@@ -228,7 +222,7 @@ public final class SegmentIntegrator {
                Advance advance, Landing landing) {
         List<HpNode> nodes = keepNodes ? new ArrayList<>() : null;
         double r = scaleGuess;
-        // the last accepted Pade length in units of the scale: the next step starts its trials near it
+        // the last accepted Pade length (NaN before the first): the next step starts its trials near it
         double[] reach = {Double.NaN};
         int steps = 0;
         int next = 0;
@@ -470,24 +464,17 @@ public final class SegmentIntegrator {
             for (int i = 1; i < out.length; i++) {
                 out[i] = Workers.join(others.get(i - 1));
             }
-            for (ContinuedFraction f : out) {
-                products.addAndGet(f.productCount());
-            }
         } else {
             for (int i = 0; i < out.length; i++) {
                 out[i] = fraction(series, wide, i);
-                products.addAndGet(out[i].productCount());
-                if (out[i].depth() < n / 2) {
-                    return null;
-                }
             }
         }
+        boolean deep = true;
         for (ContinuedFraction f : out) {
-            if (f.depth() < n / 2) {
-                return null;
-            }
+            products.addAndGet(f.productCount());
+            deep &= f.depth() >= n / 2;
         }
-        return out;
+        return deep ? out : null;
     }
 
     private static ContinuedFraction fraction(TaylorSeries series, MpContext wide, int component) {

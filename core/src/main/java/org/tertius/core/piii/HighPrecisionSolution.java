@@ -223,10 +223,13 @@ public final class HighPrecisionSolution {
         }
     }
 
-    /** The most nodes of the planned path from the start to one of the points. */
+    /**
+     * The most nodes of the planned path from the start to the first or the last point (the points between lie on
+     * a line from the first, and looking each of them up would plan paths that are never taken).
+     */
     private int plannedSteps(List<SurfacePoint> points) {
         int most = 1;
-        for (SurfacePoint p : points) {
+        for (SurfacePoint p : List.of(points.get(0), points.get(points.size() - 1))) {
             most = Math.max(most, chain(p.logRe(), p.logIm()).length);
         }
         return most;
