@@ -7,11 +7,11 @@ import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import javax.imageio.ImageIO;
+import org.hipparchus.complex.Complex;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.TertiusException;
 import org.tertius.core.number.SurfacePoint;
 import org.tertius.core.piii.Painleve3Solution;
-import org.tertius.core.piii.Painleve3Value;
 import org.tertius.core.region.Grid;
 import org.tertius.core.region.GridResult;
 import org.tertius.core.region.PoleFinder;
@@ -57,7 +57,8 @@ public final class FieldCommand implements Callable<Integer> {
         String gridSpec = grid != null ? grid : (line == null && logStrip == null ? f.get("grid") : null);
         String lineSpec = line != null ? line : (grid == null && logStrip == null ? f.get("line") : null);
         if ((gridSpec == null && logStrip == null) == (lineSpec == null)) {
-            throw new InvalidInputException("--grid", "give exactly one of --grid RE0:RE1:NX,IM0:IM1:NY and --line A:B:N");
+            throw new InvalidInputException("--grid", "give exactly one of --grid RE0:RE1:NX,IM0:IM1:NY,"
+                    + " --log-strip LOGR0:LOGR1:NX,ARG0:ARG1:NY and --line A:B:N");
         }
         int[] wh = parseSize(size);
         OutputFile.checkWritable("--out", out);
@@ -93,27 +94,11 @@ public final class FieldCommand implements Callable<Integer> {
     }
 
     private int linePlot(Painleve3Solution s, List<SurfacePoint> points, String title, int[] wh, PrintWriter err) {
-        double[] x = new double[points.size()];
-        double[] re = new double[points.size()];
-        double[] im = new double[points.size()];
+        Curve c = new Curve(points, p -> s.evaluate(p).w());
         SurfacePoint a = points.get(0);
         SurfacePoint b = points.get(points.size() - 1);
         double len = Math.hypot(b.re() - a.re(), b.im() - a.im());
-        boolean realSegment = a.im() == 0 && b.im() == 0;
-        int failed = 0;
-        for (int i = 0; i < points.size(); i++) {
-            SurfacePoint p = points.get(i);
-            x[i] = realSegment ? p.re() : Math.hypot(p.re() - a.re(), p.im() - a.im());
-            try {
-                Painleve3Value v = s.evaluate(p);
-                re[i] = v.w().getReal();
-                im[i] = v.w().getImaginary();
-            } catch (TertiusException e) {
-                re[i] = Double.NaN;
-                im[i] = Double.NaN;
-                failed++;
-            }
-        }
+        boolean realSegment = c.realSegment;
         List<Singularity> poles = TableCommand.polesAlong(s, points);
         double[] poleX = new double[poles.size()];
         for (int i = 0; i < poleX.length; i++) {
@@ -122,38 +107,53 @@ public final class FieldCommand implements Callable<Integer> {
         }
         String xLabel = realSegment ? "z (real axis, sheet " + a.sheet() + ")"
                 : String.format(Locale.ROOT, "distance along the segment from %s (length %.4g)", a, len);
-        BufferedImage img = LinePlot.draw(title, xLabel, x, re, im, poleX, wh[0], wh[1]);
+        BufferedImage img = LinePlot.draw(title, xLabel, c.x, c.re, c.im, poleX, wh[0], wh[1]);
         OutputFile.writeWhole("--out", out, p -> ImageIO.write(img, "png", p.toFile()));
         err.println("tertius: wrote " + out + " with " + poles.size() + " pole(s) marked");
-        return failed == 0 ? 0 : Main.EXIT_UNREACHED;
+        return c.failed == 0 ? 0 : Main.EXIT_UNREACHED;
+    }
+
+    /**
+     * Values along the points of a segment: the abscissa (z itself on a real segment, else the distance from the
+     * first point), real and imaginary parts, NaN where a value could not be computed.
+     */
+    private static final class Curve {
+        final double[] x;
+        final double[] re;
+        final double[] im;
+        final boolean realSegment;
+        int failed;
+
+        Curve(List<SurfacePoint> points, java.util.function.Function<SurfacePoint, Complex> f) {
+            x = new double[points.size()];
+            re = new double[points.size()];
+            im = new double[points.size()];
+            SurfacePoint a = points.get(0);
+            realSegment = a.im() == 0 && points.get(points.size() - 1).im() == 0;
+            for (int i = 0; i < points.size(); i++) {
+                SurfacePoint p = points.get(i);
+                x[i] = realSegment ? p.re() : Math.hypot(p.re() - a.re(), p.im() - a.im());
+                try {
+                    Complex v = f.apply(p);
+                    re[i] = v.getReal();
+                    im[i] = v.getImaginary();
+                } catch (TertiusException e) {
+                    re[i] = Double.NaN;
+                    im[i] = Double.NaN;
+                    failed++;
+                }
+            }
+        }
     }
 
     private int memberPlot(List<SurfacePoint> points, int[] wh, PrintWriter err) {
         org.tertius.hierarchy.MemberSolution ms = member.solution(solution.solver.settings());
-        double[] x = new double[points.size()];
-        double[] re = new double[points.size()];
-        double[] im = new double[points.size()];
-        SurfacePoint a = points.get(0);
-        int failed = 0;
-        for (int i = 0; i < points.size(); i++) {
-            SurfacePoint p = points.get(i);
-            x[i] = a.im() == 0 && points.get(points.size() - 1).im() == 0 ? p.re()
-                    : Math.hypot(p.re() - a.re(), p.im() - a.im());
-            try {
-                org.tertius.hierarchy.MemberValue v = ms.evaluate(p);
-                re[i] = v.q().getReal();
-                im[i] = v.q().getImaginary();
-            } catch (TertiusException e) {
-                re[i] = Double.NaN;
-                im[i] = Double.NaN;
-                failed++;
-            }
-        }
-        BufferedImage img = LinePlot.draw("member " + member.member + ": q(x), " + ms.parameters(), "x", x, re, im,
-                new double[0], wh[0], wh[1]);
+        Curve c = new Curve(points, p -> ms.evaluate(p).q());
+        BufferedImage img = LinePlot.draw("member " + member.member + ": q(x), " + ms.parameters(), "x", c.x, c.re,
+                c.im, new double[0], wh[0], wh[1]);
         OutputFile.writeWhole("--out", out, p -> ImageIO.write(img, "png", p.toFile()));
         err.println("tertius: wrote " + out);
-        return failed == 0 ? 0 : Main.EXIT_UNREACHED;
+        return c.failed == 0 ? 0 : Main.EXIT_UNREACHED;
     }
 
     static int[] parseSize(String text) {

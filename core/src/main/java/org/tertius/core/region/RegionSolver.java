@@ -139,9 +139,6 @@ public final class RegionSolver {
                 store(solution.evaluate(p), k, wRe, wIm, dwRe, dwIm, err);
                 integrated++;
             } catch (TertiusException e) {
-                if (failed == 0 && Boolean.getBoolean("tertius.region.trace")) {
-                    System.err.println("first failure at " + p + ": " + e.getMessage());
-                }
                 failed++;
             }
         }

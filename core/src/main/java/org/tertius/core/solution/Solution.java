@@ -36,7 +36,7 @@ public final class Solution {
     /** Steps without getting closer to the target before it is declared unreachable. */
     private static final int STALL_STEPS = 60;
     /** Carried relative error above which a node is penalised as the start of a new path. */
-    private static final double PENALTY_FROM = Double.parseDouble(System.getProperty("tertius.penalty", "1e-10"));
+    private static final double PENALTY_FROM = 1e-10;
     private final Object lock = new Object();
     private final boolean singularAtOrigin;
     private volatile Node[] nodes;
@@ -208,9 +208,6 @@ public final class Solution {
             double maxR = maxRadius(current.tauRe() + current.radius() * choice.sr(),
                     current.tauIm() + current.radius() * choice.si());
             Node next = stepper.step(current, choice.sr(), choice.si(), baseId - steps - 1, maxR);
-            if (Boolean.getBoolean("tertius.trace")) {
-                System.err.printf("step %d s=(%.3f,%.3f) -> tau=(%.4f,%.4f) r=%.4f sing=%d acc=%.2e%n", steps, choice.sr(), choice.si(), next.tauRe(), next.tauIm(), next.radius(), next.singularityCount(), next.accumulatedError());
-            }
             if (!(next.accumulatedError() <= settings.maxError())) {
                 throw new UnreachableTargetException("the accumulated error estimate " + next.accumulatedError()
                         + " exceeds " + settings.maxError() + " on the way to tau = " + tauRe + "," + tauIm
