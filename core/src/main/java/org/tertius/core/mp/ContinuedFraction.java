@@ -39,8 +39,9 @@ final class ContinuedFraction {
      * The fraction of the series with coefficients c[0..N] (c[0] != 0 is needed; otherwise the fraction is
      * empty). Rows whose leading coefficient has lost more than half the working bits to cancellation end it.
      *
-     * <p>The rows are held as floating values with limb-granular exponents ({@link ScaledRow}); an entry of the
-     * next row is formed exactly from its two products and rounded once. Nothing is allocated per product.
+     * <p>The rows are held as floating values with limb-granular exponents ({@link ScaledRow}), normalised to a
+     * leading 1: an entry of the next row is a difference of two entries, formed exactly and rounded, times the
+     * reciprocal of the leading difference, rounded once more. Nothing is allocated per product.
      */
     static ContinuedFraction of(MpContext ctx, MpComplex[] c) {
         // two limbs more than the working bits: an entry normalised to whole limbs keeps all of them
@@ -53,33 +54,45 @@ final class ContinuedFraction {
     }
 
     private static ContinuedFraction of(MpContext ctx, MpComplex[] c, LimbFormat fmt) {
+        // rows normalised to a leading 1, v_k = u_k / e_k: then u_{k+1} = e_k e_{k-1} (v_{k-1} - v_k) / s, so a
+        // row costs one product per entry (the difference d times 1/d_0) instead of two, and
+        // e_{k+1} = e_k e_{k-1} d_0 (the leading entry of v_k is 1 and is not stored again)
         int n = c.length;
         List<MpComplex> es = new ArrayList<>();
         es.add(ctx.fromLong(1));
-        ScaledRow prev = ScaledRow.unit(fmt, n);
-        ScaledRow cur = ScaledRow.of(fmt, c);
-        ScaledRow next = new ScaledRow(fmt, n);
+        if (n == 0 || c[0].isZero()) {
+            return new ContinuedFraction(es.toArray(new MpComplex[0]), 0);
+        }
         // products placed up to L + 2 limbs apart; columns from 3 below the rounding of the larger product
         int l = fmt.limbs();
         LimbAccumulator acc = new LimbAccumulator(fmt, l + 2, (l + 2) + l - 5);
         double lossLimit = 0.5 * ctx.bits();
+        ScaledRow vk = ScaledRow.unit(fmt, n);
+        ScaledRow diff = ScaledRow.of(fmt, c);
+        ScaledRow vNext = new ScaledRow(fmt, n);
+        MpComplex lead = c[0];
         long count = 0;
-        while (cur.length() > 0 && !cur.isZero(0)) {
-            MpComplex u0 = cur.value(ctx, 0);
-            if (cur.log2Max() - u0.log2Abs() > lossLimit) {
+        while (true) {
+            // diff holds u_{k+1} up to the factor e_k e_{k-1} (u_1 = f itself), vk holds v_k; lead = diff_0
+            if (diff.log2Max() - lead.log2Abs() > lossLimit) {
                 break;
             }
-            es.add(u0);
-            int len = Math.min(prev.length(), cur.length()) - 1;
+            int k = es.size() - 1;
+            es.add(k == 0 ? ctx.round(lead) : ctx.multiply(ctx.multiply(es.get(k), es.get(k - 1)), lead));
+            count += diff.length();
+            vNext.scale(diff, ScaledRow.of(fmt, new MpComplex[] {ctx.reciprocal(lead)}), acc);
+            int len = Math.min(vk.length(), vNext.length()) - 1;
             if (len <= 0) {
                 break;
             }
-            count += 2L * len;
-            next.combine(cur, prev, acc, len);
-            ScaledRow t = prev;
-            prev = cur;
-            cur = next;
-            next = t;
+            diff.difference(vk, vNext, acc, len);
+            ScaledRow t = vk;
+            vk = vNext;
+            vNext = t;
+            if (diff.isZero(0)) {
+                break;
+            }
+            lead = diff.value(ctx, 0);
         }
         return new ContinuedFraction(es.toArray(new MpComplex[0]), count);
     }

@@ -103,21 +103,44 @@ final class LimbAccumulator {
         final int ao = i * n;
         final int bo = j * n;
         final int off = base + shift;
-        for (int x = 0; x < n; x++) {
-            long pr = ar[ao + x];
-            long pi = ai[ao + x];
-            long ps = as[ao + x];
-            if ((pr | pi | ps) == 0) {
-                continue;
+        // leading zero limbs (small positive values) take no part
+        int na = n;
+        while (na > 0 && (ar[ao + na - 1] | ai[ao + na - 1]) == 0) {
+            na--;
+        }
+        int nb = n;
+        while (nb > 0 && (br[bo + nb - 1] | bi[bo + nb - 1]) == 0) {
+            nb--;
+        }
+        if (na == 0 || nb == 0) {
+            return;
+        }
+        // column by column (product scanning): the terms of a column are summed in registers and the column is
+        // written once; a column receives at most L terms below 2^(2 BITS + 2), far inside a long
+        final int cEnd = off + na + nb - 2;
+        for (int c = Math.max(low, off); c <= cEnd; c++) {
+            int k = c - off;
+            int xLo = Math.max(0, k - (nb - 1));
+            int xHi = Math.min(na - 1, k);
+            long s1 = 0;
+            long s2 = 0;
+            long s3 = 0;
+            int p = ao + xLo;
+            int q = bo + k - xLo;
+            int m = xHi - xLo + 1;
+            for (; m >= 2; m -= 2, p += 2, q -= 2) {
+                s1 += ar[p] * br[q] + ar[p + 1] * br[q - 1];
+                s2 += ai[p] * bi[q] + ai[p + 1] * bi[q - 1];
+                s3 += as[p] * bs[q] + as[p + 1] * bs[q - 1];
             }
-            int y0 = Math.max(0, low - off - x);
-            int c = off + x + y0;
-            for (int y = y0; y < n; y++, c++) {
-                int q = bo + y;
-                c1[c] += pr * br[q];
-                c2[c] += pi * bi[q];
-                c3[c] += ps * bs[q];
+            if (m == 1) {
+                s1 += ar[p] * br[q];
+                s2 += ai[p] * bi[q];
+                s3 += as[p] * bs[q];
             }
+            c1[c] += s1;
+            c2[c] += s2;
+            c3[c] += s3;
         }
         if (++load >= flushEvery) {
             format.carry(t1, low);
@@ -164,6 +187,28 @@ final class LimbAccumulator {
             // re goes to t1; im = t3 - t1 - t2 then needs re + im in t3
             t1[f + x] += a.re[o + x];
             t3[f + x] += a.sum[o + x];
+        }
+    }
+
+    /**
+     * Adds (or, with {@code negate}, subtracts) the value a[i] 2^(BITS shift), shift <= 0 and -shift <= base, in
+     * the units of a product (a value added at shift 0 is stored back unchanged). Columns below the low one are
+     * left out, as for products.
+     */
+    void addShifted(LimbVector a, int i, int shift, boolean negate) {
+        int f = base + format.fractionLimbs() + shift;
+        if (big) {
+            java.math.BigInteger re = a.bigRe(i).shiftLeft(LimbFormat.BITS * f);
+            java.math.BigInteger s = a.bigSum(i).shiftLeft(LimbFormat.BITS * f);
+            sum1 = negate ? sum1.subtract(re) : sum1.add(re);
+            sum3 = negate ? sum3.subtract(s) : sum3.add(s);
+            return;
+        }
+        int o = i * limbs;
+        long sign = negate ? -1 : 1;
+        for (int x = Math.max(0, low - f); x < limbs; x++) {
+            t1[f + x] += sign * a.re[o + x];
+            t3[f + x] += sign * a.sum[o + x];
         }
     }
 

@@ -13,16 +13,13 @@ final class ScaledRow {
     private final LimbVector values;
     private final int[] exponent;
     private final boolean[] zero;
-    /** the slot after the entries, holding the negated leading entry during {@link #combine} */
-    private final int scratch;
     private int length;
 
     ScaledRow(LimbFormat format, int capacity) {
         this.format = format;
-        this.values = new LimbVector(format, capacity + 1);
-        this.exponent = new int[capacity + 1];
-        this.zero = new boolean[capacity + 1];
-        this.scratch = capacity;
+        this.values = new LimbVector(format, capacity);
+        this.exponent = new int[capacity];
+        this.zero = new boolean[capacity];
     }
 
     /** The row 1, 0, 0, ... of the given length. */
@@ -88,31 +85,60 @@ final class ScaledRow {
     }
 
     /**
-     * Sets this row to the next one after (cur, prev): entry j = u0 prev_{j+1} - p0 cur_{j+1} for j < len, with
-     * u0 = cur_0 and p0 = prev_0, formed exactly from the two products (placed by their exponents) and rounded
-     * once. A product more than L + 2 limbs below the other is below the rounding and is left out.
+     * Sets this row to the differences prev_{j+1} - cur_{j+1}, j < len, each formed exactly (the two entries placed
+     * by their exponents) and rounded once. An entry more than L + 2 limbs below the other is below the rounding
+     * and is left out.
      */
-    void combine(ScaledRow cur, ScaledRow prev, LimbAccumulator acc, int len) {
-        LimbVector pv = prev.values;
-        pv.set(prev.scratch, pv.re(0).negate(), pv.im(0).negate());
+    void difference(ScaledRow prev, ScaledRow cur, LimbAccumulator acc, int len) {
         int reach = values.limbs + 2;
         for (int j = 0; j < len; j++) {
-            boolean hasA = !prev.zero[j + 1] && !cur.zero[0];
-            boolean hasB = !cur.zero[j + 1] && !prev.zero[0];
-            int ea = cur.exponent[0] + prev.exponent[j + 1];
-            int eb = prev.exponent[0] + cur.exponent[j + 1];
+            boolean hasA = !prev.zero[j + 1];
+            boolean hasB = !cur.zero[j + 1];
+            if (!hasA && !hasB) {
+                setZero(j);
+                continue;
+            }
+            int ea = prev.exponent[j + 1];
+            int eb = cur.exponent[j + 1];
             int e = hasA && hasB ? Math.max(ea, eb) : hasA ? ea : eb;
             acc.clear();
             if (hasA && ea - e >= -reach) {
-                acc.multiplyAdd(cur.values, 0, pv, j + 1, ea - e);
+                acc.addShifted(prev.values, j + 1, ea - e, false);
             }
             if (hasB && eb - e >= -reach) {
-                acc.multiplyAdd(pv, prev.scratch, cur.values, j + 1, eb - e);
+                acc.addShifted(cur.values, j + 1, eb - e, true);
             }
-            int shift = acc.storeNormalized(values, j);
-            zero[j] = shift == Integer.MIN_VALUE;
-            exponent[j] = zero[j] ? 0 : e + shift;
+            store(acc, j, e);
         }
         length = len;
+    }
+
+    /** Sets this row to the entries of src times the first entry of factor, each product rounded once. */
+    void scale(ScaledRow src, ScaledRow factor, LimbAccumulator acc) {
+        for (int j = 0; j < src.length; j++) {
+            if (src.zero[j] || factor.zero[0]) {
+                setZero(j);
+                continue;
+            }
+            acc.clear();
+            acc.multiplyAdd(src.values, j, factor.values, 0, 0);
+            store(acc, j, src.exponent[j] + factor.exponent[0]);
+        }
+        length = src.length;
+    }
+
+    private void store(LimbAccumulator acc, int j, int e) {
+        int shift = acc.storeNormalized(values, j);
+        zero[j] = shift == Integer.MIN_VALUE;
+        exponent[j] = zero[j] ? 0 : e + shift;
+    }
+
+    private void setZero(int j) {
+        int o = j * values.limbs;
+        java.util.Arrays.fill(values.re, o, o + values.limbs, 0);
+        java.util.Arrays.fill(values.im, o, o + values.limbs, 0);
+        values.updateSum(j);
+        zero[j] = true;
+        exponent[j] = 0;
     }
 }
