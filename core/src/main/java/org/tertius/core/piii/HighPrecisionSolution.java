@@ -290,6 +290,20 @@ public final class HighPrecisionSolution {
         return l.withProgress(meter);
     }
 
+    /**
+     * The first series scale: the distance from the root node to the nearest singularity its approximants found
+     * (an estimate of the radius of convergence), else its disk radius. The series is re-expanded when the scale
+     * is far from the radius, so a good guess saves a whole expansion per pass.
+     */
+    private static double startScale(Node root) {
+        double nearest = Double.POSITIVE_INFINITY;
+        for (int j = 0; j < root.singularityCount(); j++) {
+            nearest = Math.min(nearest, Math.hypot(root.singularityRe(j) - root.tauRe(),
+                    root.singularityIm(j) - root.tauIm()));
+        }
+        return nearest > 0 && nearest < Double.POSITIVE_INFINITY ? nearest : root.radius();
+    }
+
     /** The double-precision chain of node ids from the root to the node that serves tau. */
     private int[] chain(double tauRe, double tauIm) {
         int served = engine.evaluate(tauRe, tauIm).nodeId();
@@ -424,7 +438,7 @@ public final class HighPrecisionSolution {
             this.integrator = new SegmentIntegrator(plan, view.coefficients(hp), ctx, tolDigits);
             MpComplex z = ctx.fromExact(z0);
             MpComplex[] y0 = view.toState(hp, z, ctx.fromExact(w0), ctx.fromExact(dw0));
-            this.root = new PathState(ctx.log(z), y0, engine.root().radius(), 0);
+            this.root = new PathState(ctx.log(z), y0, startScale(engine.root()), 0);
         }
 
         Level withProgress(Progress p) {
