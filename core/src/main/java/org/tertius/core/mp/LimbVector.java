@@ -3,16 +3,16 @@ package org.tertius.core.mp;
 import java.math.BigInteger;
 
 /**
- * A work array of complex fixed-point numbers in one {@link LimbFormat}: real parts, imaginary parts and their
- * sums re + im (kept for products with three multiplications), each value taking L consecutive longs. Mutable
- * scratch space owned by one computation (never shared between threads).
+ * A work array of complex fixed-point numbers in one {@link LimbFormat}: real and imaginary parts, each value
+ * taking L consecutive longs (with BigInteger products also the values as integers, and their sums re + im for
+ * products with three multiplications). Mutable scratch space owned by one computation (never shared between
+ * threads).
  */
 final class LimbVector {
     final LimbFormat format;
     final int limbs;
     final long[] re;
     final long[] im;
-    final long[] sum;
     /** With BigInteger products: the values as integers, formed when first needed after each change. */
     private final BigInteger[] bigRe;
     private final BigInteger[] bigIm;
@@ -23,7 +23,6 @@ final class LimbVector {
         this.limbs = format.limbs();
         this.re = new long[size * limbs];
         this.im = new long[size * limbs];
-        this.sum = new long[size * limbs];
         boolean big = format.bigProducts();
         this.bigRe = big ? new BigInteger[size] : null;
         this.bigIm = big ? new BigInteger[size] : null;
@@ -34,15 +33,11 @@ final class LimbVector {
     void set(int i, BigInteger r, BigInteger m) {
         format.write(r, re, i * limbs);
         format.write(m, im, i * limbs);
-        updateSum(i);
+        changed(i);
     }
 
-    /** Recomputes re + im of value i (limb by limb, without carries); every change of a value ends here. */
-    void updateSum(int i) {
-        int o = i * limbs;
-        for (int x = o; x < o + limbs; x++) {
-            sum[x] = re[x] + im[x];
-        }
+    /** Forgets the integers cached for value i (BigInteger products); every change of a value ends here. */
+    void changed(int i) {
         if (bigRe != null) {
             bigRe[i] = null;
             bigIm[i] = null;
@@ -90,6 +85,6 @@ final class LimbVector {
     void divide(int i, long d) {
         format.divide(re, i * limbs, d);
         format.divide(im, i * limbs, d);
-        updateSum(i);
+        changed(i);
     }
 }

@@ -137,7 +137,7 @@ final class ScaledRow {
         int o = j * values.limbs;
         java.util.Arrays.fill(values.re, o, o + values.limbs, 0);
         java.util.Arrays.fill(values.im, o, o + values.limbs, 0);
-        values.updateSum(j);
+        values.changed(j);
         zero[j] = true;
         exponent[j] = 0;
     }
