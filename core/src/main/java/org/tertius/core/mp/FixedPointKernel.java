@@ -37,7 +37,7 @@ final class FixedPointKernel {
      * @param plan the compiled recurrence
      * @param coefficients the coefficient values of the system, in its coefficient order, at ctx precision
      * @param order the highest Taylor order N
-     * @param ctx the working precision (F = its bit count plus 16, rounded up to whole limbs)
+     * @param ctx the working precision (F = its bit count rounded up to whole limbs)
      */
     FixedPointKernel(RecurrencePlan plan, MpComplex[] coefficients, int order, MpContext ctx) {
         if (coefficients.length != plan.coefficientCount()) {
@@ -50,7 +50,9 @@ final class FixedPointKernel {
         this.plan = plan;
         this.ctx = ctx;
         this.order = order;
-        this.f = LimbFormat.fractionBits(ctx.bits() + 16);
+        // the working precision (which carries its own guard bits, and lies six digits above the tolerance)
+        // rounded up to whole limbs; 16 more bits made one limb more at 100 digits for no measured gain
+        this.f = LimbFormat.fractionBits(ctx.bits());
         int nc = coefficients.length;
         coefRe = new BigInteger[nc];
         coefIm = new BigInteger[nc];
