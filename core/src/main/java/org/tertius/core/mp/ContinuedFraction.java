@@ -44,13 +44,21 @@ final class ContinuedFraction {
      * reciprocal of the leading difference, rounded once more. Nothing is allocated per product.
      */
     static ContinuedFraction of(MpContext ctx, MpComplex[] c) {
-        // two limbs more than the working bits: an entry normalised to whole limbs keeps all of them
-        return of(ctx, c, new LimbFormat(ctx.bits() + 2 * LimbFormat.BITS, 1));
+        return of(ctx, c, new LimbFormat(rowBits(ctx), 1));
     }
 
     /** As above, with the way products are formed chosen by the caller (tests). */
     static ContinuedFraction of(MpContext ctx, MpComplex[] c, boolean bigProducts) {
-        return of(ctx, c, new LimbFormat(ctx.bits() + 2 * LimbFormat.BITS, 1, bigProducts));
+        return of(ctx, c, new LimbFormat(rowBits(ctx), 1, bigProducts));
+    }
+
+    /**
+     * The fractional bits of the rows: an entry normalised to whole limbs has its leading limb non-zero, so it
+     * keeps at least (fraction limbs - 1) BITS + 1 significant bits; one limb beyond the working bits keeps them
+     * all (two limbs were used before, one more than needed).
+     */
+    private static int rowBits(MpContext ctx) {
+        return ctx.bits() + LimbFormat.BITS;
     }
 
     private static ContinuedFraction of(MpContext ctx, MpComplex[] c, LimbFormat fmt) {

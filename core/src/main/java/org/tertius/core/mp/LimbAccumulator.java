@@ -244,7 +244,10 @@ final class LimbAccumulator {
         return from - base - format.fractionLimbs();
     }
 
-    /** With BigInteger products: re = t1 - t2 and im = t3 - t1 - t2 spread into the columns (limb products sum there). */
+    /**
+     * With BigInteger products: re = t1 - t2 and im = t3 - t1 - t2 spread into the columns (limb products are
+     * summed there directly).
+     */
     private void compose() {
         if (big) {
             LimbFormat.spill(sum1.subtract(sum2), re);
