@@ -13,7 +13,11 @@ import java.util.List;
  * <pre>  V_k = e_{k-1} + s e_{k+1} / V_{k+1},   f = e_1 / V_1,  </pre>
  * a fraction whose convergents (Wallis' recurrences) need products only; cutting it at depth m (V_m = e_{m-1})
  * gives the same approximants as the usual form {@code f = 1/(d_1 + a_1 s/(d_2 + ...))} with
- * {@code d_k = e_{k-1}/e_k}, {@code a_k = 1/e_k}, of which it is an equivalence transformation.
+ * {@code d_k = e_{k-1}/e_k}, {@code a_k = 1/e_k}, of which it is an equivalence transformation. The fraction is
+ * kept in the equivalent normalised form
+ * <pre>  f = e_1 / (1 + s g_1 / (1 + s g_2 / (1 + ...))),   g_n = e_{n+1} / (e_n e_{n-1}),  </pre>
+ * whose coefficients are of moderate size: the e_k themselves are products along the fraction, and their
+ * binary exponents grow without bound (past 2^31 at 100 digits).
  *
  * <p>When some e_k vanishes (a singular leading minor: a block in the Pade table) or is lost in rounding, the
  * fraction is cut there: its last convergents are still Pade approximants of lower order, and the caller's
@@ -21,13 +25,23 @@ import java.util.List;
  * caller falls back on the Taylor polynomial). Immutable.
  */
 final class ContinuedFraction {
-    /** e_0 = 1, e_1 = f(0), ..., e_depth. */
-    private final MpComplex[] e;
+    /** e_1 = f(0), and g_1 .. g_{depth-1} (index n - 1). */
+    private final MpComplex e1;
+    private final MpComplex[] g;
+    /** The same in double precision with separate exponents, for the screen. */
+    private final WideComplex e1Wide;
+    private final WideComplex[] gWide;
     private final long productCount;
 
-    private ContinuedFraction(MpComplex[] e, long productCount) {
-        this.e = e;
+    private ContinuedFraction(MpComplex e1, MpComplex[] g, long productCount) {
+        this.e1 = e1;
+        this.g = g;
         this.productCount = productCount;
+        this.e1Wide = e1 == null ? WideComplex.ZERO : WideComplex.of(e1);
+        this.gWide = new WideComplex[g.length];
+        for (int n = 0; n < g.length; n++) {
+            gWide[n] = WideComplex.of(g[n]);
+        }
     }
 
     /** Complex products done to build the fraction. */
@@ -66,10 +80,9 @@ final class ContinuedFraction {
         // row costs one product per entry (the difference d times 1/d_0) instead of two, and
         // e_{k+1} = e_k e_{k-1} d_0 (the leading entry of v_k is 1 and is not stored again)
         int n = c.length;
-        List<MpComplex> es = new ArrayList<>();
-        es.add(ctx.fromLong(1));
+        List<MpComplex> gs = new ArrayList<>();
         if (n == 0 || c[0].isZero()) {
-            return new ContinuedFraction(es.toArray(new MpComplex[0]), 0);
+            return new ContinuedFraction(null, new MpComplex[0], 0);
         }
         // products placed up to L + 2 limbs apart; columns from 3 below the rounding of the larger product
         int l = fmt.limbs();
@@ -79,14 +92,19 @@ final class ContinuedFraction {
         ScaledRow diff = ScaledRow.of(fmt, c);
         ScaledRow vNext = new ScaledRow(fmt, n);
         MpComplex lead = c[0];
+        MpComplex e1 = null;
         long count = 0;
         while (true) {
-            // diff holds u_{k+1} up to the factor e_k e_{k-1} (u_1 = f itself), vk holds v_k; lead = diff_0
+            // diff holds u_{k+1} up to the factor e_k e_{k-1} (u_1 = f itself), vk holds v_k; lead = diff_0, which
+            // is e_1 for k = 0 and g_k = e_{k+1} / (e_k e_{k-1}) after
             if (diff.log2Max() - lead.log2Abs() > lossLimit) {
                 break;
             }
-            int k = es.size() - 1;
-            es.add(k == 0 ? ctx.round(lead) : ctx.multiply(ctx.multiply(es.get(k), es.get(k - 1)), lead));
+            if (e1 == null) {
+                e1 = ctx.round(lead);
+            } else {
+                gs.add(ctx.round(lead));
+            }
             count += diff.length();
             vNext.scale(diff, ScaledRow.of(fmt, new MpComplex[] {ctx.reciprocal(lead)}), acc);
             int len = Math.min(vk.length(), vNext.length()) - 1;
@@ -102,12 +120,59 @@ final class ContinuedFraction {
             }
             lead = diff.value(ctx, 0);
         }
-        return new ContinuedFraction(es.toArray(new MpComplex[0]), count);
+        return new ContinuedFraction(e1, gs.toArray(new MpComplex[0]), count);
     }
 
     /** Number of levels (the last convergent matches this many series coefficients). */
     int depth() {
-        return e.length - 1;
+        return e1 == null ? 0 : g.length + 1;
+    }
+
+    /**
+     * A double-precision estimate of what {@link SegmentIntegrator#padeValue} tests at s: log2 of
+     * max(|c_k - c_{k-1}|, |c_k - c_{k-2}|) / (1 + |c_k|) for the last three convergents; positive infinity when
+     * the fraction is too short or a convergent is infinite. It costs a few double operations per level (no
+     * arbitrary-precision product), so trial lengths can be screened before one is evaluated in full.
+     *
+     * <p>With P_n the denominators of Wallis' recurrences for the normalised form (below), R_n = P_n / P_{n-1}
+     * and T_n = (a_1 ... a_n) / (P_n P_{n-1}), a_n = s g_n:
+     * <pre>  R_n = 1 + s g_n / R_{n-1},   T_n = T_{n-1} s g_n / (R_n R_{n-1}),   R_0 = T_0 = 1,  </pre>
+     * and the convergents differ by c_{n+1} - c_n = e_1 (-1)^n T_n (the determinant formula of continued
+     * fractions: P_n Q_{n-1} - P_{n-1} Q_n = (-1)^{n+1} a_1 ... a_n; W.B. Jones and W.J. Thron, "Continued
+     * Fractions", Addison-Wesley 1980, section 2.1), so c_{n+1} = e_1 (1 + sum_{j <= n} (-1)^j T_j). All the
+     * factors are of moderate size; the products are tracked with a separate exponent.
+     */
+    String debugG() {
+        StringBuilder sb = new StringBuilder("depth " + depth() + " g:");
+        for (int n = 1; n < g.length; n++) { if (g[n] != null) { double l = g[n].log2Abs(); if (Math.abs(l) > 30) sb.append(" " + n + ":" + Math.round(l)); } else sb.append(" " + n + ":null"); }
+        return sb.toString();
+    }
+
+    double screenLog2Error(MpComplex s) {
+        int k = depth();
+        if (k < 3) {
+            return Double.POSITIVE_INFINITY;
+        }
+        WideComplex sw = WideComplex.of(s);
+        WideComplex r = WideComplex.ONE;
+        WideComplex t = WideComplex.ONE;
+        WideComplex tPrev = WideComplex.ONE;
+        WideComplex sum = WideComplex.ONE;
+        for (int n = 1; n < k; n++) {
+            WideComplex a = sw.multiply(gWide[n - 1]);
+            WideComplex rn = WideComplex.ONE.add(a.divide(r));
+            if (rn.isZero()) {
+                return Double.POSITIVE_INFINITY;
+            }
+            tPrev = t;
+            t = t.multiply(a).divide(rn.multiply(r));
+            sum = sum.add((n & 1) == 0 ? t : t.negate());
+            r = rn;
+        }
+        double log2E = e1Wide.log2Abs() + Math.max(t.log2Abs(), t.add(tPrev.negate()).log2Abs());
+        double log2C = e1Wide.multiply(sum).log2Abs();
+        double log2Scale = log2C > 60 ? log2C : Math.log(1 + Math.pow(2, log2C)) / Math.log(2);
+        return log2E - log2Scale;
     }
 
     /**
@@ -119,17 +184,17 @@ final class ContinuedFraction {
         if (k < 3) {
             return null;
         }
-        // Wallis for V_1 = b_0 + a_1/(b_1 + a_2/(b_2 + ...)), b_n = e_n, a_n = s e_{n+1}; the convergent of depth
-        // n + 1 is f = e_1 B_n / A_n, with A_{-1} = 1, B_{-1} = 0, A_0 = e_0, B_0 = 1
+        // Wallis for K = 1 + a_1/(1 + a_2/(1 + ...)), a_n = s g_n: P_n = P_{n-1} + a_n P_{n-2}, Q_n likewise, with
+        // P_{-1} = 1, Q_{-1} = 0, P_0 = Q_0 = 1; the convergent of depth n + 1 is f = e_1 Q_n / P_n
         MpComplex aPrev = ctx.fromLong(1);
         MpComplex bPrev = MpComplex.ZERO;
-        MpComplex aCur = e[0];
+        MpComplex aCur = ctx.fromLong(1);
         MpComplex bCur = ctx.fromLong(1);
         MpComplex[] conv = new MpComplex[3];
         for (int n = 1; n < k; n++) {
-            MpComplex an = ctx.multiply(s, e[n + 1]);
-            MpComplex a = ctx.add(ctx.multiply(e[n], aCur), ctx.multiply(an, aPrev));
-            MpComplex b = ctx.add(ctx.multiply(e[n], bCur), ctx.multiply(an, bPrev));
+            MpComplex an = ctx.multiply(s, g[n - 1]);
+            MpComplex a = ctx.add(aCur, ctx.multiply(an, aPrev));
+            MpComplex b = ctx.add(bCur, ctx.multiply(an, bPrev));
             if (a.isZero()) {
                 return null;
             }
@@ -140,11 +205,11 @@ final class ContinuedFraction {
             aCur = a.scalb(shift);
             bCur = b.scalb(shift);
             if (n >= k - 3) {
-                conv[n - (k - 3)] = ctx.divide(ctx.multiply(e[1], bCur), aCur);
+                conv[n - (k - 3)] = ctx.divide(ctx.multiply(e1, bCur), aCur);
             }
         }
         if (k == 3) {
-            conv[0] = e[1];
+            conv[0] = e1;
         }
         return conv;
     }

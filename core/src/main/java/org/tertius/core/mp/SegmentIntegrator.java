@@ -34,9 +34,14 @@ public final class SegmentIntegrator {
     private static final double SHORTCUT_REACH = 1.2;
     /** First Pade trial length in units of the scale, before any step has told how far the fractions reach. */
     private static final double FIRST_REACH = 2.0;
-    /** Factors by which the trial length shrinks after a rejected trial and grows for the next step. */
-    private static final double SHRINK = 0.75;
+    /**
+     * Factors by which the trial length shrinks after a rejected trial and grows for the next step (a rejected
+     * trial costs a double-precision screen, so the lengths may lie close).
+     */
+    private static final double SHRINK = 0.95;
     private static final double GROW = 1.25;
+    /** Bits by which the screen of a trial may exceed the tolerance and still go to the full evaluation. */
+    private static final double SCREEN_MARGIN_BITS = 1;
     /** Orders from which the continued fractions of the components are built in parallel. */
     private static final int PARALLEL_ORDER = 40;
 
@@ -297,9 +302,11 @@ public final class SegmentIntegrator {
      * A Pade step when Taylor steps would be short: to the farthest of the next few waypoints within reach whose
      * convergents meet the tolerance, else along the current line, first to the target or to GROW times the last
      * accepted reach (whichever is nearer), then shrinking by SHRINK; null when no Pade value is accepted farther
-     * than 1.5 Taylor steps. {@code reach[0]} carries the accepted length to the next step (NaN before the first:
-     * FIRST_REACH times the scale is tried then). The length, not its ratio to the scale, is carried: at high
-     * orders the fractions reach well past the radius of convergence, and the scale follows that radius.
+     * than 1.5 Taylor steps. Every trial length is screened in double precision first
+     * ({@link ContinuedFraction#screenLog2Error}), and only the lengths that pass are evaluated in full, so the
+     * lengths can lie close together. {@code reach[0]} carries the accepted length to the next step (NaN before
+     * the first: FIRST_REACH times the scale is tried then). The length, not its ratio to the scale, is carried:
+     * at high orders the fractions reach well past the radius of convergence, and the scale follows that radius.
      */
     private Step padeStep(TaylorSeries series, MpComplex tau, List<MpComplex> waypoints, int next, double dist,
                           double hT, double[] reach) {
@@ -318,7 +325,7 @@ public final class SegmentIntegrator {
                 continue;
             }
             MpComplex sp = ctx.divide(d, r);
-            MpComplex[] v = padeValue(ctx, fractions, sp, log2Tolerance);
+            MpComplex[] v = screened(fractions, sp) ? padeValue(ctx, fractions, sp, log2Tolerance) : null;
             if (v != null) {
                 return new Step(sp, v, fractions, j);
             }
@@ -328,7 +335,7 @@ public final class SegmentIntegrator {
         double guess = Double.isNaN(reach[0]) ? FIRST_REACH * series.scale() : GROW * reach[0];
         double first = Math.min(dist, Math.max(guess, PADE_TRIGGER * hT));
         // the whole remaining distance first when it is not far beyond the guess: a remainder costs a step of its
-        // own (an expansion and its fractions), a failed trial only an evaluation of the fractions
+        // own (an expansion and its fractions), a failed trial only a screen
         List<Double> trials = new ArrayList<>();
         if (first < dist && (dist <= 2 * first || dist - first < PADE_TRIGGER * hT)) {
             trials.add(dist);
@@ -342,7 +349,7 @@ public final class SegmentIntegrator {
         for (double len : trials) {
             boolean whole = len == dist;
             MpComplex sp = whole ? ctx.divide(remaining, r) : ctx.divide(ctx.multiply(dir, ctx.fromDouble(len, 0)), r);
-            MpComplex[] v = padeValue(ctx, fractions, sp, log2Tolerance);
+            MpComplex[] v = screened(fractions, sp) ? padeValue(ctx, fractions, sp, log2Tolerance) : null;
             if (v != null) {
                 if (!whole || Double.isNaN(reach[0]) || len >= reach[0]) {
                     reach[0] = len;
@@ -351,6 +358,20 @@ public final class SegmentIntegrator {
             }
         }
         return null;
+    }
+
+    /**
+     * Whether the double-precision screen of every fraction at s lies within SCREEN_MARGIN_BITS of the tolerance
+     * (the screen agrees with the full evaluation to about 1e-12 relative; the margin only keeps rounding from
+     * deciding).
+     */
+    private boolean screened(ContinuedFraction[] fractions, MpComplex s) {
+        for (ContinuedFraction f : fractions) {
+            if (!(f.screenLog2Error(s) <= log2Tolerance + SCREEN_MARGIN_BITS)) {
+                return false;
+            }
+        }
+        return true;
     }
 
     /** Length of the path from tau to end: straight when end is not a waypoint, else along the waypoints. */

@@ -3,6 +3,7 @@ package org.tertius.core.mp;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.quicktheories.QuickTheory.qt;
 import static org.quicktheories.generators.SourceDSL.doubles;
+import static org.quicktheories.generators.SourceDSL.longs;
 
 import java.math.BigInteger;
 import org.apfloat.Apcomplex;
@@ -223,6 +224,76 @@ class MpArithmeticTest {
             Apcomplex ref = ApcomplexMath.exp(ap(3, 4));
             double e = error(conv[2], ref);
             assertTrue(e < -31, "last convergent off by 1e" + e + (big ? " (BigInteger products)" : ""));
+        }
+    }
+
+    @Test
+    void wideComplexArithmeticKeepsDoublePrecisionFarBeyondTheDoubleRange() {
+        // operands with binary exponents up to +-5000 (beyond any double); reference: the same operations in
+        // MpContext at 60 digits; budget 1e-14 relative (a few double roundings; sums of terms of equal size)
+        qt().withExamples(300).forAll(longs().all()).checkAssert(seed -> {
+                    java.util.Random r = new java.util.Random(seed);
+                    double a = 2 * r.nextDouble() - 1;
+                    double b = 2 * r.nextDouble() - 1;
+                    double c = 2 * r.nextDouble() - 1;
+                    double d = 2 * r.nextDouble() - 1;
+                    int ex = r.nextInt(10001) - 5000;
+                    int ey = r.nextInt(10001) - 5000;
+                    MpComplex x = C.fromDouble(a, b).scalb((int) ex);
+                    MpComplex y = C.fromDouble(c, d).scalb((int) ey);
+                    WideComplex wx = WideComplex.of(x);
+                    WideComplex wy = WideComplex.of(y);
+                    assertWide(wx.multiply(wy), C.multiply(x, y), "product");
+                    assertWide(wx.divide(wy), C.divide(x, y), "quotient");
+                    // sums: compared relative to the larger operand (cancellation is exact in neither)
+                    MpComplex sum = C.add(x, y);
+                    double scale = Math.max(x.log2Abs(), y.log2Abs());
+                    WideComplex ws = wx.add(wy);
+                    MpComplex back = ws.isZero() ? MpComplex.ZERO : C.fromDouble(ws.re, ws.im).scalb((int) ws.exp);
+                    double err = C.subtract(back, sum).log2Abs() - scale;
+                    assertTrue(err < -46, "sum off by 2^" + err);
+                });
+    }
+
+    private static void assertWide(WideComplex w, MpComplex ref, String what) {
+        MpComplex back = C.fromDouble(w.re, w.im).scalb((int) w.exp);
+        double err = C.subtract(back, ref).log2Abs() - ref.log2Abs();
+        assertTrue(err < -46, what + " off by 2^" + err);
+    }
+
+    @Test
+    void doublePrecisionScreenOfTheConvergentsAgreesWithTheFullEvaluation() {
+        // the screen (determinant formula of continued fractions, Jones and Thron 1980, section 2.1) must give the
+        // same log2 of the convergents' relative difference as the full-precision evaluation, up to double
+        // rounding (budget 1e-6 bits: both are accurate to about 1e-12 relative) where the difference lies above
+        // the working precision; e^s and log(1 + s) / s
+        // (c_k = (-1)^k / (k + 1), a branch point at s = -1), common practice, at points of every size of error
+        int n = 40;
+        MpComplex[][] series = new MpComplex[2][n + 1];
+        MpComplex term = C.fromLong(1);
+        for (int k = 0; k <= n; k++) {
+            series[0][k] = term;
+            term = C.divide(term, k + 1);
+            series[1][k] = C.divide(C.fromLong(k % 2 == 0 ? 1 : -1), k + 1);
+        }
+        for (MpComplex[] c : series) {
+            ContinuedFraction f = ContinuedFraction.of(C, c);
+            for (double[] s : new double[][] {{0.1, 0}, {1, 1}, {3, 4}, {-0.9, 0.2}, {6, -2}, {-3, 0.5}}) {
+                MpComplex sp = C.fromDouble(s[0], s[1]);
+                MpComplex[] conv = f.lastConvergents(C, sp);
+                double log2Scale = Math.log(1 + Math.pow(2, conv[2].log2Abs())) / Math.log(2);
+                double full = Math.max(C.subtract(conv[2], conv[1]).log2Abs(), C.subtract(conv[2], conv[0]).log2Abs())
+                        - log2Scale;
+                double screen = f.screenLog2Error(sp);
+                if (full < 30 - C.bits()) {
+                    // below the working precision the full evaluation sees rounding only, the screen the true size
+                    assertTrue(screen < 40 - C.bits(), "s = " + s[0] + " + " + s[1] + "i: screen 2^" + screen
+                            + " where the full evaluation sees rounding");
+                    continue;
+                }
+                assertTrue(Math.abs(screen - full) < 1e-6, "s = " + s[0] + " + " + s[1] + "i: screen 2^" + screen
+                        + ", full evaluation 2^" + full);
+            }
         }
     }
 
