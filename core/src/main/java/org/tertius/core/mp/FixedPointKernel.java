@@ -11,8 +11,9 @@ import org.tertius.core.taylor.RecurrencePlan;
 /**
  * Runs a {@link RecurrencePlan} (the same compiled recurrence the double-precision kernel runs) in binary
  * fixed-point arithmetic: every Taylor coefficient is an integer multiple of 2^-F held in preallocated limbs
- * ({@link LimbFormat}). Each convolution sum is accumulated exactly in columns and rounded once; complex products
- * use three integer multiplications (Gauss); nothing is allocated per product. The integer limbs start small and
+ * ({@link LimbFormat}). Each convolution sum is accumulated exactly in columns and rounded once; a complex
+ * product takes four limb products per pair of limbs (three BigInteger products, after Gauss, when the format
+ * asks for them); nothing is allocated per product. The integer limbs start small and
  * are doubled when a value outgrows them. Stateless apart from its immutable inputs, so one kernel can serve
  * several threads.
  */

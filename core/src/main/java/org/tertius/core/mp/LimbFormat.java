@@ -10,12 +10,12 @@ import java.math.BigInteger;
  * allocation per operation. Immutable.
  */
 final class LimbFormat {
-    /** Bits per limb: a product of two limbs (or of two sums re + im of limbs) stays below 2^50. */
+    /** Bits per limb: a term ar br - ai bi or ar bi + ai br of two complex limbs stays below 2^50. */
     static final int BITS = 24;
     static final long MASK = (1L << BITS) - 1;
     /** Bound on the magnitude of the top limb of a stored value. */
     static final long TOP_BOUND = 1L << (BITS - 2);
-    /** Largest sum of column terms a column may receive between two carry passes (t3 - t1 - t2 stays below 2^62). */
+    /** Largest sum of column terms a column may receive between two carry passes (it then stays below 2^62). */
     private static final long COLUMN_BUDGET = 1L << 60;
     /** Columns computed below the rounding position: the dropped ones change the result by far less than 2^-F. */
     private static final int GUARD_COLUMNS = 3;
