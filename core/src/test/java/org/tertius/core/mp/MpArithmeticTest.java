@@ -186,13 +186,7 @@ class MpArithmeticTest {
         // about 1e-370, which is far above a tolerance of 1e-400 but below the smallest double; the acceptance
         // test works with base-2 logarithms, so the value is refused (a test in doubles would see 0 <= 0)
         MpContext c400 = new MpContext(420);
-        int n = 30;
-        MpComplex[] c = new MpComplex[n + 1];
-        MpComplex term = c400.fromLong(1);
-        for (int k = 0; k <= n; k++) {
-            c[k] = term;
-            term = c400.divide(term, k + 1);
-        }
+        MpComplex[] c = exponentialSeries(c400, 30);
         ContinuedFraction[] f = {ContinuedFraction.of(c400, c)};
         MpComplex s = c400.fromDouble(1e-11, 0);
         MpComplex[] conv = f[0].lastConvergents(c400, s);
@@ -205,19 +199,24 @@ class MpArithmeticTest {
                 "the same value must pass a tolerance of 1e-300");
     }
 
+    /** The Taylor coefficients 1/k! of e^s, k = 0..n (common practice). */
+    private static MpComplex[] exponentialSeries(MpContext ctx, int n) {
+        MpComplex[] c = new MpComplex[n + 1];
+        MpComplex term = ctx.fromLong(1);
+        for (int k = 0; k <= n; k++) {
+            c[k] = term;
+            term = ctx.divide(term, k + 1);
+        }
+        return c;
+    }
+
     @Test
     void continuedFractionOfTheExponentialConvergesToItBeyondTheTaylorPolynomial() {
         // e^s from c_k = 1/k! (common practice), 41 coefficients, at s = 3 + 4i; reference: Apfloat's exp. The
         // [20/20] Pade approximant errs there by 9.5e-33 relative, the Taylor polynomial of degree 40 by 7.3e-23
         // (both computed with mpmath's pade and exp as an independent check); the budget 1e-31 leaves a factor 10
         // for the digits the rows of the fraction lose to cancellation, and a Taylor-quality value fails it
-        int n = 40;
-        MpComplex[] c = new MpComplex[n + 1];
-        MpComplex term = C.fromLong(1);
-        for (int k = 0; k <= n; k++) {
-            c[k] = term;
-            term = C.divide(term, k + 1);
-        }
+        MpComplex[] c = exponentialSeries(C, 40);
         for (boolean big : new boolean[] {false, true}) {
             ContinuedFraction f = ContinuedFraction.of(C, c, big);
             MpComplex[] conv = f.lastConvergents(C, C.fromDouble(3, 4));
@@ -269,11 +268,8 @@ class MpArithmeticTest {
         // the working precision; e^s and log(1 + s) / s
         // (c_k = (-1)^k / (k + 1), a branch point at s = -1), common practice, at points of every size of error
         int n = 40;
-        MpComplex[][] series = new MpComplex[2][n + 1];
-        MpComplex term = C.fromLong(1);
+        MpComplex[][] series = {exponentialSeries(C, n), new MpComplex[n + 1]};
         for (int k = 0; k <= n; k++) {
-            series[0][k] = term;
-            term = C.divide(term, k + 1);
             series[1][k] = C.divide(C.fromLong(k % 2 == 0 ? 1 : -1), k + 1);
         }
         for (MpComplex[] c : series) {
