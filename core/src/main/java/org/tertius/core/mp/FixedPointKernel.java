@@ -1,8 +1,6 @@
 package org.tertius.core.mp;
 
 import java.math.BigInteger;
-import java.util.ArrayList;
-import java.util.List;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.UnreachableTargetException;
 import org.tertius.core.equation.IndependentVariable;
@@ -191,7 +189,8 @@ final class FixedPointKernel {
         long perOrder = (long) fmt.limbs() * fmt.limbs();
         int splitFrom = fmt.bigProducts() ? 1 : (int) Math.max(1, Math.min(order, (SPLIT_WORK + perOrder - 1) / perOrder));
         boolean split = Workers.PARALLEL && splitFrom <= order / 2;
-        LimbAccumulator[] known = split ? new LimbAccumulator[np + ng] : null;
+        // the second half of the array: the other thread's partial sums, added in after each order
+        LimbAccumulator[] known = split ? new LimbAccumulator[2 * (np + ng)] : null;
         if (split) {
             for (int t = 0; t < known.length; t++) {
                 known[t] = new LimbAccumulator(fmt);
@@ -307,47 +306,49 @@ final class FixedPointKernel {
     /**
      * For order k >= 1, in two threads: known[p] = sum_{i=1..k-1} of the products of product p, and
      * known[np + g] = sum_{i=0..k-1} base_{k-i} g_i for the groups with a base convolution (all factors of
-     * order below k).
+     * order below k). Every sum is split by the parity of i between this thread and a pool thread (whose partial
+     * sums go to the second half of {@code known} and are added in at the end): the terms of a sum cost alike,
+     * except those of the base series, whose high orders are small (factorial decay) and cheap, so a split by
+     * whole sums would leave one thread idle.
      */
     private void knownTerms(LimbVector w, LimbVector base, LimbAccumulator[] known, int k) {
+        final int half = known.length / 2;
+        java.util.concurrent.Future<Object> other = Workers.submit(() -> {
+            partialKnownTerms(w, base, known, half, k, 1);
+            return null;
+        });
+        partialKnownTerms(w, base, known, 0, k, 0);
+        Workers.join(other);
+        for (int t = 0; t < half; t++) {
+            known[t].addSum(known[half + t]);
+        }
+    }
+
+    /** The terms of the known sums of order k whose index i has the given parity, into known[into + t]. */
+    private void partialKnownTerms(LimbVector w, LimbVector base, LimbAccumulator[] known, int into, int k,
+                                   int parity) {
         final int st = order + 1;
         final int np = plan.productCount();
-        List<Runnable> tasks = new ArrayList<>();
         for (int p = 0; p < np; p++) {
             int a = plan.productFirst(p) * st;
             int b = plan.productSecond(p) * st;
-            LimbAccumulator sum = known[p];
-            tasks.add(() -> {
-                sum.clear();
-                for (int i = 1; i < k; i++) {
-                    sum.multiplyAdd(w, a + i, w, b + k - i);
-                }
-            });
+            LimbAccumulator sum = known[into + p];
+            sum.clear();
+            for (int i = 2 - parity; i < k; i += 2) {
+                sum.multiplyAdd(w, a + i, w, b + k - i);
+            }
         }
         for (int g = 0; g < plan.groupCount(); g++) {
+            LimbAccumulator sum = known[into + np + g];
+            sum.clear();
             if (plan.groupBaseIndex(g) >= 0 && !constantGroup[g]) {
                 int b = plan.groupBaseIndex(g) * st;
                 int gs = plan.groupSeries(g) * st;
-                LimbAccumulator sum = known[np + g];
-                tasks.add(() -> {
-                    sum.clear();
-                    for (int i = 0; i < k; i++) {
-                        sum.multiplyAdd(base, b + k - i, w, gs + i);
-                    }
-                });
+                for (int i = parity; i < k; i += 2) {
+                    sum.multiplyAdd(base, b + k - i, w, gs + i);
+                }
             }
         }
-        // alternate the tasks between a pool thread and this one (they are of about equal size)
-        java.util.concurrent.Future<Object> other = Workers.submit(() -> {
-            for (int t = 1; t < tasks.size(); t += 2) {
-                tasks.get(t).run();
-            }
-            return null;
-        });
-        for (int t = 0; t < tasks.size(); t += 2) {
-            tasks.get(t).run();
-        }
-        Workers.join(other);
     }
 
     private LimbVector baseSeries(MpComplex tau0, double scale, LimbFormat fmt) {
