@@ -153,7 +153,15 @@ final class ContinuedFraction {
         if (k < 3) {
             return Double.POSITIVE_INFINITY;
         }
-        WideComplex sw = WideComplex.of(s);
+        try {
+            return screen(WideComplex.of(s), k);
+        } catch (ArithmeticException e) {
+            // not expected (the factors stay normalised); the full evaluation then decides
+            return Double.NEGATIVE_INFINITY;
+        }
+    }
+
+    private double screen(WideComplex sw, int k) {
         WideComplex r = WideComplex.ONE;
         WideComplex t = WideComplex.ONE;
         WideComplex tPrev = WideComplex.ONE;
