@@ -54,8 +54,8 @@ final class ContinuedFraction {
      * empty). Rows whose leading coefficient has lost more than half the working bits to cancellation end it.
      *
      * <p>The rows are held as floating values with limb-granular exponents ({@link ScaledRow}), normalised to a
-     * leading 1: an entry of the next row is a difference of two entries, formed exactly and rounded, times the
-     * reciprocal of the leading difference, rounded once more. Nothing is allocated per product.
+     * leading 1: an entry of the next row is a difference of two entries, formed limb by limb (not rounded), times
+     * the reciprocal of the leading difference, rounded once. Nothing is allocated per product.
      */
     static ContinuedFraction of(MpContext ctx, MpComplex[] c) {
         return of(ctx, c, new LimbFormat(rowBits(ctx), 1));
@@ -88,39 +88,46 @@ final class ContinuedFraction {
         int l = fmt.limbs();
         LimbAccumulator acc = new LimbAccumulator(fmt, l + 2, (l + 2) + l - 5);
         double lossLimit = 0.5 * ctx.bits();
-        ScaledRow vk = ScaledRow.unit(fmt, n);
-        ScaledRow diff = ScaledRow.of(fmt, c);
+        // v_0 = 1, v_1 = f / f(0); a row whose entries exceed its leading 1 by more than lossLimit bits (the leading
+        // entry lost that much to cancellation) ends the fraction before its level is added
+        ScaledRow vPrev = ScaledRow.unit(fmt, n);
+        ScaledRow vCur = new ScaledRow(fmt, n);
         ScaledRow vNext = new ScaledRow(fmt, n);
-        MpComplex lead = c[0];
-        MpComplex e1 = null;
-        long count = 0;
+        LimbVector scratch = new LimbVector(fmt, 1);
+        vCur.scale(ScaledRow.of(fmt, c), reciprocal(ctx, fmt, c[0]), acc);
+        long count = n;
+        if (vCur.log2Max() > lossLimit) {
+            return new ContinuedFraction(null, new MpComplex[0], count);
+        }
+        MpComplex e1 = ctx.round(c[0]);
         while (true) {
-            // diff holds u_{k+1} up to the factor e_k e_{k-1} (u_1 = f itself), vk holds v_k; lead = diff_0, which
-            // is e_1 for k = 0 and g_k = e_{k+1} / (e_k e_{k-1}) after
-            if (diff.log2Max() - lead.log2Abs() > lossLimit) {
-                break;
-            }
-            if (e1 == null) {
-                e1 = ctx.round(lead);
-            } else {
-                gs.add(ctx.round(lead));
-            }
-            count += diff.length();
-            vNext.scale(diff, ScaledRow.of(fmt, new MpComplex[] {ctx.reciprocal(lead)}), acc);
-            int len = Math.min(vk.length(), vNext.length()) - 1;
+            int len = Math.min(vPrev.length(), vCur.length()) - 1;
             if (len <= 0) {
                 break;
             }
-            diff.difference(vk, vNext, acc, len);
-            ScaledRow t = vk;
-            vk = vNext;
-            vNext = t;
-            if (diff.isZero(0)) {
+            // u_{k+1} = e_k e_{k-1} (v_{k-1} - v_k) / s: its leading entry over e_k e_{k-1} is g_k, and
+            // v_{k+1} = (v_{k-1} - v_k) / (s g_k)
+            MpComplex lead = vNext.leadDifference(vPrev, vCur, scratch, ctx);
+            if (lead.isZero()) {
                 break;
             }
-            lead = diff.value(ctx, 0);
+            vNext.differenceTimes(vPrev, vCur, reciprocal(ctx, fmt, lead), acc, scratch, len);
+            count += len;
+            if (vNext.log2Max() > lossLimit) {
+                break;
+            }
+            gs.add(lead);
+            ScaledRow t = vPrev;
+            vPrev = vCur;
+            vCur = vNext;
+            vNext = t;
         }
         return new ContinuedFraction(e1, gs.toArray(new MpComplex[0]), count);
+    }
+
+    /** 1/x as a one-entry row. */
+    private static ScaledRow reciprocal(MpContext ctx, LimbFormat fmt, MpComplex x) {
+        return ScaledRow.of(fmt, new MpComplex[] {ctx.reciprocal(x)});
     }
 
     /** Number of levels (the last convergent matches this many series coefficients). */

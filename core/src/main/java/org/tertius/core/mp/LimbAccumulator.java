@@ -187,28 +187,6 @@ final class LimbAccumulator {
     }
 
     /**
-     * Adds (or, with {@code negate}, subtracts) the value a[i] 2^(BITS shift), shift <= 0 and -shift <= base, in
-     * the units of a product (a value added at shift 0 is stored back unchanged). Columns below the low one are
-     * left out, as for products.
-     */
-    void addShifted(LimbVector a, int i, int shift, boolean negate) {
-        int f = base + format.fractionLimbs() + shift;
-        if (big) {
-            java.math.BigInteger r = a.bigRe(i).shiftLeft(LimbFormat.BITS * f);
-            java.math.BigInteger s = a.bigSum(i).shiftLeft(LimbFormat.BITS * f);
-            sum1 = negate ? sum1.subtract(r) : sum1.add(r);
-            sum3 = negate ? sum3.subtract(s) : sum3.add(s);
-            return;
-        }
-        int o = i * limbs;
-        long sign = negate ? -1 : 1;
-        for (int x = Math.max(0, low - f); x < limbs; x++) {
-            re[f + x] += sign * a.re[o + x];
-            im[f + x] += sign * a.im[o + x];
-        }
-    }
-
-    /**
      * Rounds the sum to scale 2^-F and stores it as value i of dst.
      *
      * @throws RuntimeException {@link LimbFormat#overflow()} when it does not fit

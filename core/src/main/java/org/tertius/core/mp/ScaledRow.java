@@ -58,19 +58,6 @@ final class ScaledRow {
         return length;
     }
 
-    boolean isZero(int j) {
-        return zero[j];
-    }
-
-    /** Entry j rounded to the precision of ctx. */
-    MpComplex value(MpContext ctx, int j) {
-        if (zero[j]) {
-            return MpComplex.ZERO;
-        }
-        return ctx.round(new MpComplex(values.re(j), values.im(j),
-                LimbFormat.BITS * exponent[j] - format.fractionBits()));
-    }
-
     /** log2 of the largest modulus of the entries (negative infinity when all vanish). */
     double log2Max() {
         double m = Double.NEGATIVE_INFINITY;
@@ -85,32 +72,80 @@ final class ScaledRow {
     }
 
     /**
-     * Sets this row to the differences prev_{j+1} - cur_{j+1}, j < len, each formed exactly (the two entries placed
-     * by their exponents) and rounded once. An entry more than L + 2 limbs below the other is below the rounding
-     * and is left out.
+     * Sets this row to (prev_{j+1} - cur_{j+1}) times the first entry of factor, j < len. Each difference is
+     * formed limb by limb at the larger exponent of its two entries (the lower limbs of the other, shifted below
+     * the last limb, are dropped: at most one unit of that limb, below the entries' own rounding), brought to
+     * canonical limbs by one carry pass, and multiplied without being rounded; the product is rounded once.
      */
-    void difference(ScaledRow prev, ScaledRow cur, LimbAccumulator acc, int len) {
-        int reach = values.limbs + 2;
+    void differenceTimes(ScaledRow prev, ScaledRow cur, ScaledRow factor, LimbAccumulator acc, LimbVector scratch,
+                         int len) {
         for (int j = 0; j < len; j++) {
-            boolean hasA = !prev.zero[j + 1];
-            boolean hasB = !cur.zero[j + 1];
-            if (!hasA && !hasB) {
+            int e = difference(prev, cur, j + 1, scratch);
+            if (e == Integer.MIN_VALUE || factor.zero[0]) {
                 setZero(j);
                 continue;
             }
-            int ea = prev.exponent[j + 1];
-            int eb = cur.exponent[j + 1];
-            int e = hasA && hasB ? Math.max(ea, eb) : hasA ? ea : eb;
             acc.clear();
-            if (hasA && ea - e >= -reach) {
-                acc.addShifted(prev.values, j + 1, ea - e, false);
-            }
-            if (hasB && eb - e >= -reach) {
-                acc.addShifted(cur.values, j + 1, eb - e, true);
-            }
-            store(acc, j, e);
+            acc.multiplyAdd(scratch, 0, factor.values, 0, 0);
+            store(acc, j, e + factor.exponent[0]);
         }
         length = len;
+    }
+
+    /** prev_1 - cur_1 rounded to ctx (zero when both entries vanish or cancel exactly). */
+    MpComplex leadDifference(ScaledRow prev, ScaledRow cur, LimbVector scratch, MpContext ctx) {
+        int e = difference(prev, cur, 1, scratch);
+        if (e == Integer.MIN_VALUE) {
+            return MpComplex.ZERO;
+        }
+        MpComplex d = new MpComplex(scratch.re(0), scratch.im(0), LimbFormat.BITS * e - format.fractionBits());
+        return d.isZero() ? MpComplex.ZERO : ctx.round(d);
+    }
+
+    /**
+     * scratch[0] = prev_i - cur_i at the exponent returned (Integer.MIN_VALUE when both vanish), in canonical
+     * limbs (all in [0, 2^BITS) but the signed top one).
+     */
+    private int difference(ScaledRow prev, ScaledRow cur, int i, LimbVector scratch) {
+        boolean hasA = !prev.zero[i];
+        boolean hasB = !cur.zero[i];
+        if (!hasA && !hasB) {
+            return Integer.MIN_VALUE;
+        }
+        int ea = prev.exponent[i];
+        int eb = cur.exponent[i];
+        int e = hasA && hasB ? Math.max(ea, eb) : hasA ? ea : eb;
+        int n = values.limbs;
+        long[] re = scratch.re;
+        long[] im = scratch.im;
+        java.util.Arrays.fill(re, 0, n, 0);
+        java.util.Arrays.fill(im, 0, n, 0);
+        if (hasA) {
+            int d = e - ea;
+            int o = i * n;
+            for (int x = d; x < n; x++) {
+                re[x - d] += prev.values.re[o + x];
+                im[x - d] += prev.values.im[o + x];
+            }
+        }
+        if (hasB) {
+            int d = e - eb;
+            int o = i * n;
+            for (int x = d; x < n; x++) {
+                re[x - d] -= cur.values.re[o + x];
+                im[x - d] -= cur.values.im[o + x];
+            }
+        }
+        for (int x = 0; x < n - 1; x++) {
+            long v = re[x];
+            re[x] = v & LimbFormat.MASK;
+            re[x + 1] += v >> LimbFormat.BITS;
+            v = im[x];
+            im[x] = v & LimbFormat.MASK;
+            im[x + 1] += v >> LimbFormat.BITS;
+        }
+        scratch.changed(0);
+        return e;
     }
 
     /** Sets this row to the entries of src times the first entry of factor, each product rounded once. */
