@@ -32,16 +32,37 @@ final class ContinuedFraction {
     private final WideComplex e1Wide;
     private final WideComplex[] gWide;
     private final long productCount;
+    /** The precision the fraction was built in, and its convergents are evaluated in. */
+    private final MpContext ctx;
+    /** log2 of the largest entry of the normalised rows (their leading entry is 1): how far the rows grew. */
+    private final double rowGrowth;
 
-    private ContinuedFraction(MpComplex e1, MpComplex[] g, long productCount) {
+    private ContinuedFraction(MpContext ctx, MpComplex e1, MpComplex[] g, long productCount, double rowGrowth) {
+        this.ctx = ctx;
         this.e1 = e1;
         this.g = g;
         this.productCount = productCount;
+        this.rowGrowth = rowGrowth;
         this.e1Wide = e1 == null ? WideComplex.ZERO : WideComplex.of(e1);
         this.gWide = new WideComplex[g.length];
         for (int n = 0; n < g.length; n++) {
             gWide[n] = WideComplex.of(g[n]);
         }
+    }
+
+    /** The precision the fraction was built in; {@link #lastConvergents} is meant to run in it. */
+    MpContext context() {
+        return ctx;
+    }
+
+    /**
+     * log2 of the largest entry of the rows normalised to a leading 1 (0 for a fraction that kept them below 1).
+     * Large rows come from cancellation in their leading entries, and the value of the fraction then loses
+     * bits to rounding: measured at 200 and 300 digits, rows of 2^47 to 2^175 went with 46 to 55 bits lost,
+     * rows below 2^34 with at most 18.
+     */
+    double rowGrowth() {
+        return rowGrowth;
     }
 
     /** Complex products done to build the fraction. */
@@ -82,7 +103,7 @@ final class ContinuedFraction {
         int n = c.length;
         List<MpComplex> gs = new ArrayList<>();
         if (n == 0 || c[0].isZero()) {
-            return new ContinuedFraction(null, new MpComplex[0], 0);
+            return new ContinuedFraction(ctx, null, new MpComplex[0], 0, 0);
         }
         // products placed up to L + 2 limbs apart; columns from 3 below the rounding of the larger product
         int l = fmt.limbs();
@@ -96,8 +117,9 @@ final class ContinuedFraction {
         LimbVector scratch = new LimbVector(fmt, 1);
         vCur.scale(ScaledRow.of(fmt, c), reciprocal(ctx, fmt, c[0]), acc);
         long count = n;
-        if (vCur.log2Max() > lossLimit) {
-            return new ContinuedFraction(null, new MpComplex[0], count);
+        double growth = vCur.log2Max();
+        if (growth > lossLimit) {
+            return new ContinuedFraction(ctx, null, new MpComplex[0], count, 0);
         }
         MpComplex e1 = ctx.round(c[0]);
         while (true) {
@@ -113,16 +135,18 @@ final class ContinuedFraction {
             }
             vNext.differenceTimes(vPrev, vCur, reciprocal(ctx, fmt, lead), acc, scratch, len);
             count += len;
-            if (vNext.log2Max() > lossLimit) {
+            double rowMax = vNext.log2Max();
+            if (rowMax > lossLimit) {
                 break;
             }
+            growth = Math.max(growth, rowMax);
             gs.add(lead);
             ScaledRow t = vPrev;
             vPrev = vCur;
             vCur = vNext;
             vNext = t;
         }
-        return new ContinuedFraction(e1, gs.toArray(new MpComplex[0]), count);
+        return new ContinuedFraction(ctx, e1, gs.toArray(new MpComplex[0]), count, growth);
     }
 
     /** 1/x as a one-entry row. */
