@@ -65,6 +65,11 @@ final class ContinuedFraction {
         return rowGrowth;
     }
 
+    /** The same fraction, charged with the products of an earlier build that it replaces. */
+    ContinuedFraction replacing(ContinuedFraction earlier) {
+        return new ContinuedFraction(ctx, e1, g, productCount + earlier.productCount, rowGrowth);
+    }
+
     /** Complex products done to build the fraction. */
     long productCount() {
         return productCount;

@@ -513,7 +513,7 @@ public final class SegmentIntegrator {
     static ContinuedFraction fraction(TaylorSeries series, MpContext wide, int component) {
         ContinuedFraction f = fraction(series, wide, component, 0);
         if (f.rowGrowth() > ROW_GROWTH_CHECK) {
-            f = fraction(series, wide, component, (int) Math.ceil(f.rowGrowth() / MpContext.LOG2_10));
+            f = fraction(series, wide, component, (int) Math.ceil(f.rowGrowth() / MpContext.LOG2_10)).replacing(f);
         }
         return f;
     }
