@@ -178,12 +178,6 @@ final class ContinuedFraction {
      * Fractions", Addison-Wesley 1980, section 2.1), so c_{n+1} = e_1 (1 + sum_{j <= n} (-1)^j T_j). All the
      * factors are of moderate size; the products are tracked with a separate exponent.
      */
-    String debugG() {
-        StringBuilder sb = new StringBuilder("depth " + depth() + " g:");
-        for (int n = 1; n < g.length; n++) { if (g[n] != null) { double l = g[n].log2Abs(); if (Math.abs(l) > 30) sb.append(" " + n + ":" + Math.round(l)); } else sb.append(" " + n + ":null"); }
-        return sb.toString();
-    }
-
     double screenLog2Error(MpComplex s) {
         int k = depth();
         if (k < 3) {
