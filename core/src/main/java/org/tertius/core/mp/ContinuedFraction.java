@@ -50,7 +50,7 @@ final class ContinuedFraction {
         }
     }
 
-    /** The precision the fraction was built in; {@link #lastConvergents} is meant to run in it. */
+    /** The precision the fraction was built in, and its convergents are evaluated in. */
     MpContext context() {
         return ctx;
     }
@@ -165,7 +165,7 @@ final class ContinuedFraction {
     }
 
     /**
-     * A double-precision estimate of what {@link SegmentIntegrator#padeValue} tests at s: log2 of
+     * A double-precision estimate of what {@link #valueWithin} tests at s: log2 of
      * max(|c_k - c_{k-1}|, |c_k - c_{k-2}|) / (1 + |c_k|) for the last three convergents; positive infinity when
      * the fraction is too short or a convergent is infinite. It costs a few double operations per level (no
      * arbitrary-precision product), so trial lengths can be screened before one is evaluated in full.
@@ -208,16 +208,28 @@ final class ContinuedFraction {
             r = rn;
         }
         double log2E = e1Wide.log2Abs() + Math.max(t.log2Abs(), t.add(tPrev.negate()).log2Abs());
-        double log2C = e1Wide.multiply(sum).log2Abs();
-        double log2Scale = log2C > 60 ? log2C : Math.log(1 + Math.pow(2, log2C)) / Math.log(2);
-        return log2E - log2Scale;
+        return log2E - MpContext.log2OnePlus(e1Wide.multiply(sum).log2Abs());
     }
 
     /**
-     * The last three convergents at s (depths k-2, k-1, k), or null when the fraction has fewer than three levels
-     * or a convergent is infinite.
+     * The last convergent at s when it differs from the two before by at most 2^log2Tol (1 + |value|), compared as
+     * base-2 logarithms (the tolerance may lie far below the double range); null otherwise. In the precision of
+     * the fraction.
      */
-    MpComplex[] lastConvergents(MpContext ctx, MpComplex s) {
+    MpComplex valueWithin(MpComplex s, double log2Tol) {
+        MpComplex[] c = lastConvergents(s);
+        if (c == null) {
+            return null;
+        }
+        double log2E = Math.max(ctx.subtract(c[2], c[1]).log2Abs(), ctx.subtract(c[2], c[0]).log2Abs());
+        return log2E <= log2Tol + MpContext.log2OnePlus(c[2].log2Abs()) ? c[2] : null;
+    }
+
+    /**
+     * The last three convergents at s (depths k-2, k-1, k) in the precision of the fraction, or null when the
+     * fraction has fewer than three levels or a convergent is infinite.
+     */
+    MpComplex[] lastConvergents(MpComplex s) {
         int k = depth();
         if (k < 3) {
             return null;

@@ -32,6 +32,14 @@ public final class MpContext {
         this.bits = (int) Math.ceil(digits * LOG2_10) + GUARD_BITS;
     }
 
+    /** log2(1 + 2^log2x), for sizes given as base-2 logarithms (0 for negative infinity). */
+    static double log2OnePlus(double log2x) {
+        if (log2x == Double.NEGATIVE_INFINITY) {
+            return 0;
+        }
+        return log2x > 60 ? log2x : Math.log(1 + Math.pow(2, log2x)) / Math.log(2);
+    }
+
     public int digits() {
         return digits;
     }

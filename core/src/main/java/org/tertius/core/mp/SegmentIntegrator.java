@@ -436,7 +436,7 @@ public final class SegmentIntegrator {
         int n = series.order();
         double g = Double.NEGATIVE_INFINITY;
         for (int i = 0; i < series.dimension(); i++) {
-            double c0 = log2OnePlus(series.log2Coefficient(i, 0));
+            double c0 = MpContext.log2OnePlus(series.log2Coefficient(i, 0));
             for (int k = Math.max(1, n / 3); k <= n; k++) {
                 double l = series.log2Coefficient(i, k);
                 if (l > Double.NEGATIVE_INFINITY) {
@@ -456,7 +456,7 @@ public final class SegmentIntegrator {
         double log2Tol = -toleranceDigits * MpContext.LOG2_10;
         double best = Double.POSITIVE_INFINITY;
         for (int i = 0; i < series.dimension(); i++) {
-            double allowed = log2Tol + log2OnePlus(y[i].log2Abs());
+            double allowed = log2Tol + MpContext.log2OnePlus(y[i].log2Abs());
             for (int k = n - 3; k <= n; k++) {
                 double l = series.log2Coefficient(i, k);
                 if (l > Double.NEGATIVE_INFINITY) {
@@ -465,13 +465,6 @@ public final class SegmentIntegrator {
             }
         }
         return best == Double.POSITIVE_INFINITY ? 1e4 : TAYLOR_SAFETY * Math.pow(2, best);
-    }
-
-    private static double log2OnePlus(double log2x) {
-        if (log2x == Double.NEGATIVE_INFINITY) {
-            return 0;
-        }
-        return log2x > 60 ? log2x : Math.log(1 + Math.pow(2, log2x)) / Math.log(2);
     }
 
     /**
@@ -528,26 +521,17 @@ public final class SegmentIntegrator {
     }
 
     /**
-     * The Pade value at s of every component: the last convergent, accepted when it differs from the two before
-     * by at most tol (1 + |value|), compared as base-2 logarithms (tol = 2^log2Tol may lie far below the double
-     * range); null otherwise.
+     * The Pade value at s of every component (see {@link ContinuedFraction#valueWithin}), rounded to ctx; null when
+     * one of them misses the tolerance 2^log2Tol.
      */
     static MpComplex[] padeValue(MpContext ctx, ContinuedFraction[] fractions, MpComplex s, double log2Tol) {
-        MpContext wide = ctx.widen(PADE_EXTRA_DIGITS);
         MpComplex[] out = new MpComplex[fractions.length];
         for (int i = 0; i < fractions.length; i++) {
-            // in the fraction's own precision: at least wide, more where its rows grew
-            MpContext own = fractions[i].context().digits() > wide.digits() ? fractions[i].context() : wide;
-            MpComplex[] c = fractions[i].lastConvergents(own, s);
-            if (c == null) {
+            MpComplex v = fractions[i].valueWithin(s, log2Tol);
+            if (v == null) {
                 return null;
             }
-            double log2Scale = log2OnePlus(c[2].log2Abs());
-            double log2E = Math.max(own.subtract(c[2], c[1]).log2Abs(), own.subtract(c[2], c[0]).log2Abs());
-            if (!(log2E <= log2Tol + log2Scale)) {
-                return null;
-            }
-            out[i] = ctx.round(c[2]);
+            out[i] = ctx.round(v);
         }
         return out;
     }

@@ -87,8 +87,8 @@ class LimbArithmeticTest {
                     }
                     c[0] = ctx.fromLong(1);
                     MpComplex s = ctx.fromDouble(0.3, 0.2);
-                    MpComplex[] a = ContinuedFraction.of(ctx, c, false).lastConvergents(ctx, s);
-                    MpComplex[] b = ContinuedFraction.of(ctx, c, true).lastConvergents(ctx, s);
+                    MpComplex[] a = ContinuedFraction.of(ctx, c, false).lastConvergents(s);
+                    MpComplex[] b = ContinuedFraction.of(ctx, c, true).lastConvergents(s);
                     if (a == null || b == null) {
                         assertTrue(a == null && b == null, "one way gave convergents, the other not");
                         return;

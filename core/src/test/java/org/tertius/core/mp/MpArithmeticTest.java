@@ -173,7 +173,7 @@ class MpArithmeticTest {
         }
         ContinuedFraction f = ContinuedFraction.of(C, c);
         MpComplex s = C.fromDouble(3, 1);
-        MpComplex[] conv = f.lastConvergents(C, s);
+        MpComplex[] conv = f.lastConvergents(s);
         MpComplex exact = C.divide(C.add(C.fromLong(1), C.multiply(s, 2)),
                 C.subtract(C.subtract(C.fromLong(1), C.multiply(half, s)), C.multiply(threeTenths, C.multiply(s, s))));
         Apcomplex ref = C.toApcomplex(exact);
@@ -189,7 +189,7 @@ class MpArithmeticTest {
         MpComplex[] c = exponentialSeries(c400, 30);
         ContinuedFraction[] f = {ContinuedFraction.of(c400, c)};
         MpComplex s = c400.fromDouble(1e-11, 0);
-        MpComplex[] conv = f[0].lastConvergents(c400, s);
+        MpComplex[] conv = f[0].lastConvergents(s);
         double log2Diff = c400.subtract(conv[2], conv[1]).log2Abs();
         assertTrue(log2Diff < -1023 && log2Diff > -400 * MpContext.LOG2_10, "difference 2^" + log2Diff
                 + " should lie between 1e-400 and the double range");
@@ -219,7 +219,7 @@ class MpArithmeticTest {
         MpComplex[] c = exponentialSeries(C, 40);
         for (boolean big : new boolean[] {false, true}) {
             ContinuedFraction f = ContinuedFraction.of(C, c, big);
-            MpComplex[] conv = f.lastConvergents(C, C.fromDouble(3, 4));
+            MpComplex[] conv = f.lastConvergents(C.fromDouble(3, 4));
             Apcomplex ref = ApcomplexMath.exp(ap(3, 4));
             double e = error(conv[2], ref);
             assertTrue(e < -31, "last convergent off by 1e" + e + (big ? " (BigInteger products)" : ""));
@@ -276,7 +276,7 @@ class MpArithmeticTest {
             ContinuedFraction f = ContinuedFraction.of(C, c);
             for (double[] s : new double[][] {{0.1, 0}, {1, 1}, {3, 4}, {-0.9, 0.2}, {6, -2}, {-3, 0.5}}) {
                 MpComplex sp = C.fromDouble(s[0], s[1]);
-                MpComplex[] conv = f.lastConvergents(C, sp);
+                MpComplex[] conv = f.lastConvergents(sp);
                 double log2Scale = Math.log(1 + Math.pow(2, conv[2].log2Abs())) / Math.log(2);
                 double full = Math.max(C.subtract(conv[2], conv[1]).log2Abs(), C.subtract(conv[2], conv[0]).log2Abs())
                         - log2Scale;
@@ -319,8 +319,8 @@ class MpArithmeticTest {
         assertTrue(adapted.context().digits() > wide.digits(), "the fraction was not built again in more digits");
         MpContext ref = wide.widen(80);
         MpComplex s = work.fromDouble(0.7, 0.4);
-        MpComplex exact = ContinuedFraction.of(ref, exactCoefficients(series, ref, n)).lastConvergents(ref, s)[2];
-        MpComplex v = adapted.lastConvergents(adapted.context(), s)[2];
+        MpComplex exact = ContinuedFraction.of(ref, exactCoefficients(series, ref, n)).lastConvergents(s)[2];
+        MpComplex v = adapted.lastConvergents(s)[2];
         double err = ref.subtract(v, exact).log2Abs() - exact.log2Abs();
         assertTrue(err < 8 - work.bits(), "value off by 2^" + err + ", working precision 2^-" + work.bits());
     }
@@ -339,7 +339,7 @@ class MpArithmeticTest {
         MpComplex[] c = {C.fromLong(1), MpComplex.ZERO, C.fromLong(1), MpComplex.ZERO, MpComplex.ZERO};
         ContinuedFraction f = ContinuedFraction.of(C, c);
         assertTrue(f.depth() < c.length);
-        MpComplex[] conv = f.lastConvergents(C, C.fromDouble(0.5, 0));
+        MpComplex[] conv = f.lastConvergents(C.fromDouble(0.5, 0));
         assertTrue(conv == null || conv[2] != null);
     }
 
