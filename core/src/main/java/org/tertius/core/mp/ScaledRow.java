@@ -136,14 +136,9 @@ final class ScaledRow {
                 im[x - d] -= cur.values.im[o + x];
             }
         }
-        for (int x = 0; x < n - 1; x++) {
-            long v = re[x];
-            re[x] = v & LimbFormat.MASK;
-            re[x + 1] += v >> LimbFormat.BITS;
-            v = im[x];
-            im[x] = v & LimbFormat.MASK;
-            im[x + 1] += v >> LimbFormat.BITS;
-        }
+        // scratch holds one value, so its arrays are exactly its limbs: the usual carry pass normalises them
+        format.carry(re, 0);
+        format.carry(im, 0);
         scratch.changed(0);
         return e;
     }
