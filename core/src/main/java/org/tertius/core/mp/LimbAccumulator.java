@@ -107,7 +107,7 @@ final class LimbAccumulator {
             return;
         }
         // column by column (product scanning): the terms of a column are summed in registers and the column is
-        // written once; a column receives at most L terms below 2^(2 BITS + 2), far inside a long. Four products
+        // written once; a column receives fewer than 64 terms below 2^(2 BITS + 1), inside a long. Four products
         // per pair of limbs rather than Gauss's three: no sums re + im to load, and in the quick compiler's code
         // (no range-check elimination) the loads cost more than the multiplications (13 % faster measured)
         final int cEnd = off + na + nb - 2;

@@ -10,22 +10,32 @@ import java.math.BigInteger;
  * allocation per operation. Immutable.
  */
 final class LimbFormat {
-    /** Bits per limb: a term ar br - ai bi or ar bi + ai br of two complex limbs stays below 2^50. */
-    static final int BITS = 24;
+    /**
+     * Bits per limb: a term ar br - ai bi or ar bi + ai br of two complex limbs lies below 2^(2 BITS + 1) = 2^57,
+     * so a column of fewer than 64 such terms fits a long.
+     */
+    static final int BITS = 28;
     static final long MASK = (1L << BITS) - 1;
     /** Bound on the magnitude of the top limb of a stored value. */
     static final long TOP_BOUND = 1L << (BITS - 2);
-    /** Largest sum of column terms a column may receive between two carry passes (it then stays below 2^62). */
-    private static final long COLUMN_BUDGET = 1L << 60;
-    /** Columns computed below the rounding position: the dropped ones change the result by far less than 2^-F. */
-    private static final int GUARD_COLUMNS = 3;
+    /**
+     * Largest sum of column terms a column may receive between two carry passes (a carried column lies below
+     * 2^BITS, so it then stays below 2^63).
+     */
+    private static final long COLUMN_BUDGET = 1L << 62;
+    /**
+     * Columns computed below the rounding position. The dropped columns (below) hold at most L terms below
+     * 2^(2 BITS + 1) each, worth less than L 2^(1 - BITS) units of 2^-F per product with two guard columns: 2^-23
+     * units at 15 limbs, 2^-16 for a convolution of 125 such products.
+     */
+    private static final int GUARD_COLUMNS = 2;
     private static final RuntimeException OVERFLOW = new Overflow();
     /**
      * Limbs from which products are formed with BigInteger (Karatsuba above about 2500 bits, 64-bit multiplier
      * intrinsics) rather than limb by limb: measured with {@code KernelCost}, the limb columns win below about
-     * 250 digits and BigInteger wins above (twice as fast at 1000 digits).
+     * 250 digits and BigInteger wins above (twice as fast at 1000 digits). Below 64, as the column sums require.
      */
-    static final int BIG_PRODUCT_LIMBS = 40;
+    static final int BIG_PRODUCT_LIMBS = 34;
 
     private final int fractionLimbs;
     private final int limbs;
@@ -47,8 +57,9 @@ final class LimbFormat {
         this.fractionLimbs = (fractionBits + BITS - 1) / BITS;
         this.limbs = fractionLimbs + headroom;
         this.lowColumn = Math.max(0, fractionLimbs - GUARD_COLUMNS);
-        // every product adds at most `limbs` terms below 2^(2 BITS + 2) to a column
-        this.flushEvery = (int) Math.max(1, COLUMN_BUDGET / ((long) limbs << (2 * BITS + 2)) - 1);
+        // every product adds at most `limbs` terms below 2^(2 BITS + 1) to a column (limbs < 64: one product
+        // alone stays within the budget)
+        this.flushEvery = (int) Math.max(1, COLUMN_BUDGET / ((long) limbs << (2 * BITS + 1)));
     }
 
     /** F rounded up to whole limbs. */
@@ -96,17 +107,26 @@ final class LimbFormat {
             throw OVERFLOW;
         }
         dst[off + limbs - 1] = top.longValue();
-        // the low limbs of the two's complement, BITS = 24 bits = 3 bytes each
         byte[] b = x.toByteArray();
         for (int i = 0; i < limbs - 1; i++) {
-            long v = 0;
-            for (int j = 2; j >= 0; j--) {
-                int p = b.length - 1 - (3 * i + j);
-                int octet = p >= 0 ? b[p] & 0xff : (x.signum() < 0 ? 0xff : 0);
-                v = (v << 8) | octet;
-            }
-            dst[off + i] = v;
+            dst[off + i] = limbAt(b, x.signum() < 0, i);
         }
+    }
+
+    /**
+     * Bits [BITS c, BITS (c + 1)) of the two's complement integer whose big-endian bytes are b (sign-extended
+     * beyond them), as a limb in [0, 2^BITS).
+     */
+    private static long limbAt(byte[] b, boolean negative, int c) {
+        int lowBit = BITS * c;
+        int first = lowBit >>> 3;
+        int last = (lowBit + BITS - 1) >>> 3;
+        long v = 0;
+        for (int k = last; k >= first; k--) {
+            int p = b.length - 1 - k;
+            v = (v << 8) | (p >= 0 ? b[p] & 0xff : (negative ? 0xff : 0));
+        }
+        return (v >>> (lowBit & 7)) & MASK;
     }
 
     /**
@@ -117,14 +137,8 @@ final class LimbFormat {
     static void spill(BigInteger x, long[] col) {
         int last = col.length - 1;
         byte[] b = x.toByteArray();
-        long fill = x.signum() < 0 ? 0xff : 0;
         for (int c = 0; c < last; c++) {
-            long v = 0;
-            for (int j = 2; j >= 0; j--) {
-                int p = b.length - 1 - (3 * c + j);
-                v = (v << 8) | (p >= 0 ? b[p] & 0xff : fill);
-            }
-            col[c] = v;
+            col[c] = limbAt(b, x.signum() < 0, c);
         }
         BigInteger rest = x.shiftRight(BITS * last);
         col[last] = rest.bitLength() < 62 ? rest.longValue() : (rest.signum() < 0 ? -(1L << 61) : 1L << 61);
@@ -132,19 +146,29 @@ final class LimbFormat {
 
     /** The fixed-point integer (scale 2^-F) held in src[off .. off+L-1]. */
     BigInteger read(long[] src, int off) {
-        byte[] b = new byte[3 * (limbs - 1) + 1];
+        int lowBits = BITS * (limbs - 1);
+        byte[] b = new byte[(lowBits + 7) / 8 + 1];
+        // the low limbs as one unsigned integer, written bit group by bit group from the least significant byte
+        long pending = 0;
+        int pendingBits = 0;
+        int p = b.length - 1;
         for (int i = 0; i < limbs - 1; i++) {
-            long v = src[off + i];
-            int p = b.length - 1 - 3 * i;
-            b[p] = (byte) v;
-            b[p - 1] = (byte) (v >>> 8);
-            b[p - 2] = (byte) (v >>> 16);
+            pending |= src[off + i] << pendingBits;
+            pendingBits += BITS;
+            while (pendingBits >= 8) {
+                b[p--] = (byte) pending;
+                pending >>>= 8;
+                pendingBits -= 8;
+            }
+        }
+        if (pendingBits > 0) {
+            b[p] = (byte) pending;
         }
         BigInteger low = new BigInteger(1, b);
-        return BigInteger.valueOf(src[off + limbs - 1]).shiftLeft(BITS * (limbs - 1)).add(low);
+        return BigInteger.valueOf(src[off + limbs - 1]).shiftLeft(lowBits).add(low);
     }
 
-    /** Divides the value in a[off ..] by d (0 < d < 2^38) in place, rounding toward minus infinity. */
+    /** Divides the value in a[off ..] by d (0 < d < 2^(63 - BITS)) in place, rounding toward minus infinity. */
     void divide(long[] a, int off, long d) {
         int top = off + limbs - 1;
         long q = Math.floorDiv(a[top], d);
