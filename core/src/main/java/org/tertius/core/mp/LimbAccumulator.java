@@ -106,6 +106,14 @@ final class LimbAccumulator {
         if (na == 0 || nb == 0) {
             return;
         }
+        // carry passes only when the columns could not take another product (and never before a store, which
+        // carries and rounds itself)
+        if (load >= flushEvery) {
+            format.carry(re, low);
+            format.carry(im, low);
+            load = 0;
+        }
+        load++;
         // column by column (product scanning): the terms of a column are summed in registers and the column is
         // written once; a column receives fewer than 64 terms below 2^(2 BITS + 1), inside a long. Four products
         // per pair of limbs rather than Gauss's three: no sums re + im to load, and in the quick compiler's code
@@ -142,11 +150,6 @@ final class LimbAccumulator {
             }
             cr[c] += sr;
             ci[c] += si;
-        }
-        if (++load >= flushEvery) {
-            format.carry(re, low);
-            format.carry(im, low);
-            load = 0;
         }
     }
 

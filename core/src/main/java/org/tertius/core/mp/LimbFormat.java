@@ -19,10 +19,10 @@ final class LimbFormat {
     /** Bound on the magnitude of the top limb of a stored value. */
     static final long TOP_BOUND = 1L << (BITS - 2);
     /**
-     * Largest sum of column terms a column may receive between two carry passes (a carried column lies below
-     * 2^BITS, so it then stays below 2^63).
+     * Largest sum of column terms a column may receive between two carry passes: a carried column lies in
+     * [0, 2^BITS), so it then stays within a long, with room for 2^12 values added without a product.
      */
-    private static final long COLUMN_BUDGET = 1L << 62;
+    private static final long COLUMN_BUDGET = Long.MAX_VALUE - (1L << (BITS + 12));
     /**
      * Columns computed below the rounding position. The dropped columns (below) hold at most L terms below
      * 2^(2 BITS + 1) each, worth less than L 2^(1 - BITS) units of 2^-F per product with two guard columns: 2^-23

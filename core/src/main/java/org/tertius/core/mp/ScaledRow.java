@@ -74,8 +74,8 @@ final class ScaledRow {
     /**
      * Sets this row to (prev_{j+1} - cur_{j+1}) times the first entry of factor, j < len. Each difference is
      * formed limb by limb at the larger exponent of its two entries (the lower limbs of the other, shifted below
-     * the last limb, are dropped: at most one unit of that limb, below the entries' own rounding), brought to
-     * canonical limbs by one carry pass, and multiplied without being rounded; the product is rounded once.
+     * the last limb, are dropped: at most one unit of that limb, below the entries' own rounding) and multiplied
+     * as it is, neither carried nor rounded; the product is rounded once.
      */
     void differenceTimes(ScaledRow prev, ScaledRow cur, ScaledRow factor, LimbAccumulator acc, LimbVector scratch,
                          int len) {
@@ -84,6 +84,10 @@ final class ScaledRow {
             if (e == Integer.MIN_VALUE || factor.zero[0]) {
                 setZero(j);
                 continue;
+            }
+            if (format.bigProducts()) {
+                // BigInteger products read the value as an integer
+                canonical(scratch);
             }
             acc.clear();
             acc.multiplyAdd(scratch, 0, factor.values, 0, 0);
@@ -98,13 +102,15 @@ final class ScaledRow {
         if (e == Integer.MIN_VALUE) {
             return MpComplex.ZERO;
         }
+        canonical(scratch);
         MpComplex d = new MpComplex(scratch.re(0), scratch.im(0), LimbFormat.BITS * e - format.fractionBits());
         return d.isZero() ? MpComplex.ZERO : ctx.round(d);
     }
 
     /**
-     * scratch[0] = prev_i - cur_i at the exponent returned (Integer.MIN_VALUE when both vanish), in canonical
-     * limbs (all in [0, 2^BITS) but the signed top one).
+     * scratch[0] = prev_i - cur_i at the exponent returned (Integer.MIN_VALUE when both vanish), as limb-by-limb
+     * differences in (-2^BITS, 2^BITS), not carried: products take such limbs as they are (their terms keep the
+     * bound of {@link LimbAccumulator}); a carry pass makes them canonical where the value is read.
      */
     private int difference(ScaledRow prev, ScaledRow cur, int i, LimbVector scratch) {
         boolean hasA = !prev.zero[i];
@@ -136,11 +142,15 @@ final class ScaledRow {
                 im[x - d] -= cur.values.im[o + x];
             }
         }
-        // scratch holds one value, so its arrays are exactly its limbs: the usual carry pass normalises them
-        format.carry(re, 0);
-        format.carry(im, 0);
         scratch.changed(0);
         return e;
+    }
+
+    /** Brings the one value of scratch to canonical limbs (its arrays are exactly its limbs). */
+    private void canonical(LimbVector scratch) {
+        format.carry(scratch.re, 0);
+        format.carry(scratch.im, 0);
+        scratch.changed(0);
     }
 
     /** Sets this row to the entries of src times the first entry of factor, each product rounded once. */
