@@ -98,21 +98,41 @@ final class FixedPointKernel {
     }
 
     /**
-     * The Taylor coefficients at tau0 of the solution through y0, in s with tau = tau0 + scale * s.
+     * The Taylor coefficients at tau0 of the solution through y0, in s with tau = tau0 + scale * s. The integer
+     * limbs start at one (or at what the start values need); when the coefficients outgrow them the expansion
+     * widens its work arrays by the limbs the growth seen calls for and goes on from the order it had reached.
      */
     TaylorSeries expand(MpComplex tau0, MpComplex[] y0, double scale) {
-        for (int headroom = 1; ; ) {
+        return expand(tau0, y0, scale, 1);
+    }
+
+    /** As above, starting with the given integer limbs (tests: the widening gives the same coefficients). */
+    TaylorSeries expand(MpComplex tau0, MpComplex[] y0, double scale, int firstHeadroom) {
+        Work work = null;
+        for (int headroom = firstHeadroom; work == null; ) {
             try {
-                return expand(tau0, y0, scale, new LimbFormat(f, headroom));
-            } catch (HeadroomShort e) {
-                if (headroom >= MAX_HEADROOM) {
-                    throw new UnreachableTargetException("the high-precision Taylor coefficients near tau = "
-                            + tau0.toComplex() + " exceed 2^" + (LimbFormat.BITS * headroom) + ": the solution is too"
-                            + " large there");
+                work = new Work(tau0, y0, scale, new LimbFormat(f, headroom));
+            } catch (RuntimeException e) {
+                if (e != LimbFormat.overflow()) {
+                    throw e;
                 }
-                headroom = Math.min(MAX_HEADROOM, Math.max(2 * headroom, e.limbs));
+                headroom = widerHeadroom(tau0, headroom, 0);
             }
         }
+        return work.run(tau0);
+    }
+
+    /**
+     * The headroom asked for (at least twice the current one), capped at MAX_HEADROOM; refused when the current
+     * one is the cap already.
+     */
+    private static int widerHeadroom(MpComplex tau0, int current, int wanted) {
+        if (current >= MAX_HEADROOM) {
+            throw new UnreachableTargetException("the high-precision Taylor coefficients near tau = "
+                    + tau0.toComplex() + " exceed 2^" + (LimbFormat.BITS * current) + ": the solution is too"
+                    + " large there");
+        }
+        return Math.min(MAX_HEADROOM, Math.max(2 * current, wanted));
     }
 
     /**
@@ -128,17 +148,6 @@ final class FixedPointKernel {
         ScaleTooLarge(double growth) {
             super("scaled Taylor coefficients grow by " + growth + " per order", null, false, false);
             this.growth = growth;
-        }
-    }
-
-    /** An expansion ran out of integer limbs; carries the limbs its coefficients are estimated to need. */
-    private static final class HeadroomShort extends RuntimeException {
-        private static final long serialVersionUID = 1L;
-        final int limbs;
-
-        HeadroomShort(int limbs) {
-            super(null, null, false, false);
-            this.limbs = limbs;
         }
     }
 
@@ -161,76 +170,120 @@ final class FixedPointKernel {
         return g;
     }
 
-    private TaylorSeries expand(MpComplex tau0, MpComplex[] y0, double scale, LimbFormat fmt) {
-        final int n = plan.dimension();
-        final int st = order + 1;
-        final int np = plan.productCount();
-        final int ng = plan.groupCount();
-        LimbVector w = new LimbVector(fmt, plan.seriesCount() * st);
-        for (int i = 0; i < n; i++) {
-            w.set(i * st, MpContext.fixedRe(y0[i], f), MpContext.fixedIm(y0[i], f));
-        }
-        LimbVector coef = new LimbVector(fmt, coefRe.length);
-        for (int c = 0; c < coefRe.length; c++) {
-            coef.set(c, coefRe[c], coefIm[c]);
-        }
-        LimbVector base = baseSeries(tau0, scale, fmt);
-        // slot 0: the scale r; slot 1: F_k of one equation
-        LimbVector aux = new LimbVector(fmt, 2);
-        aux.set(0, MpContext.fixedRe(ctx.fromDouble(scale, 0), f), java.math.BigInteger.ZERO);
-        LimbAccumulator acc = new LimbAccumulator(fmt);
-        LimbAccumulator[] rhs = new LimbAccumulator[n];
-        for (int i = 0; i < n; i++) {
-            rhs[i] = new LimbAccumulator(fmt);
-        }
-        // when an order is worth two threads (BigInteger products, or limb products of high order) the terms of
-        // every convolution whose factors are known before order k are summed in two threads first; the one or
-        // two terms with an order-k factor follow in order
-        long perOrder = (long) fmt.limbs() * fmt.limbs();
-        int splitFrom = fmt.bigProducts() ? 1 : (int) Math.max(1, Math.min(order, (SPLIT_WORK + perOrder - 1) / perOrder));
-        boolean split = Workers.PARALLEL && splitFrom <= order / 2;
-        // the second half of the array: the other thread's partial sums, added in after each order
-        LimbAccumulator[] known = split ? new LimbAccumulator[2 * (np + ng)] : null;
-        if (split) {
-            for (int t = 0; t < known.length; t++) {
-                known[t] = new LimbAccumulator(fmt);
+    /**
+     * The work arrays of one expansion in one limb format, and the loop over the orders; widened in place of a
+     * fresh start when a value outgrows the integer limbs.
+     */
+    private final class Work {
+        private final int n = plan.dimension();
+        private final int st = order + 1;
+        private final double scale;
+        private final double[] log2Start;
+        private LimbFormat fmt;
+        private LimbVector w;
+        private LimbVector coef;
+        private LimbVector base;
+        /** slot 0: the scale r; slot 1: F_k of one equation */
+        private LimbVector aux;
+        private LimbAccumulator acc;
+        private LimbAccumulator[] rhs;
+        /** the known sums of each order, the second half the other thread's partial sums (null: no split) */
+        private LimbAccumulator[] known;
+        private int splitFrom;
+
+        Work(MpComplex tau0, MpComplex[] y0, double scale, LimbFormat fmt) {
+            this.scale = scale;
+            this.fmt = fmt;
+            w = new LimbVector(fmt, plan.seriesCount() * st);
+            for (int i = 0; i < n; i++) {
+                w.set(i * st, MpContext.fixedRe(y0[i], f), MpContext.fixedIm(y0[i], f));
             }
+            coef = new LimbVector(fmt, coefRe.length);
+            for (int c = 0; c < coefRe.length; c++) {
+                coef.set(c, coefRe[c], coefIm[c]);
+            }
+            base = baseSeries(tau0, scale, fmt);
+            aux = new LimbVector(fmt, 2);
+            aux.set(0, MpContext.fixedRe(ctx.fromDouble(scale, 0), f), java.math.BigInteger.ZERO);
+            log2Start = new double[n];
+            for (int i = 0; i < n; i++) {
+                double l = y0[i].log2Abs();
+                log2Start[i] = l == Double.NEGATIVE_INFINITY ? 0 : Math.max(0, l)
+                        + Math.log1p(Math.pow(2, -Math.abs(l))) / Math.log(2);
+            }
+            accumulators();
         }
-        double[] log2Start = new double[n];
-        for (int i = 0; i < n; i++) {
-            double l = y0[i].log2Abs();
-            log2Start[i] = l == Double.NEGATIVE_INFINITY ? 0 : Math.max(0, l) + Math.log1p(Math.pow(2, -Math.abs(l)))
-                    / Math.log(2);
-        }
-        int k = 0;
-        try {
-            for (; k < order; k++) {
-                expandOrder(k, w, base, coef, aux, acc, rhs, known, split && k >= splitFrom);
-                int m = k + 1;
-                if (m >= 16 && m < order && (m & (m - 1)) == 0) {
-                    double g = growthBits(w, fmt, n, st, m, log2Start);
-                    if (g > Math.log(GROWTH_LIMIT) / Math.log(2)) {
-                        throw new ScaleTooLarge(Math.pow(2, g));
-                    }
+
+        /**
+         * The accumulators of the format. When an order is worth two threads (BigInteger products, or limb
+         * products of high order) the terms of every convolution whose factors are known before order k are
+         * summed in two threads first; the one or two terms with an order-k factor follow in order.
+         */
+        private void accumulators() {
+            acc = new LimbAccumulator(fmt);
+            rhs = new LimbAccumulator[n];
+            for (int i = 0; i < n; i++) {
+                rhs[i] = new LimbAccumulator(fmt);
+            }
+            long perOrder = (long) fmt.limbs() * fmt.limbs();
+            splitFrom = fmt.bigProducts() ? 1
+                    : (int) Math.max(1, Math.min(order, (SPLIT_WORK + perOrder - 1) / perOrder));
+            known = null;
+            if (Workers.PARALLEL && splitFrom <= order / 2) {
+                known = new LimbAccumulator[2 * (plan.productCount() + plan.groupCount())];
+                for (int t = 0; t < known.length; t++) {
+                    known[t] = new LimbAccumulator(fmt);
                 }
             }
-        } catch (RuntimeException e) {
-            if (e != LimbFormat.overflow()) {
-                throw e;
-            }
-            // the growth seen at the last complete order, carried to the full order, plus a margin
-            double g = k >= 4 ? Math.max(0, growthBits(w, fmt, n, st, k, log2Start)) : 1;
-            throw new HeadroomShort((int) Math.ceil((g * order + 2.0 * LimbFormat.BITS) / LimbFormat.BITS) + 1);
         }
-        BigInteger[][] outRe = new BigInteger[n][st];
-        BigInteger[][] outIm = new BigInteger[n][st];
-        for (int i = 0; i < n; i++) {
-            for (int j = 0; j < st; j++) {
-                outRe[i][j] = w.re(i * st + j);
-                outIm[i][j] = w.im(i * st + j);
+
+        TaylorSeries run(MpComplex tau0) {
+            int k = 0;
+            while (true) {
+                try {
+                    for (; k < order; k++) {
+                        expandOrder(k, w, base, coef, aux, acc, rhs, known, known != null && k >= splitFrom);
+                        int m = k + 1;
+                        if (m >= 16 && m < order && (m & (m - 1)) == 0) {
+                            double g = growthBits(w, fmt, n, st, m, log2Start);
+                            if (g > Math.log(GROWTH_LIMIT) / Math.log(2)) {
+                                throw new ScaleTooLarge(Math.pow(2, g));
+                            }
+                        }
+                    }
+                    break;
+                } catch (RuntimeException e) {
+                    if (e != LimbFormat.overflow()) {
+                        throw e;
+                    }
+                    // the growth seen at the last complete order, carried to the full order, plus a margin; order
+                    // k is done again (its stores overwrite whatever it had written)
+                    double g = k >= 4 ? Math.max(0, growthBits(w, fmt, n, st, k, log2Start)) : 1;
+                    widen(widerHeadroom(tau0, fmt.limbs() - fmt.fractionLimbs(),
+                            (int) Math.ceil((g * order + 2.0 * LimbFormat.BITS) / LimbFormat.BITS) + 1));
+                }
             }
+            BigInteger[][] outRe = new BigInteger[n][st];
+            BigInteger[][] outIm = new BigInteger[n][st];
+            for (int i = 0; i < n; i++) {
+                for (int j = 0; j < st; j++) {
+                    outRe[i][j] = w.re(i * st + j);
+                    outIm[i][j] = w.im(i * st + j);
+                }
+            }
+            return new TaylorSeries(tau0, scale, f, outRe, outIm);
         }
-        return new TaylorSeries(tau0, scale, f, outRe, outIm);
+
+        /** The same values in a format with the given integer limbs. */
+        private void widen(int headroom) {
+            LimbFormat wider = new LimbFormat(f, headroom);
+            w = w.widened(wider);
+            coef = coef.widened(wider);
+            base = base.widened(wider);
+            aux = aux.widened(wider);
+            fmt = wider;
+            accumulators();
+        }
     }
 
     /** One order of the recurrence: the products, the term groups and y_{k+1} of every component. */

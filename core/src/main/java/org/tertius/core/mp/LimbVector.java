@@ -29,6 +29,38 @@ final class LimbVector {
         this.bigSum = big ? new BigInteger[size] : null;
     }
 
+    /**
+     * The same values in a format with the same fraction limbs and more integer limbs (limb by limb: the signed
+     * top limb is split into its low bits and the sign extension).
+     */
+    LimbVector widened(LimbFormat wider) {
+        if (wider.fractionLimbs() != format.fractionLimbs() || wider.limbs() < limbs) {
+            throw new IllegalArgumentException("not a wider format of the same fraction");
+        }
+        int size = re.length / limbs;
+        LimbVector out = new LimbVector(wider, size);
+        for (int i = 0; i < size; i++) {
+            widen(re, i * limbs, out.re, i * out.limbs, out.limbs);
+            widen(im, i * limbs, out.im, i * out.limbs, out.limbs);
+        }
+        return out;
+    }
+
+    private void widen(long[] src, int from, long[] dst, int to, int wideLimbs) {
+        System.arraycopy(src, from, dst, to, limbs - 1);
+        long top = src[from + limbs - 1];
+        if (wideLimbs == limbs) {
+            dst[to + limbs - 1] = top;
+            return;
+        }
+        dst[to + limbs - 1] = top & LimbFormat.MASK;
+        long sign = top >> LimbFormat.BITS;
+        for (int x = limbs; x < wideLimbs - 1; x++) {
+            dst[to + x] = sign & LimbFormat.MASK;
+        }
+        dst[to + wideLimbs - 1] = sign;
+    }
+
     /** Sets value i to (r + i m) 2^-F from fixed-point integers. */
     void set(int i, BigInteger r, BigInteger m) {
         format.write(r, re, i * limbs);

@@ -34,9 +34,32 @@ class LimbArithmeticTest {
     }
 
     @Test
+    void valuesKeepTheirValueInAWiderFormat() {
+        qt().withExamples(200).forAll(longs().all(), integers().between(30, 900), integers().between(1, 6))
+                .checkAssert((seed, bits, more) -> {
+                    Random r = new Random(seed);
+                    LimbFormat fmt = new LimbFormat(bits, 1);
+                    LimbVector v = new LimbVector(fmt, 3);
+                    BigInteger[] x = new BigInteger[6];
+                    for (int i = 0; i < 3; i++) {
+                        // |x| < 2^(f + 20): the top limb of one integer limb is used, of either sign
+                        x[2 * i] = new BigInteger(fmt.fractionBits() + 20, r);
+                        x[2 * i] = r.nextBoolean() ? x[2 * i] : x[2 * i].negate();
+                        x[2 * i + 1] = i == 2 ? x[2 * i].negate() : BigInteger.valueOf(-r.nextInt(3));
+                        v.set(i, x[2 * i], x[2 * i + 1]);
+                    }
+                    LimbVector w = v.widened(new LimbFormat(bits, 1 + more));
+                    for (int i = 0; i < 3; i++) {
+                        assertEquals(x[2 * i], w.re(i));
+                        assertEquals(x[2 * i + 1], w.im(i));
+                    }
+                });
+    }
+
+    @Test
     void dotProductsAreRoundedOnceFromTheExactSum() {
         // sum_i a_i b_{k-i} of complex fixed-point numbers, exact in BigInteger, then rounded to 2^-F: the limb
-        // accumulator drops only columns far below the rounding (each worth < 2^-40 units), so its result differs
+        // accumulator drops only columns far below the rounding (together worth < 2^-14 units), so its result differs
         // from the exactly rounded sum by at most one unit in each part
         // both ways of forming products: limb columns and BigInteger (the latter for many limbs)
         qt().withExamples(150).forAll(longs().all(), integers().between(30, 1500), integers().between(1, 60),

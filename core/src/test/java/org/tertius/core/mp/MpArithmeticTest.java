@@ -116,6 +116,31 @@ class MpArithmeticTest {
     }
 
     @Test
+    void expansionThatOutgrowsItsIntegerLimbsGoesOnWiderWithTheSameCoefficients() {
+        // y' = y^2, p' = y p in tau, y(0) = p(0) = 1: y = p = 1 / (1 - tau), scaled coefficients r^k. With r = 1.3
+        // they pass the one integer limb a series starts with near order 69 (1.3^100 ~ 2^38), and the expansion
+        // widens its limbs there and goes on; fixed-point products are rounded at 2^-F whatever the integer limbs,
+        // so it must give exactly the coefficients of an expansion started with four integer limbs
+        PolynomialSystem sys = PolynomialSystem.builder(IndependentVariable.LOG, "y", "p")
+                .term(0, new Complex(1), 0, 2, 0).term(1, new Complex(1), 0, 1, 1).build();
+        RecurrencePlan plan = RecurrencePlan.compile(sys);
+        int order = 100;
+        MpComplex[] coef = {C.fromLong(1), C.fromLong(1)};
+        FixedPointKernel k = new FixedPointKernel(plan, coef, order, C);
+        MpComplex[] y0 = {C.fromLong(1), C.fromLong(1)};
+        TaylorSeries widened = k.expand(MpComplex.ZERO, y0, 1.3);
+        TaylorSeries wide = k.expand(MpComplex.ZERO, y0, 1.3, 4);
+        for (int i = 0; i < 2; i++) {
+            for (int j = 0; j <= order; j++) {
+                MpComplex a = widened.coefficient(C, i, j);
+                assertTrue(C.subtract(a, wide.coefficient(C, i, j)).isZero(), "coefficient " + i + "," + j);
+                // and they are the powers 1.3^j (a few ulps of double precision, common practice)
+                assertTrue(Math.abs(a.toComplex().getReal() / Math.pow(1.3, j) - 1) < 1e-13, "coefficient " + i + "," + j);
+            }
+        }
+    }
+
+    @Test
     void kernelWithBigIntegerProductsAgreesWithTheLimbKernel() {
         // the same plan at 400 digits (BigInteger products, the known terms summed in two threads), at 200 digits
         // and at 60 digits (limb columns): the coefficients agree to the 60-digit rounding (common practice: two
