@@ -240,9 +240,18 @@ final class FixedPointKernel {
         TaylorSeries run(MpComplex tau0) {
             int k = 0;
             while (true) {
+                LockstepPartner partner = null;
                 try {
                     for (; k < order; k++) {
-                        expandOrder(k, w, base, coef, aux, acc, rhs, known, known != null && k >= splitFrom);
+                        boolean split = known != null && k >= splitFrom;
+                        if (split && partner == null) {
+                            // the other thread's share of the known terms of every order from here on
+                            LimbVector ws = w;
+                            LimbVector bs = base;
+                            LimbAccumulator[] ks = known;
+                            partner = new LockstepPartner(r -> partialKnownTerms(ws, bs, ks, ks.length / 2, r, 1));
+                        }
+                        expandOrder(k, w, base, coef, aux, acc, rhs, known, split ? partner : null);
                         int m = k + 1;
                         if (m >= 16 && m < order && (m & (m - 1)) == 0) {
                             double g = growthBits(w, fmt, n, st, m, log2Start);
@@ -259,8 +268,16 @@ final class FixedPointKernel {
                     // the growth seen at the last complete order, carried to the full order, plus a margin; order
                     // k is done again (its stores overwrite whatever it had written)
                     double g = k >= 4 ? Math.max(0, growthBits(w, fmt, n, st, k, log2Start)) : 1;
+                    if (partner != null) {
+                        partner.close();
+                        partner = null;
+                    }
                     widen(widerHeadroom(tau0, fmt.limbs() - fmt.fractionLimbs(),
                             (int) Math.ceil((g * order + 2.0 * LimbFormat.BITS) / LimbFormat.BITS) + 1));
+                } finally {
+                    if (partner != null) {
+                        partner.close();
+                    }
                 }
             }
             BigInteger[][] outRe = new BigInteger[n][st];
@@ -289,13 +306,14 @@ final class FixedPointKernel {
     /** One order of the recurrence: the products, the term groups and y_{k+1} of every component. */
     private void expandOrder(int k, LimbVector w, LimbVector base, LimbVector coef, LimbVector aux,
                              LimbAccumulator acc, LimbAccumulator[] rhs, LimbAccumulator[] known,
-                             boolean splitHere) {
+                             LockstepPartner partner) {
         final int n = plan.dimension();
         final int st = order + 1;
         final int np = plan.productCount();
         final int ng = plan.groupCount();
+        boolean splitHere = partner != null;
         if (splitHere) {
-            knownTerms(w, base, known, k);
+            knownTerms(w, base, known, k, partner);
         }
         for (int p = 0; p < np; p++) {
             int a = plan.productFirst(p) * st;
@@ -353,25 +371,16 @@ final class FixedPointKernel {
     }
 
     /**
-     * Series in s of b^j for each distinct power j of the base: for tau = log z, e^{j tau0} (j r)^k / k!; for the
-     * plain variable, x0^j binom(j, k) (r / x0)^k. Both are c_k = c_{k-1} * m * a_k / k with a_k = 1 or j-k+1.
-     */
-    /**
      * For order k >= 1, in two threads: known[p] = sum_{i=1..k-1} of the products of product p, and
      * known[np + g] = sum_{i=0..k-1} base_{k-i} g_i for the groups with a base convolution (all factors of
-     * order below k). Every sum is split by the parity of i between this thread and a pool thread (whose partial
-     * sums go to the second half of {@code known} and are added in at the end): the terms of a sum cost alike,
-     * except those of the base series, whose high orders are small (factorial decay) and cheap, so a split by
-     * whole sums would leave one thread idle.
+     * order below k). Every sum is split by the parity of i between this thread and the lockstep partner (whose
+     * partial sums go to the second half of {@code known} and are added in at the end): the terms of a sum cost
+     * alike, except those of the base series, whose high orders are small (factorial decay) and cheap, so a split
+     * by whole sums would leave one thread idle.
      */
-    private void knownTerms(LimbVector w, LimbVector base, LimbAccumulator[] known, int k) {
+    private void knownTerms(LimbVector w, LimbVector base, LimbAccumulator[] known, int k, LockstepPartner partner) {
         final int half = known.length / 2;
-        java.util.concurrent.Future<Object> other = Workers.submit(() -> {
-            partialKnownTerms(w, base, known, half, k, 1);
-            return null;
-        });
-        partialKnownTerms(w, base, known, 0, k, 0);
-        Workers.join(other);
+        partner.round(k, () -> partialKnownTerms(w, base, known, 0, k, 0));
         for (int t = 0; t < half; t++) {
             known[t].addSum(known[half + t]);
         }
@@ -404,6 +413,10 @@ final class FixedPointKernel {
         }
     }
 
+    /**
+     * Series in s of b^j for each distinct power j of the base: for tau = log z, e^{j tau0} (j r)^k / k!; for the
+     * plain variable, x0^j binom(j, k) (r / x0)^k. Both are c_k = c_{k-1} * m * a_k / k with a_k = 1 or j-k+1.
+     */
     private LimbVector baseSeries(MpComplex tau0, double scale, LimbFormat fmt) {
         final int st = order + 1;
         int q = plan.basePowerCount();
