@@ -124,23 +124,19 @@ final class ScaledRow {
         int n = values.limbs;
         long[] re = scratch.re;
         long[] im = scratch.im;
-        java.util.Arrays.fill(re, 0, n, 0);
-        java.util.Arrays.fill(im, 0, n, 0);
-        if (hasA) {
-            int d = e - ea;
-            int o = i * n;
-            for (int x = d; x < n; x++) {
-                re[x - d] += prev.values.re[o + x];
-                im[x - d] += prev.values.im[o + x];
-            }
-        }
-        if (hasB) {
-            int d = e - eb;
-            int o = i * n;
-            for (int x = d; x < n; x++) {
-                re[x - d] -= cur.values.re[o + x];
-                im[x - d] -= cur.values.im[o + x];
-            }
+        // limb x of the difference: limb x + d of each entry (d its shift to the common exponent; none beyond n)
+        int o = i * n;
+        int da = hasA ? e - ea : n;
+        int db = hasB ? e - eb : n;
+        long[] ar = prev.values.re;
+        long[] ai = prev.values.im;
+        long[] br = cur.values.re;
+        long[] bi = cur.values.im;
+        for (int x = 0; x < n; x++) {
+            boolean a = x + da < n;
+            boolean b = x + db < n;
+            re[x] = (a ? ar[o + x + da] : 0) - (b ? br[o + x + db] : 0);
+            im[x] = (a ? ai[o + x + da] : 0) - (b ? bi[o + x + db] : 0);
         }
         scratch.changed(0);
         return e;
