@@ -18,7 +18,7 @@ for a in jmh-core jmh-generator-annprocess; do
     mvn -q -B dependency:get -Dartifact=org.openjdk.jmh:$a:$JMH_VERSION
   fi
 done
-mvn -q -B -o install -DskipTests
+mvn -q -B install -DskipTests
 mvn -q -B -o -f bench/pom.xml package
 mkdir -p "$OUT"
 JAR=bench/target/tertius-benchmarks.jar

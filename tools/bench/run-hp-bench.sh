@@ -7,11 +7,9 @@
 #   tools/bench/run-hp-bench.sh 1000       # also 1000 digits in the table (minutes)
 set -euo pipefail
 cd "$(dirname "$0")/../.."
-mvn -q -B -o install -DskipTests
-CPFILE=$(mktemp)
-mvn -q -B -o dependency:build-classpath -pl core -Dmdep.includeScope=runtime -Dmdep.outputFile="$CPFILE" >/dev/null
-CP="core/target/classes:$(cat "$CPFILE")"
-rm -f "$CPFILE"
+mvn -q -B -DskipTests package
+# the tool's jar holds every module and dependency, the benchmark classes of core included
+CP=connection/target/tertius.jar
 P="--alpha 1 --beta -1/2 --gamma 1 --delta -1 --z0 1 --w0 1/2 --dw0 1/3 --at 3+2i"
 # min and median wall time (and the user time of the median run) of N runs of a command
 times() {
