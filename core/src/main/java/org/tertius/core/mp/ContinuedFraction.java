@@ -110,9 +110,10 @@ final class ContinuedFraction {
         if (n == 0 || c[0].isZero()) {
             return new ContinuedFraction(ctx, null, new MpComplex[0], 0, 0);
         }
-        // products placed up to L + 2 limbs apart; columns from 3 below the rounding of the larger product
+        // a product of two normalised entries is rounded at column L - 2 or L - 1 (its top lies at 2L - 4 or
+        // 2L - 3): columns from three below the lower of the two
         int l = fmt.limbs();
-        LimbAccumulator acc = new LimbAccumulator(fmt, l + 2, (l + 2) + l - 5);
+        LimbAccumulator acc = new LimbAccumulator(fmt, l - 5);
         double lossLimit = 0.5 * ctx.bits();
         // v_0 = 1, v_1 = f / f(0); a row whose entries exceed its leading 1 by more than lossLimit bits (the leading
         // entry lost that much to cancellation) ends the fraction before its level is added

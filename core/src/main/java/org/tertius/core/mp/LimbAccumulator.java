@@ -4,8 +4,7 @@ package org.tertius.core.mp;
  * An exact accumulator of complex fixed-point products in columns of longs: the real and imaginary parts of a
  * sum of products, re = sum (ar br - ai bi) and im = sum (ar bi + ai br), column by column. A sum of products is
  * rounded once, when it is stored; nothing is allocated per product. Columns below a low column are not formed
- * (short products). A product may be placed some whole limbs lower (a smaller binary exponent), for floating
- * values with limb-granular exponents ({@link ScaledRow}). When the format asks for BigInteger products (many
+ * (short products). When the format asks for BigInteger products (many
  * limbs), a complex product takes three BigInteger products (Gauss: t1 = ar br, t2 = ai bi,
  * t3 = (ar + ai)(br + bi), re = t1 - t2, im = t3 - t1 - t2), summed as three integers and spread into the same
  * columns when the sum is stored. Mutable scratch space of one computation.
@@ -13,8 +12,6 @@ package org.tertius.core.mp;
 final class LimbAccumulator {
     private final LimbFormat format;
     private final int limbs;
-    /** column of weight 2^-2F (columns below it serve products placed lower) */
-    private final int base;
     private final int low;
     private final int flushEvery;
     /** Column sums of the real and imaginary parts (with BigInteger products: filled when the sum is stored). */
@@ -29,20 +26,16 @@ final class LimbAccumulator {
 
     /** An accumulator of fixed-point products rounded at 2^-F, forming the columns from the format's low one. */
     LimbAccumulator(LimbFormat format) {
-        this(format, 0, format.lowColumn());
+        this(format, format.lowColumn());
     }
 
-    /**
-     * @param base columns below the one of weight 2^-2F, for products placed up to that many limbs lower
-     * @param low the lowest column formed
-     */
-    LimbAccumulator(LimbFormat format, int base, int low) {
+    /** @param low the lowest column formed (column 0 has the weight 2^-2F; below 0 means 0) */
+    LimbAccumulator(LimbFormat format, int low) {
         this.format = format;
         this.limbs = format.limbs();
-        this.base = base;
-        this.low = low;
+        this.low = Math.max(0, low);
         this.flushEvery = format.flushEvery();
-        int n = base + 2 * limbs + 1;
+        int n = 2 * limbs + 1;
         re = new long[n];
         im = new long[n];
         big = format.bigProducts();
@@ -69,19 +62,10 @@ final class LimbAccumulator {
 
     /** Adds a[i] b[j]. */
     void multiplyAdd(LimbVector a, int i, LimbVector b, int j) {
-        multiplyAdd(a, i, b, j, 0);
-    }
-
-    /** Adds a[i] b[j] 2^(BITS shift), shift <= 0 and -shift <= base. */
-    void multiplyAdd(LimbVector a, int i, LimbVector b, int j, int shift) {
         if (big) {
-            java.math.BigInteger p1 = a.bigRe(i).multiply(b.bigRe(j));
-            java.math.BigInteger p2 = a.bigIm(i).multiply(b.bigIm(j));
-            java.math.BigInteger p3 = a.bigSum(i).multiply(b.bigSum(j));
-            int at = LimbFormat.BITS * (base + shift);
-            sum1 = sum1.add(at == 0 ? p1 : p1.shiftLeft(at));
-            sum2 = sum2.add(at == 0 ? p2 : p2.shiftLeft(at));
-            sum3 = sum3.add(at == 0 ? p3 : p3.shiftLeft(at));
+            sum1 = sum1.add(a.bigRe(i).multiply(b.bigRe(j)));
+            sum2 = sum2.add(a.bigIm(i).multiply(b.bigIm(j)));
+            sum3 = sum3.add(a.bigSum(i).multiply(b.bigSum(j)));
             return;
         }
         final int n = limbs;
@@ -93,7 +77,6 @@ final class LimbAccumulator {
         final long[] ci = im;
         final int ao = i * n;
         final int bo = j * n;
-        final int off = base + shift;
         // leading zero limbs (small positive values) take no part
         int na = n;
         while (na > 0 && (ar[ao + na - 1] | ai[ao + na - 1]) == 0) {
@@ -118,15 +101,14 @@ final class LimbAccumulator {
         // written once; a column receives fewer than 64 terms below 2^(2 BITS + 1), inside a long. Four products
         // per pair of limbs rather than Gauss's three: no sums re + im to load, and in the quick compiler's code
         // (no range-check elimination) the loads cost more than the multiplications (13 % faster measured)
-        final int cEnd = off + na + nb - 2;
-        for (int c = Math.max(low, off); c <= cEnd; c++) {
-            int k = c - off;
-            int xLo = Math.max(0, k - (nb - 1));
-            int xHi = Math.min(na - 1, k);
+        final int cEnd = na + nb - 2;
+        for (int c = low; c <= cEnd; c++) {
+            int xLo = Math.max(0, c - (nb - 1));
+            int xHi = Math.min(na - 1, c);
             long sr = 0;
             long si = 0;
             int p = ao + xLo;
-            int q = bo + k - xLo;
+            int q = bo + c - xLo;
             int m = xHi - xLo + 1;
             for (; m >= 2; m -= 2, p += 2, q -= 2) {
                 long xr = ar[p];
@@ -176,7 +158,7 @@ final class LimbAccumulator {
     /** Adds the value a[i] itself (scale 2^-F). */
     void add(LimbVector a, int i) {
         int o = i * limbs;
-        int f = base + format.fractionLimbs();
+        int f = format.fractionLimbs();
         if (big) {
             // as in the columns: re goes to the first sum, re + im to the third
             sum1 = sum1.add(a.bigRe(i).shiftLeft(LimbFormat.BITS * f));
@@ -196,7 +178,7 @@ final class LimbAccumulator {
      */
     void store(LimbVector dst, int i) {
         compose();
-        int from = base + format.fractionLimbs();
+        int from = format.fractionLimbs();
         format.round(re, from, low, dst.re, i * limbs);
         format.round(im, from, low, dst.im, i * limbs);
         dst.changed(i);
@@ -222,7 +204,7 @@ final class LimbAccumulator {
         format.round(re, from, low, dst.re, i * limbs);
         format.round(im, from, low, dst.im, i * limbs);
         dst.changed(i);
-        return from - base - format.fractionLimbs();
+        return from - format.fractionLimbs();
     }
 
     /**

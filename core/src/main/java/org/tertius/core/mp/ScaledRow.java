@@ -90,7 +90,7 @@ final class ScaledRow {
                 canonical(scratch);
             }
             acc.clear();
-            acc.multiplyAdd(scratch, 0, factor.values, 0, 0);
+            acc.multiplyAdd(scratch, 0, factor.values, 0);
             store(acc, j, e + factor.exponent[0]);
         }
         length = len;
@@ -157,7 +157,7 @@ final class ScaledRow {
                 continue;
             }
             acc.clear();
-            acc.multiplyAdd(src.values, j, factor.values, 0, 0);
+            acc.multiplyAdd(src.values, j, factor.values, 0);
             store(acc, j, src.exponent[j] + factor.exponent[0]);
         }
         length = src.length;
