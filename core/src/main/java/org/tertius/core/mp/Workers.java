@@ -9,7 +9,8 @@ import org.tertius.core.TertiusException;
 
 /**
  * The threads of the parallel parts of high-precision runs (the continued fractions of the components of a
- * step; the two accuracies of a {@code HighPrecisionSolution}): a shared pool of daemon threads that grows as
+ * step; the lockstep partner of an expansion, {@link LockstepPartner}; the two accuracies of a
+ * {@code HighPrecisionSolution}): a shared pool of daemon threads that grows as
  * needed (tasks may wait for tasks without a deadlock) and lets idle threads go after a minute. On a machine with
  * one processor, or with {@code -Dtertius.parallel=false}, nothing is run in parallel.
  */
