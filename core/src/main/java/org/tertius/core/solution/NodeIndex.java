@@ -20,8 +20,15 @@ final class NodeIndex {
     private final ConcurrentHashMap<Long, int[]> cells = new ConcurrentHashMap<>();
     private volatile int[] large = EMPTY;
 
+    /**
+     * The cell (i, j) as a map key: the packed pair passed through a bijection of the longs (an odd multiplier,
+     * then an xor-shift), so that Long's hash, the xor of the two halves, differs between neighbouring cells; the
+     * packed pair alone hashes to i ^ j, the same along whole diagonals, which piled the cells of a disk into a
+     * few bins.
+     */
     private static long key(long i, long j) {
-        return (i << 32) ^ (j & 0xffffffffL);
+        long k = ((i << 32) ^ (j & 0xffffffffL)) * 0x9E3779B97F4A7C15L;
+        return k ^ (k >>> 29);
     }
 
     /** Adds a node; call under the owner's lock. */
