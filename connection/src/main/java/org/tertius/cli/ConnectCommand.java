@@ -4,7 +4,7 @@ import java.io.PrintWriter;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import java.util.concurrent.Callable;
+import org.apache.commons.cli.Options;
 import org.apfloat.Apcomplex;
 import org.hipparchus.complex.Complex;
 import org.tertius.connection.closed.McCoyTracyWu;
@@ -12,43 +12,57 @@ import org.tertius.connection.match.DecayingConnection;
 import org.tertius.connection.match.ZeroFit;
 import org.tertius.connection.num.ApcomplexArith;
 import org.tertius.core.InvalidInputException;
-import picocli.CommandLine.Command;
-import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Model.CommandSpec;
-import picocli.CommandLine.Option;
-import picocli.CommandLine.Spec;
 
 /** Connection data of the decaying family of PIII(0, 0, 1, -1) between +infinity and 0. */
-@Command(name = "connect", mixinStandardHelpOptions = true,
-        description = "Decaying family w ~ 1 - 2 lambda K0(2x) of PIII(0,0,1,-1): from lambda (at infinity) to"
-                + " sigma and B of w ~ B x^sigma at 0, or from sigma back to lambda; numerically and from the"
-                + " closed form, each with an error estimate.")
-public final class ConnectCommand implements Callable<Integer> {
-    @Spec
-    CommandSpec spec;
-    @Mixin
-    SolverOptions solver = new SolverOptions();
-    @Option(names = "--lambda", paramLabel = "L", description = "parameter at infinity, |lambda| < 1/pi")
+public final class ConnectCommand implements Command {
+    final SolverOptions solver = new SolverOptions();
     String lambda;
-    @Option(names = "--sigma", paramLabel = "S", description = "exponent at 0, |sigma| < 1 (the other direction)")
     Double sigma;
-    @Option(names = "--x0", paramLabel = "X", description = "where (sigma, B) are fitted (default 1e-3)")
-    double x0 = 1e-3;
-    @Option(names = "--digits", paramLabel = "D",
-            description = "also match in arbitrary precision with this many digits (slow: tens of seconds)")
+    double x0;
     Integer digits;
-    @Option(names = "--format", paramLabel = "FMT", description = "csv (default) or text")
-    String format = "csv";
+    String format;
 
     @Override
-    public Integer call() {
-        PrintWriter out = spec.commandLine().getOut();
+    public String name() {
+        return "connect";
+    }
+
+    @Override
+    public String description() {
+        return "Decaying family w ~ 1 - 2 lambda K0(2x) of PIII(0,0,1,-1): from lambda (at infinity) to sigma and B"
+                + " of w ~ B x^sigma at 0, or from sigma back to lambda; numerically and from the closed form, each"
+                + " with an error estimate.";
+    }
+
+    @Override
+    public List<OptionGroup> groups() {
+        return List.of(solver);
+    }
+
+    @Override
+    public void declare(Options o) {
+        o.addOption(Opts.value("--lambda", "L", "parameter at infinity, |lambda| < 1/pi"));
+        o.addOption(Opts.value("--sigma", "S", "exponent at 0, |sigma| < 1 (the other direction)"));
+        o.addOption(Opts.value("--x0", "X", "where (sigma, B) are fitted (default 1e-3)"));
+        o.addOption(Opts.value("--digits", "D",
+                "also match in arbitrary precision with this many digits (slow: tens of seconds)"));
+        o.addOption(Opts.value("--format", "FMT", "csv (default) or text"));
+    }
+
+    @Override
+    public void read(Arguments a) {
+        lambda = a.text("--lambda");
+        sigma = a.number("--sigma", "a number in (-1, 1)");
+        x0 = a.has("--x0") ? a.number("--x0", null) : 1e-3;
+        digits = a.integer("--digits", null);
+        format = a.choice("--format", "csv", "text");
+    }
+
+    @Override
+    public int run(PrintWriter out, PrintWriter err) {
         if ((lambda == null) == (sigma == null)) {
             throw new InvalidInputException("--lambda", "give exactly one of --lambda (data at infinity) or --sigma"
                     + " (data at 0)");
-        }
-        if (!"csv".equals(format) && !"text".equals(format)) {
-            throw new InvalidInputException("--format", "must be csv or text, got " + format);
         }
         List<String[]> rows = new ArrayList<>();
         if (lambda != null) {

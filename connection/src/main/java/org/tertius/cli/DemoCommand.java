@@ -6,9 +6,9 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.concurrent.Callable;
 import java.awt.image.BufferedImage;
 import javax.imageio.ImageIO;
+import org.apache.commons.cli.Options;
 import org.tertius.core.number.ComplexText;
 import org.tertius.core.region.Grid;
 import org.tertius.core.region.GridResult;
@@ -22,36 +22,46 @@ import org.tertius.core.number.SurfacePoint;
 import org.tertius.core.piii.Painleve3;
 import org.tertius.core.piii.Painleve3Solution;
 import org.tertius.core.piii.Painleve3Value;
-import picocli.CommandLine.Command;
-import picocli.CommandLine.Model.CommandSpec;
-import picocli.CommandLine.Option;
-import picocli.CommandLine.Spec;
 
 /**
  * The built-in demo scenario: a generic D6 solution (alpha = 1, beta = -1/2, gamma = 1, delta = -1,
  * w(1) = 1/2, w'(1) = 1/3): values at points of three sheets, a table and a plot along the positive real axis
  * with its poles, and the pole field of the principal sheet as a picture and a pole list.
  */
-@Command(name = "demo", mixinStandardHelpOptions = true,
-        description = "Run the built-in scenario (a generic D6 solution) and write its results into a folder.")
-public final class DemoCommand implements Callable<Integer> {
+public final class DemoCommand implements Command {
     static final Painleve3 EQUATION = Painleve3.of(1, -0.5, 1, -1);
     static final Complex Z0 = Complex.ONE;
     static final Complex W0 = new Complex(0.5);
     static final Complex DW0 = new Complex(1.0 / 3.0);
 
-    @Spec
-    CommandSpec spec;
-    @Option(names = "--out", paramLabel = "DIR", description = "output folder (default tertius-demo)")
-    Path out = Path.of("tertius-demo");
+    Path out;
 
     static Painleve3Solution solution() {
         return Painleve3Solution.builder(EQUATION).start(Z0, W0, DW0).build();
     }
 
     @Override
-    public Integer call() throws IOException {
-        PrintWriter console = spec.commandLine().getOut();
+    public String name() {
+        return "demo";
+    }
+
+    @Override
+    public String description() {
+        return "Run the built-in scenario (a generic D6 solution) and write its results into a folder.";
+    }
+
+    @Override
+    public void declare(Options o) {
+        o.addOption(Opts.value("--out", "DIR", "output folder (default tertius-demo)"));
+    }
+
+    @Override
+    public void read(Arguments a) {
+        out = a.has("--out") ? a.path("--out") : Path.of("tertius-demo");
+    }
+
+    @Override
+    public int run(PrintWriter console, PrintWriter err) throws IOException {
         try {
             Files.createDirectories(out);
         } catch (IOException e) {

@@ -1,30 +1,41 @@
 package org.tertius.cli;
 
-import java.util.concurrent.Callable;
+import java.io.PrintWriter;
+import org.apache.commons.cli.Options;
 import org.tertius.core.InvalidInputException;
 import org.tertius.hierarchy.HierarchyMember;
-import picocli.CommandLine.Command;
-import picocli.CommandLine.Model.CommandSpec;
-import picocli.CommandLine.Option;
-import picocli.CommandLine.Spec;
 
 /** The first-order system of a member of the hierarchy. */
-@Command(name = "describe", mixinStandardHelpOptions = true,
-        description = "Print the unknowns and equations of member N of the Painleve III hierarchy.")
-public final class DescribeCommand implements Callable<Integer> {
-    @Spec
-    CommandSpec spec;
-    @Option(names = "--member", paramLabel = "N", required = true, description = "the member, 1.."
-            + HierarchyMember.MAX_ORDER)
+public final class DescribeCommand implements Command {
     int member;
 
     @Override
-    public Integer call() {
+    public String name() {
+        return "describe";
+    }
+
+    @Override
+    public String description() {
+        return "Print the unknowns and equations of member N of the Painleve III hierarchy.";
+    }
+
+    @Override
+    public void declare(Options o) {
+        o.addOption(Opts.required("--member", "N", "the member, 1.." + HierarchyMember.MAX_ORDER));
+    }
+
+    @Override
+    public void read(Arguments a) {
+        member = a.integer("--member", "an integer in [1, " + HierarchyMember.MAX_ORDER + "]");
+    }
+
+    @Override
+    public int run(PrintWriter out, PrintWriter err) {
         if (member < 1 || member > HierarchyMember.MAX_ORDER) {
             throw new InvalidInputException("--member", "must be in [1, " + HierarchyMember.MAX_ORDER + "], got " + member);
         }
-        spec.commandLine().getOut().print(HierarchyMember.of(member).describe());
-        spec.commandLine().getOut().flush();
+        out.print(HierarchyMember.of(member).describe());
+        out.flush();
         return 0;
     }
 }

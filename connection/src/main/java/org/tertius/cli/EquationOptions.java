@@ -1,21 +1,33 @@
 package org.tertius.cli;
 
+import org.apache.commons.cli.Options;
 import org.hipparchus.complex.Complex;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.number.ComplexText;
 import org.tertius.core.piii.Painleve3;
-import picocli.CommandLine.Option;
 
 /** The four parameters of Painleve III (complex numbers a+bi or rationals p/q). */
-public final class EquationOptions {
-    @Option(names = "--alpha", paramLabel = "A", description = "alpha (complex a+bi or p/q)")
+public final class EquationOptions implements OptionGroup {
     String alpha;
-    @Option(names = "--beta", paramLabel = "B", description = "beta")
     String beta;
-    @Option(names = "--gamma", paramLabel = "G", description = "gamma")
     String gamma;
-    @Option(names = "--delta", paramLabel = "D", description = "delta")
     String delta;
+
+    @Override
+    public void declare(Options o) {
+        o.addOption(Opts.value("--alpha", "A", "alpha (complex a+bi or p/q)"));
+        o.addOption(Opts.value("--beta", "B", "beta"));
+        o.addOption(Opts.value("--gamma", "G", "gamma"));
+        o.addOption(Opts.value("--delta", "D", "delta"));
+    }
+
+    @Override
+    public void read(Arguments a) {
+        alpha = a.text("--alpha");
+        beta = a.text("--beta");
+        gamma = a.text("--gamma");
+        delta = a.text("--delta");
+    }
 
     /** Fills unset options from a problem file. */
     void defaults(ProblemFile p) {

@@ -2,39 +2,57 @@ package org.tertius.cli;
 
 import java.io.PrintWriter;
 import java.util.List;
-import java.util.concurrent.Callable;
+import org.apache.commons.cli.Options;
 import org.tertius.core.TertiusException;
 import org.tertius.core.number.SurfacePoint;
+import org.tertius.core.piii.HighPrecisionSolution;
 import org.tertius.core.piii.Painleve3Solution;
-import picocli.CommandLine.Command;
-import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Model.CommandSpec;
-import picocli.CommandLine.Option;
-import picocli.CommandLine.Spec;
 
 /** Values of one solution at chosen points of the Riemann surface. */
-@Command(name = "eval", mixinStandardHelpOptions = true,
-        description = "Evaluate a solution at points of its Riemann surface; CSV with error estimates."
-                + " err is the larger of the estimated absolute errors of w and w'.")
-public final class EvalCommand implements Callable<Integer> {
-    @Spec
-    CommandSpec spec;
-    @Mixin
-    SolutionOptions solution = new SolutionOptions();
-    @Option(names = "--at", paramLabel = "Z[,Z...]", description = "targets, complex numbers a+bi separated by commas")
+public final class EvalCommand implements Command {
+    /** What --digits accepts (the high-precision solver checks the range). */
+    static final String DIGITS = "an integer in [" + HighPrecisionSolution.MIN_DIGITS + ", "
+            + HighPrecisionSolution.MAX_DIGITS + "]";
+
+    final SolutionOptions solution = new SolutionOptions();
+    final MemberOptions member = new MemberOptions();
     String at;
-    @Option(names = "--sheet", paramLabel = "K", description = "sheet of the targets (argument in (-pi,pi] + 2 pi K)")
     Integer sheet;
-    @Option(names = "--digits", paramLabel = "D", description = "compute to D significant digits (16..5000) in"
-            + " arbitrary precision; start data and parameters are then read exactly (decimals or p/q)")
     Integer digits;
-    @Mixin
-    MemberOptions member = new MemberOptions();
 
     @Override
-    public Integer call() {
-        PrintWriter out = spec.commandLine().getOut();
-        PrintWriter err = spec.commandLine().getErr();
+    public String name() {
+        return "eval";
+    }
+
+    @Override
+    public String description() {
+        return "Evaluate a solution at points of its Riemann surface; CSV with error estimates."
+                + " err is the larger of the estimated absolute errors of w and w'.";
+    }
+
+    @Override
+    public List<OptionGroup> groups() {
+        return List.of(solution, member);
+    }
+
+    @Override
+    public void declare(Options o) {
+        o.addOption(Opts.value("--at", "Z[,Z...]", "targets, complex numbers a+bi separated by commas"));
+        o.addOption(Opts.value("--sheet", "K", "sheet of the targets (argument in (-pi,pi] + 2 pi K)"));
+        o.addOption(Opts.value("--digits", "D", "compute to D significant digits (16..5000) in arbitrary precision;"
+                + " start data and parameters are then read exactly (decimals or p/q)"));
+    }
+
+    @Override
+    public void read(Arguments a) {
+        at = a.text("--at");
+        sheet = a.integer("--sheet", null);
+        digits = a.integer("--digits", DIGITS);
+    }
+
+    @Override
+    public int run(PrintWriter out, PrintWriter err) {
         ProblemFile f = solution.file();
         String targets = at != null ? at : f.get("at");
         List<SurfacePoint> points = Targets.list("--at", targets, solution.sheet(sheet));
@@ -47,7 +65,7 @@ public final class EvalCommand implements Callable<Integer> {
         }
         if (digits != null) {
             try (Progress progress = new Progress("eval")) {
-                org.tertius.core.piii.HighPrecisionSolution hp = HighPrecisionRows.solution(solution, digits, progress);
+                HighPrecisionSolution hp = HighPrecisionRows.solution(solution, digits, progress);
                 out.println("# " + solution.equationValue() + ", " + digits + " digits; digits: estimated correct"
                         + " significant digits of w and w'");
                 out.println(HighPrecisionRows.HEADER);

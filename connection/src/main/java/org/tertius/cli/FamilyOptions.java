@@ -2,48 +2,62 @@ package org.tertius.cli;
 
 import java.util.LinkedHashMap;
 import java.util.Map;
+import org.apache.commons.cli.Options;
 import org.tertius.connection.family.Families;
 import org.tertius.core.piii.Painleve3;
 import org.tertius.core.piii.Painleve3Solution;
 import org.tertius.core.step.SolverSettings;
-import picocli.CommandLine.Option;
 
 /**
  * A solution given by connection data instead of start data: {@code --family NAME} with its parameters
  * (decaying: --lambda; power: --sigma --amplitude; analytic: --value-at-zero; algebraic: --background;
  * oscillating: --amplitude-infinity --phase).
  */
-public final class FamilyOptions {
-    @Option(names = "--family", paramLabel = "NAME",
-            description = "solution by connection data: decaying (needs --lambda; alpha=0 beta=0 gamma=1 delta=-1),"
-                    + " power (--sigma, --amplitude: w ~ B z^sigma at 0), analytic (--value-at-zero: w(0)),"
-                    + " algebraic (--background: w ~ c + sum a_k x^-k at +infinity, gamma c^4 + delta = 0),"
-                    + " oscillating (--amplitude-infinity, --phase; alpha=0 beta=0 gamma=-1 delta=1:"
-                    + " log w ~ A x^(-1/2) cos(2x + (A^2/2) log x + phi))")
+public final class FamilyOptions implements OptionGroup {
     String family;
-    @Option(names = "--lambda", paramLabel = "L", description = "decaying family: w ~ 1 - 2 lambda K0(2x) at +infinity")
     String lambda;
-    @Option(names = "--sigma", paramLabel = "S", description = "power family: exponent at 0, |Re sigma| < 1")
     String sigma;
-    @Option(names = "--amplitude", paramLabel = "B", description = "power family: B in w ~ B z^sigma")
     String amplitude;
-    @Option(names = "--value-at-zero", paramLabel = "W", description = "analytic family: w(0) != 0")
     String valueAtZero;
-    @Option(names = "--background", paramLabel = "C",
-            description = "algebraic family: the constant c at +infinity (gamma c^4 + delta = 0), a value or"
-                    + " root0..root3 (the fourth roots of -delta/gamma, principal root times i^k)")
     String background;
-
-    @Option(names = "--amplitude-infinity", paramLabel = "A",
-            description = "oscillating family: A in log w ~ A x^(-1/2) cos(2x + (A^2/2) log x + phi), real, |A| <= 3")
     String amplitudeInfinity;
-    @Option(names = "--phase", paramLabel = "PHI", description = "oscillating family: the phase constant phi (real)")
     String phase;
-
-    @Option(names = "--family-x0", paramLabel = "X",
-            description = "where the family's expansion hands over to the integrator (algebraic, oscillating: at"
-                    + " +infinity; decaying at lambda = 1/pi: in (0, 0.2]); default: chosen from the error estimate")
     String familyX0;
+
+    @Override
+    public void declare(Options o) {
+        o.addOption(Opts.value("--family", "NAME", "solution by connection data: decaying (needs --lambda; alpha=0"
+                + " beta=0 gamma=1 delta=-1), power (--sigma, --amplitude: w ~ B z^sigma at 0), analytic"
+                + " (--value-at-zero: w(0)), algebraic (--background: w ~ c + sum a_k x^-k at +infinity,"
+                + " gamma c^4 + delta = 0), oscillating (--amplitude-infinity, --phase; alpha=0 beta=0 gamma=-1"
+                + " delta=1: log w ~ A x^(-1/2) cos(2x + (A^2/2) log x + phi))"));
+        o.addOption(Opts.value("--lambda", "L", "decaying family: w ~ 1 - 2 lambda K0(2x) at +infinity"));
+        o.addOption(Opts.value("--sigma", "S", "power family: exponent at 0, |Re sigma| < 1"));
+        o.addOption(Opts.value("--amplitude", "B", "power family: B in w ~ B z^sigma"));
+        o.addOption(Opts.value("--value-at-zero", "W", "analytic family: w(0) != 0"));
+        o.addOption(Opts.value("--background", "C", "algebraic family: the constant c at +infinity"
+                + " (gamma c^4 + delta = 0), a value or root0..root3 (the fourth roots of -delta/gamma, principal"
+                + " root times i^k)"));
+        o.addOption(Opts.value("--amplitude-infinity", "A", "oscillating family: A in log w ~ A x^(-1/2)"
+                + " cos(2x + (A^2/2) log x + phi), real, |A| <= 3"));
+        o.addOption(Opts.value("--phase", "PHI", "oscillating family: the phase constant phi (real)"));
+        o.addOption(Opts.value("--family-x0", "X", "where the family's expansion hands over to the integrator"
+                + " (algebraic, oscillating: at +infinity; decaying at lambda = 1/pi: in (0, 0.2]); default: chosen"
+                + " from the error estimate"));
+    }
+
+    @Override
+    public void read(Arguments a) {
+        family = a.text("--family");
+        lambda = a.text("--lambda");
+        sigma = a.text("--sigma");
+        amplitude = a.text("--amplitude");
+        valueAtZero = a.text("--value-at-zero");
+        background = a.text("--background");
+        amplitudeInfinity = a.text("--amplitude-infinity");
+        phase = a.text("--phase");
+        familyX0 = a.text("--family-x0");
+    }
 
     public boolean given() {
         return family != null;

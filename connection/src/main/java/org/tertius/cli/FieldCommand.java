@@ -5,8 +5,8 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
-import java.util.concurrent.Callable;
 import javax.imageio.ImageIO;
+import org.apache.commons.cli.Options;
 import org.hipparchus.complex.Complex;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.TertiusException;
@@ -18,41 +18,60 @@ import org.tertius.core.region.PoleFinder;
 import org.tertius.core.region.RegionSettings;
 import org.tertius.core.region.RegionSolver;
 import org.tertius.core.region.Singularity;
-import picocli.CommandLine.Command;
-import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Model.CommandSpec;
-import picocli.CommandLine.Option;
-import picocli.CommandLine.Spec;
 
 /** A PNG picture of a solution over a region, or a line plot of w along a segment. */
-@Command(name = "field", mixinStandardHelpOptions = true,
-        description = "Draw the solution over a region of one sheet (--grid) or a strip in log z (--log-strip) as a PNG: colour shows the phase, lightness"
-                + " the modulus (zeros black, poles white), located poles and zeros ringed; or plot Re w and Im w"
-                + " along a segment (--line) with its poles marked.")
-public final class FieldCommand implements Callable<Integer> {
-    @Spec
-    CommandSpec spec;
-    @Mixin
-    SolutionOptions solution = new SolutionOptions();
-    @Option(names = "--grid", paramLabel = "RE0:RE1:NX,IM0:IM1:NY", description = "the region (one sheet)")
+public final class FieldCommand implements Command {
+    final SolutionOptions solution = new SolutionOptions();
+    final MemberOptions member = new MemberOptions();
     String grid;
-    @Option(names = "--line", paramLabel = "A:B:N", description = "plot w along this segment instead")
     String line;
-    @Option(names = "--log-strip", paramLabel = "LOGR0:LOGR1:NX,ARG0:ARG1:NY", description = Regions.LOG_STRIP_HELP)
     String logStrip;
-    @Option(names = "--sheet", paramLabel = "K", description = "sheet (default 0)")
     Integer sheet;
-    @Option(names = "--out", paramLabel = "FILE.png", required = true, description = "the PNG file")
     Path out;
-    @Option(names = "--size", paramLabel = "WxH", description = "picture size in pixels (default 900x720)")
-    String size = "900x720";
-    @Option(names = "--no-marks", description = "do not locate and mark poles and zeros")
+    String size;
     boolean noMarks;
-    @Mixin
-    MemberOptions member = new MemberOptions();
 
     @Override
-    public Integer call() {
+    public String name() {
+        return "field";
+    }
+
+    @Override
+    public String description() {
+        return "Draw the solution over a region of one sheet (--grid) or a strip in log z (--log-strip) as a PNG:"
+                + " colour shows the phase, lightness the modulus (zeros black, poles white), located poles and zeros"
+                + " ringed; or plot Re w and Im w along a segment (--line) with its poles marked.";
+    }
+
+    @Override
+    public List<OptionGroup> groups() {
+        return List.of(solution, member);
+    }
+
+    @Override
+    public void declare(Options o) {
+        o.addOption(Opts.value("--grid", "RE0:RE1:NX,IM0:IM1:NY", "the region (one sheet)"));
+        o.addOption(Opts.value("--line", "A:B:N", "plot w along this segment instead"));
+        o.addOption(Opts.value("--log-strip", "LOGR0:LOGR1:NX,ARG0:ARG1:NY", Regions.LOG_STRIP_HELP));
+        o.addOption(Opts.value("--sheet", "K", "sheet (default 0)"));
+        o.addOption(Opts.required("--out", "FILE.png", "the PNG file"));
+        o.addOption(Opts.value("--size", "WxH", "picture size in pixels (default 900x720)"));
+        o.addOption(Opts.flag("--no-marks", "do not locate and mark poles and zeros"));
+    }
+
+    @Override
+    public void read(Arguments a) {
+        grid = a.text("--grid");
+        line = a.text("--line");
+        logStrip = a.text("--log-strip");
+        sheet = a.integer("--sheet", null);
+        out = a.path("--out");
+        size = a.has("--size") ? a.text("--size") : "900x720";
+        noMarks = a.has("--no-marks");
+    }
+
+    @Override
+    public int run(PrintWriter stdout, PrintWriter err) {
         ProblemFile f = solution.file();
         String gridSpec = grid != null ? grid : (line == null && logStrip == null ? f.get("grid") : null);
         String lineSpec = line != null ? line : (grid == null && logStrip == null ? f.get("line") : null);
@@ -63,7 +82,6 @@ public final class FieldCommand implements Callable<Integer> {
         int[] wh = parseSize(size);
         OutputFile.checkWritable("--out", out);
         int k = solution.sheet(sheet);
-        PrintWriter err = spec.commandLine().getErr();
         member.defaults(f);
         if (member.given()) {
             if (lineSpec == null) {

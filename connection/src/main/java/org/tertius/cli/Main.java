@@ -1,47 +1,58 @@
 package org.tertius.cli;
 
+import java.io.IOException;
 import java.io.PrintWriter;
+import java.io.UncheckedIOException;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import java.util.Map;
+import org.apache.commons.cli.Options;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.TertiusException;
-import picocli.CommandLine;
-import picocli.CommandLine.Command;
 
 /**
  * The tertius command-line tool. Exit status: 0 success, 2 bad input (one line on standard error naming the
  * argument), 3 some targets could not be computed to the requested accuracy (reported, never silent),
  * 130 interrupted.
  */
-@Command(name = "tertius", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
-        description = "Painleve III transcendents on their Riemann surface: values, tables, pole fields,"
-                + " connection problems and solution scans, with error estimates.")
-public final class Main implements Runnable {
+public final class Main {
     public static final int EXIT_BAD_INPUT = 2;
     public static final int EXIT_UNREACHED = 3;
     public static final int EXIT_INTERRUPTED = 130;
 
-    /**
-     * The subcommands in the order of the help text. They are built on demand: picocli reflects over every
-     * option of a command it is given, and doing so for all eight costs about 0.3 s of a cold JVM, most of the
-     * start-up of a one-point evaluation.
-     */
-    private static final java.util.Map<String, java.util.function.Supplier<Object>> COMMANDS = commands();
+    static final String DESCRIPTION = "Painleve III transcendents on their Riemann surface: values, tables, pole"
+            + " fields, connection problems and solution scans, with error estimates.";
 
-    private static java.util.Map<String, java.util.function.Supplier<Object>> commands() {
-        java.util.Map<String, java.util.function.Supplier<Object>> m = new java.util.LinkedHashMap<>();
-        m.put("eval", EvalCommand::new);
-        m.put("table", TableCommand::new);
-        m.put("field", FieldCommand::new);
-        m.put("poles", PolesCommand::new);
-        m.put("describe", DescribeCommand::new);
-        m.put("connect", ConnectCommand::new);
-        m.put("scan", ScanCommand::new);
-        m.put("demo", DemoCommand::new);
-        return java.util.Collections.unmodifiableMap(m);
+    /** The commands in the order of the help text. */
+    static final List<String> COMMANDS = List.of("eval", "table", "field", "poles", "describe", "connect", "scan",
+            "demo");
+
+    private Main() {
     }
 
-    @Override
-    public void run() {
-        CommandLine.usage(this, System.out);
+    /** The command of that name, or null; only the command that runs is built. */
+    static Command command(String name) {
+        switch (name) {
+            case "eval":
+                return new EvalCommand();
+            case "table":
+                return new TableCommand();
+            case "field":
+                return new FieldCommand();
+            case "poles":
+                return new PolesCommand();
+            case "describe":
+                return new DescribeCommand();
+            case "connect":
+                return new ConnectCommand();
+            case "scan":
+                return new ScanCommand();
+            case "demo":
+                return new DemoCommand();
+            default:
+                return null;
+        }
     }
 
     public static void main(String[] args) {
@@ -50,60 +61,89 @@ public final class Main implements Runnable {
 
     /** Runs the tool with the given streams (used by tests); returns the exit status. */
     public static int execute(String[] args, PrintWriter out, PrintWriter err) {
-        CommandLine cl = commandLine(args.length > 0 ? args[0] : null);
-        cl.setOut(out);
-        cl.setErr(err);
-        return cl.execute(args);
-    }
-
-    /** The command line with all its subcommands and error handling. */
-    public static CommandLine commandLine() {
-        return commandLine(null);
-    }
-
-    /**
-     * The command line with error handling; when {@code first} names a subcommand only that one is built
-     * (a run of one command needs no other), otherwise all of them (help text, unknown-command messages).
-     */
-    static CommandLine commandLine(String first) {
-        CommandLine cl = new CommandLine(new Main());
-        if (first != null && COMMANDS.containsKey(first)) {
-            cl.addSubcommand(COMMANDS.get(first).get());
-        } else {
-            COMMANDS.values().forEach(c -> cl.addSubcommand(c.get()));
-        }
-        cl.setParameterExceptionHandler((ex, args) -> {
-            CommandLine where = ex.getCommandLine();
-            String help = where.getParent() == null ? "tertius --help" : "tertius " + where.getCommandName() + " --help";
-            where.getErr().println("tertius: " + ex.getMessage() + " (see '" + help + "')");
+        Command command = args.length > 0 ? command(args[0]) : null;
+        try {
+            if (command == null) {
+                return tool(args, out);
+            }
+            return run(command, Arrays.copyOfRange(args, 1, args.length), out, err);
+        } catch (UsageException e) {
+            err.println("tertius: " + e.getMessage() + " (see 'tertius " + (command == null ? "" : command.name() + " ")
+                    + "--help')");
             return EXIT_BAD_INPUT;
-        });
-        cl.setExecutionExceptionHandler((ex, commandLine, parseResult) -> {
-            Throwable t = ex;
-            if (t instanceof InvalidInputException) {
-                commandLine.getErr().println("tertius: " + optionName((InvalidInputException) t));
-                return EXIT_BAD_INPUT;
+        } catch (InvalidInputException e) {
+            err.println("tertius: " + optionName(e));
+            return EXIT_BAD_INPUT;
+        } catch (TertiusException e) {
+            err.println("tertius: " + e.getMessage());
+            return EXIT_UNREACHED;
+        } catch (UncheckedIOException | IOException e) {
+            err.println("tertius: input/output error: " + e.getMessage());
+            return EXIT_BAD_INPUT;
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            err.println("tertius: interrupted");
+            return EXIT_INTERRUPTED;
+        } catch (RuntimeException e) {
+            throw e;
+        } catch (Exception e) {
+            throw new IllegalStateException(e);
+        } finally {
+            out.flush();
+            err.flush();
+        }
+    }
+
+    /** One command: parse, help or version, else read the options and run. */
+    private static int run(Command command, String[] args, PrintWriter out, PrintWriter err) throws Exception {
+        Options options = command.options();
+        Arguments arguments = ArgumentParser.parse(options, args);
+        if (arguments.has("--help")) {
+            Help.command(out, command, options);
+            return 0;
+        }
+        if (arguments.has("--version")) {
+            out.println(version());
+            return 0;
+        }
+        arguments.checkRequired();
+        command.readAll(arguments);
+        return command.run(out, err);
+    }
+
+    /** No command: the tool's help (also without arguments) or version, else an unknown command. */
+    private static int tool(String[] args, PrintWriter out) {
+        if (args.length > 0 && !args[0].startsWith("-")) {
+            throw new UsageException("Unknown command: '" + args[0] + "'");
+        }
+        Options options = new Options();
+        Opts.standard(options);
+        Arguments arguments = ArgumentParser.parse(options, args);
+        if (arguments.has("--version") && !arguments.has("--help")) {
+            out.println(version());
+        } else {
+            List<Command> commands = new ArrayList<>();
+            for (String name : COMMANDS) {
+                commands.add(command(name));
             }
-            if (t instanceof TertiusException) {
-                commandLine.getErr().println("tertius: " + t.getMessage());
-                return EXIT_UNREACHED;
-            }
-            if (t instanceof java.io.UncheckedIOException || t instanceof java.io.IOException) {
-                commandLine.getErr().println("tertius: input/output error: " + t.getMessage());
-                return EXIT_BAD_INPUT;
-            }
-            throw ex;
-        });
-        return cl;
+            Help.tool(out, DESCRIPTION, options, commands);
+        }
+        return 0;
+    }
+
+    /** Version from the jar manifest or the build. */
+    static String version() {
+        String v = Main.class.getPackage().getImplementationVersion();
+        return "tertius " + (v == null ? "0.1.0-SNAPSHOT" : v);
     }
 
     /** Library argument names and the options that set them. */
-    private static final java.util.Map<String, String> OPTIONS = java.util.Map.ofEntries(
-            java.util.Map.entry("digits", "--digits"), java.util.Map.entry("tolerance", "--tol"),
-            java.util.Map.entry("order", "--order"), java.util.Map.entry("maxSteps", "--max-steps"),
-            java.util.Map.entry("z", "--z0"), java.util.Map.entry("w0", "--w0"), java.util.Map.entry("dw0", "--dw0"),
-            java.util.Map.entry("d3w0", "--d3w0"), java.util.Map.entry("alpha", "--alpha"),
-            java.util.Map.entry("beta", "--beta"), java.util.Map.entry("x0", "--family-x0"));
+    private static final Map<String, String> OPTIONS = Map.ofEntries(
+            Map.entry("digits", "--digits"), Map.entry("tolerance", "--tol"),
+            Map.entry("order", "--order"), Map.entry("maxSteps", "--max-steps"),
+            Map.entry("z", "--z0"), Map.entry("w0", "--w0"), Map.entry("dw0", "--dw0"),
+            Map.entry("d3w0", "--d3w0"), Map.entry("alpha", "--alpha"),
+            Map.entry("beta", "--beta"), Map.entry("x0", "--family-x0"));
 
     /** The message with the library's argument name replaced by the option that sets it. */
     static String optionName(InvalidInputException e) {
@@ -114,14 +154,5 @@ public final class Main implements Runnable {
             return option + msg.substring(arg.length());
         }
         return msg;
-    }
-
-    /** Version from the jar manifest or the build. */
-    static final class Version implements CommandLine.IVersionProvider {
-        @Override
-        public String[] getVersion() {
-            String v = Main.class.getPackage().getImplementationVersion();
-            return new String[] {"tertius " + (v == null ? "0.1.0-SNAPSHOT" : v)};
-        }
     }
 }

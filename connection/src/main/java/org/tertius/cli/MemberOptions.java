@@ -3,6 +3,7 @@ package org.tertius.cli;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import org.apache.commons.cli.Options;
 import org.hipparchus.complex.Complex;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.number.ComplexText;
@@ -12,28 +13,42 @@ import org.tertius.hierarchy.HierarchyMember;
 import org.tertius.hierarchy.MemberParameters;
 import org.tertius.hierarchy.MemberSolution;
 import org.tertius.hierarchy.MemberValue;
-import picocli.CommandLine.Option;
 
 /** A member of the Painleve III hierarchy and its start data (see hierarchy/README.md for the convention). */
-public final class MemberOptions {
+public final class MemberOptions implements OptionGroup {
     static final String HEADER = "x_re,x_im,sheet,q_re,q_im,r_re,r_im,dq_re,dq_im,dr_re,dr_im,err,integrals";
 
-    @Option(names = "--member", paramLabel = "N", description = "integrate member N of the hierarchy instead of PIII")
     Integer member;
-    @Option(names = "--times", paramLabel = "T2,..,TN", description = "the times t_2..t_N (complex, t_N != 0)")
     String times;
-    @Option(names = "--s", paramLabel = "S", description = "the constant s of the phase (det a_{-2} = s^2)")
     String s;
-    @Option(names = "--m", paramLabel = "M", description = "the constant m of a_{-1}")
     String m;
-    @Option(names = "--x0", paramLabel = "X", description = "start point x0 (x0 != 0 for member 1)")
     String x0;
-    @Option(names = "--state", paramLabel = "V,..", description = "start state: the unknowns in the order of"
-            + " 'tertius describe --member N'")
     String state;
-    @Option(names = "--origin", paramLabel = "A11,A12,A21",
-            description = "member 1 only: start at x = 0 on the solution analytic there, with a_{-2} = this")
     String origin;
+
+    @Override
+    public void declare(Options o) {
+        o.addOption(Opts.value("--member", "N", "integrate member N of the hierarchy instead of PIII"));
+        o.addOption(Opts.value("--times", "T2,..,TN", "the times t_2..t_N (complex, t_N != 0)"));
+        o.addOption(Opts.value("--s", "S", "the constant s of the phase (det a_{-2} = s^2)"));
+        o.addOption(Opts.value("--m", "M", "the constant m of a_{-1}"));
+        o.addOption(Opts.value("--x0", "X", "start point x0 (x0 != 0 for member 1)"));
+        o.addOption(Opts.value("--state", "V,..", "start state: the unknowns in the order of"
+                + " 'tertius describe --member N'"));
+        o.addOption(Opts.value("--origin", "A11,A12,A21",
+                "member 1 only: start at x = 0 on the solution analytic there, with a_{-2} = this"));
+    }
+
+    @Override
+    public void read(Arguments a) {
+        member = a.integer("--member", "an integer in [1, " + HierarchyMember.MAX_ORDER + "]");
+        times = a.text("--times");
+        s = a.text("--s");
+        m = a.text("--m");
+        x0 = a.text("--x0");
+        state = a.text("--state");
+        origin = a.text("--origin");
+    }
 
     boolean given() {
         return member != null;

@@ -11,7 +11,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
-import java.util.concurrent.Callable;
+import org.apache.commons.cli.Options;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.piii.Painleve3Solution;
 import org.tertius.core.region.Grid;
@@ -19,44 +19,59 @@ import org.tertius.core.region.PoleFinder;
 import org.tertius.core.region.RegionSettings;
 import org.tertius.core.region.RegionSolver;
 import org.tertius.core.region.Singularity;
-import picocli.CommandLine.Command;
-import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Model.CommandSpec;
-import picocli.CommandLine.Option;
-import picocli.CommandLine.Spec;
 
 /** The poles and zeros of w in a region. */
-@Command(name = "poles", mixinStandardHelpOptions = true,
-        description = "List the poles and zeros of w in a region of one sheet (--grid) or a strip in log z (--log-strip): CSV columns kind,z_re,z_im,sheet,"
-                + "lead_re,lead_im,err (lead: the residue at a pole, w' at a zero; err: estimated error of the"
-                + " position), or JSON.")
-public final class PolesCommand implements Callable<Integer> {
+public final class PolesCommand implements Command {
     static final String HEADER = "kind,z_re,z_im,sheet,lead_re,lead_im,err";
 
-    @Spec
-    CommandSpec spec;
-    @Mixin
-    SolutionOptions solution = new SolutionOptions();
-    @Option(names = "--grid", paramLabel = "RE0:RE1:NX,IM0:IM1:NY",
-            description = "the region; the counts set the resolution of the search (e.g. -10:10:201,-10:10:201)")
+    final SolutionOptions solution = new SolutionOptions();
     String grid;
-    @Option(names = "--log-strip", paramLabel = "LOGR0:LOGR1:NX,ARG0:ARG1:NY", description = Regions.LOG_STRIP_HELP)
     String logStrip;
-    @Option(names = "--sheet", paramLabel = "K", description = "sheet (default 0)")
     Integer sheet;
-    @Option(names = "--format", paramLabel = "csv|json", description = "output format (default csv)")
-    String format = "csv";
-    @Option(names = "--out", paramLabel = "FILE", description = "output file (default standard output)")
+    String format;
     Path out;
 
     @Override
-    public Integer call() {
+    public String name() {
+        return "poles";
+    }
+
+    @Override
+    public String description() {
+        return "List the poles and zeros of w in a region of one sheet (--grid) or a strip in log z (--log-strip):"
+                + " CSV columns kind,z_re,z_im,sheet,lead_re,lead_im,err (lead: the residue at a pole, w' at a zero;"
+                + " err: estimated error of the position), or JSON.";
+    }
+
+    @Override
+    public List<OptionGroup> groups() {
+        return List.of(solution);
+    }
+
+    @Override
+    public void declare(Options o) {
+        o.addOption(Opts.value("--grid", "RE0:RE1:NX,IM0:IM1:NY",
+                "the region; the counts set the resolution of the search (e.g. -10:10:201,-10:10:201)"));
+        o.addOption(Opts.value("--log-strip", "LOGR0:LOGR1:NX,ARG0:ARG1:NY", Regions.LOG_STRIP_HELP));
+        o.addOption(Opts.value("--sheet", "K", "sheet (default 0)"));
+        o.addOption(Opts.value("--format", "csv|json", "output format (default csv)"));
+        o.addOption(Opts.value("--out", "FILE", "output file (default standard output)"));
+    }
+
+    @Override
+    public void read(Arguments a) {
+        grid = a.text("--grid");
+        logStrip = a.text("--log-strip");
+        sheet = a.integer("--sheet", null);
+        format = a.choice("--format", "csv", "json");
+        out = a.path("--out");
+    }
+
+    @Override
+    public int run(PrintWriter stdout, PrintWriter err) {
         String gridSpec = grid != null ? grid : (logStrip == null ? solution.file().get("grid") : null);
         if (gridSpec == null && logStrip == null) {
             throw new InvalidInputException("--grid", "a region is required: --grid RE0:RE1:NX,IM0:IM1:NY");
-        }
-        if (!format.equals("csv") && !format.equals("json")) {
-            throw new InvalidInputException("--format", "must be csv or json, got '" + format + "'");
         }
         if (out != null) {
             OutputFile.checkWritable("--out", out);
@@ -70,11 +85,11 @@ public final class PolesCommand implements Callable<Integer> {
         }
         String text = format.equals("csv") ? csv(found) : json(s, g, found);
         if (out == null) {
-            spec.commandLine().getOut().print(text);
-            spec.commandLine().getOut().flush();
+            stdout.print(text);
+            stdout.flush();
         } else {
             OutputFile.writeWhole("--out", out, p -> Files.writeString(p, text, StandardCharsets.UTF_8));
-            spec.commandLine().getErr().println("tertius: wrote " + found.size() + " poles and zeros to " + out);
+            err.println("tertius: wrote " + found.size() + " poles and zeros to " + out);
         }
         return 0;
     }

@@ -10,40 +10,62 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
-import java.util.concurrent.Callable;
+import org.apache.commons.cli.Options;
 import org.tertius.connection.scan.Classification;
 import org.tertius.connection.scan.DecayingClassifier;
 import org.tertius.connection.scan.ScanPlot;
 import org.tertius.connection.scan.ScanRunner;
 import org.tertius.core.InvalidInputException;
-import picocli.CommandLine.Command;
-import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Model.CommandSpec;
-import picocli.CommandLine.Option;
-import picocli.CommandLine.Spec;
 
 /** A sweep of the decaying family over lambda with classification of each member. */
-@Command(name = "scan", mixinStandardHelpOptions = true,
-        description = "Sweep lambda of the decaying family w ~ 1 - 2 lambda K0(2x) of PIII(0,0,1,-1); classify each"
-                + " member (pole-free on the positive axis, first zero or pole, behaviour at 0) to CSV streamed in"
-                + " order; progress on standard error; resume by re-running with the same --output.")
-public final class ScanCommand implements Callable<Integer> {
-    @Spec
-    CommandSpec spec;
-    @Mixin
-    SolverOptions solver = new SolverOptions();
-    @Option(names = "--range", paramLabel = "A:B:N", required = true, description = "lambda from A to B, N values")
+public final class ScanCommand implements Command {
+    final SolverOptions solver = new SolverOptions();
     String range;
-    @Option(names = {"--out", "--output"}, paramLabel = "FILE", description = "CSV file (rows already there are kept and"
-            + " their tasks skipped); default standard output")
     Path output;
-    @Option(names = "--plot", paramLabel = "FILE.png", description = "PNG plot of the first singularity and sigma")
     Path plot;
-    @Option(names = "--threads", paramLabel = "N", description = "worker threads (default: processors)")
-    int threads = Runtime.getRuntime().availableProcessors();
+    int threads;
 
     @Override
-    public Integer call() throws InterruptedException {
+    public String name() {
+        return "scan";
+    }
+
+    @Override
+    public String description() {
+        return "Sweep lambda of the decaying family w ~ 1 - 2 lambda K0(2x) of PIII(0,0,1,-1); classify each member"
+                + " (pole-free on the positive axis, first zero or pole, behaviour at 0) to CSV streamed in order;"
+                + " progress on standard error; resume by re-running with the same --output.";
+    }
+
+    @Override
+    public List<OptionGroup> groups() {
+        return List.of(solver);
+    }
+
+    @Override
+    public void declare(Options o) {
+        o.addOption(Opts.required("--range", "A:B:N", "lambda from A to B, N values"));
+        o.addOption(Opts.value("--out", "FILE", "CSV file (rows already there are kept and their tasks skipped);"
+                + " default standard output"));
+        o.addOption(Opts.value("--output", "FILE", "the same as --out"));
+        o.addOption(Opts.value("--plot", "FILE.png", "PNG plot of the first singularity and sigma"));
+        o.addOption(Opts.value("--threads", "N", "worker threads (default: processors)"));
+    }
+
+    @Override
+    public void read(Arguments a) {
+        range = a.text("--range");
+        if (a.has("--out") && a.has("--output")) {
+            throw new UsageException("give --out or --output (the same option), not both");
+        }
+        output = a.path(a.has("--out") ? "--out" : "--output");
+        plot = a.path("--plot");
+        Integer n = a.integer("--threads", "an integer >= 1");
+        threads = n != null ? n : Runtime.getRuntime().availableProcessors();
+    }
+
+    @Override
+    public int run(PrintWriter out, PrintWriter err) throws InterruptedException {
         String[] p = range.split(":");
         if (p.length != 3) {
             throw new InvalidInputException("--range", "expected A:B:N, e.g. 0.05:0.6:50");
@@ -53,10 +75,9 @@ public final class ScanCommand implements Callable<Integer> {
         int n = Targets.count("--range", p[2], 2);
         List<Double> grid = ScanRunner.grid(a, b, n);
         Map<Integer, Classification> done = ScanRunner.readExisting(output);
-        PrintWriter err = spec.commandLine().getErr();
         DecayingClassifier classifier = new DecayingClassifier(solver.settings());
         List<Classification> rows;
-        try (Writer w = writer()) {
+        try (Writer w = writer(out)) {
             w.write("# decaying family of PIII(0,0,1,-1), w ~ 1 - 2 lambda K0(2x); scan of lambda " + range + "\n");
             w.write(Classification.CSV_HEADER + "\n");
             rows = new ScanRunner(threads).run(grid, classifier::classify, done, w,
@@ -72,9 +93,9 @@ public final class ScanCommand implements Callable<Integer> {
         return 0;
     }
 
-    private Writer writer() throws IOException {
+    private Writer writer(PrintWriter out) throws IOException {
         if (output == null) {
-            return new KeepOpen(spec.commandLine().getOut());
+            return new KeepOpen(out);
         }
         return Files.newBufferedWriter(output, StandardCharsets.UTF_8);
     }

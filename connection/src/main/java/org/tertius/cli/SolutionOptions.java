@@ -1,27 +1,38 @@
 package org.tertius.cli;
 
 import java.nio.file.Path;
+import java.util.List;
+import org.apache.commons.cli.Options;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.piii.Painleve3;
 import org.tertius.core.piii.Painleve3Solution;
-import picocli.CommandLine.ArgGroup;
-import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Option;
 
 /** Everything that fixes one solution: equation, start data (or a problem file), solver settings. */
-public final class SolutionOptions {
-    @Option(names = "--problem", paramLabel = "FILE", description = "problem file (key = value lines); options win")
+public final class SolutionOptions implements OptionGroup {
     Path problem;
-    @Mixin
-    EquationOptions equation = new EquationOptions();
-    @Mixin
-    StartOptions start = new StartOptions();
-    @Mixin
-    SolverOptions solver = new SolverOptions();
-    @Mixin
-    FamilyOptions family = new FamilyOptions();
+    final EquationOptions equation = new EquationOptions();
+    final StartOptions start = new StartOptions();
+    final SolverOptions solver = new SolverOptions();
+    final FamilyOptions family = new FamilyOptions();
+    private final List<OptionGroup> parts = List.of(equation, start, solver, family);
 
     private ProblemFile file;
+
+    @Override
+    public void declare(Options o) {
+        o.addOption(Opts.value("--problem", "FILE", "problem file (key = value lines); options win"));
+        for (OptionGroup g : parts) {
+            g.declare(o);
+        }
+    }
+
+    @Override
+    public void read(Arguments a) {
+        problem = a.path("--problem");
+        for (OptionGroup g : parts) {
+            g.read(a);
+        }
+    }
 
     /** The problem file (read once). */
     ProblemFile file() {

@@ -1,17 +1,28 @@
 package org.tertius.cli;
 
+import org.apache.commons.cli.Options;
 import org.tertius.core.step.SolverSettings;
-import picocli.CommandLine.Option;
 
 /** Integrator settings. */
-public final class SolverOptions {
-    @Option(names = "--tol", paramLabel = "TOL",
-            description = "local error tolerance per step, relative to 1+|y| (default 1e-13; range 1e-16..1e-2)")
+public final class SolverOptions implements OptionGroup {
     Double tolerance;
-    @Option(names = "--order", paramLabel = "N", description = "Taylor order per step, even, 8..400 (default 32)")
     Integer order;
-    @Option(names = "--max-steps", paramLabel = "N", description = "step budget per path (default 20000)")
     Integer maxSteps;
+
+    @Override
+    public void declare(Options o) {
+        o.addOption(Opts.value("--tol", "TOL",
+                "local error tolerance per step, relative to 1+|y| (default 1e-13; range 1e-16..1e-2)"));
+        o.addOption(Opts.value("--order", "N", "Taylor order per step, even, 8..400 (default 32)"));
+        o.addOption(Opts.value("--max-steps", "N", "step budget per path (default 20000)"));
+    }
+
+    @Override
+    public void read(Arguments a) {
+        tolerance = a.number("--tol", "a number in [1e-16, 1e-2]");
+        order = a.integer("--order", "an even integer in [8, 400]");
+        maxSteps = a.integer("--max-steps", "an integer >= 1");
+    }
 
     void defaults(ProblemFile p) {
         if (tolerance == null && p.has("tolerance")) {

@@ -1,19 +1,30 @@
 package org.tertius.cli;
 
+import org.apache.commons.cli.Options;
 import org.hipparchus.complex.Complex;
-import picocli.CommandLine.Option;
 
 /** Start data w(z0) = w0, w'(z0) = dw0 (z0 on the principal sheet). */
-public final class StartOptions {
-    @Option(names = "--z0", paramLabel = "Z", description = "start point z0 != 0 (principal sheet)")
+public final class StartOptions implements OptionGroup {
     String z0;
-    @Option(names = "--w0", paramLabel = "W", description = "w(z0)")
     String w0;
-    @Option(names = "--dw0", paramLabel = "DW", description = "w'(z0)")
     String dw0;
-    @Option(names = "--d3w0", paramLabel = "D3W",
-            description = "w'''(z0), needed only when w0 = 0 (a solution through a zero of w)")
     String d3w0;
+
+    @Override
+    public void declare(Options o) {
+        o.addOption(Opts.value("--z0", "Z", "start point z0 != 0 (principal sheet)"));
+        o.addOption(Opts.value("--w0", "W", "w(z0)"));
+        o.addOption(Opts.value("--dw0", "DW", "w'(z0)"));
+        o.addOption(Opts.value("--d3w0", "D3W", "w'''(z0), needed only when w0 = 0 (a solution through a zero of w)"));
+    }
+
+    @Override
+    public void read(Arguments a) {
+        z0 = a.text("--z0");
+        w0 = a.text("--w0");
+        dw0 = a.text("--dw0");
+        d3w0 = a.text("--d3w0");
+    }
 
     void defaults(ProblemFile p) {
         z0 = p.fill(z0, "z0");

@@ -5,7 +5,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import java.util.concurrent.Callable;
+import org.apache.commons.cli.Options;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.TertiusException;
 import org.tertius.core.number.SurfacePoint;
@@ -16,45 +16,68 @@ import org.tertius.core.region.PoleFinder;
 import org.tertius.core.region.RegionSettings;
 import org.tertius.core.region.RegionSolver;
 import org.tertius.core.region.Singularity;
-import picocli.CommandLine.Command;
-import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Model.CommandSpec;
-import picocli.CommandLine.Option;
-import picocli.CommandLine.Spec;
 
 /** Values on a line or a grid, streamed to CSV, resumable. */
-@Command(name = "table", mixinStandardHelpOptions = true,
-        description = "Tabulate a solution on a line (--line A:B:N), a grid of one sheet (--grid RE0:RE1:NX,IM0:IM1:NY)"
-                + " or a strip in log z (--log-strip) to CSV (columns as eval). Rows are written as computed; an interrupted run keeps"
-                + " them and --resume continues it. Poles met along a line are reported.")
-public final class TableCommand implements Callable<Integer> {
+public final class TableCommand implements Command {
     /** Grid rows per band: a band is computed, then written. */
     private static final int BAND = 16;
 
-    @Spec
-    CommandSpec spec;
-    @Mixin
-    SolutionOptions solution = new SolutionOptions();
-    @Option(names = "--line", paramLabel = "A:B:N", description = "N points from A to B (complex), e.g. 0.5:10:200")
+    final SolutionOptions solution = new SolutionOptions();
+    final MemberOptions member = new MemberOptions();
     String line;
-    @Option(names = "--grid", paramLabel = "RE0:RE1:NX,IM0:IM1:NY", description = "a grid of one sheet")
     String grid;
-    @Option(names = "--log-strip", paramLabel = "LOGR0:LOGR1:NX,ARG0:ARG1:NY", description = Regions.LOG_STRIP_HELP)
     String logStrip;
-    @Option(names = "--sheet", paramLabel = "K", description = "sheet of the points (default 0)")
     Integer sheet;
-    @Option(names = "--out", paramLabel = "FILE", description = "CSV file (default: standard output)")
     Path out;
-    @Option(names = "--resume", description = "continue an interrupted run in --out FILE")
     boolean resume;
-    @Mixin
-    MemberOptions member = new MemberOptions();
-    @Option(names = "--digits", paramLabel = "D", description = "line only: D significant digits in arbitrary"
-            + " precision (exact start data and parameters)")
     Integer digits;
+    private PrintWriter stdout;
+    private PrintWriter console;
 
     @Override
-    public Integer call() {
+    public String name() {
+        return "table";
+    }
+
+    @Override
+    public String description() {
+        return "Tabulate a solution on a line (--line A:B:N), a grid of one sheet (--grid RE0:RE1:NX,IM0:IM1:NY)"
+                + " or a strip in log z (--log-strip) to CSV (columns as eval). Rows are written as computed; an"
+                + " interrupted run keeps them and --resume continues it. Poles met along a line are reported.";
+    }
+
+    @Override
+    public List<OptionGroup> groups() {
+        return List.of(solution, member);
+    }
+
+    @Override
+    public void declare(Options o) {
+        o.addOption(Opts.value("--line", "A:B:N", "N points from A to B (complex), e.g. 0.5:10:200"));
+        o.addOption(Opts.value("--grid", "RE0:RE1:NX,IM0:IM1:NY", "a grid of one sheet"));
+        o.addOption(Opts.value("--log-strip", "LOGR0:LOGR1:NX,ARG0:ARG1:NY", Regions.LOG_STRIP_HELP));
+        o.addOption(Opts.value("--sheet", "K", "sheet of the points (default 0)"));
+        o.addOption(Opts.value("--out", "FILE", "CSV file (default: standard output)"));
+        o.addOption(Opts.flag("--resume", "continue an interrupted run in --out FILE"));
+        o.addOption(Opts.value("--digits", "D", "line only: D significant digits in arbitrary precision (exact"
+                + " start data and parameters)"));
+    }
+
+    @Override
+    public void read(Arguments a) {
+        line = a.text("--line");
+        grid = a.text("--grid");
+        logStrip = a.text("--log-strip");
+        sheet = a.integer("--sheet", null);
+        out = a.path("--out");
+        resume = a.has("--resume");
+        digits = a.integer("--digits", EvalCommand.DIGITS);
+    }
+
+    @Override
+    public int run(PrintWriter stdout, PrintWriter console) {
+        this.stdout = stdout;
+        this.console = console;
         ProblemFile f = solution.file();
         String lineSpec = line != null ? line : (grid == null ? f.get("line") : null);
         String gridSpec = grid != null ? grid : (line == null && logStrip == null ? f.get("grid") : null);
@@ -85,9 +108,8 @@ public final class TableCommand implements Callable<Integer> {
         List<String> comments = List.of(s.equation() + " [" + s.equation().type().describe() + "]",
                 "integrated in the " + s.formDescription(),
                 "err: the larger of the estimated absolute errors of w and w'");
-        PrintWriter console = spec.commandLine().getErr();
         int status;
-        try (TableWriter w = TableWriter.open(spec.commandLine().getOut(), out, resume, signature, comments,
+        try (TableWriter w = TableWriter.open(stdout, out, resume, signature, comments,
                 ValueCsv.HEADER);
              Progress progress = new Progress("table")) {
             // on Ctrl-C the rows computed so far reach the file
@@ -120,7 +142,7 @@ public final class TableCommand implements Callable<Integer> {
                 + " line=" + lineSpec + " sheet=" + k;
         int unreached = 0;
         try (Progress progress = new Progress("table");
-             TableWriter w = TableWriter.open(spec.commandLine().getOut(), out, resume, signature,
+             TableWriter w = TableWriter.open(stdout, out, resume, signature,
                      List.of("member " + member.member + " of the Painleve III hierarchy, " + ms.parameters()),
                      MemberOptions.HEADER)) {
             for (int i = (int) w.existingRows(); i < points.size(); i++) {
@@ -129,7 +151,7 @@ public final class TableCommand implements Callable<Integer> {
                 } catch (TertiusException e) {
                     unreached++;
                     w.row(MemberOptions.unreachedRow(points.get(i)));
-                    spec.commandLine().getErr().println("tertius: point " + points.get(i) + " not reached: "
+                    console.println("tertius: point " + points.get(i) + " not reached: "
                             + e.getMessage());
                 }
                 w.flush();
@@ -143,7 +165,7 @@ public final class TableCommand implements Callable<Integer> {
         String signature = "tertius table " + solution.describe() + " line=" + lineSpec + " sheet=" + k
                 + " digits=" + digits;
         try (Progress progress = new Progress("table");
-             TableWriter w = TableWriter.open(spec.commandLine().getOut(), out, resume, signature,
+             TableWriter w = TableWriter.open(stdout, out, resume, signature,
                      List.of(solution.equationValue() + ", " + digits + " digits; digits: estimated correct significant"
                              + " digits of w and w'"), HighPrecisionRows.HEADER)) {
             org.tertius.core.piii.HighPrecisionSolution hp = HighPrecisionRows.solution(solution, digits, progress);

@@ -94,6 +94,49 @@ class CommandLineToolTest {
         assertTrue(!r.err.contains("Exception"), r.err);
     }
 
+    @ParameterizedTest
+    @CsvSource(delimiter = ';', value = {
+        "--bogus 3;Unknown option: '--bogus'",
+        "--digits;Missing required parameter for option '--digits' (D)",
+        "--digits 1e2;--digits: expected an integer in [16, 5000], got '1e2'",
+        "--tol small;--tol: expected a number in [1e-16, 1e-2], got 'small'",
+        "--at 4;option '--at' should be specified only once",
+    })
+    void parseErrorsGetOneLineNamingTheOptionAndTheHelp(String extra, String message) {
+        Run r = run(with(with(new String[] {"eval"}, DEMO), with(new String[] {"--at", "2"}, extra.split(" "))));
+        assertEquals(2, r.status, r.out + r.err);
+        assertEquals("tertius: " + message + " (see 'tertius eval --help')", r.err.strip());
+    }
+
+    @Test
+    void negativeAndAttachedValuesParseAlike() {
+        Run spaced = run(with(new String[] {"eval"}, with(DEMO, "--at", "-1.5")));
+        Run attached = run("eval", "--alpha=1", "--beta=-1/2", "--gamma=1", "--delta=-1", "--z0=1", "--w0=1/2",
+                "--dw0=1/3", "--at=-1.5");
+        assertEquals(0, spaced.status, spaced.err);
+        assertEquals(spaced.out, attached.out);
+        assertTrue(spaced.out.contains("\n-1.5000000000000000,0.0000000000000000,0,"), spaced.out);
+    }
+
+    @Test
+    void helpVersionAndUnknownCommands() {
+        Run help = run("describe", "--help");
+        assertEquals(0, help.status);
+        assertTrue(help.out.contains("Print the unknowns and equations of member N of the Painleve III hierarchy.")
+                && help.out.contains("--member <N>") && help.out.contains("the member, 1..8"), help.out);
+        Run tool = run();
+        assertEquals(0, tool.status);
+        assertTrue(tool.out.contains("Commands:") && tool.out.contains("  scan      Sweep lambda"), tool.out);
+        assertTrue(run("eval", "-V").out.startsWith("tertius "));
+        Run missing = run("describe");
+        assertEquals(2, missing.status);
+        assertEquals("tertius: Missing required option: '--member=N' (see 'tertius describe --help')",
+                missing.err.strip());
+        Run unknown = run("evaluate", "--at", "1");
+        assertEquals(2, unknown.status);
+        assertEquals("tertius: Unknown command: 'evaluate' (see 'tertius --help')", unknown.err.strip());
+    }
+
     @Test
     void badRegionsAndOutputsAreRefusedBeforeAnyWork(@TempDir Path dir) {
         String[][] cases = {

@@ -10,27 +10,18 @@ import java.nio.file.Path;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.tertius.cli.ConnectCommand;
-import org.tertius.cli.ScanCommand;
-import picocli.CommandLine;
+import org.tertius.cli.Main;
 
-/** The connect and scan commands (run through picocli directly; the lead registers them in Main). */
+/** The connect and scan commands of the tool. */
 class CommandLineTest {
-    private static int run(Object command, StringWriter out, StringWriter err, String... args) {
-        CommandLine cl = new CommandLine(command);
-        cl.setOut(new PrintWriter(out, true));
-        cl.setErr(new PrintWriter(err, true));
-        cl.setExecutionExceptionHandler((ex, c, p) -> {
-            c.getErr().println("tertius: " + ex.getMessage());
-            return 2;
-        });
-        return cl.execute(args);
+    private static int run(StringWriter out, StringWriter err, String... args) {
+        return Main.execute(args, new PrintWriter(out, true), new PrintWriter(err, true));
     }
 
     @Test
     void connectPrintsNumericalAndClosedFormSigmaAndAmplitude() {
         StringWriter out = new StringWriter();
-        assertEquals(0, run(new ConnectCommand(), out, new StringWriter(), "--lambda", "0.2", "--tol", "1e-16"));
+        assertEquals(0, run(out, new StringWriter(), "connect", "--lambda", "0.2", "--tol", "1e-16"));
         List<String> lines = out.toString().lines().toList();
         assertEquals("quantity,precision,numerical,numerical_err,closed_form,closed_form_err", lines.get(1));
         String[] sigma = lines.get(2).split(",");
@@ -41,7 +32,7 @@ class CommandLineTest {
     @Test
     void connectRejectsLambdaBeyondTheEdge() {
         StringWriter err = new StringWriter();
-        assertEquals(2, run(new ConnectCommand(), new StringWriter(), err, "--lambda", "0.5"));
+        assertEquals(2, run(new StringWriter(), err, "connect", "--lambda", "0.5"));
         assertTrue(err.toString().contains("lambda: must be in (-1/pi, 1/pi)"), err.toString());
     }
 
@@ -51,7 +42,7 @@ class CommandLineTest {
         Path csv = dir.resolve("scan.csv");
         Path png = dir.resolve("scan.png");
         StringWriter err = new StringWriter();
-        assertEquals(0, run(new ScanCommand(), new StringWriter(), err, "--range", "0.2:0.6:3", "--output",
+        assertEquals(0, run(new StringWriter(), err, "scan", "--range", "0.2:0.6:3", "--output",
                 csv.toString(), "--threads", "2"));
         List<String> first = Files.readAllLines(csv);
         assertEquals(5, first.size());
@@ -59,7 +50,7 @@ class CommandLineTest {
         assertTrue(first.get(4).contains(",zero,"), first.get(4));
         Files.write(csv, first.subList(0, 4)); // as if interrupted after two rows
         StringWriter err2 = new StringWriter();
-        assertEquals(0, run(new ScanCommand(), new StringWriter(), err2, "--range", "0.2:0.6:3", "--output",
+        assertEquals(0, run(new StringWriter(), err2, "scan", "--range", "0.2:0.6:3", "--output",
                 csv.toString(), "--plot", png.toString()));
         assertEquals(first, Files.readAllLines(csv));
         assertEquals(1, err2.toString().lines().filter(l -> l.startsWith("scan:")).count(), err2.toString());
