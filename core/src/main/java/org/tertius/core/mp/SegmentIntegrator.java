@@ -222,6 +222,37 @@ public final class SegmentIntegrator {
     }
 
     /**
+     * A state with its first series already expanded ({@link #start}): a run from it begins with a step. Made
+     * ahead of a run, e.g. on another thread while the path is still being planned. Immutable.
+     */
+    public static final class Start {
+        final MpComplex tau;
+        final MpComplex[] y;
+        final TaylorSeries series;
+
+        private Start(MpComplex tau, MpComplex[] y, TaylorSeries series) {
+            this.tau = tau;
+            this.y = y.clone();
+            this.series = series;
+        }
+    }
+
+    /**
+     * The first series of a run from (tau, y), expanded now.
+     *
+     * @param scaleGuess first scale of the series (about the radius of convergence)
+     * @throws UnreachableTargetException if no scale gives a usable series (a singularity at tau)
+     */
+    public Start start(MpComplex tau, MpComplex[] y, double scaleGuess) {
+        return new Start(tau, y, expandScaled(tau, y, scaleGuess));
+    }
+
+    /** As {@link #run(MpComplex, MpComplex[], List, double, boolean, Advance, Landing)}, from a prepared start. */
+    public Result run(Start start, List<MpComplex> waypoints, boolean keepNodes, Advance advance, Landing landing) {
+        return run(start.tau, start.y, waypoints, start.series.scale(), keepNodes, advance, landing, start.series);
+    }
+
+    /**
      * Integrates from (tau, y) through the waypoints to the last one, along the straight lines between them. A
      * Pade step may go straight on to a later waypoint when its continued fractions meet the tolerance there: the
      * solutions are meromorphic in tau, so the value does not depend on the side on which a line passes a pole.
@@ -232,6 +263,12 @@ public final class SegmentIntegrator {
      */
     public Result run(MpComplex tau, MpComplex[] y, List<MpComplex> waypoints, double scaleGuess, boolean keepNodes,
                Advance advance, Landing landing) {
+        return run(tau, y, waypoints, scaleGuess, keepNodes, advance, landing, null);
+    }
+
+    /** The run, with the series of its first step given (null: expanded here). */
+    private Result run(MpComplex tau, MpComplex[] y, List<MpComplex> waypoints, double scaleGuess, boolean keepNodes,
+               Advance advance, Landing landing, TaylorSeries first) {
         List<HpNode> nodes = keepNodes ? new ArrayList<>() : null;
         double r = scaleGuess;
         // the last accepted Pade length (NaN before the first): the next step starts its trials near it
@@ -257,7 +294,7 @@ public final class SegmentIntegrator {
             if (steps >= MAX_STEPS) {
                 throw new UnreachableTargetException("more than " + MAX_STEPS + " high-precision steps on one segment");
             }
-            TaylorSeries series = expandScaled(tau, y, r);
+            TaylorSeries series = steps == 0 && first != null ? first : expandScaled(tau, y, r);
             r = series.scale();
             double rho = r * rootRadius(series);
             double hT = r * taylorStep(series, y);

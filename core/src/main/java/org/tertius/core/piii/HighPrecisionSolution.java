@@ -4,8 +4,11 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.ConcurrentHashMap;
+import java.util.concurrent.Future;
+import java.util.concurrent.FutureTask;
 import java.util.function.DoubleConsumer;
 import org.tertius.core.InvalidInputException;
+import org.tertius.core.TertiusException;
 import org.tertius.core.mp.ExactNumber;
 import org.tertius.core.mp.MpComplex;
 import org.tertius.core.mp.MpContext;
@@ -49,6 +52,9 @@ public final class HighPrecisionSolution {
     private final RecurrencePlan plan;
     private final double planningTolerance;
     private final Map<Integer, Level> levels = new ConcurrentHashMap<>();
+    /** The first series at the root per level (tolerance digits), expanded once (see {@link Level#rootStart}). */
+    private final Map<Integer, Future<SegmentIntegrator.Start>> rootStarts =
+            new ConcurrentHashMap<>();
     private final java.util.concurrent.atomic.AtomicReference<Statistics> statistics =
             new java.util.concurrent.atomic.AtomicReference<>();
 
@@ -197,13 +203,18 @@ public final class HighPrecisionSolution {
         // the two accuracies run side by side when there is more than one processor; the guard digits of the
         // accurate pass then come from the planned path (its nodes, doubled for the extra Pade and Taylor steps)
         // instead of the steps of the cheap pass, and a shortfall is caught by the refinement rounds below
-        java.util.concurrent.Future<List<Outcome>> cheapRun = null;
+        Future<List<Outcome>> cheapRun = null;
         List<Outcome> cheap = null;
         int expectedSteps;
         if (Workers.PARALLEL) {
+            // the first series of both passes is expanded on other processors while this thread plans the path (it
+            // needs only the start data); the accurate pass is guessed to need the guard digits of at most 99
+            // steps, and a longer plan leaves its expansion unused
+            expandRootAhead(accurateDigits(1));
+            expandRootAhead(cheapDigits);
+            expectedSteps = 2 * plannedSteps(points) + 2;
             int cd = cheapDigits;
             cheapRun = Workers.submit(() -> pass.run(level(cd, null)));
-            expectedSteps = 2 * plannedSteps(points) + 2;
             meter.phase(0, 1);
         } else {
             meter.phase(0, 0.15);
@@ -214,13 +225,20 @@ public final class HighPrecisionSolution {
             }
         }
         try {
-            return refine(pass, points, meter, cheapRun, cheap, cheapDigits,
-                    digits + 4 + (int) Math.ceil(Math.log10(expectedSteps + 1.0)));
+            return refine(pass, points, meter, cheapRun, cheap, cheapDigits, accurateDigits(expectedSteps));
         } finally {
             if (cheapRun != null && !cheapRun.isDone()) {
                 cheapRun.cancel(true);
             }
         }
+    }
+
+    /**
+     * The tolerance digits of the accurate pass for a path of about that many steps: 4 guard digits and those that
+     * the accumulation of the local errors over the steps takes, at least 2 (up to 99 steps).
+     */
+    private int accurateDigits(int expectedSteps) {
+        return digits + 4 + Math.max(2, (int) Math.ceil(Math.log10(expectedSteps + 1.0)));
     }
 
     /**
@@ -236,7 +254,7 @@ public final class HighPrecisionSolution {
     }
 
     private List<HighPrecisionValue> refine(Pass pass, List<SurfacePoint> points, Progress meter,
-                                            java.util.concurrent.Future<List<Outcome>> cheapRun, List<Outcome> cheap,
+                                            Future<List<Outcome>> cheapRun, List<Outcome> cheap,
                                             int cheapDigits, int accurateDigits) {
         List<HighPrecisionValue> result = null;
         for (int round = 0; round < MAX_REFINEMENTS; round++) {
@@ -283,6 +301,17 @@ public final class HighPrecisionSolution {
         }
         double l = d.log2Abs() - (a.isZero() ? 0 : a.log2Abs());
         return l / MpContext.LOG2_10;
+    }
+
+    /**
+     * Builds the level of that accuracy and expands its first series at the root on a worker thread (once per
+     * level), for the first run from the root to start from; a failure there is left to that run to meet again.
+     */
+    private void expandRootAhead(int tolDigits) {
+        rootStarts.computeIfAbsent(tolDigits, d -> Workers.submit(() -> {
+            Level l = levels.computeIfAbsent(d, Level::new);
+            return l.integrator.start(l.root.tau, l.root.y, l.root.scale);
+        }));
     }
 
     private Level level(int tolDigits, Progress meter) {
@@ -441,6 +470,27 @@ public final class HighPrecisionSolution {
             this.root = new PathState(ctx.log(z), y0, startScale(engine.root()), 0);
         }
 
+        /**
+         * The first series at the root, expanded once per level and shared by every run from the root (ahead, see
+         * {@link #expandRootAhead}, or here on first use); null when its expansion failed (the run then meets the
+         * failure again).
+         */
+        private SegmentIntegrator.Start rootStart() {
+            FutureTask<SegmentIntegrator.Start> mine =
+                    new FutureTask<>(() -> integrator.start(root.tau, root.y, root.scale));
+            Future<SegmentIntegrator.Start> f = rootStarts.putIfAbsent(tolDigits, mine);
+            if (f == null) {
+                mine.run();
+                f = mine;
+            }
+            try {
+                return Workers.join(f);
+            } catch (TertiusException e) {
+                // unreachable or cancelled: the run from the root meets the same, or sees the interrupt
+                return null;
+            }
+        }
+
         Level withProgress(Progress p) {
             meter.set(p);
             return this;
@@ -501,13 +551,15 @@ public final class HighPrecisionSolution {
                 nodeOf[k] = isTarget ? -1 : ids[from + i];
             }
             PathState start = s;
-            SegmentIntegrator.Result r = integrator.run(s.tau, s.y, waypoints, s.scale, false, advance(),
-                    (j, y, scale, steps) -> {
-                        if (nodeOf[j] >= 0) {
-                            reached.putIfAbsent(nodeOf[j],
-                                    new PathState(waypoints.get(j), y, scale, start.steps + steps));
-                        }
-                    });
+            SegmentIntegrator.Landing landing = (j, y, scale, steps) -> {
+                if (nodeOf[j] >= 0) {
+                    reached.putIfAbsent(nodeOf[j], new PathState(waypoints.get(j), y, scale, start.steps + steps));
+                }
+            };
+            SegmentIntegrator.Start first = s == root ? rootStart() : null;
+            SegmentIntegrator.Result r = first != null
+                    ? integrator.run(first, waypoints, false, advance(), landing)
+                    : integrator.run(s.tau, s.y, waypoints, s.scale, false, advance(), landing);
             return new PathState(target, r.state(), r.scale(), s.steps + r.steps());
         }
 

@@ -225,6 +225,20 @@ class HighPrecisionSolutionTest {
     }
 
     @Test
+    void evaluationsThatShareTheFirstSeriesAtTheStartGiveTheValuesOfFreshSolutions() {
+        // one solution evaluated at several points expands its first series at the start once and shares it; the
+        // runs are deterministic, so each value must be the one a fresh solution gives, digit for digit
+        HighPrecisionSolution shared = generic(40);
+        for (SurfacePoint p : List.of(SurfacePoint.of(3, 2), SurfacePoint.of(-2, 1), SurfacePoint.of(0.5, -1.5))) {
+            HighPrecisionValue again = shared.evaluate(p);
+            HighPrecisionValue fresh = generic(40).evaluate(p);
+            assertEquals(fresh.wText(), again.wText(), "w at " + p);
+            assertEquals(fresh.dwText(), again.dwText(), "w' at " + p);
+            assertEquals(fresh.correctDigits(), again.correctDigits(), "estimated digits at " + p);
+        }
+    }
+
+    @Test
     void dataGivenAsBinaryDoublesAreRefusedForMoreDigitsThanTheyHold() {
         ExactNumber third = ExactNumber.ofDouble("dw0", new Complex(1.0 / 3));
         HighPrecisionSolution.Builder b = HighPrecisionSolution.builder("1", "-1/2", "1", "-1")
