@@ -16,9 +16,14 @@ import java.util.function.IntConsumer;
  * partner's writes in a round are visible to the caller when the round ends.
  */
 final class LockstepPartner implements AutoCloseable {
-    /** Spins before yielding, and yields before sleeping, while waiting. */
-    private static final int SPINS = 2000;
-    private static final int YIELDS = 200;
+    /**
+     * Spins before yielding, and yields before sleeping, while waiting. Few spins and many yields: a yield returns
+     * at once on an idle processor, and hands the processor over when another process shares it (measured at 100
+     * digits with one of two processors taken by another process: 0.33 s against 0.36 s with 2000 spins and 200
+     * yields; the same 0.23 s on a quiet machine).
+     */
+    private static final int SPINS = 200;
+    private static final int YIELDS = 2000;
     private static final long SLEEP_NANOS = 20_000;
 
     private final IntConsumer task;
