@@ -478,14 +478,15 @@ public final class HighPrecisionSolution {
         private SegmentIntegrator.Start rootStart() {
             FutureTask<SegmentIntegrator.Start> mine =
                     new FutureTask<>(() -> integrator.start(root.tau, root.y, root.scale));
-            Future<SegmentIntegrator.Start> f = rootStarts.putIfAbsent(tolDigits, mine);
-            if (f == null) {
+            // a cancelled expansion (an interrupted evaluation) is replaced, so that the solution stays usable
+            Future<SegmentIntegrator.Start> f = rootStarts.compute(tolDigits,
+                    (d, old) -> old == null || old.isCancelled() ? mine : old);
+            if (f == mine) {
                 mine.run();
-                f = mine;
             }
             try {
                 return Workers.join(f);
-            } catch (TertiusException e) {
+            } catch (TertiusException | java.util.concurrent.CancellationException e) {
                 // unreachable or cancelled: the run from the root meets the same, or sees the interrupt
                 return null;
             }

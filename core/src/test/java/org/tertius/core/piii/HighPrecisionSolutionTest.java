@@ -268,5 +268,7 @@ class HighPrecisionSolutionTest {
         } finally {
             Thread.interrupted();
         }
+        // the cancelled solution stays usable, and gives what a fresh one gives
+        assertEquals(generic(30).evaluate(SurfacePoint.of(2, 1)).wText(), t.evaluate(SurfacePoint.of(2, 1)).wText());
     }
 }
