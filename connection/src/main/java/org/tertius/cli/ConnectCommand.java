@@ -10,8 +10,8 @@ import org.hipparchus.complex.Complex;
 import org.tertius.connection.closed.McCoyTracyWu;
 import org.tertius.connection.match.DecayingConnection;
 import org.tertius.connection.match.ZeroFit;
-import org.tertius.connection.num.ApcomplexArith;
 import org.tertius.core.InvalidInputException;
+import org.tertius.core.number.ApcomplexArithmetic;
 
 /** Connection data of the decaying family of PIII(0, 0, 1, -1) between +infinity and 0. */
 public final class ConnectCommand implements Command {
@@ -85,7 +85,7 @@ public final class ConnectCommand implements Command {
         rows.add(row("sigma", "double", r.sigma().getReal(), r.errSigma(), cs, 2e-16 * Math.abs(cs)));
         rows.add(row("B", "double", r.amplitude().getReal(), r.errAmplitude(), cb, 2e-16 * Math.abs(cb)));
         if (digits != null) {
-            ApcomplexArith ar = new ApcomplexArith(digits + 6);
+            ApcomplexArithmetic ar = new ApcomplexArithmetic(digits + 6);
             ZeroFit.Result<Apcomplex> hp = DecayingConnection.zeroData(ar, ar.parse(lambda), Math.min(x0, 1e-4), 14);
             Apcomplex[] c = McCoyTracyWu.zeroData(lambda, digits);
             rows.add(new String[] {"sigma", digits + " digits", text(hp.sigma().real().precision(digits)),

@@ -10,9 +10,9 @@ import org.junit.jupiter.api.Test;
 import org.tertius.connection.closed.McCoyTracyWu;
 import org.tertius.connection.family.Families;
 import org.tertius.connection.match.DecayingConnection;
-import org.tertius.connection.num.Arith;
 import org.tertius.connection.zero.PowerSeriesAtZero;
 import org.tertius.core.InvalidInputException;
+import org.tertius.core.number.ComplexArithmetic;
 import org.tertius.core.piii.Painleve3;
 import org.tertius.core.step.SolverSettings;
 
@@ -32,7 +32,7 @@ class BadInputTest {
 
     @Test
     void resonantExponentIsRejectedWithPointerToLogarithmicBehaviour() {
-        Arith<Complex> ar = Arith.DOUBLE;
+        ComplexArithmetic ar = ComplexArithmetic.INSTANCE;
         InvalidInputException e = assertThrows(InvalidInputException.class, () -> PowerSeriesAtZero.create(ar,
                 List.of(Complex.ZERO, Complex.ZERO, Complex.ONE, new Complex(-1)), Complex.ONE, Complex.ONE, 10));
         assertTrue(e.getMessage().contains("logarithmic"), e.getMessage());

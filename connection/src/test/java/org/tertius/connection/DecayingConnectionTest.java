@@ -16,13 +16,13 @@ import org.tertius.connection.family.Families;
 import org.tertius.connection.infinity.DecayingTransseries;
 import org.tertius.connection.match.DecayingConnection;
 import org.tertius.connection.match.ZeroFit;
-import org.tertius.connection.num.ApcomplexArith;
-import org.tertius.connection.num.Arith;
 import org.tertius.connection.path.DeviationTaylor;
 import org.tertius.connection.scan.CriticalValue;
 import org.tertius.connection.scan.DecayingClassifier;
 import org.tertius.connection.zero.LocalValue;
 import org.tertius.connection.zero.PowerSeriesAtZero;
+import org.tertius.core.number.ApcomplexArithmetic;
+import org.tertius.core.number.ComplexArithmetic;
 import org.tertius.core.number.SurfacePoint;
 import org.tertius.core.piii.Painleve3Solution;
 import org.tertius.core.piii.Painleve3Value;
@@ -57,11 +57,11 @@ class DecayingConnectionTest {
     @ParameterizedTest
     @ValueSource(strings = {"0.1", "0.2", "0.3"})
     void sigmaAndAmplitudeToThirtyDigitsInArbitraryPrecision(String lambda) {
-        ApcomplexArith ar = new ApcomplexArith(36);
+        ApcomplexArithmetic ar = new ApcomplexArithmetic(36);
         ZeroFit.Result<Apcomplex> r = DecayingConnection.zeroData(ar, ar.parse(lambda), 1e-4, 12);
         Apcomplex[] closed = McCoyTracyWu.zeroData(lambda, 36);
-        double ds = ar.abs(ar.sub(r.sigma(), closed[0]));
-        double db = ar.abs(ar.sub(r.amplitude(), closed[1])) / ar.abs(closed[1]);
+        double ds = ar.abs(ar.subtract(r.sigma(), closed[0]));
+        double db = ar.abs(ar.subtract(r.amplitude(), closed[1])) / ar.abs(closed[1]);
         assertTrue(ds < 1e-30, "sigma differs by " + ds);
         assertTrue(db < 1e-30, "B differs by " + db);
     }
@@ -79,7 +79,7 @@ class DecayingConnectionTest {
         double lambda = 0.2;
         Painleve3Solution s = Families.create(DecayingConnection.equation(), "decaying",
                 Map.of("lambda", "0.2"), TIGHT);
-        Arith<Complex> ar = Arith.DOUBLE;
+        ComplexArithmetic ar = ComplexArithmetic.INSTANCE;
         PowerSeriesAtZero<Complex> series = PowerSeriesAtZero.create(ar, DecayingConnection.parameters(ar),
                 new Complex(McCoyTracyWu.sigma(lambda)), new Complex(McCoyTracyWu.amplitude(lambda)), 40);
         for (double x : new double[] {1e-4, 1e-2}) {
@@ -112,13 +112,13 @@ class DecayingConnectionTest {
      */
     @Test
     void firstSectorIsTheBesselFunctionKZero() {
-        ApcomplexArith ar = new ApcomplexArith(30);
+        ApcomplexArithmetic ar = new ApcomplexArithmetic(30);
         Apcomplex x = ar.of(12);
         DecayingTransseries<Apcomplex> ts = DecayingTransseries.create(ar, ar.ratio(1, 1000), 1, 80);
         Apcomplex u = ar.log(ts.at(x).w());
-        Apcomplex k0 = ar.helper().besselK(ar.zero(), ar.mul(x, ar.of(2)));
-        Apcomplex expected = ar.mul(ar.ratio(-2, 1000), k0);
-        double rel = ApcomplexMath.abs(ar.sub(u, expected)).doubleValue() / ar.abs(expected);
+        Apcomplex k0 = ar.helper().besselK(ar.zero(), ar.multiply(x, ar.of(2)));
+        Apcomplex expected = ar.multiply(ar.ratio(-2, 1000), k0);
+        double rel = ApcomplexMath.abs(ar.subtract(u, expected)).doubleValue() / ar.abs(expected);
         assertTrue(rel < 1e-19, "relative difference " + rel);
     }
 

@@ -11,10 +11,10 @@ import org.apfloat.Apcomplex;
 import org.hipparchus.complex.Complex;
 import org.junit.jupiter.api.Test;
 import org.tertius.connection.family.Families;
-import org.tertius.connection.num.ApcomplexArith;
-import org.tertius.connection.num.Arith;
 import org.tertius.connection.zero.LocalValue;
 import org.tertius.connection.zero.PowerSeriesAtZero;
+import org.tertius.core.number.ApcomplexArithmetic;
+import org.tertius.core.number.ComplexArithmetic;
 import org.tertius.core.number.SurfacePoint;
 import org.tertius.core.piii.Painleve3;
 import org.tertius.core.piii.Painleve3Solution;
@@ -23,7 +23,7 @@ import org.tertius.core.step.SolverSettings;
 
 /** The expansions at 0 against the core engine started elsewhere, and their rounding behaviour. */
 class SeriesAtZeroTest {
-    private static final Arith<Complex> AR = Arith.DOUBLE;
+    private static final ComplexArithmetic AR = ComplexArithmetic.INSTANCE;
     private static final Painleve3 GENERIC = Painleve3.of(1, -0.5, 1, -1);
 
     private static List<Complex> params(Painleve3 eq) {
@@ -73,7 +73,7 @@ class SeriesAtZeroTest {
      */
     @Test
     void roundingBoundCoversActualCoefficientErrorAndGrowsNearResonance() {
-        ApcomplexArith hp = new ApcomplexArith(40);
+        ApcomplexArithmetic hp = new ApcomplexArithmetic(40);
         double[] amp = new double[2];
         double[] sigmas = {0.3, 0.95};
         for (int i = 0; i < 2; i++) {

@@ -7,7 +7,7 @@ import org.hipparchus.complex.Complex;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.equation.IndependentVariable;
 import org.tertius.core.equation.PolynomialSystem;
-import org.tertius.hierarchy.algebra.Arithmetics;
+import org.tertius.hierarchy.algebra.Evaluation;
 import org.tertius.hierarchy.algebra.Polynomial;
 
 /**
@@ -98,9 +98,9 @@ public final class HierarchyMember {
         for (Map.Entry<Integer, Polynomial> c : equations.constraints().entrySet()) {
             int slot = MemberEquations.index(c.getKey() - n + 1, 0);
             values.set(slot, Complex.ZERO);
-            Complex c0 = c.getValue().evaluate(Arithmetics.COMPLEX, values);
+            Complex c0 = c.getValue().evaluate(Evaluation.COMPLEX, values);
             values.set(slot, Complex.ONE);
-            Complex c1 = c.getValue().evaluate(Arithmetics.COMPLEX, values);
+            Complex c1 = c.getValue().evaluate(Evaluation.COMPLEX, values);
             values.set(slot, c0.negate().divide(c1.subtract(c0)));
         }
         return List.copyOf(values.subList(0, dimension()));

@@ -3,7 +3,7 @@ package org.tertius.hierarchy;
 import java.util.ArrayList;
 import java.util.List;
 import org.hipparchus.complex.Complex;
-import org.tertius.hierarchy.algebra.Arithmetics;
+import org.tertius.hierarchy.algebra.Evaluation;
 import org.tertius.hierarchy.algebra.Polynomial;
 
 /**
@@ -27,7 +27,7 @@ final class Linearized {
     }
 
     Complex value(List<Complex> values) {
-        return function.evaluate(Arithmetics.COMPLEX, values);
+        return function.evaluate(Evaluation.COMPLEX, values);
     }
 
     /** The error bound at the point (values of all ring variables) given the absolute errors of the unknowns. */
@@ -36,11 +36,11 @@ final class Linearized {
         for (Complex v : values) {
             moduli.add(v.norm());
         }
-        double b = ROUNDING * function.evaluate(Arithmetics.MAGNITUDE, moduli);
+        double b = ROUNDING * function.evaluate(Evaluation.MAGNITUDE, moduli);
         for (int i = 0; i < err.length; i++) {
             Polynomial g = gradient.get(i);
             if (!g.isZero() && err[i] != 0) {
-                b += g.evaluate(Arithmetics.COMPLEX, values).norm() * err[i];
+                b += g.evaluate(Evaluation.COMPLEX, values).norm() * err[i];
             }
         }
         return b;

@@ -4,7 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.Random;
-import org.tertius.hierarchy.algebra.Arithmetics;
+import org.tertius.hierarchy.algebra.Evaluation;
 import org.tertius.hierarchy.algebra.GaussianRational;
 import org.tertius.hierarchy.algebra.Polynomial;
 
@@ -41,9 +41,9 @@ final class ExactPoints {
         for (Map.Entry<Integer, Polynomial> c : eq.constraints().entrySet()) {
             int slot = MemberEquations.index(c.getKey() - eq.order() + 1, 0);
             v.set(slot, GaussianRational.ZERO);
-            GaussianRational c0 = c.getValue().evaluate(Arithmetics.EXACT, v);
+            GaussianRational c0 = c.getValue().evaluate(Evaluation.EXACT, v);
             v.set(slot, GaussianRational.ONE);
-            GaussianRational c1 = c.getValue().evaluate(Arithmetics.EXACT, v);
+            GaussianRational c1 = c.getValue().evaluate(Evaluation.EXACT, v);
             v.set(slot, c0.negate().multiply(c1.subtract(c0).reciprocal()));
         }
         return v;

@@ -8,7 +8,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Random;
 import org.junit.jupiter.api.Test;
-import org.tertius.hierarchy.algebra.Arithmetics;
+import org.tertius.hierarchy.algebra.Evaluation;
 import org.tertius.hierarchy.algebra.GaussianRational;
 import org.tertius.hierarchy.algebra.Polynomial;
 
@@ -31,7 +31,7 @@ class TimeFlowTest {
             qt().withExamples(8).forAll(longs().all()).checkAssert(seed -> {
                 List<GaussianRational> v = ExactPoints.manifoldPoint(eq, new Random(seed));
                 for (int i = 0; i < bracket.size(); i++) {
-                    GaussianRational b = bracket.get(i).evaluate(Arithmetics.EXACT, v);
+                    GaussianRational b = bracket.get(i).evaluate(Evaluation.EXACT, v);
                     assertTrue(b.isZero(), "member " + order + ", unknown " + eq.names().get(i) + ": bracket " + b);
                 }
             });
@@ -56,7 +56,7 @@ class TimeFlowTest {
             qt().withExamples(8).forAll(longs().all()).checkAssert(seed -> {
                 List<GaussianRational> v = ExactPoints.manifoldPoint(eq, new Random(seed));
                 for (Polynomial rate : rates) {
-                    GaussianRational d = rate.evaluate(Arithmetics.EXACT, v);
+                    GaussianRational d = rate.evaluate(Evaluation.EXACT, v);
                     assertTrue(d.isZero(), "member " + order + ": an integral changes at rate " + d);
                 }
             });

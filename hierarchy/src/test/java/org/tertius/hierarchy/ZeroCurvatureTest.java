@@ -9,7 +9,7 @@ import static org.quicktheories.generators.SourceDSL.longs;
 import java.util.List;
 import java.util.Random;
 import org.junit.jupiter.api.Test;
-import org.tertius.hierarchy.algebra.Arithmetics;
+import org.tertius.hierarchy.algebra.Evaluation;
 import org.tertius.hierarchy.algebra.GaussianRational;
 
 /**
@@ -39,9 +39,9 @@ class ZeroCurvatureTest {
             GaussianRational d = v.get(MemberEquations.index(k, 0));
             a[k + 2] = new GaussianRational[] {d, v.get(MemberEquations.index(k, 1)), v.get(MemberEquations.index(k, 2)),
                 d.negate()};
-            GaussianRational dd = eq.xFlow().get(MemberEquations.index(k, 0)).evaluate(Arithmetics.EXACT, v);
-            ax[k + 2] = new GaussianRational[] {dd, eq.xFlow().get(MemberEquations.index(k, 1)).evaluate(Arithmetics.EXACT, v),
-                eq.xFlow().get(MemberEquations.index(k, 2)).evaluate(Arithmetics.EXACT, v), dd.negate()};
+            GaussianRational dd = eq.xFlow().get(MemberEquations.index(k, 0)).evaluate(Evaluation.EXACT, v);
+            ax[k + 2] = new GaussianRational[] {dd, eq.xFlow().get(MemberEquations.index(k, 1)).evaluate(Evaluation.EXACT, v),
+                eq.xFlow().get(MemberEquations.index(k, 2)).evaluate(Evaluation.EXACT, v), dd.negate()};
         }
         GaussianRational ntn = v.get(eq.timeIndex(n)).multiply(GaussianRational.of(n, 0));
         GaussianRational top = I.negate().multiply(ntn);
@@ -53,8 +53,8 @@ class ZeroCurvatureTest {
         GaussianRational r = v.get(MemberEquations.index(n - 2, 2)).multiply(ntn.reciprocal());
         GaussianRational[] u0 = {GaussianRational.ZERO, q, r, GaussianRational.ZERO};
         GaussianRational[] u1 = {I.negate(), GaussianRational.ZERO, GaussianRational.ZERO, I};
-        assertEquals(q, eq.q().evaluate(Arithmetics.EXACT, v), "q read off the top level");
-        assertEquals(r, eq.r().evaluate(Arithmetics.EXACT, v), "r read off the top level");
+        assertEquals(q, eq.q().evaluate(Evaluation.EXACT, v), "q read off the top level");
+        assertEquals(r, eq.r().evaluate(Evaluation.EXACT, v), "r read off the top level");
         for (int p = -3; p <= n; p++) {
             // [lambda^p]: A_x - U_lambda + [A, U] = a_p' - (p == 0 ? u1 : 0) + [a_p, u0] + [a_{p-1}, u1]
             GaussianRational[] res = {GaussianRational.ZERO, GaussianRational.ZERO, GaussianRational.ZERO,

@@ -4,8 +4,8 @@ import org.apfloat.Apcomplex;
 import org.apfloat.Apfloat;
 import org.apfloat.ApfloatMath;
 import org.apfloat.FixedPrecisionApcomplexHelper;
-import org.tertius.connection.num.ApcomplexArith;
 import org.tertius.core.InvalidInputException;
+import org.tertius.core.number.ApcomplexArithmetic;
 
 /**
  * Closed-form connection of the decaying family of PIII(0, 0, 1, -1) (McCoy, Tracy and Wu, J. Math. Phys. 18
@@ -35,7 +35,7 @@ public final class McCoyTracyWu {
      * @throws InvalidInputException if |lambda| >= 1/pi (see {@link #requirePowerRange})
      */
     public static Apcomplex[] zeroData(String lambda, long digits) {
-        ApcomplexArith ar = new ApcomplexArith(digits + 5);
+        ApcomplexArithmetic ar = new ApcomplexArithmetic(digits + 5);
         FixedPrecisionApcomplexHelper h = ar.helper();
         Apfloat lam = new Apfloat(lambda.trim(), digits + 5);
         Apfloat pi = ApfloatMath.pi(digits + 5);

@@ -7,11 +7,11 @@ import org.hipparchus.complex.Complex;
 import org.tertius.connection.infinity.AlgebraicExpansion;
 import org.tertius.connection.infinity.OscillatingExpansion;
 import org.tertius.connection.match.DecayingConnection;
-import org.tertius.connection.num.Arith;
 import org.tertius.connection.zero.LocalValue;
 import org.tertius.connection.zero.LogarithmicAtZero;
 import org.tertius.connection.zero.PowerSeriesAtZero;
 import org.tertius.core.InvalidInputException;
+import org.tertius.core.number.ComplexArithmetic;
 import org.tertius.core.number.ComplexText;
 import org.tertius.core.piii.Painleve3;
 import org.tertius.core.piii.Painleve3Solution;
@@ -208,7 +208,7 @@ public final class Families {
     }
 
     private static Painleve3Solution atZero(Painleve3 equation, Complex sigma, Complex b, SolverSettings settings) {
-        Arith<Complex> ar = Arith.DOUBLE;
+        ComplexArithmetic ar = ComplexArithmetic.INSTANCE;
         List<Complex> p = List.of(equation.alpha(), equation.beta(), equation.gamma(), equation.delta());
         PowerSeriesAtZero<Complex> s = PowerSeriesAtZero.create(ar, p, sigma, b, 40);
         LocalValue<Complex> v = s.startData(new Complex(START_RADIUS), START_TOLERANCE);

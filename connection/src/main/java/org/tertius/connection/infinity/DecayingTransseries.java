@@ -2,9 +2,9 @@ package org.tertius.connection.infinity;
 
 import java.util.ArrayList;
 import java.util.List;
-import org.tertius.connection.num.Arith;
 import org.tertius.connection.zero.LocalValue;
 import org.tertius.core.InvalidInputException;
+import org.tertius.core.number.AnalyticArithmetic;
 
 /**
  * The one-parameter family of solutions of PIII(alpha = 0, beta = 0, gamma = 1, delta = -1) that tend to 1 at
@@ -22,13 +22,13 @@ import org.tertius.core.InvalidInputException;
  * @param <T> number type
  */
 public final class DecayingTransseries<T> {
-    private final Arith<T> ar;
+    private final AnalyticArithmetic<T> ar;
     private final T lambda;
     private final List<T[]> c;
     private final int sectors;
     private final int terms;
 
-    private DecayingTransseries(Arith<T> ar, T lambda, int sectors, int terms) {
+    private DecayingTransseries(AnalyticArithmetic<T> ar, T lambda, int sectors, int terms) {
         this.ar = ar;
         this.lambda = lambda;
         this.sectors = sectors;
@@ -41,7 +41,7 @@ public final class DecayingTransseries<T> {
      *
      * @throws InvalidInputException for maxSector outside [1, 99] or terms outside [4, 2000]
      */
-    public static <T> DecayingTransseries<T> create(Arith<T> ar, T lambda, int maxSector, int terms) {
+    public static <T> DecayingTransseries<T> create(AnalyticArithmetic<T> ar, T lambda, int maxSector, int terms) {
         if (maxSector < 1 || maxSector > 99) {
             throw new InvalidInputException("maxSector", "must be in [1, 99], got " + maxSector);
         }
@@ -72,10 +72,10 @@ public final class DecayingTransseries<T> {
         p.get(0)[0] = ar.one();
         q.get(0)[0] = ar.one();
         T sqrtPi = ar.sqrt(ar.pi());
-        u.get(1)[0] = ar.neg(sqrtPi);
+        u.get(1)[0] = ar.negate(sqrtPi);
         for (int j = 1; j < terms; j++) {
-            T h = ar.sub(ar.of(j), ar.ratio(1, 2));
-            u.get(1)[j] = ar.div(ar.neg(ar.mul(ar.mul(h, h), u.get(1)[j - 1])), ar.of(4.0 * j));
+            T h = ar.subtract(ar.of(j), ar.ratio(1, 2));
+            u.get(1)[j] = ar.divide(ar.negate(ar.multiply(ar.multiply(h, h), u.get(1)[j - 1])), ar.of(4.0 * j));
         }
         for (int k = 1; k <= sectors; k++) {
             // sector k of exp(2u) and exp(-2u), without the u_k term for odd k >= 3
@@ -89,16 +89,16 @@ public final class DecayingTransseries<T> {
                 T[] prodQ = product(u.get(kk), q.get(k - kk));
                 T f = ar.ratio(2L * kk, k);
                 for (int j = 0; j < terms; j++) {
-                    pk[j] = ar.add(pk[j], ar.mul(f, prodP[j]));
-                    qk[j] = ar.sub(qk[j], ar.mul(f, prodQ[j]));
+                    pk[j] = ar.add(pk[j], ar.multiply(f, prodP[j]));
+                    qk[j] = ar.subtract(qk[j], ar.multiply(f, prodQ[j]));
                 }
             }
             if (k % 2 == 1 && k >= 3) {
                 solveSector(k, u.get(k), pk, qk);
                 for (int j = 0; j < terms; j++) {
-                    T two = ar.mul(u.get(k)[j], ar.of(2));
+                    T two = ar.multiply(u.get(k)[j], ar.of(2));
                     pk[j] = ar.add(pk[j], two);
-                    qk[j] = ar.sub(qk[j], two);
+                    qk[j] = ar.subtract(qk[j], two);
                 }
             }
         }
@@ -108,17 +108,17 @@ public final class DecayingTransseries<T> {
     private void solveSector(int k, T[] uk, T[] pk, T[] qk) {
         T lead = ar.of(4.0 * k * k - 4);
         for (int n = 0; n < terms; n++) {
-            T r = ar.sub(pk[n], qk[n]);
+            T r = ar.subtract(pk[n], qk[n]);
             if (n >= 1) {
                 T m = ar.add(ar.ratio(k, 2), ar.of(n - 1));
-                T f = ar.sub(ar.mul(ar.of(4.0 * k), m), ar.of(2.0 * k));
-                r = ar.sub(r, ar.mul(f, uk[n - 1]));
+                T f = ar.subtract(ar.multiply(ar.of(4.0 * k), m), ar.of(2.0 * k));
+                r = ar.subtract(r, ar.multiply(f, uk[n - 1]));
             }
             if (n >= 2) {
                 T m = ar.add(ar.ratio(k, 2), ar.of(n - 2));
-                r = ar.sub(r, ar.mul(ar.mul(m, m), uk[n - 2]));
+                r = ar.subtract(r, ar.multiply(ar.multiply(m, m), uk[n - 2]));
             }
-            uk[n] = ar.div(r, lead);
+            uk[n] = ar.divide(r, lead);
         }
     }
 
@@ -136,7 +136,7 @@ public final class DecayingTransseries<T> {
                 continue;
             }
             for (int j = 0; i + j < terms; j++) {
-                r[i + j] = ar.add(r[i + j], ar.mul(x[i], y[j]));
+                r[i + j] = ar.add(r[i + j], ar.multiply(x[i], y[j]));
             }
         }
         return r;
@@ -166,7 +166,7 @@ public final class DecayingTransseries<T> {
         T du = (T) r[1];
         double[] e = (double[]) r[2];
         T w = ar.exp(u);
-        T dw = ar.mul(du, w);
+        T dw = ar.multiply(du, w);
         double aw = ar.abs(w);
         double eps = ar.epsilon();
         T v = deviation ? expm1(u) : w;
@@ -178,8 +178,8 @@ public final class DecayingTransseries<T> {
         if (!(ar.toComplex(x).getReal() > 0)) {
             throw new InvalidInputException("x", "the expansion at infinity needs Re x > 0, got " + ar.toComplex(x));
         }
-        T s = ar.div(ar.one(), x);
-        T e = ar.mul(lambda, ar.div(ar.exp(ar.mul(x, ar.of(-2))), ar.sqrt(x)));
+        T s = ar.divide(ar.one(), x);
+        T e = ar.multiply(lambda, ar.divide(ar.exp(ar.multiply(x, ar.of(-2))), ar.sqrt(x)));
         double as = ar.abs(s);
         double ae = ar.abs(e);
         T u = ar.zero();
@@ -187,7 +187,7 @@ public final class DecayingTransseries<T> {
         double err = 0;
         double errD = 0;
         T ek = e;
-        T e2 = ar.mul(e, e);
+        T e2 = ar.multiply(e, e);
         for (int k = 1; k <= sectors; k += 2) {
             T[] ck = c.get(k);
             T su = ar.zero();
@@ -201,14 +201,14 @@ public final class DecayingTransseries<T> {
                 if (mag > best && j > 1) {
                     break;
                 }
-                T t = ar.mul(ck[j], sj);
-                T factor = ar.sub(ar.of(-2.0 * k), ar.mul(ar.add(ar.ratio(k, 2), ar.of(j)), s));
+                T t = ar.multiply(ck[j], sj);
+                T factor = ar.subtract(ar.of(-2.0 * k), ar.multiply(ar.add(ar.ratio(k, 2), ar.of(j)), s));
                 su = ar.add(su, t);
-                sd = ar.add(sd, ar.mul(t, factor));
+                sd = ar.add(sd, ar.multiply(t, factor));
                 best = mag;
                 bestD = mag * ar.abs(factor);
                 sectorSize = Math.max(sectorSize, mag);
-                sj = ar.mul(sj, s);
+                sj = ar.multiply(sj, s);
             }
             double ak = Math.pow(ae, k);
             err += ak * best;
@@ -218,9 +218,9 @@ public final class DecayingTransseries<T> {
                 err += ak * sectorSize * ae * ae;
                 errD += ak * sectorSize * ae * ae * (2 * k + 4);
             }
-            u = ar.add(u, ar.mul(ek, su));
-            du = ar.add(du, ar.mul(ek, sd));
-            ek = ar.mul(ek, e2);
+            u = ar.add(u, ar.multiply(ek, su));
+            du = ar.add(du, ar.multiply(ek, sd));
+            ek = ar.multiply(ek, e2);
         }
         return new Object[] {u, du, new double[] {err, errD}};
     }
@@ -228,12 +228,12 @@ public final class DecayingTransseries<T> {
     /** exp(u) - 1 without cancellation for small u. */
     private T expm1(T u) {
         if (ar.abs(u) > 0.1) {
-            return ar.sub(ar.exp(u), ar.one());
+            return ar.subtract(ar.exp(u), ar.one());
         }
         T sum = u;
         T term = u;
         for (int n = 2; n < 400 && ar.abs(term) > ar.epsilon() * ar.abs(sum); n++) {
-            term = ar.div(ar.mul(term, u), ar.of(n));
+            term = ar.divide(ar.multiply(term, u), ar.of(n));
             sum = ar.add(sum, term);
         }
         return sum;

@@ -3,10 +3,11 @@ package org.tertius.connection.match;
 import java.util.List;
 import org.hipparchus.complex.Complex;
 import org.tertius.connection.infinity.DecayingTransseries;
-import org.tertius.connection.num.Arith;
 import org.tertius.connection.path.DeviationTaylor;
 import org.tertius.connection.zero.LocalValue;
 import org.tertius.core.InvalidInputException;
+import org.tertius.core.number.AnalyticArithmetic;
+import org.tertius.core.number.ComplexArithmetic;
 import org.tertius.core.number.SurfacePoint;
 import org.tertius.core.piii.Painleve3;
 import org.tertius.core.piii.Painleve3Solution;
@@ -42,12 +43,12 @@ public final class DecayingConnection {
     }
 
     /** The parameters (0, 0, 1, -1) in the arithmetic {@code ar}. */
-    public static <T> List<T> parameters(Arith<T> ar) {
+    public static <T> List<T> parameters(AnalyticArithmetic<T> ar) {
         return List.of(ar.zero(), ar.zero(), ar.one(), ar.of(-1));
     }
 
     /** The deviation v = w - 1 and w' at x = MIDDLE for the member lambda, with error estimates. */
-    public static <T> LocalValue<T> middleDeviation(Arith<T> ar, T lambda, double tolerance) {
+    public static <T> LocalValue<T> middleDeviation(AnalyticArithmetic<T> ar, T lambda, double tolerance) {
         int sectors = 1 + 2 * (int) Math.ceil(ar.digits() / 10.0);
         double x = far(ar);
         DecayingTransseries<T> ts = DecayingTransseries.create(ar, lambda, sectors, (int) (4 * x + 20));
@@ -60,11 +61,11 @@ public final class DecayingConnection {
      * The start of the transseries: the smallest term of sector 1 is about e^(-4x) relative to it (optimal
      * truncation of the K0 expansion), so x = digits ln(10)/4 + 2, at least {@link #FAR}.
      */
-    static <T> double far(Arith<T> ar) {
+    static <T> double far(AnalyticArithmetic<T> ar) {
         return Math.max(FAR, Math.ceil(ar.digits() * Math.log(10) / 4 + 2));
     }
 
-    private static <T> int order(Arith<T> ar) {
+    private static <T> int order(AnalyticArithmetic<T> ar) {
         return (int) Math.min(400, Math.max(30, 2 * ar.digits()));
     }
 
@@ -75,7 +76,7 @@ public final class DecayingConnection {
      */
     public static Painleve3Value middleValue(double lambda) {
         requireFinite(lambda);
-        Arith<Complex> ar = Arith.DOUBLE;
+        ComplexArithmetic ar = ComplexArithmetic.INSTANCE;
         DecayingTransseries<Complex> ts = DecayingTransseries.create(ar, new Complex(lambda), 7, (int) (4 * FAR + 20));
         LocalValue<Complex> v = ts.deviationAt(new Complex(FAR));
         DeviationTaylor<Complex> taylor = DeviationTaylor.create(ar, parameters(ar), ar.one(), order(ar));
@@ -101,14 +102,14 @@ public final class DecayingConnection {
         double grow = Math.max(1, at.w().norm() / Math.max(1e-300, m.w().subtract(1).norm()));
         LocalValue<Complex> data = new LocalValue<>(new Complex(x0), at.w(), at.dw(), at.errW() + grow * m.errW(),
                 at.errDw() + grow * m.errW() / x0);
-        return new ZeroFit<>(Arith.DOUBLE, parameters(Arith.DOUBLE), 40).fit(data);
+        return new ZeroFit<>(ComplexArithmetic.INSTANCE, parameters(ComplexArithmetic.INSTANCE), 40).fit(data);
     }
 
     /**
      * (sigma, B) of the member lambda in the arithmetic {@code ar} without the core engine: the deviation
      * integrator runs on to x0 on w itself.
      */
-    public static <T> ZeroFit.Result<T> zeroData(Arith<T> ar, T lambda, double x0, int degree) {
+    public static <T> ZeroFit.Result<T> zeroData(AnalyticArithmetic<T> ar, T lambda, double x0, int degree) {
         double tol = ar.epsilon() * 10;
         LocalValue<T> mid = middleDeviation(ar, lambda, tol);
         LocalValue<T> w = new LocalValue<>(mid.z(), ar.add(mid.w(), ar.one()), mid.dw(), mid.errW(), mid.errDw());

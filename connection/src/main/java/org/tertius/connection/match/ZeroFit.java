@@ -1,10 +1,10 @@
 package org.tertius.connection.match;
 
 import java.util.List;
-import org.tertius.connection.num.Arith;
 import org.tertius.connection.zero.LocalValue;
 import org.tertius.connection.zero.PowerSeriesAtZero;
 import org.tertius.core.TertiusException;
+import org.tertius.core.number.AnalyticArithmetic;
 
 /**
  * Reads the parameters (sigma, B) of w ~ B z^sigma off a value (z0, w, w') at a small z0: Newton's method on
@@ -15,11 +15,11 @@ import org.tertius.core.TertiusException;
  * @param <T> number type
  */
 public final class ZeroFit<T> {
-    private final Arith<T> ar;
+    private final AnalyticArithmetic<T> ar;
     private final List<T> parameters;
     private final int degree;
 
-    public ZeroFit(Arith<T> ar, List<T> parameters, int degree) {
+    public ZeroFit(AnalyticArithmetic<T> ar, List<T> parameters, int degree) {
         this.ar = ar;
         this.parameters = List.copyOf(parameters);
         this.degree = degree;
@@ -62,26 +62,26 @@ public final class ZeroFit<T> {
      */
     public Result<T> fit(LocalValue<T> data) {
         T z = data.z();
-        T sigma = ar.div(ar.mul(z, data.dw()), data.w());
-        T b = ar.div(data.w(), ar.pow(z, sigma));
+        T sigma = ar.divide(ar.multiply(z, data.dw()), data.w());
+        T b = ar.divide(data.w(), ar.pow(z, sigma));
         double hs = Math.sqrt(ar.epsilon());
         T[] r = residual(sigma, b, data);
         double tol = 4 * ar.epsilon();
         double lastSize = Double.POSITIVE_INFINITY;
         for (int it = 0; it < 60; it++) {
             T ds = ar.of(hs);
-            T db = ar.mul(b, ar.of(hs));
+            T db = ar.multiply(b, ar.of(hs));
             T[] rs = residual(ar.add(sigma, ds), b, data);
             T[] rb = residual(sigma, ar.add(b, db), data);
-            T j11 = ar.div(ar.sub(rs[0], r[0]), ds);
-            T j21 = ar.div(ar.sub(rs[1], r[1]), ds);
-            T j12 = ar.div(ar.sub(rb[0], r[0]), db);
-            T j22 = ar.div(ar.sub(rb[1], r[1]), db);
-            T det = ar.sub(ar.mul(j11, j22), ar.mul(j12, j21));
-            T stepS = ar.div(ar.sub(ar.mul(j22, r[0]), ar.mul(j12, r[1])), det);
-            T stepB = ar.div(ar.sub(ar.mul(j11, r[1]), ar.mul(j21, r[0])), det);
-            sigma = ar.sub(sigma, stepS);
-            b = ar.sub(b, stepB);
+            T j11 = ar.divide(ar.subtract(rs[0], r[0]), ds);
+            T j21 = ar.divide(ar.subtract(rs[1], r[1]), ds);
+            T j12 = ar.divide(ar.subtract(rb[0], r[0]), db);
+            T j22 = ar.divide(ar.subtract(rb[1], r[1]), db);
+            T det = ar.subtract(ar.multiply(j11, j22), ar.multiply(j12, j21));
+            T stepS = ar.divide(ar.subtract(ar.multiply(j22, r[0]), ar.multiply(j12, r[1])), det);
+            T stepB = ar.divide(ar.subtract(ar.multiply(j11, r[1]), ar.multiply(j21, r[0])), det);
+            sigma = ar.subtract(sigma, stepS);
+            b = ar.subtract(b, stepB);
             r = residual(sigma, b, data);
             double size = ar.abs(stepS) / (1 + ar.abs(sigma)) + ar.abs(stepB) / ar.abs(b);
             // converged, or stalled at the rounding floor of the data (the step no longer shrinks)
@@ -108,7 +108,7 @@ public final class ZeroFit<T> {
     private T[] residual(T sigma, T b, LocalValue<T> data) {
         LocalValue<T> s = PowerSeriesAtZero.create(ar, parameters, sigma, b, degree).at(data.z());
         @SuppressWarnings("unchecked")
-        T[] r = (T[]) new Object[] {ar.sub(s.w(), data.w()), ar.sub(s.dw(), data.dw())};
+        T[] r = (T[]) new Object[] {ar.subtract(s.w(), data.w()), ar.subtract(s.dw(), data.dw())};
         return r;
     }
 }

@@ -1,14 +1,14 @@
 package org.tertius.connection.path;
 
 import java.util.List;
-import org.tertius.connection.num.Arith;
 import org.tertius.connection.zero.LocalValue;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.UnreachableTargetException;
+import org.tertius.core.number.AnalyticArithmetic;
 
 /**
  * A Taylor-series integrator for the deviation v = w - c of a Painleve III solution from a constant c, along a
- * straight segment that avoids z = 0, in any {@link Arith}. It serves two purposes the core engine (double
+ * straight segment that avoids z = 0, in any {@link AnalyticArithmetic}. It serves two purposes the core engine (double
  * precision, errors relative to 1 + |w|) cannot: it keeps the relative accuracy of a small deviation from the
  * background c (the exponentially small tail of a decaying solution), and it runs in arbitrary precision.
  *
@@ -25,7 +25,7 @@ import org.tertius.core.UnreachableTargetException;
  * @param <T> number type
  */
 public final class DeviationTaylor<T> {
-    private final Arith<T> ar;
+    private final AnalyticArithmetic<T> ar;
     private final T alpha;
     private final T beta;
     private final T gamma;
@@ -34,7 +34,7 @@ public final class DeviationTaylor<T> {
     private final int order;
     private final int maxSteps;
 
-    private DeviationTaylor(Arith<T> ar, List<T> p, T c, int order, int maxSteps) {
+    private DeviationTaylor(AnalyticArithmetic<T> ar, List<T> p, T c, int order, int maxSteps) {
         this.ar = ar;
         this.alpha = p.get(0);
         this.beta = p.get(1);
@@ -50,7 +50,7 @@ public final class DeviationTaylor<T> {
      * @param background the constant c (0 integrates w itself)
      * @param order Taylor order per step, in [8, 400]
      */
-    public static <T> DeviationTaylor<T> create(Arith<T> ar, List<T> parameters, T background, int order) {
+    public static <T> DeviationTaylor<T> create(AnalyticArithmetic<T> ar, List<T> parameters, T background, int order) {
         if (order < 8 || order > 400) {
             throw new InvalidInputException("order", "must be in [8, 400], got " + order);
         }
@@ -70,7 +70,7 @@ public final class DeviationTaylor<T> {
         double rel = Math.max(start.errW() / Math.max(ar.abs(v), Double.MIN_NORMAL),
                 start.errDw() / Math.max(ar.abs(dv), Double.MIN_NORMAL));
         for (int step = 0; step < maxSteps; step++) {
-            T rest = ar.sub(target, z);
+            T rest = ar.subtract(target, z);
             double restLen = ar.abs(rest);
             if (restLen == 0) {
                 double av = ar.abs(v);
@@ -91,17 +91,17 @@ public final class DeviationTaylor<T> {
                 throw new UnreachableTargetException("the Taylor step collapsed at z = " + ar.toComplex(z)
                         + " (a zero or pole of w next to the segment); integrate around it with the core engine");
             }
-            T h = hLen >= restLen ? rest : ar.mul(rest, ar.of(hLen / restLen));
+            T h = hLen >= restLen ? rest : ar.multiply(rest, ar.of(hLen / restLen));
             double ah = ar.abs(h);
             T nv = ar.zero();
             T nd = ar.zero();
             T hp = ar.one();
             for (int n = 0; n <= order; n++) {
-                nv = ar.add(nv, ar.mul(co[n], hp));
+                nv = ar.add(nv, ar.multiply(co[n], hp));
                 if (n >= 1) {
-                    nd = ar.add(nd, ar.mul(ar.mul(co[n], ar.of(n)), ar.div(hp, h)));
+                    nd = ar.add(nd, ar.multiply(ar.multiply(co[n], ar.of(n)), ar.divide(hp, h)));
                 }
-                hp = ar.mul(hp, h);
+                hp = ar.multiply(hp, h);
             }
             double lh = Math.log(ah);
             double local = Math.exp(ar.logAbs(co[order]) + order * lh)
@@ -126,14 +126,14 @@ public final class DeviationTaylor<T> {
         T[] sq = arr(n1);
         v[0] = v0;
         v[1] = dv0;
-        T c2 = ar.mul(c, c);
-        T c3 = ar.mul(c2, c);
-        T constant = ar.add(ar.mul(alpha, c3), ar.mul(beta, c));
-        T zCoef = ar.add(ar.mul(gamma, ar.mul(c3, c)), delta);
+        T c2 = ar.multiply(c, c);
+        T c3 = ar.multiply(c2, c);
+        T constant = ar.add(ar.multiply(alpha, c3), ar.multiply(beta, c));
+        T zCoef = ar.add(ar.multiply(gamma, ar.multiply(c3, c)), delta);
         T w0 = ar.add(c, v0);
-        T lead0 = ar.mul(z0, w0);
+        T lead0 = ar.multiply(z0, w0);
         for (int n = 0; n + 2 <= order; n++) {
-            d1[n] = ar.mul(v[n + 1], ar.of(n + 1));
+            d1[n] = ar.multiply(v[n + 1], ar.of(n + 1));
             v2[n] = conv(v, v, n);
             v3[n] = conv(v2, v, n);
             v4[n] = conv(v2, v2, n);
@@ -144,48 +144,48 @@ public final class DeviationTaylor<T> {
             T p4prev = n >= 1 ? fourth(n - 1, v, v2, v3, v4, c3, c2, c) : ar.zero();
             T sqPrev = n >= 1 ? sq[n - 1] : ar.zero();
             // z V'^2 with z = z0 + h
-            T rhs = ar.add(ar.mul(z0, sq[n]), sqPrev);
+            T rhs = ar.add(ar.multiply(z0, sq[n]), sqPrev);
             // - W V' = -(c V' + V V')
-            rhs = ar.sub(rhs, ar.add(ar.mul(c, d1[n]), conv(v, d1, n)));
-            rhs = ar.add(rhs, ar.add(ar.mul(alpha, p3), ar.mul(beta, v[n])));
-            rhs = ar.add(rhs, ar.mul(gamma, ar.add(ar.mul(z0, p4), p4prev)));
+            rhs = ar.subtract(rhs, ar.add(ar.multiply(c, d1[n]), conv(v, d1, n)));
+            rhs = ar.add(rhs, ar.add(ar.multiply(alpha, p3), ar.multiply(beta, v[n])));
+            rhs = ar.add(rhs, ar.multiply(gamma, ar.add(ar.multiply(z0, p4), p4prev)));
             if (n == 0) {
-                rhs = ar.add(rhs, ar.add(constant, ar.mul(z0, zCoef)));
+                rhs = ar.add(rhs, ar.add(constant, ar.multiply(z0, zCoef)));
             } else if (n == 1) {
                 rhs = ar.add(rhs, zCoef);
             }
             // [z W V'']_n = sum_i [zW]_i V''_{n-i}, [zW]_i = z0 (c delta_i0 + v_i) + v_{i-1} + c delta_i1
             T known = ar.zero();
             for (int i = 1; i <= n; i++) {
-                T zw = ar.add(ar.mul(z0, v[i]), v[i - 1]);
+                T zw = ar.add(ar.multiply(z0, v[i]), v[i - 1]);
                 if (i == 1) {
                     zw = ar.add(zw, c);
                 }
-                known = ar.add(known, ar.mul(zw, d2[n - i]));
+                known = ar.add(known, ar.multiply(zw, d2[n - i]));
             }
-            d2[n] = ar.div(ar.sub(rhs, known), lead0);
-            v[n + 2] = ar.div(d2[n], ar.of((double) (n + 1) * (n + 2)));
+            d2[n] = ar.divide(ar.subtract(rhs, known), lead0);
+            v[n + 2] = ar.divide(d2[n], ar.of((double) (n + 1) * (n + 2)));
         }
         return v;
     }
 
     private T cube(int n, T[] v, T[] v2, T[] v3, T c2, T c1) {
-        T s = ar.mul(ar.mul(c2, ar.of(3)), v[n]);
-        s = ar.add(s, ar.mul(ar.mul(c1, ar.of(3)), v2[n]));
+        T s = ar.multiply(ar.multiply(c2, ar.of(3)), v[n]);
+        s = ar.add(s, ar.multiply(ar.multiply(c1, ar.of(3)), v2[n]));
         return ar.add(s, v3[n]);
     }
 
     private T fourth(int n, T[] v, T[] v2, T[] v3, T[] v4, T c3, T c2, T c1) {
-        T s = ar.mul(ar.mul(c3, ar.of(4)), v[n]);
-        s = ar.add(s, ar.mul(ar.mul(c2, ar.of(6)), v2[n]));
-        s = ar.add(s, ar.mul(ar.mul(c1, ar.of(4)), v3[n]));
+        T s = ar.multiply(ar.multiply(c3, ar.of(4)), v[n]);
+        s = ar.add(s, ar.multiply(ar.multiply(c2, ar.of(6)), v2[n]));
+        s = ar.add(s, ar.multiply(ar.multiply(c1, ar.of(4)), v3[n]));
         return ar.add(s, v4[n]);
     }
 
     private T conv(T[] x, T[] y, int n) {
         T s = ar.zero();
         for (int i = 0; i <= n; i++) {
-            s = ar.add(s, ar.mul(x[i], y[n - i]));
+            s = ar.add(s, ar.multiply(x[i], y[n - i]));
         }
         return s;
     }

@@ -1,7 +1,7 @@
 package org.tertius.connection.zero;
 
 import org.hipparchus.complex.Complex;
-import org.tertius.connection.num.Arith;
+import org.tertius.core.number.AnalyticArithmetic;
 
 /**
  * A value of a local expansion: the point z, w(z), w'(z) and estimated absolute errors of w and w' (truncation
@@ -45,12 +45,12 @@ public final class LocalValue<T> {
     }
 
     /** The larger error estimate relative to 1 + |value|. */
-    public double relativeError(Arith<T> a) {
+    public double relativeError(AnalyticArithmetic<T> a) {
         return Math.max(errW / (1 + a.abs(w)), errDw / (1 + a.abs(dw)));
     }
 
     /** The values in double precision: {z, w, w'}. */
-    public Complex[] toComplex(Arith<T> a) {
+    public Complex[] toComplex(AnalyticArithmetic<T> a) {
         return new Complex[] {a.toComplex(z), a.toComplex(w), a.toComplex(dw)};
     }
 

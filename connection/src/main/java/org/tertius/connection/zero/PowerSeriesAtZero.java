@@ -2,8 +2,8 @@ package org.tertius.connection.zero;
 
 import java.util.ArrayList;
 import java.util.List;
-import org.tertius.connection.num.Arith;
 import org.tertius.core.InvalidInputException;
+import org.tertius.core.number.AnalyticArithmetic;
 
 /**
  * The convergent expansion at z = 0 of the solutions of Painleve III (DLMF eq. 32.2.3)
@@ -28,7 +28,7 @@ import org.tertius.core.InvalidInputException;
  * @param <T> number type
  */
 public final class PowerSeriesAtZero<T> {
-    private final Arith<T> ar;
+    private final AnalyticArithmetic<T> ar;
     private final T sigma;
     private final T b;
     private final T px;
@@ -38,7 +38,7 @@ public final class PowerSeriesAtZero<T> {
     private final double[][] err;
     private final double amplification;
 
-    private PowerSeriesAtZero(Arith<T> ar, T sigma, T b, int degree, Recurrence<T> r) {
+    private PowerSeriesAtZero(AnalyticArithmetic<T> ar, T sigma, T b, int degree, Recurrence<T> r) {
         this.ar = ar;
         this.sigma = sigma;
         this.b = b;
@@ -57,7 +57,8 @@ public final class PowerSeriesAtZero<T> {
      * @throws InvalidInputException if |Re sigma| >= 1 (resonant: logarithmic terms, see {@link LogSeriesAtZero}),
      *     B = 0, or degree outside [2, 400]
      */
-    public static <T> PowerSeriesAtZero<T> create(Arith<T> ar, List<T> parameters, T sigma, T b, int degree) {
+    public static <T> PowerSeriesAtZero<T> create(AnalyticArithmetic<T> ar, List<T> parameters, T sigma, T b,
+                                                  int degree) {
         double re = ar.toComplex(sigma).getReal();
         if (!(Math.abs(re) < 1)) {
             throw new InvalidInputException("sigma", "must have |Re sigma| < 1 for the power family w ~ B z^sigma,"
@@ -101,9 +102,9 @@ public final class PowerSeriesAtZero<T> {
     /** w(z) and w'(z) on the principal branch of z^sigma, with truncation and rounding error estimates. */
     public LocalValue<T> at(T z) {
         T lz = ar.log(z);
-        T xv = ar.exp(ar.mul(px, lz));
-        T yv = ar.exp(ar.mul(py, lz));
-        T pre = ar.mul(b, ar.exp(ar.mul(sigma, lz)));
+        T xv = ar.exp(ar.multiply(px, lz));
+        T yv = ar.exp(ar.multiply(py, lz));
+        T pre = ar.multiply(b, ar.exp(ar.multiply(sigma, lz)));
         double ax = ar.abs(xv);
         double ay = ar.abs(yv);
         T sw = ar.zero();
@@ -119,9 +120,9 @@ public final class PowerSeriesAtZero<T> {
             T term = xa;
             T[] row = v.get(a);
             for (int bb = 0; a + bb <= degree; bb++) {
-                T t = ar.mul(row[bb], term);
-                T e = ar.add(sigma, ar.add(ar.mul(px, ar.of(a)), ar.mul(py, ar.of(bb))));
-                T td = ar.mul(t, e);
+                T t = ar.multiply(row[bb], term);
+                T e = ar.add(sigma, ar.add(ar.multiply(px, ar.of(a)), ar.multiply(py, ar.of(bb))));
+                T td = ar.multiply(t, e);
                 sw = ar.add(sw, t);
                 sd = ar.add(sd, td);
                 double m = Math.pow(ax, a) * Math.pow(ay, bb);
@@ -136,9 +137,9 @@ public final class PowerSeriesAtZero<T> {
                 } else if (n == degree - 1) {
                     prev += at;
                 }
-                term = ar.mul(term, yv);
+                term = ar.multiply(term, yv);
             }
-            xa = ar.mul(xa, xv);
+            xa = ar.multiply(xa, xv);
         }
         double absPre = ar.abs(pre);
         double absZ = ar.abs(z);
@@ -149,8 +150,8 @@ public final class PowerSeriesAtZero<T> {
         double eps = ar.epsilon();
         double ew = absPre * (trunc + round + 4 * eps * sumAbs);
         double ed = absPre / absZ * (trunc * (1 + maxExponent()) + roundD + 4 * eps * sumAbsD);
-        T w = ar.mul(pre, sw);
-        T dw = ar.div(ar.mul(pre, sd), z);
+        T w = ar.multiply(pre, sw);
+        T dw = ar.divide(ar.multiply(pre, sd), z);
         return new LocalValue<>(z, w, dw, ew, ed);
     }
 
@@ -172,7 +173,7 @@ public final class PowerSeriesAtZero<T> {
             if (val.relativeError(ar) <= tolerance) {
                 return val;
             }
-            z = ar.mul(z, half);
+            z = ar.multiply(z, half);
         }
         throw new InvalidInputException("tolerance", "the expansion at 0 with sigma = " + ar.toComplex(sigma)
                 + " does not reach relative error " + tolerance + " for |z| >= 1e-250 at degree " + degree
@@ -181,7 +182,7 @@ public final class PowerSeriesAtZero<T> {
 
     /** The coefficient recurrence with its rounding bound. */
     private static final class Recurrence<T> {
-        final Arith<T> ar;
+        final AnalyticArithmetic<T> ar;
         final T px;
         final T py;
         final List<T[]> v = new ArrayList<>();
@@ -190,22 +191,22 @@ public final class PowerSeriesAtZero<T> {
         private final List<Source<T>> sources = new ArrayList<>();
         private final int n;
 
-        Recurrence(Arith<T> ar, List<T> parameters, T sigma, T b, int n) {
+        Recurrence(AnalyticArithmetic<T> ar, List<T> parameters, T sigma, T b, int n) {
             List<T> p = parameters;
             this.ar = ar;
             this.n = n;
             boolean even = ar.abs(p.get(0)) == 0 && ar.abs(p.get(1)) == 0;
             int s = even ? 2 : 1;
             T one = ar.one();
-            this.px = ar.mul(ar.add(one, sigma), ar.of(s));
-            this.py = ar.mul(ar.sub(one, sigma), ar.of(s));
-            T b2 = ar.mul(b, b);
+            this.px = ar.multiply(ar.add(one, sigma), ar.of(s));
+            this.py = ar.multiply(ar.subtract(one, sigma), ar.of(s));
+            T b2 = ar.multiply(b, b);
             if (!even) {
-                sources.add(new Source<>(ar.mul(p.get(0), b), 1, 0, 3));
-                sources.add(new Source<>(ar.div(p.get(1), b), 0, 1, 1));
+                sources.add(new Source<>(ar.multiply(p.get(0), b), 1, 0, 3));
+                sources.add(new Source<>(ar.divide(p.get(1), b), 0, 1, 1));
             }
-            sources.add(new Source<>(ar.mul(p.get(2), b2), 2 / s, 0, 4));
-            sources.add(new Source<>(ar.div(p.get(3), b2), 0, 2 / s, 0));
+            sources.add(new Source<>(ar.multiply(p.get(2), b2), 2 / s, 0, 4));
+            sources.add(new Source<>(ar.divide(p.get(3), b2), 0, 2 / s, 0));
             this.err = new double[n + 1][];
             run();
         }
@@ -293,7 +294,7 @@ public final class PowerSeriesAtZero<T> {
                     f = v4.get(i)[j];
                     fe = e4[i][j];
                 }
-                T t = ar.mul(s.coefficient, f);
+                T t = ar.multiply(s.coefficient, f);
                 rhs = ar.add(rhs, t);
                 rhsErr += ar.abs(s.coefficient) * fe;
                 rhsAbs += ar.abs(t);
@@ -309,19 +310,19 @@ public final class PowerSeriesAtZero<T> {
                     if ((i == 0 && j == 0) || (k == 0 && l == 0)) {
                         continue;
                     }
-                    T de = ar.add(ar.mul(px, ar.of(k - i)), ar.mul(py, ar.of(l - j)));
-                    T wgt = ar.mul(de, de);
-                    T t = ar.mul(ar.mul(v.get(i)[j], v.get(k)[l]), wgt);
+                    T de = ar.add(ar.multiply(px, ar.of(k - i)), ar.multiply(py, ar.of(l - j)));
+                    T wgt = ar.multiply(de, de);
+                    T t = ar.multiply(ar.multiply(v.get(i)[j], v.get(k)[l]), wgt);
                     sum = ar.add(sum, t);
                     double aw = ar.abs(wgt);
                     sumErr += aw * (m1[i][j] * err[k][l] + err[i][j] * m1[k][l]);
                     sumAbs += ar.abs(t);
                 }
             }
-            T e = ar.add(ar.mul(px, ar.of(a)), ar.mul(py, ar.of(bb)));
-            T e2 = ar.mul(e, e);
-            T num = ar.sub(rhs, ar.mul(sum, ar.ratio(1, 2)));
-            T val = ar.div(num, e2);
+            T e = ar.add(ar.multiply(px, ar.of(a)), ar.multiply(py, ar.of(bb)));
+            T e2 = ar.multiply(e, e);
+            T num = ar.subtract(rhs, ar.multiply(sum, ar.ratio(1, 2)));
+            T val = ar.divide(num, e2);
             v.get(a)[bb] = val;
             double ae2 = ar.abs(e2);
             double bound = (rhsErr + 0.5 * sumErr + eps * (a + bb + 4) * (rhsAbs + 0.5 * sumAbs)) / ae2
@@ -343,7 +344,7 @@ public final class PowerSeriesAtZero<T> {
                 for (int j = 0; j <= bb; j++) {
                     T xv = x.get(i)[j];
                     T yv = y.get(a - i)[bb - j];
-                    s = ar.add(s, ar.mul(xv, yv));
+                    s = ar.add(s, ar.multiply(xv, yv));
                     e += mx[i][j] * ey[a - i][bb - j] + ex[i][j] * my[a - i][bb - j];
                     abs += mx[i][j] * my[a - i][bb - j];
                 }

@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.SortedMap;
 import java.util.TreeMap;
+import org.tertius.core.number.Arithmetic;
 
 /**
  * A polynomial with exact {@link GaussianRational} coefficients in a fixed number of variables (Laurent in
@@ -124,14 +125,15 @@ public final class Polynomial {
         return d;
     }
 
-    /** Evaluates the polynomial with the given values of all variables in the given arithmetic. */
-    public <T> T evaluate(Arithmetic<T> a, List<T> values) {
+    /** Evaluates the polynomial with the given values of all variables in the given number type. */
+    public <T> T evaluate(Evaluation<T> in, List<T> values) {
         if (values.size() != variables) {
             throw new IllegalArgumentException("expected " + variables + " values");
         }
+        Arithmetic<T> a = in.arithmetic();
         T sum = null;
         for (Map.Entry<Monomial, GaussianRational> e : terms.entrySet()) {
-            T term = a.coefficient(e.getValue());
+            T term = in.coefficient().apply(e.getValue());
             for (int v = 0; v < variables; v++) {
                 int k = e.getKey().exponent(v);
                 if (k != 0) {
@@ -143,7 +145,7 @@ public final class Polynomial {
             }
             sum = sum == null ? term : a.add(sum, term);
         }
-        return sum == null ? a.coefficient(GaussianRational.ZERO) : sum;
+        return sum == null ? in.coefficient().apply(GaussianRational.ZERO) : sum;
     }
 
     /** Text with the given variable names, e.g. {@code -2*b0*t_2^-1 + 1/2*x}. */

@@ -1,9 +1,14 @@
-package org.tertius.connection.num;
+package org.tertius.core.number;
 
 import org.hipparchus.complex.Complex;
 
-/** {@link Arith} in double precision (Hipparchus complex numbers). */
-final class ComplexArith implements Arith<Complex> {
+/** {@link AnalyticArithmetic} in double precision, on Hipparchus complex numbers. */
+public final class ComplexArithmetic implements AnalyticArithmetic<Complex> {
+    /** The one instance (the class has no state). */
+    public static final ComplexArithmetic INSTANCE = new ComplexArithmetic();
+
+    private ComplexArithmetic() {
+    }
 
     @Override
     public Complex of(double re, double im) {
@@ -21,33 +26,28 @@ final class ComplexArith implements Arith<Complex> {
     }
 
     @Override
-    public Complex sub(Complex a, Complex b) {
+    public Complex subtract(Complex a, Complex b) {
         return a.subtract(b);
     }
 
     @Override
-    public Complex mul(Complex a, Complex b) {
+    public Complex multiply(Complex a, Complex b) {
         return a.multiply(b);
     }
 
     @Override
-    public Complex mul(Complex a, long k) {
-        return a.multiply((double) k);
-    }
-
-    @Override
-    public Complex scale(Complex a, double s) {
-        return a.multiply(s);
-    }
-
-    @Override
-    public Complex div(Complex a, Complex b) {
+    public Complex divide(Complex a, Complex b) {
         return a.divide(b);
     }
 
     @Override
-    public Complex neg(Complex a) {
+    public Complex negate(Complex a) {
         return a.negate();
+    }
+
+    @Override
+    public Complex reciprocal(Complex a) {
+        return a.reciprocal();
     }
 
     @Override

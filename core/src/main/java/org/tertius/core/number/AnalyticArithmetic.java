@@ -1,19 +1,17 @@
-package org.tertius.connection.num;
+package org.tertius.core.number;
 
 import org.hipparchus.complex.Complex;
 
 /**
- * The complex arithmetic the series and recurrences of this module are written in, so that one code path
- * serves double precision ({@link #DOUBLE}) and arbitrary precision ({@link ApcomplexArith}). Implementations
- * are immutable and thread-safe.
+ * A complex {@link Arithmetic} with conversions, the elementary functions and a working precision: series and
+ * recurrences written in it run unchanged in double precision ({@link ComplexArithmetic#INSTANCE}) and in
+ * arbitrary precision ({@link ApcomplexArithmetic}).
  *
  * @param <T> the number type
  */
-public interface Arith<T> {
+public interface AnalyticArithmetic<T> extends Arithmetic<T> {
 
-    /** Double-precision complex arithmetic (Hipparchus {@link Complex}). */
-    Arith<Complex> DOUBLE = new ComplexArith();
-
+    /** re + i im (a double is converted exactly, then rounded to the working precision). */
     T of(double re, double im);
 
     default T of(double re) {
@@ -23,15 +21,15 @@ public interface Arith<T> {
     /** An exact rational p/q at the working precision. */
     T ratio(long p, long q);
 
-    T add(T a, T b);
+    @Override
+    default T zero() {
+        return of(0);
+    }
 
-    T sub(T a, T b);
-
-    T mul(T a, T b);
-
-    T div(T a, T b);
-
-    T neg(T a);
+    @Override
+    default T one() {
+        return of(1);
+    }
 
     T exp(T a);
 
@@ -49,30 +47,14 @@ public interface Arith<T> {
     /** Modulus as a double (0 and huge values are fine: the result saturates, it does not throw). */
     double abs(T a);
 
-    Complex toComplex(T a);
-
     /** Natural logarithm of the modulus, without overflow ({@code -infinity} for 0). */
     double logAbs(T a);
+
+    Complex toComplex(T a);
 
     /** Unit roundoff of the arithmetic (2^-53 for double, 10^-precision for arbitrary precision). */
     double epsilon();
 
     /** Working precision in decimal digits. */
     long digits();
-
-    default T zero() {
-        return of(0);
-    }
-
-    default T one() {
-        return of(1);
-    }
-
-    default T mul(T a, long k) {
-        return mul(a, ratio(k, 1));
-    }
-
-    default T scale(T a, double s) {
-        return mul(a, of(s));
-    }
 }

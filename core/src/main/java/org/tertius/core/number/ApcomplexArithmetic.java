@@ -1,4 +1,4 @@
-package org.tertius.connection.num;
+package org.tertius.core.number;
 
 import org.apfloat.Apcomplex;
 import org.apfloat.Apfloat;
@@ -7,18 +7,18 @@ import org.apfloat.FixedPrecisionApcomplexHelper;
 import org.hipparchus.complex.Complex;
 import org.tertius.core.InvalidInputException;
 
-/** {@link Arith} in arbitrary precision (Apfloat) at a fixed number of decimal digits. */
-public final class ApcomplexArith implements Arith<Apcomplex> {
+/** {@link AnalyticArithmetic} in arbitrary precision (Apfloat) at a fixed number of decimal digits. */
+public final class ApcomplexArithmetic implements AnalyticArithmetic<Apcomplex> {
     private final FixedPrecisionApcomplexHelper h;
 
-    public ApcomplexArith(long digits) {
+    public ApcomplexArithmetic(long digits) {
         if (digits < 16 || digits > 100000) {
             throw new InvalidInputException("digits", "must be in [16, 100000], got " + digits);
         }
         this.h = new FixedPrecisionApcomplexHelper(digits);
     }
 
-    /** The helper that fixes the precision (for functions not in {@link Arith}: Gamma, Bessel, pi). */
+    /** The helper that fixes the precision (for functions not in {@link AnalyticArithmetic}: Gamma, Bessel, pi). */
     public FixedPrecisionApcomplexHelper helper() {
         return h;
     }
@@ -49,23 +49,28 @@ public final class ApcomplexArith implements Arith<Apcomplex> {
     }
 
     @Override
-    public Apcomplex sub(Apcomplex a, Apcomplex b) {
+    public Apcomplex subtract(Apcomplex a, Apcomplex b) {
         return h.subtract(a, b);
     }
 
     @Override
-    public Apcomplex mul(Apcomplex a, Apcomplex b) {
+    public Apcomplex multiply(Apcomplex a, Apcomplex b) {
         return h.multiply(a, b);
     }
 
     @Override
-    public Apcomplex div(Apcomplex a, Apcomplex b) {
+    public Apcomplex divide(Apcomplex a, Apcomplex b) {
         return h.divide(a, b);
     }
 
     @Override
-    public Apcomplex neg(Apcomplex a) {
+    public Apcomplex negate(Apcomplex a) {
         return h.negate(a);
+    }
+
+    @Override
+    public Apcomplex reciprocal(Apcomplex a) {
+        return h.divide(one(), a);
     }
 
     @Override
