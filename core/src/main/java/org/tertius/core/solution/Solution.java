@@ -352,7 +352,15 @@ public final class Solution {
         Node best = snapshot[0];
         double bestScore = Double.POSITIVE_INFINITY;
         for (Node n : snapshot) {
-            double d = org.tertius.core.number.Cx.abs(tRe - n.tauRe(), tIm - n.tauIm()) - n.radius();
+            double dx = tRe - n.tauRe();
+            double dy = tIm - n.tauIm();
+            // the score is at least max(|dx|, |dy|) - radius (the penalty is not negative): a node that cannot
+            // beat the best so far is passed over without its distance and logarithm (a margin of 1e-12 keeps
+            // rounding from deciding, so the choice is the one of the full comparison)
+            if (Math.max(Math.abs(dx), Math.abs(dy)) - n.radius() > bestScore * (1 + 1e-12)) {
+                continue;
+            }
+            double d = org.tertius.core.number.Cx.abs(dx, dy) - n.radius();
             double decades = Math.max(0, Math.log10(Math.max(n.accumulatedError(), 1e-300) / PENALTY_FROM));
             double score = Math.max(d, 0) + 0.5 * n.radius() * decades;
             if (score < bestScore) {
