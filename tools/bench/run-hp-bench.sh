@@ -26,6 +26,7 @@ for d in 50 100; do
   # the launcher and the peer alternate run by run, so that a drift of the machine's speed touches both alike
   echo "== $d digits, whole processes, interleaved: connection/target/tertius (launcher) and the mpmath peer"
   ours=$(mktemp); peer=$(mktemp)
+  trap 'rm -f "$ours" "$peer"' EXIT
   for i in $(seq 7); do
     /usr/bin/time -f "%e %U" connection/target/tertius eval $P --digits "$d" 2>&1 >/dev/null | tail -1 >> "$ours"
     /usr/bin/time -f "%e %U" python3 tools/bench/mp_peer.py --digits "$d" 2>&1 >/dev/null | tail -1 >> "$peer"

@@ -73,9 +73,12 @@ final class ArgumentParser {
                     }
                     continue;
                 }
-                out.add(t);
-                if (o.hasArg() && eq < 0 && i + 1 < args.length) {
-                    out.add(args[++i]); // its value, whatever it starts with; Commons CLI refuses an option there
+                if (o.hasArg() && eq < 0 && i + 1 < args.length && !isOption(options, args[i + 1])) {
+                    // its value, whatever it starts with, attached to it: as a token of its own, a value such as
+                    // -s or -summary.csv would be read as an option of the parser library
+                    out.add(t + "=" + args[++i]);
+                } else {
+                    out.add(t);
                 }
             } else if (t.length() > 1 && t.startsWith("-") && !standardShort(t)) {
                 throw unknown(t);
@@ -84,6 +87,15 @@ final class ArgumentParser {
             }
         }
         return out.toArray(new String[0]);
+    }
+
+    /** Whether the token names one of the options (--name or --name=value): then it is not a value. */
+    private static boolean isOption(Options options, String token) {
+        if (!token.startsWith("--")) {
+            return false;
+        }
+        int eq = token.indexOf('=');
+        return options.hasLongOption(eq < 0 ? token : token.substring(0, eq));
     }
 
     /** -h, -V or both clustered. */

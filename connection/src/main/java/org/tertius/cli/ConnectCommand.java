@@ -54,7 +54,7 @@ public final class ConnectCommand implements Command {
         lambda = a.text("--lambda");
         sigma = a.number("--sigma", "a number in (-1, 1)");
         x0 = a.has("--x0") ? a.number("--x0", null) : 1e-3;
-        digits = a.integer("--digits", null);
+        digits = a.integer("--digits", "an integer in [16, 100000]");
         format = a.choice("--format", "csv", "text");
     }
 
@@ -85,6 +85,9 @@ public final class ConnectCommand implements Command {
         rows.add(row("sigma", "double", r.sigma().getReal(), r.errSigma(), cs, 2e-16 * Math.abs(cs)));
         rows.add(row("B", "double", r.amplitude().getReal(), r.errAmplitude(), cb, 2e-16 * Math.abs(cb)));
         if (digits != null) {
+            if (digits < 16 || digits > 100000) {
+                throw new InvalidInputException("digits", "must be in [16, 100000], got " + digits);
+            }
             ApcomplexArithmetic ar = new ApcomplexArithmetic(digits + 6);
             ZeroFit.Result<Apcomplex> hp = DecayingConnection.zeroData(ar, ar.parse(lambda), Math.min(x0, 1e-4), 14);
             Apcomplex[] c = McCoyTracyWu.zeroData(lambda, digits);

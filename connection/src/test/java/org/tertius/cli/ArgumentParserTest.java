@@ -36,6 +36,10 @@ class ArgumentParserTest {
         assertEquals("-1.5-2i", a.text("--at"));
         assertEquals(-3, a.integer("--digits", null));
         assertEquals("-i", parse("--beta", "-i").text("--beta"));
+        // values that look like options of the parser library (a short option, a single-dash long option)
+        assertEquals("-h", parse("--beta", "-h").text("--beta"));
+        assertEquals("-beta", parse("--at", "-beta").text("--at"));
+        assertEquals("-summary.csv", parse("--out", "-summary.csv").text("--out"));
         assertEquals("\"2\"", parse("--at", "\"2\"").text("--at"));
     }
 

@@ -2,6 +2,8 @@ package org.tertius.core.mp;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.concurrent.atomic.AtomicBoolean;
+import java.util.concurrent.atomic.AtomicLong;
 import org.tertius.core.TertiusException;
 import org.tertius.core.UnreachableTargetException;
 import org.tertius.core.taylor.RecurrencePlan;
@@ -58,7 +60,7 @@ public final class SegmentIntegrator {
     private final double log2Tolerance;
     private final int toleranceDigits;
     /** Complex products of series coefficients done so far (recurrence and continued fractions). */
-    private final java.util.concurrent.atomic.AtomicLong products = new java.util.concurrent.atomic.AtomicLong();
+    private final AtomicLong products = new AtomicLong();
 
     /**
      * @param kernel the recurrence kernel
@@ -117,8 +119,9 @@ public final class SegmentIntegrator {
     }
 
 
-    private TaylorSeries expand(MpComplex tau, MpComplex[] y, double r) {
-        products.addAndGet(kernel.productsPerExpansion());
+    /** The series at tau with scale r; its products are added to {@code counter}. */
+    private TaylorSeries expand(MpComplex tau, MpComplex[] y, double r, AtomicLong counter) {
+        counter.addAndGet(kernel.productsPerExpansion());
         return kernel.expand(tau, y, r);
     }
 
@@ -222,33 +225,55 @@ public final class SegmentIntegrator {
     }
 
     /**
-     * A state with its first series already expanded ({@link #start}): a run from it begins with a step. Made
-     * ahead of a run, e.g. on another thread while the path is still being planned. Immutable.
+     * A state with its first series already expanded by one integrator ({@link #start}): a run of that integrator
+     * from it begins with a step. Made ahead of a run, e.g. on another thread while the path is still being
+     * planned, and may serve several runs. Thread-safe.
      */
     public static final class Start {
+        final SegmentIntegrator owner;
         final MpComplex tau;
         final MpComplex[] y;
         final TaylorSeries series;
+        /** Products of the expansion, charged to the integrator's count by the first run that uses it. */
+        private final long productCount;
+        private final AtomicBoolean charged = new AtomicBoolean();
 
-        private Start(MpComplex tau, MpComplex[] y, TaylorSeries series) {
+        private Start(SegmentIntegrator owner, MpComplex tau, MpComplex[] y, TaylorSeries series, long productCount) {
+            this.owner = owner;
             this.tau = tau;
             this.y = y.clone();
             this.series = series;
+            this.productCount = productCount;
         }
     }
 
     /**
-     * The first series of a run from (tau, y), expanded now.
+     * The first series of a run from (tau, y), expanded now. Its products are counted ({@link #products()}) when
+     * a run first uses it, not before.
      *
      * @param scaleGuess first scale of the series (about the radius of convergence)
      * @throws UnreachableTargetException if no scale gives a usable series (a singularity at tau)
      */
     public Start start(MpComplex tau, MpComplex[] y, double scaleGuess) {
-        return new Start(tau, y, expandScaled(tau, y, scaleGuess));
+        AtomicLong count = new AtomicLong();
+        TaylorSeries series = expandScaled(tau, y, scaleGuess, count);
+        return new Start(this, tau, y, series, count.get());
     }
 
-    /** As {@link #run(MpComplex, MpComplex[], List, double, boolean, Advance, Landing)}, from a prepared start. */
+    /**
+     * As {@link #run(MpComplex, MpComplex[], List, double, boolean, Advance, Landing)}, from a prepared start.
+     *
+     * @throws IllegalArgumentException if the start was made by another integrator (another precision or order)
+     */
     public Result run(Start start, List<MpComplex> waypoints, boolean keepNodes, Advance advance, Landing landing) {
+        if (start.owner != this) {
+            throw new IllegalArgumentException("the start was expanded by another integrator (precision "
+                    + start.owner.ctx.digits() + " digits, order " + start.owner.order() + "), not by this one ("
+                    + ctx.digits() + " digits, order " + order() + ")");
+        }
+        if (start.charged.compareAndSet(false, true)) {
+            products.addAndGet(start.productCount);
+        }
         return run(start.tau, start.y, waypoints, start.series.scale(), keepNodes, advance, landing, start.series);
     }
 
@@ -294,7 +319,7 @@ public final class SegmentIntegrator {
             if (steps >= MAX_STEPS) {
                 throw new UnreachableTargetException("more than " + MAX_STEPS + " high-precision steps on one segment");
             }
-            TaylorSeries series = steps == 0 && first != null ? first : expandScaled(tau, y, r);
+            TaylorSeries series = steps == 0 && first != null ? first : expandScaled(tau, y, r, products);
             r = series.scale();
             double rho = r * rootRadius(series);
             double hT = r * taylorStep(series, y);
@@ -434,13 +459,13 @@ public final class SegmentIntegrator {
      * Expands at tau with a scale near the radius of convergence (re-expanding once or twice when the root test
      * says that the guess was far off), so that the fixed-point coefficients neither grow nor shrink fast.
      */
-    private TaylorSeries expandScaled(MpComplex tau, MpComplex[] y, double r) {
+    private TaylorSeries expandScaled(MpComplex tau, MpComplex[] y, double r, AtomicLong counter) {
         TaylorSeries series = null;
         // a scale beyond the radius of convergence makes the scaled coefficients grow like (r / rho)^k: the kernel
         // stops early when they grow too fast (or overflow), and the scale shrinks by the growth seen
         for (int shrink = 0; series == null; shrink++) {
             try {
-                series = expand(tau, y, r);
+                series = expand(tau, y, r, counter);
             } catch (FixedPointKernel.ScaleTooLarge e) {
                 if (shrink >= 12) {
                     throw new UnreachableTargetException("the high-precision series near tau = " + tau.toComplex()
@@ -460,7 +485,7 @@ public final class SegmentIntegrator {
                 break;
             }
             r = r * Math.max(1e-4, Math.min(1e4, q));
-            series = expand(tau, y, r);
+            series = expand(tau, y, r, counter);
         }
         return series;
     }

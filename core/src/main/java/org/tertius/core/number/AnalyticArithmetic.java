@@ -18,7 +18,10 @@ public interface AnalyticArithmetic<T> extends Arithmetic<T> {
         return of(re, 0);
     }
 
-    /** An exact rational p/q at the working precision. */
+    /**
+     * The rational p/q at the working precision (in double {@code (double) p / q}, which is p/q rounded once only
+     * while |p| and |q| stay below 2^53).
+     */
     T ratio(long p, long q);
 
     @Override

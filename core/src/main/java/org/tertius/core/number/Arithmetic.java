@@ -3,8 +3,8 @@ package org.tertius.core.number;
 /**
  * The field operations of a number type, so that code written once runs in several of them: exact Gaussian
  * rationals, double complex numbers ({@link ComplexArithmetic}), arbitrary precision
- * ({@link ApcomplexArithmetic}), or moduli for rounding bounds ({@link MagnitudeArithmetic}). Implementations
- * are immutable and thread-safe.
+ * ({@link ApcomplexArithmetic}), or moduli for rounding bounds ({@link MagnitudeArithmetic}, whose sums and
+ * differences are bounds, not values). Implementations are immutable and thread-safe.
  *
  * @param <T> the number type
  */

@@ -8,7 +8,6 @@ import java.util.concurrent.Future;
 import java.util.concurrent.FutureTask;
 import java.util.function.DoubleConsumer;
 import org.tertius.core.InvalidInputException;
-import org.tertius.core.TertiusException;
 import org.tertius.core.mp.ExactNumber;
 import org.tertius.core.mp.MpComplex;
 import org.tertius.core.mp.MpContext;
@@ -208,9 +207,9 @@ public final class HighPrecisionSolution {
         int expectedSteps;
         if (Workers.PARALLEL) {
             // the first series of both passes is expanded on other processors while this thread plans the path (it
-            // needs only the start data); the accurate pass is guessed to need the guard digits of at most 99
-            // steps, and a longer plan leaves its expansion unused
-            expandRootAhead(accurateDigits(1));
+            // needs only the start data); the accurate pass is guessed to take 10 to 99 steps (two guard digits for
+            // them), and a plan outside that range leaves the expansion ahead unused
+            expandRootAhead(accurateDigits(TYPICAL_EXPECTED_STEPS));
             expandRootAhead(cheapDigits);
             expectedSteps = 2 * plannedSteps(points) + 2;
             int cd = cheapDigits;
@@ -233,12 +232,15 @@ public final class HighPrecisionSolution {
         }
     }
 
+    /** Steps of the accurate pass guessed before the path is planned (see {@link #compute}). */
+    private static final int TYPICAL_EXPECTED_STEPS = 20;
+
     /**
      * The tolerance digits of the accurate pass for a path of about that many steps: 4 guard digits and those that
-     * the accumulation of the local errors over the steps takes, at least 2 (up to 99 steps).
+     * the accumulation of the local errors over the steps takes.
      */
     private int accurateDigits(int expectedSteps) {
-        return digits + 4 + Math.max(2, (int) Math.ceil(Math.log10(expectedSteps + 1.0)));
+        return digits + 4 + (int) Math.ceil(Math.log10(expectedSteps + 1.0));
     }
 
     /**
@@ -306,6 +308,8 @@ public final class HighPrecisionSolution {
     /**
      * Builds the level of that accuracy and expands its first series at the root on a worker thread (once per
      * level), for the first run from the root to start from; a failure there is left to that run to meet again.
+     * An expansion ahead that no run uses (a failed or interrupted computation, a plan longer or shorter than
+     * guessed) still runs to its end: one expansion, on the other processor.
      */
     private void expandRootAhead(int tolDigits) {
         rootStarts.computeIfAbsent(tolDigits, d -> Workers.submit(() -> {
@@ -478,16 +482,19 @@ public final class HighPrecisionSolution {
         private SegmentIntegrator.Start rootStart() {
             FutureTask<SegmentIntegrator.Start> mine =
                     new FutureTask<>(() -> integrator.start(root.tau, root.y, root.scale));
-            // a cancelled expansion (an interrupted evaluation) is replaced, so that the solution stays usable
-            Future<SegmentIntegrator.Start> f = rootStarts.compute(tolDigits,
-                    (d, old) -> old == null || old.isCancelled() ? mine : old);
-            if (f == mine) {
+            Future<SegmentIntegrator.Start> f = rootStarts.putIfAbsent(tolDigits, mine);
+            if (f == null) {
                 mine.run();
+                f = mine;
             }
             try {
-                return Workers.join(f);
-            } catch (TertiusException | java.util.concurrent.CancellationException e) {
-                // unreachable or cancelled: the run from the root meets the same, or sees the interrupt
+                return f.get();
+            } catch (InterruptedException e) {
+                // the expansion may serve other callers, so it is not cancelled; this caller's run sees the interrupt
+                Thread.currentThread().interrupt();
+                return null;
+            } catch (java.util.concurrent.ExecutionException e) {
+                // failed (e.g. a singularity at the start): the run from the root meets the same failure
                 return null;
             }
         }
