@@ -312,10 +312,8 @@ public final class HighPrecisionSolution {
      * guessed) still runs to its end: one expansion, on the other processor.
      */
     private void expandRootAhead(int tolDigits) {
-        rootStarts.computeIfAbsent(tolDigits, d -> Workers.submit(() -> {
-            Level l = levels.computeIfAbsent(d, Level::new);
-            return l.integrator.start(l.root.tau, l.root.y, l.root.scale);
-        }));
+        rootStarts.computeIfAbsent(tolDigits,
+                d -> Workers.submit(() -> levels.computeIfAbsent(d, Level::new).expandRoot()));
     }
 
     private Level level(int tolDigits, Progress meter) {
@@ -480,12 +478,14 @@ public final class HighPrecisionSolution {
          * failure again).
          */
         private SegmentIntegrator.Start rootStart() {
-            FutureTask<SegmentIntegrator.Start> mine =
-                    new FutureTask<>(() -> integrator.start(root.tau, root.y, root.scale));
-            Future<SegmentIntegrator.Start> f = rootStarts.putIfAbsent(tolDigits, mine);
+            Future<SegmentIntegrator.Start> f = rootStarts.get(tolDigits);
             if (f == null) {
-                mine.run();
-                f = mine;
+                FutureTask<SegmentIntegrator.Start> mine = new FutureTask<>(this::expandRoot);
+                f = rootStarts.putIfAbsent(tolDigits, mine);
+                if (f == null) {
+                    mine.run();
+                    f = mine;
+                }
             }
             try {
                 return f.get();
@@ -497,6 +497,11 @@ public final class HighPrecisionSolution {
                 // failed (e.g. a singularity at the start): the run from the root meets the same failure
                 return null;
             }
+        }
+
+        /** Expands the first series at the root (from the start scale the planner's root node suggests). */
+        SegmentIntegrator.Start expandRoot() {
+            return integrator.start(root.tau, root.y, root.scale);
         }
 
         Level withProgress(Progress p) {
