@@ -1,4 +1,6 @@
 package org.tertius.core.mp;
+import org.tertius.core.number.MpContext;
+import org.tertius.core.number.MpComplex;
 
 import java.math.BigInteger;
 import org.tertius.core.InvalidInputException;

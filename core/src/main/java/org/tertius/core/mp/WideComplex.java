@@ -1,4 +1,5 @@
 package org.tertius.core.mp;
+import org.tertius.core.number.MpComplex;
 
 /**
  * A complex number in double precision with a separate binary exponent, {@code (re + i im) 2^exp} with
@@ -39,9 +40,9 @@ final class WideComplex {
             return ZERO;
         }
         int shift = Math.max(0, x.mantissaBits() - 62);
-        double r = x.re.shiftRight(shift).doubleValue();
-        double i = x.im.shiftRight(shift).doubleValue();
-        return of(r, i, (long) shift + x.exp);
+        double r = x.mantissaRe().shiftRight(shift).doubleValue();
+        double i = x.mantissaIm().shiftRight(shift).doubleValue();
+        return of(r, i, (long) shift + x.exponent());
     }
 
     boolean isZero() {

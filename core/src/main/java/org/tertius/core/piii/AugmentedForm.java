@@ -4,8 +4,8 @@ import org.hipparchus.complex.Complex;
 import org.tertius.core.equation.IndependentVariable;
 import org.tertius.core.equation.PolynomialSystem;
 import org.tertius.core.equation.StateProjection;
-import org.tertius.core.mp.MpComplex;
-import org.tertius.core.mp.MpContext;
+import org.tertius.core.number.MpComplex;
+import org.tertius.core.number.MpContext;
 
 /**
  * A polynomial form of Painleve III valid for all parameters, used when delta = gamma = 0 (D8 and the

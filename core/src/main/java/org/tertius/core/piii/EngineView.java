@@ -1,6 +1,6 @@
 package org.tertius.core.piii;
 
-import org.tertius.core.mp.MpComplex;
+import org.tertius.core.number.MpComplex;
 import org.tertius.core.solution.Solution;
 
 /**

@@ -5,8 +5,8 @@ import org.tertius.core.InvalidInputException;
 import org.tertius.core.equation.IndependentVariable;
 import org.tertius.core.equation.PolynomialSystem;
 import org.tertius.core.equation.StateProjection;
-import org.tertius.core.mp.MpComplex;
-import org.tertius.core.mp.MpContext;
+import org.tertius.core.number.MpComplex;
+import org.tertius.core.number.MpContext;
 
 /**
  * A polynomial Hamiltonian form of Painleve III for delta != 0, in the log variable (derived for this project

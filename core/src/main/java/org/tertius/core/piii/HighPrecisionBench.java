@@ -6,7 +6,7 @@ import org.apfloat.ApcomplexMath;
 import org.apfloat.Apfloat;
 import org.apfloat.ApfloatMath;
 import org.tertius.core.mp.KernelCost;
-import org.tertius.core.mp.MpContext;
+import org.tertius.core.number.MpContext;
 import org.tertius.core.number.SurfacePoint;
 
 /**

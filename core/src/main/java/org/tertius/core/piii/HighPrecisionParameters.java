@@ -1,7 +1,7 @@
 package org.tertius.core.piii;
 
-import org.tertius.core.mp.MpComplex;
-import org.tertius.core.mp.MpContext;
+import org.tertius.core.number.MpComplex;
+import org.tertius.core.number.MpContext;
 
 /**
  * The parameters of Painleve III in arbitrary precision, with the one {@link MpContext} that sets the working

@@ -4,8 +4,8 @@ import java.math.BigDecimal;
 import java.math.MathContext;
 import java.math.RoundingMode;
 import org.apfloat.Apcomplex;
-import org.tertius.core.mp.MpComplex;
-import org.tertius.core.mp.MpContext;
+import org.tertius.core.number.MpComplex;
+import org.tertius.core.number.MpContext;
 import org.tertius.core.number.SurfacePoint;
 
 /**

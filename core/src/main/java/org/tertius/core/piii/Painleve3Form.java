@@ -40,15 +40,15 @@ interface Painleve3Form {
      * The coefficient values of {@link #system()} (same order) computed in arbitrary precision from
      * high-precision parameters, for kernels that run the same recurrence plan at higher precision.
      */
-    org.tertius.core.mp.MpComplex[] coefficients(HighPrecisionParameters p);
+    org.tertius.core.number.MpComplex[] coefficients(HighPrecisionParameters p);
 
     /**
      * The state for (z, w, w') in arbitrary precision (same layout as {@link #toState}); w != 0.
      */
-    org.tertius.core.mp.MpComplex[] toState(HighPrecisionParameters p, org.tertius.core.mp.MpComplex z,
-                                            org.tertius.core.mp.MpComplex w, org.tertius.core.mp.MpComplex dw);
+    org.tertius.core.number.MpComplex[] toState(HighPrecisionParameters p, org.tertius.core.number.MpComplex z,
+                                            org.tertius.core.number.MpComplex w, org.tertius.core.number.MpComplex dw);
 
     /** {w, w'} from a high-precision state. */
-    org.tertius.core.mp.MpComplex[] fromState(HighPrecisionParameters p, org.tertius.core.mp.MpComplex z,
-                                              org.tertius.core.mp.MpComplex[] y);
+    org.tertius.core.number.MpComplex[] fromState(HighPrecisionParameters p, org.tertius.core.number.MpComplex z,
+                                              org.tertius.core.number.MpComplex[] y);
 }

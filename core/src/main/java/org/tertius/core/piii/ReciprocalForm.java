@@ -3,8 +3,8 @@ package org.tertius.core.piii;
 import org.hipparchus.complex.Complex;
 import org.tertius.core.equation.PolynomialSystem;
 import org.tertius.core.equation.StateProjection;
-import org.tertius.core.mp.MpComplex;
-import org.tertius.core.mp.MpContext;
+import org.tertius.core.number.MpComplex;
+import org.tertius.core.number.MpContext;
 
 /**
  * Integrates W = 1/w with another form (for delta = 0, gamma != 0, where 1/w has delta' = -gamma != 0) and

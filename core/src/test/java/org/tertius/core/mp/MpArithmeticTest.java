@@ -1,4 +1,7 @@
 package org.tertius.core.mp;
+import org.tertius.core.number.ExactNumber;
+import org.tertius.core.number.MpContext;
+import org.tertius.core.number.MpComplex;
 
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.quicktheories.QuickTheory.qt;

@@ -5,8 +5,8 @@ import org.apfloat.ApcomplexMath;
 import org.apfloat.Apfloat;
 import org.apfloat.ApfloatMath;
 import org.apfloat.FixedPrecisionApcomplexHelper;
-import org.tertius.core.mp.ExactNumber;
-import org.tertius.core.mp.MpContext;
+import org.tertius.core.number.ExactNumber;
+import org.tertius.core.number.MpContext;
 import org.tertius.core.number.SurfacePoint;
 
 /**

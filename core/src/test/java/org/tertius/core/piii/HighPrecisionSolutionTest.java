@@ -11,9 +11,9 @@ import org.hipparchus.complex.Complex;
 import org.junit.jupiter.api.Test;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.TertiusException;
-import org.tertius.core.mp.ExactNumber;
-import org.tertius.core.mp.MpComplex;
-import org.tertius.core.mp.MpContext;
+import org.tertius.core.number.ExactNumber;
+import org.tertius.core.number.MpComplex;
+import org.tertius.core.number.MpContext;
 import org.tertius.core.number.SurfacePoint;
 
 class HighPrecisionSolutionTest {

@@ -1,4 +1,4 @@
-package org.tertius.core.mp;
+package org.tertius.core.number;
 
 import java.math.BigDecimal;
 import java.math.BigInteger;

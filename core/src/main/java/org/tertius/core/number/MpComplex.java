@@ -1,4 +1,4 @@
-package org.tertius.core.mp;
+package org.tertius.core.number;
 
 import java.math.BigInteger;
 import org.hipparchus.complex.Complex;
@@ -9,13 +9,13 @@ import org.hipparchus.complex.Complex;
  * working precision live in {@link MpContext}, the one place where precision is set.
  */
 public final class MpComplex {
-    static final MpComplex ZERO = new MpComplex(BigInteger.ZERO, BigInteger.ZERO, 0);
+    public static final MpComplex ZERO = new MpComplex(BigInteger.ZERO, BigInteger.ZERO, 0);
 
     final BigInteger re;
     final BigInteger im;
     final int exp;
 
-    MpComplex(BigInteger re, BigInteger im, int exp) {
+    public MpComplex(BigInteger re, BigInteger im, int exp) {
         this.re = re;
         this.im = im;
         this.exp = exp;
@@ -25,8 +25,23 @@ public final class MpComplex {
         return re.signum() == 0 && im.signum() == 0;
     }
 
+    /** The integer mantissa of the real part (the value is {@code (re + i im) * 2^exponent()}). */
+    public BigInteger mantissaRe() {
+        return re;
+    }
+
+    /** The integer mantissa of the imaginary part. */
+    public BigInteger mantissaIm() {
+        return im;
+    }
+
+    /** The binary exponent shared by both mantissas. */
+    public int exponent() {
+        return exp;
+    }
+
     /** Bit length of the larger mantissa (0 for zero). */
-    int mantissaBits() {
+    public int mantissaBits() {
         return Math.max(re.bitLength(), im.bitLength());
     }
 

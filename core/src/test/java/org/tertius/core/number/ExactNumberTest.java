@@ -1,4 +1,4 @@
-package org.tertius.core.mp;
+package org.tertius.core.number;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;

@@ -1,4 +1,4 @@
-package org.tertius.core.mp;
+package org.tertius.core.number;
 
 import java.math.BigDecimal;
 import java.math.BigInteger;
@@ -33,7 +33,7 @@ public final class MpContext {
     }
 
     /** log2(1 + 2^log2x), for sizes given as base-2 logarithms (0 for negative infinity). */
-    static double log2OnePlus(double log2x) {
+    public static double log2OnePlus(double log2x) {
         if (log2x == Double.NEGATIVE_INFINITY) {
             return 0;
         }
@@ -66,7 +66,7 @@ public final class MpContext {
     }
 
     /** Rounds x / 2^s to the nearest integer (s >= 0). */
-    static BigInteger shiftRound(BigInteger x, int s) {
+    public static BigInteger shiftRound(BigInteger x, int s) {
         if (s <= 0) {
             return x.shiftLeft(-s);
         }
@@ -190,7 +190,7 @@ public final class MpContext {
     }
 
     /** p / q (q > 0) as a real value, rounded once. */
-    MpComplex fromRational(BigInteger p, BigInteger q) {
+    public MpComplex fromRational(BigInteger p, BigInteger q) {
         if (p.signum() == 0) {
             return MpComplex.ZERO;
         }
@@ -233,12 +233,12 @@ public final class MpContext {
     // ---- fixed point ------------------------------------------------------------------------------------------
 
     /** The real part of x as a fixed-point integer with f fractional bits (rounded). */
-    static BigInteger fixedRe(MpComplex x, int f) {
+    public static BigInteger fixedRe(MpComplex x, int f) {
         return shiftRound(x.re, -(x.exp + f));
     }
 
     /** The imaginary part of x as a fixed-point integer with f fractional bits (rounded). */
-    static BigInteger fixedIm(MpComplex x, int f) {
+    public static BigInteger fixedIm(MpComplex x, int f) {
         return shiftRound(x.im, -(x.exp + f));
     }
 
