@@ -7,9 +7,9 @@
 #   tools/bench/run-hp-bench.sh 1000       # also 1000 digits in the table (minutes)
 set -euo pipefail
 cd "$(dirname "$0")/../.."
-mvn -q -B -DskipTests package
-# the tool's jar holds every module and dependency, the benchmark classes of core included
-CP=connection/target/tertius.jar
+mvn -q -B -Pbench -DskipTests package
+# the benchmark jar holds core, its dependencies and the benchmark classes
+CP=bench/target/tertius-benchmarks.jar
 P="--alpha 1 --beta -1/2 --gamma 1 --delta -1 --z0 1 --w0 1/2 --dw0 1/3 --at 3+2i"
 # min and median wall time (and the user time of the median run) of the lines "wall user" on standard input
 summary() {
@@ -21,7 +21,7 @@ times() {
 }
 echo "== machine: $(nproc) cores, load $(cut -d' ' -f1-3 /proc/loadavg)"
 echo "== product costs: Apfloat, BigInteger, limb columns"
-java -cp "$CP" org.tertius.core.piii.HighPrecisionBench apfloat
+java -cp "$CP" org.tertius.bench.HighPrecisionBench apfloat
 for d in 50 100; do
   # the launcher and the peer alternate run by run, so that a drift of the machine's speed touches both alike
   echo "== $d digits, whole processes, interleaved: connection/target/tertius (launcher) and the mpmath peer"
@@ -40,4 +40,4 @@ for d in 50 100; do
   times 7 java -jar connection/target/tertius.jar eval $P --digits "$d"
 done
 echo "== time per step against digits (warm JVM)"
-java -cp "$CP" org.tertius.core.piii.HighPrecisionBench table 30 50 100 200 "$@"
+java -cp "$CP" org.tertius.bench.HighPrecisionBench table 30 50 100 200 "$@"

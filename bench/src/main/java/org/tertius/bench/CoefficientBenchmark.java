@@ -16,7 +16,6 @@ import org.openjdk.jmh.annotations.Warmup;
 import org.openjdk.jmh.infra.Blackhole;
 import org.tertius.core.equation.PolynomialSystem;
 import org.tertius.core.equation.StateProjection;
-import org.tertius.core.piii.EngineView;
 import org.tertius.core.solution.Solution;
 import org.tertius.core.step.Node;
 import org.tertius.core.step.TaylorPadeStepper;
@@ -50,7 +49,7 @@ public class CoefficientBenchmark {
 
     @Setup(Level.Trial)
     public void setUp() {
-        Solution engine = EngineView.of(Scenario.fresh()).engine();
+        Solution engine = Scenario.fresh().engineReading().orElseThrow().tree();
         PolynomialSystem system = engine.system();
         RecurrencePlan plan = RecurrencePlan.compile(system);
         kernel = new DoubleTaylorKernel(plan, system, order);

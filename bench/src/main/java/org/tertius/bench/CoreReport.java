@@ -8,10 +8,10 @@ import java.util.List;
 import java.util.Locale;
 import org.apfloat.Apcomplex;
 import org.tertius.core.equation.PolynomialSystem;
-import org.tertius.core.piii.HighPrecisionSolution;
-import org.tertius.core.piii.HighPrecisionValue;
+import org.tertius.core.highprecision.HighPrecisionSolution;
+import org.tertius.core.highprecision.HighPrecisionValue;
+import org.tertius.core.piii.Painleve3;
 import org.tertius.core.number.SurfacePoint;
-import org.tertius.core.piii.EngineView;
 import org.tertius.core.piii.Painleve3Solution;
 import org.tertius.core.piii.Painleve3Value;
 import org.tertius.core.region.GridResult;
@@ -67,7 +67,7 @@ public final class CoreReport {
 
     /** Cost of one coefficient generation at the engine's order, and the multiply-add count behind it. */
     private static double coefficients() {
-        Solution engine = EngineView.of(Scenario.fresh()).engine();
+        Solution engine = Scenario.fresh().engineReading().orElseThrow().tree();
         PolynomialSystem system = engine.system();
         RecurrencePlan plan = RecurrencePlan.compile(system);
         int order = engine.settings().order();
@@ -203,10 +203,10 @@ public final class CoreReport {
     /** The engine and DormandPrince853 on [1, 2], at matched accuracy. */
     private static void segment(double coefNs) {
         SurfacePoint end = SurfacePoint.of(Scenario.SEGMENT_END, 0);
-        HighPrecisionValue ref = HighPrecisionSolution.builder("1", "-1/2", "1", "-1").start("1", "1/2", "1/3")
-                .digits(32).build().evaluate(end);
-        double rw = real(ref.w());
-        double rdw = real(ref.dw());
+        HighPrecisionValue ref = HighPrecisionSolution.of(Painleve3Solution.builder(Painleve3.exact("1", "-1/2", "1",
+                "-1")).start("1", "1/2", "1/3").build(), 32).evaluate(end);
+        double rw = real(ref.value(0));
+        double rdw = real(ref.value(1));
         Painleve3Value v = Scenario.fresh().evaluate(end);
         EngineDriver.Work work = EngineDriver.integrate(Scenario.fresh(), end);
         double engErr = Math.max(Math.abs(v.w().getReal() - rw), Math.abs(v.dw().getReal() - rdw));
@@ -220,7 +220,7 @@ public final class CoreReport {
             t[r] = (System.nanoTime() - t0) / 200.0;
         }
         double engNs = median(t, WARM);
-        Solution engine = EngineView.of(Scenario.fresh()).engine();
+        Solution engine = Scenario.fresh().engineReading().orElseThrow().tree();
         RecurrencePlan plan = RecurrencePlan.compile(engine.system());
         int order = engine.settings().order();
         long macs = (plan.productCount() + plan.baseConvolutionCount()) * (long) order * (order + 1) / 2;

@@ -3,7 +3,6 @@ package org.tertius.bench;
 import org.tertius.core.equation.StateProjection;
 import org.tertius.core.number.SurfacePoint;
 import org.tertius.core.path.PathSelector;
-import org.tertius.core.piii.EngineView;
 import org.tertius.core.piii.Painleve3Solution;
 import org.tertius.core.solution.Solution;
 import org.tertius.core.step.Node;
@@ -45,7 +44,7 @@ final class EngineDriver {
 
     /** Integrates from the start of a (fresh) solution to the target, counting nodes and expansions. */
     static Work integrate(Painleve3Solution fresh, SurfacePoint target) {
-        Solution engine = EngineView.of(fresh).engine();
+        Solution engine = fresh.engineReading().orElseThrow().tree();
         SolverSettings settings = engine.settings();
         TaylorPadeStepper stepper = new TaylorPadeStepper(engine.system(), RecurrencePlan.compile(engine.system()),
                 settings, StateProjection.NONE);

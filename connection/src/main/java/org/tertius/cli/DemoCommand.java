@@ -45,6 +45,12 @@ public final class DemoCommand implements Command {
         return "demo";
     }
 
+    private static void header(PrintWriter w, String equation, String what, String columns) {
+        w.println("# " + equation);
+        w.println("# " + what);
+        w.println(columns);
+    }
+
     @Override
     public String description() {
         return "Run the built-in scenario (a generic D6 solution) and write its results into a folder.";
@@ -74,29 +80,30 @@ public final class DemoCommand implements Command {
         List<SurfacePoint> pts = List.of(SurfacePoint.of(3, 2), SurfacePoint.of(1, 10), SurfacePoint.of(-8, 6),
                 SurfacePoint.of(-3, 0.5, 1), SurfacePoint.of(-3, -0.5, -1), SurfacePoint.of(1e-6, 1e-6));
         Path values = out.resolve("values.csv");
+        ValueRows rows = new ValueRows(s);
         try (PrintWriter w = new PrintWriter(Files.newBufferedWriter(values, StandardCharsets.UTF_8))) {
-            ValueCsv.header(w, s.equation().toString(), "integrated in the " + s.formDescription());
+            header(w, s.equation().toString(), s.methodDescription(), rows.columns());
             for (SurfacePoint p : pts) {
                 Painleve3Value v = s.evaluate(p);
-                w.println(ValueCsv.row(v));
+                w.println(rows.row(v.toSolutionValue()));
                 console.printf("  w(%s) = %s  (err %.1e)%n", p, ComplexText.format(v.w()),
                         Math.max(v.errW(), v.errDw()));
             }
         }
         // a table along the positive real axis, with the poles met
-        List<SurfacePoint> line = Targets.line("line", "0.25:10:400", 0);
+        List<SurfacePoint> line = Targets.line("line", "0.25:10:400", 0, s.coordinate());
         Path table = out.resolve("real-axis.csv");
         List<Singularity> onLine;
         List<Painleve3Value> lineValues = new java.util.ArrayList<>();
         try (PrintWriter w = new PrintWriter(Files.newBufferedWriter(table, StandardCharsets.UTF_8))) {
-            ValueCsv.header(w, s.equation().toString(), "the positive real axis, 400 points from 0.25 to 10");
+            header(w, s.equation().toString(), "the positive real axis, 400 points from 0.25 to 10", rows.columns());
             RegionSolver.growTowards(s, line);
             for (SurfacePoint p : line) {
                 Painleve3Value v = s.evaluate(p);
                 lineValues.add(v);
-                w.println(ValueCsv.row(v));
+                w.println(rows.row(v.toSolutionValue()));
             }
-            onLine = TableCommand.polesAlong(s, line);
+            onLine = PoleFinder.alongLine(s, line);
             for (Singularity p : onLine) {
                 w.println("# pole on the line at " + p.point() + ", residue " + ComplexText.format(p.lead()));
             }
@@ -106,10 +113,10 @@ public final class DemoCommand implements Command {
         GridResult r = RegionSolver.solve(s, g, RegionSettings.defaults());
         List<Singularity> found = PoleFinder.find(s, g);
         Path picture = out.resolve("pole-field.png");
-        BufferedImage img = FieldPainter.paint(r, found, s.equation().toString(), 900, 720);
+        BufferedImage img = FieldPainter.paint(r, found, s.equation().toString(), "w", "z", 900, 720);
         OutputFile.writeWhole("--out", picture, p -> ImageIO.write(img, "png", p.toFile()));
         Path poles = out.resolve("poles.csv");
-        Files.writeString(poles, PolesCommand.csv(found), StandardCharsets.UTF_8);
+        Files.writeString(poles, SingularityRows.csv("z", found), StandardCharsets.UTF_8);
         Path plot = out.resolve("real-axis.png");
         double[] x = new double[line.size()];
         double[] re = new double[line.size()];
@@ -121,7 +128,7 @@ public final class DemoCommand implements Command {
             im[i] = v.w().getImaginary();
         }
         double[] px = onLine.stream().mapToDouble(p -> p.point().re()).toArray();
-        BufferedImage lp = LinePlot.draw(s.equation().toString(), "z (real axis)", x, re, im, px, 900, 500);
+        BufferedImage lp = LinePlot.draw(s.equation().toString(), "z (real axis)", "w", x, re, im, px, 900, 500);
         OutputFile.writeWhole("--out", plot, p -> ImageIO.write(lp, "png", p.toFile()));
         long poleCount = found.stream().filter(p -> p.kind() == Singularity.Kind.POLE).count();
         console.printf(java.util.Locale.ROOT, "  %d poles and %d zeros in [-8,8]^2 (sheet 0); %d pole(s) on the real"

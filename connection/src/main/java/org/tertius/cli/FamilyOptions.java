@@ -1,6 +1,8 @@
 package org.tertius.cli;
 
+import java.util.ArrayList;
 import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Map;
 import org.apache.commons.cli.Options;
 import org.tertius.connection.family.Families;
@@ -61,6 +63,20 @@ public final class FamilyOptions implements OptionGroup {
 
     public boolean given() {
         return family != null;
+    }
+
+    /** The family-parameter options that were given (without --family). */
+    List<String> parametersGiven() {
+        List<String> out = new ArrayList<>();
+        String[] names = {"--lambda", "--sigma", "--amplitude", "--value-at-zero", "--background",
+            "--amplitude-infinity", "--phase", "--family-x0"};
+        String[] values = {lambda, sigma, amplitude, valueAtZero, background, amplitudeInfinity, phase, familyX0};
+        for (int i = 0; i < names.length; i++) {
+            if (values[i] != null) {
+                out.add(names[i]);
+            }
+        }
+        return out;
     }
 
     /** The parameters given, keyed by the library's parameter names. */

@@ -94,7 +94,12 @@ final class FieldPainter {
         return TOP + (h - 1) - (int) Math.floor((im - g.im0()) / (g.im1() - g.im0()) * (h - 1) + 0.5);
     }
 
-    static BufferedImage paint(GridResult r, List<Singularity> marks, String title, int width, int height) {
+    /**
+     * The picture of the first value of a grid result (named {@code value}, of the variable {@code variable}) with
+     * the located poles and zeros ringed.
+     */
+    static BufferedImage paint(GridResult r, List<Singularity> marks, String title, String value, String variable,
+                               int width, int height) {
         Grid g = r.grid();
         BufferedImage img = new BufferedImage(width, height, BufferedImage.TYPE_INT_RGB);
         Graphics2D gr = img.createGraphics();
@@ -109,7 +114,7 @@ final class FieldPainter {
                 int i = g.nx() == 1 ? 0 : (int) Math.round((double) x / Math.max(1, pw - 1) * (g.nx() - 1));
                 int c;
                 if (r.computed(i, j)) {
-                    Complex w = r.w(i, j);
+                    Complex w = r.primary(i, j);
                     c = rgb(w.getReal(), w.getImaginary());
                 } else {
                     c = MISSING.getRGB();
@@ -125,7 +130,7 @@ final class FieldPainter {
             gr.setColor(s.kind() == Singularity.Kind.POLE ? Color.BLACK : Color.WHITE);
             gr.drawOval(x - 5, y - 5, 10, 10);
         }
-        axes(gr, g, width, height);
+        axes(gr, g, variable, width, height);
         gr.setColor(Color.BLACK);
         gr.setFont(new Font(Font.SANS_SERIF, Font.BOLD, 14));
         gr.drawString(title, LEFT, 22);
@@ -134,12 +139,12 @@ final class FieldPainter {
                 : String.format(Locale.ROOT, "sheet %d: arg z in (-pi, pi] + 2 pi (%d)", g.sheet(), g.sheet());
         gr.drawString(String.format(Locale.ROOT, "%s;  %d poles, %d zeros marked", where, marks.stream().filter(m -> m.kind() == Singularity.Kind.POLE).count(),
                 marks.stream().filter(m -> m.kind() == Singularity.Kind.ZERO).count()), LEFT, 40);
-        legend(gr, width, height);
+        legend(gr, value, width, height);
         gr.dispose();
         return img;
     }
 
-    private static void axes(Graphics2D gr, Grid g, int width, int height) {
+    private static void axes(Graphics2D gr, Grid g, String z, int width, int height) {
         gr.setColor(Color.BLACK);
         gr.setStroke(new BasicStroke(1f));
         int pw = width - LEFT - RIGHT;
@@ -159,8 +164,8 @@ final class FieldPainter {
             String s = label(t);
             gr.drawString(s, LEFT - 9 - fm.stringWidth(s), y + 4);
         }
-        gr.drawString(g.logarithmic() ? "log |z|" : "Re z", LEFT + pw / 2 - 12, height - 14);
-        gr.drawString(g.logarithmic() ? "arg z" : "Im z", 8, TOP + ph / 2);
+        gr.drawString(g.logarithmic() ? "log |" + z + "|" : "Re " + z, LEFT + pw / 2 - 12, height - 14);
+        gr.drawString(g.logarithmic() ? "arg " + z : "Im " + z, 8, TOP + ph / 2);
     }
 
     static double[] ticks(double lo, double hi) {
@@ -192,7 +197,7 @@ final class FieldPainter {
         return s;
     }
 
-    private static void legend(Graphics2D gr, int width, int height) {
+    private static void legend(Graphics2D gr, String w, int width, int height) {
         int x0 = width - RIGHT + 24;
         int y0 = TOP;
         gr.setColor(Color.BLACK);
@@ -201,7 +206,7 @@ final class FieldPainter {
         gr.setFont(new Font(Font.SANS_SERIF, Font.PLAIN, 11));
         // phase bar at |w| = 1
         int bh = 120;
-        gr.drawString("arg w (at |w| = 1)", x0, y0 + 24);
+        gr.drawString("arg " + w + " (at |" + w + "| = 1)", x0, y0 + 24);
         for (int k = 0; k < bh; k++) {
             double arg = Math.PI - 2 * Math.PI * k / (bh - 1);
             gr.setColor(new Color(rgb(Math.cos(arg), Math.sin(arg))));
@@ -213,7 +218,7 @@ final class FieldPainter {
         gr.drawString("-pi", x0 + 28, y0 + 30 + bh);
         // modulus bar at arg w = 0
         int my = y0 + 30 + bh + 30;
-        gr.drawString("|w| (at arg w = 0)", x0, my - 6);
+        gr.drawString("|" + w + "| (at arg " + w + " = 0)", x0, my - 6);
         double[] mods = {0, 0.25, 1, 4, 1e300};
         String[] labels = {"0: zero (black)", "1/4", "1", "4", "pole (white)"};
         for (int k = 0; k < bh; k++) {

@@ -2,21 +2,18 @@ package org.tertius.cli;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import org.apache.commons.cli.Options;
-import org.hipparchus.complex.Complex;
 import org.tertius.core.InvalidInputException;
-import org.tertius.core.number.ComplexText;
-import org.tertius.core.number.SurfacePoint;
+import org.tertius.core.number.ExactNumber;
 import org.tertius.core.step.SolverSettings;
 import org.tertius.hierarchy.HierarchyMember;
 import org.tertius.hierarchy.MemberParameters;
 import org.tertius.hierarchy.MemberSolution;
-import org.tertius.hierarchy.MemberValue;
 
 /** A member of the Painleve III hierarchy and its start data (see hierarchy/README.md for the convention). */
 public final class MemberOptions implements OptionGroup {
-    static final String HEADER = "x_re,x_im,sheet,q_re,q_im,r_re,r_im,dq_re,dq_im,dr_re,dr_im,err,integrals";
+    /** The options of this group (for the refusal of options that do not apply). */
+    static final List<String> OPTIONS = List.of("--times", "--s", "--m", "--x0", "--state", "--origin");
 
     Integer member;
     String times;
@@ -54,6 +51,18 @@ public final class MemberOptions implements OptionGroup {
         return member != null;
     }
 
+    /** The options of this group that were given (without --member). */
+    List<String> optionsGiven() {
+        List<String> out = new ArrayList<>();
+        String[] values = {times, s, m, x0, state, origin};
+        for (int i = 0; i < values.length; i++) {
+            if (values[i] != null) {
+                out.add(OPTIONS.get(i));
+            }
+        }
+        return out;
+    }
+
     void defaults(ProblemFile f) {
         if (member == null && f.has("member")) {
             member = f.intValue("member");
@@ -63,17 +72,7 @@ public final class MemberOptions implements OptionGroup {
         m = f.fill(m, "m");
         x0 = f.fill(x0, "x0");
         state = f.fill(state, "state");
-    }
-
-    static List<Complex> list(String option, String text) {
-        List<Complex> out = new ArrayList<>();
-        if (text == null || text.isBlank()) {
-            return out;
-        }
-        for (String part : text.split(",")) {
-            out.add(ComplexText.parse(option, part));
-        }
-        return out;
+        origin = f.fill(origin, "origin");
     }
 
     MemberParameters parameters() {
@@ -81,12 +80,12 @@ public final class MemberOptions implements OptionGroup {
             throw new InvalidInputException("--member", "must be in [1, " + HierarchyMember.MAX_ORDER + "], got " + member);
         }
         MemberParameters.Builder b = MemberParameters.builder(member)
-                .times(list("--times", times).toArray(new Complex[0]));
+                .times(ExactText.list("--times", times).toArray(new ExactNumber[0]));
         if (s != null) {
-            b.s(ComplexText.parse("--s", s));
+            b.s(ExactText.parse("--s", s).toComplex());
         }
         if (m != null) {
-            b.m(ComplexText.parse("--m", m));
+            b.m(ExactText.parse("--m", m));
         }
         return b.build();
     }
@@ -94,7 +93,7 @@ public final class MemberOptions implements OptionGroup {
     MemberSolution solution(SolverSettings settings) {
         MemberSolution.Builder b = MemberSolution.builder(parameters()).settings(settings);
         if (origin != null) {
-            List<Complex> a = list("--origin", origin);
+            List<ExactNumber> a = ExactText.list("--origin", origin);
             if (a.size() != 3) {
                 throw new InvalidInputException("--origin", "expected three complex numbers A11,A12,A21");
             }
@@ -104,20 +103,14 @@ public final class MemberOptions implements OptionGroup {
                 throw new InvalidInputException("--state", "start data are required: --x0 X --state V1,..,Vk (or --origin"
                         + " for member 1)");
             }
-            b.start(ComplexText.parse("--x0", x0), list("--state", state));
+            b.start(ExactText.parse("--x0", x0), ExactText.list("--state", state));
         }
         return b.build();
     }
 
-    static String row(MemberValue v) {
-        double err = Math.max(Math.max(v.errorQ(), v.errorR()), Math.max(v.errorDq(), v.errorDr()));
-        return String.format(Locale.ROOT, "%.17g,%.17g,%d,%.17g,%.17g,%.17g,%.17g,%.17g,%.17g,%.17g,%.17g,%.3e,%s",
-                v.x().getReal(), v.x().getImaginary(), v.sheet(), v.q().getReal(), v.q().getImaginary(),
-                v.r().getReal(), v.r().getImaginary(), v.dq().getReal(), v.dq().getImaginary(), v.dr().getReal(),
-                v.dr().getImaginary(), err, v.integralsWithinEstimate() ? "ok" : "drift");
-    }
-
-    static String unreachedRow(SurfacePoint p) {
-        return String.format(Locale.ROOT, "%.17g,%.17g,%d,nan,nan,nan,nan,nan,nan,nan,nan,inf,", p.re(), p.im(), p.sheet());
+    /** The member problem in one line (for table signatures). */
+    String describe() {
+        return "member=" + member + " times=" + times + " s=" + s + " m=" + m + " x0=" + x0 + " state=" + state
+                + " origin=" + origin;
     }
 }

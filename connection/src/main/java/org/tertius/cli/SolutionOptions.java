@@ -1,20 +1,28 @@
 package org.tertius.cli;
 
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import org.apache.commons.cli.Options;
 import org.tertius.core.InvalidInputException;
+import org.tertius.core.face.ComputedSolution;
+import org.tertius.core.number.ExactNumber;
 import org.tertius.core.piii.Painleve3;
 import org.tertius.core.piii.Painleve3Solution;
 
-/** Everything that fixes one solution: equation, start data (or a problem file), solver settings. */
+/**
+ * Everything that fixes one solution: a Painleve III equation with start data or a family, or a member of the
+ * hierarchy with its data (or a problem file), and the solver settings. Options that do not apply to the solution
+ * chosen are refused, never ignored.
+ */
 public final class SolutionOptions implements OptionGroup {
     Path problem;
     final EquationOptions equation = new EquationOptions();
     final StartOptions start = new StartOptions();
     final SolverOptions solver = new SolverOptions();
     final FamilyOptions family = new FamilyOptions();
-    private final List<OptionGroup> parts = List.of(equation, start, solver, family);
+    final MemberOptions member = new MemberOptions();
+    private final List<OptionGroup> parts = List.of(equation, start, solver, family, member);
 
     private ProblemFile file;
 
@@ -42,18 +50,36 @@ public final class SolutionOptions implements OptionGroup {
             start.defaults(file);
             solver.defaults(file);
             family.defaults(file);
+            member.defaults(file);
         }
         return file;
     }
 
-    Painleve3 equationValue() {
+    /** Whether the solution is a member of the hierarchy. */
+    boolean isMember() {
         file();
-        return equation.equation();
+        return member.given();
     }
 
-    Painleve3Solution solution() {
+    /** The solution the options describe, as the command line sees every solution. */
+    ComputedSolution solution() {
         file();
-        Painleve3 eq = equation.equation();
+        if (member.given()) {
+            refuse("with --member (a hierarchy member is fixed by --times --s --m and --x0 --state or --origin)",
+                    painleveOptionsGiven());
+            return member.solution(solver.settings());
+        }
+        refuse("without --member (they set a hierarchy member)", member.optionsGiven());
+        return painleve3();
+    }
+
+    /** The Painleve III solution the options describe (refused for a hierarchy member). */
+    Painleve3Solution painleve3() {
+        file();
+        if (member.given()) {
+            throw new InvalidInputException("--member", "this command works on Painleve III solutions only");
+        }
+        Painleve3 eq = equationValue();
         if (family.given()) {
             if (start.given()) {
                 throw new InvalidInputException("--family", "give either --family with its parameters or start data"
@@ -61,17 +87,57 @@ public final class SolutionOptions implements OptionGroup {
             }
             return family.solution(eq, solver.settings());
         }
+        refuse("without --family (they are parameters of a family)", family.parametersGiven());
         if (!start.given()) {
             throw new InvalidInputException("--z0", "start data are required: give --z0, --w0 and --dw0"
                     + " (or a --problem file with z0, w0, dw0)");
         }
-        return Painleve3Solution.builder(eq).start(start.z0(), start.w0(), start.dw0())
-                .thirdDerivativeAtZero(start.d3w0()).settings(solver.settings()).build();
+        Painleve3Solution.Builder b = Painleve3Solution.builder(eq).settings(solver.settings())
+                .start(ExactText.parse("--z0", start.z0), ExactText.parse("--w0", start.w0),
+                        ExactText.parse("--dw0", start.dw0));
+        return b.thirdDerivativeAtZero(start.d3w0()).build();
+    }
+
+    /** The equation from the four parameters, kept exact. */
+    Painleve3 equationValue() {
+        file();
+        String[] t = equation.texts();
+        String[] names = {"--alpha", "--beta", "--gamma", "--delta"};
+        ExactNumber[] p = new ExactNumber[4];
+        for (int i = 0; i < 4; i++) {
+            p[i] = ExactText.parse(names[i], t[i]);
+        }
+        return Painleve3.of(p[0], p[1], p[2], p[3]);
+    }
+
+    private List<String> painleveOptionsGiven() {
+        List<String> out = new ArrayList<>();
+        String[] names = {"--alpha", "--beta", "--gamma", "--delta", "--z0", "--w0", "--dw0", "--d3w0", "--family"};
+        String[] texts = equation.texts();
+        String[] values = {texts[0], texts[1], texts[2], texts[3], start.z0, start.w0, start.dw0, start.d3w0,
+            family.family};
+        for (int i = 0; i < names.length; i++) {
+            if (values[i] != null) {
+                out.add(names[i]);
+            }
+        }
+        out.addAll(family.parametersGiven());
+        return out;
+    }
+
+    private static void refuse(String why, List<String> given) {
+        if (!given.isEmpty()) {
+            throw new InvalidInputException(given.get(0), "does not apply " + why + "; remove "
+                    + String.join(", ", given));
+        }
     }
 
     /** A canonical one-line description of the problem (for table signatures). */
     String describe() {
         file();
+        if (member.given()) {
+            return member.describe() + " tol=" + solver.settings().tolerance() + " order=" + solver.settings().order();
+        }
         String[] eq = equation.texts();
         return "alpha=" + eq[0] + " beta=" + eq[1] + " gamma=" + eq[2] + " delta=" + eq[3]
                 + (family.given() ? " family=" + family.describe() : "") + " z0=" + start.z0

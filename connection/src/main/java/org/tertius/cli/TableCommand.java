@@ -2,14 +2,15 @@ package org.tertius.cli;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.apache.commons.cli.Options;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.TertiusException;
+import org.tertius.core.face.ComputedSolution;
+import org.tertius.core.highprecision.HighPrecisionSolution;
+import org.tertius.core.number.ExactPoint;
 import org.tertius.core.number.SurfacePoint;
-import org.tertius.core.piii.Painleve3Solution;
 import org.tertius.core.region.Grid;
 import org.tertius.core.region.GridResult;
 import org.tertius.core.region.PoleFinder;
@@ -17,20 +18,18 @@ import org.tertius.core.region.RegionSettings;
 import org.tertius.core.region.RegionSolver;
 import org.tertius.core.region.Singularity;
 
-/** Values on a line or a grid, streamed to CSV, resumable. */
+/** Values of any solution on a line or a grid, streamed to CSV, resumable. */
 public final class TableCommand implements Command {
     /** Grid rows per band: a band is computed, then written. */
     private static final int BAND = 16;
 
     final SolutionOptions solution = new SolutionOptions();
-    final MemberOptions member = new MemberOptions();
+    final DigitsOption precision = new DigitsOption("line only: D significant digits in arbitrary precision (exact"
+            + " start data, parameters and abscissae)");
+    final RegionOptions region = new RegionOptions();
     String line;
-    String grid;
-    String logStrip;
-    Integer sheet;
     Path out;
     boolean resume;
-    Integer digits;
     private PrintWriter stdout;
     private PrintWriter console;
 
@@ -48,30 +47,21 @@ public final class TableCommand implements Command {
 
     @Override
     public List<OptionGroup> groups() {
-        return List.of(solution, member);
+        return List.of(solution, precision, region);
     }
 
     @Override
     public void declare(Options o) {
         o.addOption(Opts.value("--line", "A:B:N", "N points from A to B (complex), e.g. 0.5:10:200"));
-        o.addOption(Opts.value("--grid", "RE0:RE1:NX,IM0:IM1:NY", "a grid of one sheet"));
-        o.addOption(Opts.value("--log-strip", "LOGR0:LOGR1:NX,ARG0:ARG1:NY", Regions.LOG_STRIP_HELP));
-        o.addOption(Opts.value("--sheet", "K", "sheet of the points (default 0)"));
         o.addOption(Opts.value("--out", "FILE", "CSV file (default: standard output)"));
         o.addOption(Opts.flag("--resume", "continue an interrupted run in --out FILE"));
-        o.addOption(Opts.value("--digits", "D", "line only: D significant digits in arbitrary precision (exact"
-                + " start data and parameters)"));
     }
 
     @Override
     public void read(Arguments a) {
         line = a.text("--line");
-        grid = a.text("--grid");
-        logStrip = a.text("--log-strip");
-        sheet = a.integer("--sheet", null);
         out = a.path("--out");
         resume = a.has("--resume");
-        digits = a.integer("--digits", EvalCommand.DIGITS);
     }
 
     @Override
@@ -79,47 +69,34 @@ public final class TableCommand implements Command {
         this.stdout = stdout;
         this.console = console;
         ProblemFile f = solution.file();
-        String lineSpec = line != null ? line : (grid == null ? f.get("line") : null);
-        String gridSpec = grid != null ? grid : (line == null && logStrip == null ? f.get("grid") : null);
-        if ((lineSpec == null) == (gridSpec == null && logStrip == null)) {
+        String lineSpec = line != null ? line : (region.given() ? null : f.get("line"));
+        String gridSpec = region.gridSpec(f, lineSpec != null);
+        if ((lineSpec == null) == (gridSpec == null && region.logStrip == null)) {
             throw new InvalidInputException("--line", "give exactly one of --line A:B:N, --grid"
                     + " RE0:RE1:NX,IM0:IM1:NY and --log-strip");
         }
-        int k = solution.sheet(sheet);
-        member.defaults(f);
-        if (member.given()) {
-            if (lineSpec == null) {
-                throw new InvalidInputException("--member", "hierarchy members are tabulated on lines (--line A:B:N)");
-            }
-            return memberLine(Targets.line("--line", lineSpec, k), lineSpec, k);
-        }
-        if (digits == null && f.has("digits")) {
-            digits = f.intValue("digits");
-        }
-        if (digits != null) {
+        int k = solution.sheet(region.sheet);
+        ComputedSolution s = solution.solution();
+        ValueRows rows = new ValueRows(s);
+        if (precision.given(f)) {
             if (lineSpec == null) {
                 throw new InvalidInputException("--digits", "applies to --line tables (and eval), not to grids");
             }
-            return highPrecisionLine(Targets.line("--line", lineSpec, k), lineSpec, k);
+            return preciseLine(s, rows, Targets.exactLine("--line", lineSpec, k, s.coordinate()), lineSpec, k);
         }
-        Painleve3Solution s = solution.solution();
         String signature = "tertius table " + solution.describe() + (lineSpec != null ? " line=" + lineSpec
-                : " grid=" + gridSpec + " log-strip=" + logStrip) + " sheet=" + k;
-        List<String> comments = List.of(s.equation() + " [" + s.equation().type().describe() + "]",
-                "integrated in the " + s.formDescription(),
-                "err: the larger of the estimated absolute errors of w and w'");
+                : " grid=" + gridSpec + " log-strip=" + region.logStrip) + " sheet=" + k;
         int status;
-        try (TableWriter w = TableWriter.open(stdout, out, resume, signature, comments,
-                ValueCsv.HEADER);
+        try (TableWriter w = TableWriter.open(stdout, out, resume, signature, rows.comments(), rows.columns());
              Progress progress = new Progress("table")) {
             // on Ctrl-C the rows computed so far reach the file
             Thread hook = new Thread(w::flushQuietly);
             Runtime.getRuntime().addShutdownHook(hook);
             try {
                 if (lineSpec != null) {
-                    status = line(s, Targets.line("--line", lineSpec, k), w, progress, console);
+                    status = line(s, rows, Targets.line("--line", lineSpec, k, s.coordinate()), w, progress);
                 } else {
-                    status = grid(s, Regions.region(gridSpec, logStrip, k), w, progress);
+                    status = grid(s, rows, region.grid(gridSpec, k, s.coordinate()), w, progress);
                 }
             } finally {
                 try {
@@ -135,60 +112,32 @@ public final class TableCommand implements Command {
         return status;
     }
 
-    private int memberLine(List<SurfacePoint> points, String lineSpec, int k) {
-        org.tertius.hierarchy.MemberSolution ms = member.solution(solution.solver.settings());
-        String signature = "tertius table member=" + member.member + " times=" + member.times + " s=" + member.s
-                + " m=" + member.m + " x0=" + member.x0 + " state=" + member.state + " origin=" + member.origin
-                + " line=" + lineSpec + " sheet=" + k;
-        int unreached = 0;
-        try (Progress progress = new Progress("table");
-             TableWriter w = TableWriter.open(stdout, out, resume, signature,
-                     List.of("member " + member.member + " of the Painleve III hierarchy, " + ms.parameters()),
-                     MemberOptions.HEADER)) {
-            for (int i = (int) w.existingRows(); i < points.size(); i++) {
-                try {
-                    w.row(MemberOptions.row(ms.evaluate(points.get(i))));
-                } catch (TertiusException e) {
-                    unreached++;
-                    w.row(MemberOptions.unreachedRow(points.get(i)));
-                    console.println("tertius: point " + points.get(i) + " not reached: "
-                            + e.getMessage());
-                }
-                w.flush();
-                progress.update(i + 1, points.size());
-            }
-        }
-        return unreached == 0 ? 0 : Main.EXIT_UNREACHED;
-    }
-
-    private int highPrecisionLine(List<SurfacePoint> points, String lineSpec, int k) {
+    private int preciseLine(ComputedSolution s, ValueRows rows, List<ExactPoint> points, String lineSpec, int k) {
         String signature = "tertius table " + solution.describe() + " line=" + lineSpec + " sheet=" + k
-                + " digits=" + digits;
+                + " digits=" + precision.digits;
         try (Progress progress = new Progress("table");
-             TableWriter w = TableWriter.open(stdout, out, resume, signature,
-                     List.of(solution.equationValue() + ", " + digits + " digits; digits: estimated correct significant"
-                             + " digits of w and w'"), HighPrecisionRows.HEADER)) {
-            org.tertius.core.piii.HighPrecisionSolution hp = HighPrecisionRows.solution(solution, digits, progress);
+             TableWriter w = TableWriter.open(stdout, out, resume, signature, rows.preciseComments(precision.digits),
+                     rows.preciseColumns())) {
+            HighPrecisionSolution hp = precision.solution(s, progress);
             for (int i = (int) w.existingRows(); i < points.size(); i++) {
-                w.row(HighPrecisionRows.row(hp.evaluate(points.get(i))));
+                w.row(rows.row(hp.evaluate(points.get(i))));
                 w.flush();
             }
         }
         return 0;
     }
 
-    private int line(Painleve3Solution s, List<SurfacePoint> points, TableWriter w, Progress progress,
-                     PrintWriter console) {
+    private int line(ComputedSolution s, ValueRows rows, List<SurfacePoint> points, TableWriter w, Progress progress) {
         int unreached = 0;
         long skip = w.existingRows();
         RegionSolver.growTowards(s, points.subList((int) Math.min(skip, points.size()), points.size()));
         for (int i = (int) skip; i < points.size(); i++) {
             SurfacePoint p = points.get(i);
             try {
-                w.row(ValueCsv.row(s.evaluate(p)));
+                w.row(rows.row(s.valueAt(p)));
             } catch (TertiusException e) {
                 unreached++;
-                w.row(ValueCsv.unreachedRow(p));
+                w.row(rows.unreachedRow(p));
                 console.println("tertius: point " + p + " not reached: " + e.getMessage());
             }
             if (i % 16 == 15) {
@@ -196,46 +145,20 @@ public final class TableCommand implements Command {
             }
             progress.update(i + 1, points.size());
         }
-        for (Singularity pole : polesAlong(s, points)) {
-            String msg = String.format(Locale.ROOT, "%s on the line at %s (lead %s, position error %.1e)",
-                    pole.kind().label(), pole.point(), pole.lead(), pole.error());
-            w.comment(msg);
-            console.println("tertius: " + msg);
+        if (s.engineReading().isPresent()) {
+            for (Singularity pole : PoleFinder.alongLine(s, points)) {
+                String msg = String.format(Locale.ROOT, "%s on the line at %s (lead %s, position error %.1e)",
+                        pole.kind().label(), pole.point(), pole.lead(), pole.error());
+                w.comment(msg);
+                console.println("tertius: " + msg);
+            }
         }
         w.flush();
         return unreached == 0 ? 0 : Main.EXIT_UNREACHED;
     }
 
-    /** Poles within half a spacing of the segment. */
-    static List<Singularity> polesAlong(Painleve3Solution s, List<SurfacePoint> points) {
-        List<Singularity> out = new ArrayList<>();
-        if (points.size() < 2) {
-            return out;
-        }
-        SurfacePoint a = points.get(0);
-        SurfacePoint b = points.get(points.size() - 1);
-        double h = Math.hypot(b.re() - a.re(), b.im() - a.im()) / (points.size() - 1);
-        double m = Math.max(h, 1e-9);
-        Grid box = Grid.of(Math.min(a.re(), b.re()) - m, Math.max(a.re(), b.re()) + m, 2,
-                Math.min(a.im(), b.im()) - m, Math.max(a.im(), b.im()) + m, 2, a.sheet());
-        for (Singularity p : PoleFinder.find(s, box)) {
-            if (p.kind() == Singularity.Kind.POLE && distanceToSegment(p.point(), a, b) <= 0.5 * h + 1e-12) {
-                out.add(p);
-            }
-        }
-        return out;
-    }
-
-    private static double distanceToSegment(SurfacePoint p, SurfacePoint a, SurfacePoint b) {
-        double dx = b.re() - a.re();
-        double dy = b.im() - a.im();
-        double t = ((p.re() - a.re()) * dx + (p.im() - a.im()) * dy) / (dx * dx + dy * dy);
-        t = Math.max(0, Math.min(1, t));
-        return Math.hypot(p.re() - (a.re() + t * dx), p.im() - (a.im() + t * dy));
-    }
-
-    private int grid(Painleve3Solution s, Grid g, TableWriter w, Progress progress) {
-        g.checkMemory("--grid");
+    private int grid(ComputedSolution s, ValueRows rows, Grid g, TableWriter w, Progress progress) {
+        g.checkMemory("--grid", s.valueNames().size());
         long skip = w.existingRows();
         int nx = g.nx();
         int failed = 0;
@@ -250,18 +173,13 @@ public final class TableCommand implements Command {
                     if (index < skip) {
                         continue;
                     }
-                    w.row(r.computed(i, j) ? ValueCsv.row(r.value(i, j)) : pointRow(band, i, j));
+                    w.row(r.computed(i, j) ? rows.row(r.value(i, j))
+                            : rows.unreachedRow(band.re(i), band.im(j), band.sheet()));
                 }
             }
             w.flush();
             progress.update((long) (j1 + 1) * nx, (long) g.size());
         }
         return failed == 0 ? 0 : Main.EXIT_UNREACHED;
-    }
-
-    private static String pointRow(Grid g, int i, int j) {
-        SurfacePoint p = g.point(i, j);
-        return p == null ? String.format(Locale.ROOT, "%.17g,%.17g,%d,nan,nan,nan,nan,inf", g.re(i), g.im(j), g.sheet())
-                : ValueCsv.unreachedRow(p);
     }
 }

@@ -1,5 +1,6 @@
 package org.tertius.hierarchy;
 
+import org.tertius.core.face.InvariantCheck;
 import java.util.ArrayList;
 import java.util.List;
 import org.hipparchus.complex.Complex;
@@ -27,12 +28,17 @@ final class IntegralMonitor {
         expected.add(value);
     }
 
+    /** What is checked, in the order of the checks. */
+    List<String> names() {
+        return List.copyOf(names);
+    }
+
     /** The checks at a point: values of all ring variables (state, x, times, m) and errors of the unknowns. */
-    List<IntegralCheck> check(List<Complex> values, double[] err) {
-        List<IntegralCheck> out = new ArrayList<>();
+    List<InvariantCheck> check(List<Complex> values, double[] err) {
+        List<InvariantCheck> out = new ArrayList<>();
         for (int k = 0; k < functions.size(); k++) {
             Linearized f = functions.get(k);
-            out.add(new IntegralCheck(names.get(k), f.value(values), expected.get(k), f.bound(values, err)));
+            out.add(new InvariantCheck(names.get(k), f.value(values), expected.get(k), f.bound(values, err)));
         }
         return out;
     }

@@ -26,6 +26,11 @@ final class Linearized {
         this.gradient = List.copyOf(g);
     }
 
+    /** The function itself. */
+    Polynomial function() {
+        return function;
+    }
+
     Complex value(List<Complex> values) {
         return function.evaluate(Evaluation.COMPLEX, values);
     }

@@ -5,6 +5,7 @@ import java.util.Arrays;
 import java.util.List;
 import org.hipparchus.complex.Complex;
 import org.tertius.core.InvalidInputException;
+import org.tertius.core.number.ExactNumber;
 
 /**
  * The constants of member n: the times t_2 .. t_n of the phase
@@ -16,12 +17,17 @@ public final class MemberParameters {
     private final List<Complex> times;
     private final Complex s;
     private final Complex m;
+    /** The times and m as given exactly, or null where given as doubles. */
+    private final ExactNumber[] exactTimes;
+    private final ExactNumber exactM;
 
     private MemberParameters(Builder b) {
         this.order = b.order;
         this.times = List.copyOf(b.times);
         this.s = b.s;
         this.m = b.m;
+        this.exactTimes = b.exactTimes;
+        this.exactM = b.exactM;
     }
 
     /** A builder for member n (1 <= n <= {@link HierarchyMember#MAX_ORDER}). */
@@ -56,14 +62,29 @@ public final class MemberParameters {
         return m;
     }
 
+    /**
+     * The times t_2 .. t_n and m as exact numbers (those given as doubles: their binary values, vouched for to
+     * {@link ExactNumber#DOUBLE_DIGITS} digits), in the order of the ring: t_2 .. t_n, m.
+     */
+    public List<ExactNumber> exactTimesAndM() {
+        List<ExactNumber> out = new ArrayList<>();
+        for (int j = 0; j < times.size(); j++) {
+            out.add(exactTimes != null && exactTimes[j] != null ? exactTimes[j]
+                    : ExactNumber.ofDouble("t_" + (j + 2), times.get(j)));
+        }
+        out.add(exactM != null ? exactM : ExactNumber.ofDouble("m", m));
+        return out;
+    }
+
     /** The same parameters with t_n replaced (n >= 2). */
     public MemberParameters withTopTime(Complex tn) {
         if (order < 2) {
             throw new InvalidInputException("t_n", "member 1 has no time besides x");
         }
-        List<Complex> t = new ArrayList<>(times);
-        t.set(order - 2, tn);
-        return builder(order).times(t.toArray(new Complex[0])).s(s).m(m).build();
+        List<ExactNumber> exact = exactTimesAndM();
+        ExactNumber[] t = exact.subList(0, order - 1).toArray(new ExactNumber[0]);
+        t[order - 2] = ExactNumber.ofDouble("t_" + order, tn);
+        return builder(order).times(t).s(s).m(exact.get(order - 1)).build();
     }
 
     /** Values of the ring parameters x, t_2 .. t_n, m, in ring order. */
@@ -90,6 +111,8 @@ public final class MemberParameters {
         private List<Complex> times = List.of();
         private Complex s;
         private Complex m = Complex.ZERO;
+        private ExactNumber[] exactTimes;
+        private ExactNumber exactM;
 
         private Builder(int order) {
             this.order = order;
@@ -98,6 +121,31 @@ public final class MemberParameters {
         /** t_2 .. t_n, exactly n - 1 values (none for n = 1); t_n must be non-zero. */
         public Builder times(Complex... times) {
             this.times = Arrays.asList(times.clone());
+            this.exactTimes = null;
+            return this;
+        }
+
+        /** t_2 .. t_n given exactly (for high precision). */
+        public Builder times(ExactNumber... times) {
+            Complex[] c = new Complex[times.length];
+            for (int j = 0; j < times.length; j++) {
+                if (times[j] == null) {
+                    throw new InvalidInputException("t_" + (j + 2), "is required");
+                }
+                c[j] = times[j].toComplex();
+            }
+            times(c);
+            this.exactTimes = times.clone();
+            return this;
+        }
+
+        /** m given exactly (for high precision). */
+        public Builder m(ExactNumber m) {
+            if (m == null) {
+                throw new InvalidInputException("m", "is required");
+            }
+            this.m = m.toComplex();
+            this.exactM = m;
             return this;
         }
 
@@ -108,6 +156,7 @@ public final class MemberParameters {
 
         public Builder m(Complex m) {
             this.m = m;
+            this.exactM = null;
             return this;
         }
 

@@ -1,13 +1,22 @@
 package org.tertius.hierarchy;
 
+import org.tertius.core.face.InvariantCheck;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import java.util.Optional;
 import org.hipparchus.complex.Complex;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.equation.IndependentVariable;
 import org.tertius.core.equation.PolynomialSystem;
 import org.tertius.core.equation.StateProjection;
+import org.tertius.core.face.ComputedSolution;
+import org.tertius.core.face.Coordinate;
+import org.tertius.core.face.EngineReading;
+import org.tertius.core.face.HighPrecisionForm;
+import org.tertius.core.face.SolutionValue;
+import org.tertius.core.number.ComplexArithmetic;
+import org.tertius.core.number.ExactNumber;
 import org.tertius.core.number.SurfacePoint;
 import org.tertius.core.solution.Solution;
 import org.tertius.core.solution.StateEstimate;
@@ -24,7 +33,9 @@ import org.tertius.hierarchy.algebra.Polynomial;
  * <p>Member 1 lives on the Riemann surface of log x: its points are given with a sheet number, counted from
  * the principal sheet of x0. Members n >= 2 are single-valued in x.
  */
-public final class MemberSolution {
+public final class MemberSolution implements ComputedSolution {
+    /** The values of a member solution on the face: q, r, dq/dx, dr/dx. */
+    public static final List<String> VALUE_NAMES = List.of("q", "r", "dq", "dr");
     /** Start data must satisfy the constraints to this relative accuracy. */
     private static final double START_CONSISTENCY = 1e-10;
     /** Coefficients of the series at x = 0 for member 1. */
@@ -41,9 +52,12 @@ public final class MemberSolution {
     private final Solution engine;
     private final IntegralMonitor monitor;
     private final Linearized[] observables;
+    /** How the start was given exactly (for the high-precision replay), or null when it was not. */
+    private final ExactStart exactStart;
 
     private MemberSolution(HierarchyMember member, MemberParameters parameters, SolverSettings settings, Complex x0,
-                           int x0Sheet, List<Complex> startState, double[] startError) {
+                           int x0Sheet, List<Complex> startState, double[] startError, ExactStart exactStart) {
+        this.exactStart = exactStart;
         this.member = member;
         this.parameters = parameters;
         this.settings = settings;
@@ -102,8 +116,70 @@ public final class MemberSolution {
     }
 
     /** Number of nodes in the path tree. */
+    @Override
     public int nodeCount() {
         return engine.nodeCount();
+    }
+
+    @Override
+    public String equationDescription() {
+        return "member " + member.order() + " of the Painleve III hierarchy, " + parameters;
+    }
+
+    @Override
+    public String methodDescription() {
+        return "integrated as a first-order system of its " + member.dimension() + " unknowns in "
+                + (member.variable() == IndependentVariable.LOG ? "log x" : "x");
+    }
+
+    @Override
+    public Coordinate coordinate() {
+        return member.order() == 1 ? Coordinate.logarithmic("x") : Coordinate.plane("x");
+    }
+
+    @Override
+    public List<String> valueNames() {
+        return VALUE_NAMES;
+    }
+
+    @Override
+    public List<String> invariants() {
+        return monitor.names();
+    }
+
+    @Override
+    public SolutionValue valueAt(SurfacePoint point) {
+        coordinate().check("x", point);
+        return evaluate(point.z(), point.sheet()).toSolutionValue(point);
+    }
+
+    @Override
+    public Optional<EngineReading> engineReading() {
+        return Optional.of(new MemberReading(this));
+    }
+
+    @Override
+    public HighPrecisionForm highPrecisionForm() {
+        if (exactStart == null) {
+            throw new InvalidInputException("digits", "this solution was not started from exact data on the principal"
+                    + " sheet (a start moved along the t_n-flow or on another sheet); start it from exact data to"
+                    + " compute it to many digits");
+        }
+        return new MemberPreciseForm(this, exactStart);
+    }
+
+    /** The engine's path tree. */
+    Solution engine() {
+        return engine;
+    }
+
+    /** The observables q, r, dq/dx, dr/dx as polynomials of the ring (unknowns, x, times, m). */
+    List<Polynomial> observables() {
+        List<Polynomial> out = new ArrayList<>();
+        for (Linearized l : observables) {
+            out.add(l.function());
+        }
+        return out;
     }
 
     /** The value at x (principal sheet for member 1). */
@@ -133,7 +209,11 @@ public final class MemberSolution {
                     + " must be 0, got " + sheet);
         }
         double[] tau = tau(x, sheet);
-        StateEstimate e = engine.evaluate(tau[0], tau[1]);
+        return valueFrom(x, sheet, engine.evaluate(tau[0], tau[1]));
+    }
+
+    /** The value at x from an engine estimate there. */
+    MemberValue valueFrom(Complex x, int sheet, StateEstimate e) {
         List<Complex> state = new ArrayList<>();
         double[] err = new double[e.dimension()];
         for (int i = 0; i < e.dimension(); i++) {
@@ -154,8 +234,8 @@ public final class MemberSolution {
      * The first integrals checked at every node of the path tree grown so far; for each integral the check
      * with the largest deviation relative to its bound.
      */
-    public List<IntegralCheck> integralsAlongPaths() {
-        List<IntegralCheck> worst = null;
+    public List<InvariantCheck> integralsAlongPaths() {
+        List<InvariantCheck> worst = null;
         for (Node node : engine.nodes()) {
             List<Complex> state = new ArrayList<>();
             double[] err = new double[node.dimension()];
@@ -165,7 +245,7 @@ public final class MemberSolution {
             }
             Complex x = member.variable() == IndependentVariable.LOG
                     ? new Complex(node.tauRe(), node.tauIm()).exp() : new Complex(node.tauRe(), node.tauIm());
-            List<IntegralCheck> c = monitor.check(ringValues(state, x), err);
+            List<InvariantCheck> c = monitor.check(ringValues(state, x), err);
             if (worst == null) {
                 worst = c;
             } else {
@@ -207,7 +287,7 @@ public final class MemberSolution {
             state.add(new Complex(e.re(i), e.im(i)));
             err[i] += e.error(i);
         }
-        return new MemberSolution(member, moved, settings, x0, 0, state, err);
+        return new MemberSolution(member, moved, settings, x0, 0, state, err, null);
     }
 
     private List<Complex> ringValues(List<Complex> state, Complex x) {
@@ -229,7 +309,7 @@ public final class MemberSolution {
         for (int i = 0; i < err.length; i++) {
             err[i] = START_CONSISTENCY * (1 + startState.get(i).norm()) + startError[i];
         }
-        for (IntegralCheck c : monitor.check(ringValues(startState, x0), err)) {
+        for (InvariantCheck c : monitor.check(ringValues(startState, x0), err)) {
             if (!c.withinEstimate()) {
                 throw new InvalidInputException(c.name().startsWith("det a_-2") ? "s" : "start state",
                         "the start data violate " + c.name() + ": value " + c.value() + ", required " + c.expected()
@@ -248,6 +328,7 @@ public final class MemberSolution {
         private int x0Sheet;
         private List<Complex> state;
         private Complex[] origin;
+        private ExactStart exact;
 
         private Builder(MemberParameters parameters) {
             if (parameters == null) {
@@ -277,6 +358,20 @@ public final class MemberSolution {
             this.x0Sheet = sheet;
             this.state = state;
             this.origin = null;
+            this.exact = null;
+            return this;
+        }
+
+        /**
+         * As {@link #start(Complex, List)} with the data given exactly (decimals, rationals), so that the solution
+         * can also be computed to many digits ({@link #highPrecisionForm()}).
+         */
+        public Builder start(ExactNumber x0, List<ExactNumber> state) {
+            if (x0 == null || state == null) {
+                throw new InvalidInputException(x0 == null ? "x0" : "start state", "is required");
+            }
+            start(x0.toComplex(), 0, ExactStart.toComplex(state));
+            this.exact = ExactStart.atPoint(x0, state);
             return this;
         }
 
@@ -288,6 +383,17 @@ public final class MemberSolution {
             this.origin = new Complex[] {a11, a12, a21};
             this.x0 = null;
             this.state = null;
+            this.exact = null;
+            return this;
+        }
+
+        /** As {@link #startAtOrigin(Complex, Complex, Complex)} with a_{-2}(0) given exactly. */
+        public Builder startAtOrigin(ExactNumber a11, ExactNumber a12, ExactNumber a21) {
+            if (a11 == null || a12 == null || a21 == null) {
+                throw new InvalidInputException("origin", "a11, a12 and a21 are required");
+            }
+            startAtOrigin(a11.toComplex(), a12.toComplex(), a21.toComplex());
+            this.exact = ExactStart.atOrigin(List.of(a11, a12, a21));
             return this;
         }
 
@@ -316,7 +422,10 @@ public final class MemberSolution {
                 throw new InvalidInputException("sheet", "member " + n + " is single-valued in x; the sheet must be 0");
             }
             member.checkState(state);
-            return new MemberSolution(member, parameters, settings, x0, x0Sheet, state, new double[state.size()]);
+            ExactStart e = exact != null ? exact : ExactStart.atPoint(ExactNumber.ofDouble("x0", x0),
+                    ExactStart.ofDoubles("start state", state));
+            return new MemberSolution(member, parameters, settings, x0, x0Sheet, state, new double[state.size()],
+                    x0Sheet == 0 ? e : null);
         }
 
         private MemberSolution fromOrigin() {
@@ -328,7 +437,9 @@ public final class MemberSolution {
             }
             Complex[] y0 = {origin[0], origin[1], origin[2], m, Complex.ZERO, Complex.ZERO};
             member.checkState(Arrays.asList(y0));
-            OriginSeries series = OriginSeries.compute(member.xFlow(parameters), y0, SERIES_ORDER);
+            PolynomialSystem flow = member.xFlow(parameters);
+            OriginSeries<Complex> series = OriginSeries.compute(flow, flow.coefficientValues(), y0, SERIES_ORDER,
+                    ComplexArithmetic.INSTANCE, Complex::norm);
             double scale = 1;
             for (Complex c : y0) {
                 scale = Math.max(scale, c.norm());
@@ -340,7 +451,9 @@ public final class MemberSolution {
             Complex xs = new Complex(x);
             double[] err = new double[y0.length];
             Arrays.fill(err, 16 * series.lastTerm(x));
-            return new MemberSolution(member, parameters, settings, xs, 0, Arrays.asList(series.value(xs)), err);
+            ExactStart e = exact != null ? exact : ExactStart.atOrigin(ExactStart.ofDoubles("origin",
+                    Arrays.asList(origin)));
+            return new MemberSolution(member, parameters, settings, xs, 0, Arrays.asList(series.value(xs)), err, e);
         }
     }
 }

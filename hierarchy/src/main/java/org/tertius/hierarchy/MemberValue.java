@@ -2,6 +2,9 @@ package org.tertius.hierarchy;
 
 import java.util.List;
 import org.hipparchus.complex.Complex;
+import org.tertius.core.face.InvariantCheck;
+import org.tertius.core.face.SolutionValue;
+import org.tertius.core.number.SurfacePoint;
 
 /**
  * The value of a member solution at one point x: q, r, dq/dx, dr/dx, all unknowns, their estimated absolute
@@ -14,10 +17,10 @@ public final class MemberValue {
     private final double[] errors;
     private final Complex[] qr;
     private final double[] qrErrors;
-    private final List<IntegralCheck> integrals;
+    private final List<InvariantCheck> integrals;
 
     MemberValue(Complex x, int sheet, List<Complex> state, double[] errors, Complex[] qr, double[] qrErrors,
-                List<IntegralCheck> integrals) {
+                List<InvariantCheck> integrals) {
         this.x = x;
         this.sheet = sheet;
         this.state = List.copyOf(state);
@@ -81,19 +84,24 @@ public final class MemberValue {
     }
 
     /** The first integrals at this point. */
-    public List<IntegralCheck> integrals() {
+    public List<InvariantCheck> integrals() {
         return integrals;
     }
 
     /** Whether every first integral keeps its value within the error estimate. */
     public boolean integralsWithinEstimate() {
-        return integrals.stream().allMatch(IntegralCheck::withinEstimate);
+        return integrals.stream().allMatch(InvariantCheck::withinEstimate);
+    }
+
+    /** The same value on the equation-neutral face at that point (values q, r, dq, dr; the integrals as checks). */
+    public SolutionValue toSolutionValue(SurfacePoint point) {
+        return SolutionValue.of(point, qr, qrErrors, integrals);
     }
 
     /** Empty if the integrals are kept; otherwise says which drift beyond the error estimate. */
     public String warning() {
         StringBuilder sb = new StringBuilder();
-        for (IntegralCheck c : integrals) {
+        for (InvariantCheck c : integrals) {
             if (!c.withinEstimate()) {
                 sb.append(sb.length() == 0 ? "first integrals drift beyond the error estimate: " : "; ").append(c);
             }

@@ -1,5 +1,6 @@
 package org.tertius.hierarchy;
 
+import org.tertius.core.face.InvariantCheck;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -38,7 +39,7 @@ class MemberSolutionTest {
             maxQ = Math.max(maxQ, v.q().norm());
             assertTrue(v.integralsWithinEstimate(), v.warning());
         }
-        for (IntegralCheck c : sol.integralsAlongPaths()) {
+        for (InvariantCheck c : sol.integralsAlongPaths()) {
             assertTrue(c.withinEstimate(), c.toString());
         }
         // the paths pass near poles of q (|q| large at some sample point), where the error estimates grow
@@ -64,7 +65,7 @@ class MemberSolutionTest {
             MemberValue v = sol.evaluate(x);
             assertTrue(v.integralsWithinEstimate(), v.warning());
         }
-        for (IntegralCheck c : sol.integralsAlongPaths()) {
+        for (InvariantCheck c : sol.integralsAlongPaths()) {
             assertTrue(c.withinEstimate(), c.toString());
         }
     }
@@ -80,7 +81,7 @@ class MemberSolutionTest {
         values.addAll(sol.parameters().ringValues(v.x()));
         double[] err = new double[v.state().size()];
         java.util.Arrays.fill(err, 1e-12);
-        assertFalse(monitor.check(values, err).stream().allMatch(IntegralCheck::withinEstimate));
+        assertFalse(monitor.check(values, err).stream().allMatch(InvariantCheck::withinEstimate));
     }
 
     private static final MemberParameters MEMBER1 = MemberParameters.builder(1).s(new Complex(1.0))
@@ -104,7 +105,7 @@ class MemberSolutionTest {
             for (int i = 0; i < 6; i++) {
                 double d = v0.state().get(i).subtract(v1.state().get(i)).norm();
                 // the engine's error estimates are first-order estimates; allowed slack as for the integrals
-                assertTrue(d <= IntegralCheck.ESTIMATE_SAFETY * (v0.error(i) + v1.error(i)), "component " + i
+                assertTrue(d <= InvariantCheck.SAFETY * (v0.error(i) + v1.error(i)), "component " + i
                         + " at " + x + ": " + d + " > " + (v0.error(i) + v1.error(i)));
             }
             assertTrue(v0.integralsWithinEstimate() && v1.integralsWithinEstimate(), v0.warning() + v1.warning());
@@ -128,7 +129,7 @@ class MemberSolutionTest {
         MemberValue v = sol.evaluate(new Complex(0.9));
         assertTrue(v.integralsWithinEstimate(), v.warning());
         // the focusing symmetry r = -conj(q) is kept by both flows
-        assertTrue(v.r().add(v.q().conjugate()).norm() <= IntegralCheck.ESTIMATE_SAFETY * (v.errorQ() + v.errorR()),
+        assertTrue(v.r().add(v.q().conjugate()).norm() <= InvariantCheck.SAFETY * (v.errorQ() + v.errorR()),
                 v.q() + " " + v.r());
     }
 
@@ -141,7 +142,7 @@ class MemberSolutionTest {
         MemberValue va = a.evaluate(new Complex(2.0, 0.5));
         MemberValue vb = b.evaluate(new Complex(2.0, 0.5));
         // the two runs differ by at most their combined error estimates (with the slack of the estimates)
-        assertTrue(va.q().subtract(vb.q()).norm() <= IntegralCheck.ESTIMATE_SAFETY * (va.errorQ() + vb.errorQ()),
+        assertTrue(va.q().subtract(vb.q()).norm() <= InvariantCheck.SAFETY * (va.errorQ() + vb.errorQ()),
                 va.q() + " vs " + vb.q());
     }
 }

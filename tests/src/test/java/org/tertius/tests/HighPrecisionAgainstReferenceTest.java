@@ -6,8 +6,10 @@ import java.math.BigDecimal;
 import java.math.MathContext;
 import org.apfloat.Apcomplex;
 import org.junit.jupiter.api.Test;
-import org.tertius.core.piii.HighPrecisionSolution;
-import org.tertius.core.piii.HighPrecisionValue;
+import org.tertius.core.highprecision.HighPrecisionSolution;
+import org.tertius.core.highprecision.HighPrecisionValue;
+import org.tertius.core.piii.Painleve3;
+import org.tertius.core.piii.Painleve3Solution;
 
 /**
  * The high-precision engine against the independent reference data (tests/src/test/resources/reference/
@@ -24,8 +26,8 @@ class HighPrecisionAgainstReferenceTest {
         ReferenceData ref = ReferenceData.load("/reference/piii-generic-d6.csv");
         String[] p = ref.parameters();
         String[] s = ref.start();
-        HighPrecisionSolution hp = HighPrecisionSolution.builder(p[0], p[1], p[2], p[3]).start(s[0], s[1], s[2])
-                .digits(30).build();
+        HighPrecisionSolution hp = HighPrecisionSolution.of(Painleve3Solution.builder(Painleve3.exact(p[0], p[1], p[2],
+                p[3])).start(s[0], s[1], s[2]).build(), 30);
         int checked = 0;
         for (ReferenceData.Row row : ref.rows) {
             boolean wanted = (row.point.re() == 3 && row.point.im() == 2) || (row.point.re() == 1 && row.point.im() == 10)
@@ -35,7 +37,7 @@ class HighPrecisionAgainstReferenceTest {
             }
             HighPrecisionValue v = hp.evaluate(row.point);
             assertTrue(v.correctDigits() >= 25, "claimed digits " + v.correctDigits() + " at " + row.point);
-            double dw = distance(v.w(), row.exact[0], row.exact[1]);
+            double dw = distance(v.value(0), row.exact[0], row.exact[1]);
             double scale = 1 + Math.hypot(row.w.getReal(), row.w.getImaginary());
             assertTrue(dw <= 1e-24 * scale, "w at " + row.point + " differs by " + dw);
             checked++;

@@ -2,6 +2,8 @@ package org.tertius.core.number;
 
 import java.math.BigDecimal;
 import java.math.BigInteger;
+import java.math.MathContext;
+import java.math.RoundingMode;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.hipparchus.complex.Complex;
@@ -53,6 +55,14 @@ public final class ExactNumber {
             throw new InvalidInputException("denominator", "must be non-zero");
         }
         return new ExactNumber(p, q, BigInteger.ZERO, BigInteger.ONE, EXACT);
+    }
+
+    /** The exact complex rational a/b + (c/d) i (b, d != 0). */
+    public static ExactNumber ofComplexRational(BigInteger a, BigInteger b, BigInteger c, BigInteger d) {
+        if (b.signum() == 0 || d.signum() == 0) {
+            throw new InvalidInputException("denominator", "must be non-zero");
+        }
+        return new ExactNumber(a, b, c, d, EXACT);
     }
 
     /** The exact integer n. */
@@ -180,9 +190,61 @@ public final class ExactNumber {
 
     /** The nearest double-precision complex number (for planning in double precision). */
     public Complex toComplex() {
-        return new Complex(new BigDecimal(reNum).divide(new BigDecimal(reDen), java.math.MathContext.DECIMAL64)
-                .doubleValue(), new BigDecimal(imNum).divide(new BigDecimal(imDen), java.math.MathContext.DECIMAL64)
-                .doubleValue());
+        return new Complex(toDouble(reNum, reDen), toDouble(imNum, imDen));
+    }
+
+    /**
+     * p/q as the nearest double: the quotient to 40 significant digits, then rounded once more (a second rounding
+     * that can differ from the nearest double only for quotients within 1e-40 relative of a midpoint).
+     */
+    private static double toDouble(BigInteger p, BigInteger q) {
+        return new BigDecimal(p).divide(new BigDecimal(q), QUOTIENT).doubleValue();
+    }
+
+    private static final MathContext QUOTIENT = new MathContext(40, RoundingMode.HALF_EVEN);
+
+    /** this + b, exact; vouched for to the smaller of the two digit counts. */
+    public ExactNumber add(ExactNumber b) {
+        return new ExactNumber(reNum.multiply(b.reDen).add(b.reNum.multiply(reDen)), reDen.multiply(b.reDen),
+                imNum.multiply(b.imDen).add(b.imNum.multiply(imDen)), imDen.multiply(b.imDen),
+                Math.min(significantDigits, b.significantDigits));
+    }
+
+    /** this - b, exact. */
+    public ExactNumber subtract(ExactNumber b) {
+        return add(b.negate());
+    }
+
+    /** this * b, exact. */
+    public ExactNumber multiply(ExactNumber b) {
+        // (a + ci)(e + gi) with a = p/q, c = r/s, e = t/u, g = v/w
+        BigInteger reA = reNum.multiply(b.reNum).multiply(imDen).multiply(b.imDen)
+                .subtract(imNum.multiply(b.imNum).multiply(reDen).multiply(b.reDen));
+        BigInteger reB = reDen.multiply(b.reDen).multiply(imDen).multiply(b.imDen);
+        BigInteger imA = reNum.multiply(b.imNum).multiply(imDen).multiply(b.reDen)
+                .add(imNum.multiply(b.reNum).multiply(reDen).multiply(b.imDen));
+        return new ExactNumber(reA, reB, imA, reB, Math.min(significantDigits, b.significantDigits));
+    }
+
+    /** this * k / d for integers k and d != 0, exact. */
+    public ExactNumber scale(long k, long d) {
+        if (d == 0) {
+            throw new InvalidInputException("denominator", "must be non-zero");
+        }
+        BigInteger bk = BigInteger.valueOf(k);
+        BigInteger bd = BigInteger.valueOf(d);
+        return new ExactNumber(reNum.multiply(bk), reDen.multiply(bd), imNum.multiply(bk), imDen.multiply(bd),
+                significantDigits);
+    }
+
+    /** The real part's value to that many significant digits (plain decimal text, or exact when it terminates). */
+    public BigDecimal realPart(MathContext mc) {
+        return new BigDecimal(reNum).divide(new BigDecimal(reDen), mc);
+    }
+
+    /** The imaginary part's value to that many significant digits. */
+    public BigDecimal imaginaryPart(MathContext mc) {
+        return new BigDecimal(imNum).divide(new BigDecimal(imDen), mc);
     }
 
     /** -this (same digit count). */

@@ -32,6 +32,16 @@ public final class SurfacePoint {
         return new SurfacePoint(re, im, sheet);
     }
 
+    /**
+     * A point of the plane of a single-valued solution: any finite z, the origin included, on sheet 0 (its log
+     * coordinate is not used; at z = 0 it is -infinity).
+     */
+    public static SurfacePoint planar(double re, double im) {
+        InvalidInputException.requireFinite("x (real part)", re);
+        InvalidInputException.requireFinite("x (imaginary part)", im);
+        return new SurfacePoint(re, im, 0);
+    }
+
     public static SurfacePoint of(Complex z, int sheet) {
         return of(z.getReal(), z.getImaginary(), sheet);
     }
@@ -76,7 +86,7 @@ public final class SurfacePoint {
 
     /** Real part of the log coordinate, log|z|. */
     public double logRe() {
-        return Math.log(org.tertius.core.number.Cx.abs(re, im));
+        return Math.log(Cx.abs(re, im));
     }
 
     /** Imaginary part of the log coordinate: Arg z + 2 pi k with Arg z in (-pi, pi]. */

@@ -1,7 +1,11 @@
 package org.tertius.core.piii;
 
+import java.util.Optional;
 import org.hipparchus.complex.Complex;
 import org.tertius.core.InvalidInputException;
+import org.tertius.core.face.EngineReading;
+import org.tertius.core.face.HighPrecisionForm;
+import org.tertius.core.number.ExactNumber;
 import org.tertius.core.number.SurfacePoint;
 import org.tertius.core.solution.Solution;
 import org.tertius.core.solution.StateEstimate;
@@ -12,15 +16,21 @@ final class IntegratedSolution extends Painleve3Solution {
     private final Painleve3 equation;
     private final Painleve3Form form;
     private final Solution engine;
+    /** The start data z0, w0, w'(z0) as given (exactly, or the binary values of doubles). */
+    private final ExactNumber[] exactStart;
+    private final boolean startsAtZero;
 
-    private IntegratedSolution(Painleve3 equation, Painleve3Form form, Solution engine) {
+    private IntegratedSolution(Painleve3 equation, Painleve3Form form, Solution engine, ExactNumber[] exactStart,
+                               boolean startsAtZero) {
         this.equation = equation;
         this.form = form;
         this.engine = engine;
+        this.exactStart = exactStart.clone();
+        this.startsAtZero = startsAtZero;
     }
 
     static IntegratedSolution create(Painleve3 eq, Complex z0, Complex w0, Complex dw0, Complex d3w0,
-                                     SolverSettings settings) {
+                                     ExactNumber[] exactStart, SolverSettings settings) {
         boolean atZero = w0.getReal() == 0 && w0.getImaginary() == 0;
         boolean deltaZero = Painleve3.isZero(eq.delta());
         boolean gammaZero = Painleve3.isZero(eq.gamma());
@@ -68,7 +78,7 @@ final class IntegratedSolution extends Painleve3Solution {
         }
         SurfacePoint p0 = SurfacePoint.of(z0, 0);
         Solution engine = Solution.start(form.system(), settings, form.projection(), p0.logRe(), p0.logIm(), re, im);
-        return new IntegratedSolution(eq, form, engine);
+        return new IntegratedSolution(eq, form, engine, exactStart, atZero);
     }
 
     @Override
@@ -105,6 +115,20 @@ final class IntegratedSolution extends Painleve3Solution {
     @Override
     public String formDescription() {
         return form.describe();
+    }
+
+    @Override
+    public Optional<EngineReading> engineReading() {
+        return Optional.of(new Painleve3Reading(this));
+    }
+
+    @Override
+    public HighPrecisionForm highPrecisionForm() {
+        if (startsAtZero) {
+            throw new InvalidInputException("w0", "w0 = 0 is not accepted at high precision: start the solution at a"
+                    + " point where w != 0");
+        }
+        return new Painleve3PreciseForm(this, exactStart);
     }
 
     /** The engine solution (path tree) behind this solution. */

@@ -2,6 +2,7 @@ package org.tertius.core.piii;
 
 import org.hipparchus.complex.Complex;
 import org.tertius.core.InvalidInputException;
+import org.tertius.core.number.ExactNumber;
 
 /**
  * The third Painleve equation
@@ -14,12 +15,55 @@ public final class Painleve3 {
     private final Complex beta;
     private final Complex gamma;
     private final Complex delta;
+    /** The parameters as given exactly (decimals, rationals), or null when given as doubles. */
+    private final ExactNumber[] exact;
 
     private Painleve3(Complex alpha, Complex beta, Complex gamma, Complex delta) {
+        this(alpha, beta, gamma, delta, null);
+    }
+
+    private Painleve3(Complex alpha, Complex beta, Complex gamma, Complex delta, ExactNumber[] exact) {
         this.alpha = check("alpha", alpha);
         this.beta = check("beta", beta);
         this.gamma = check("gamma", gamma);
         this.delta = check("delta", delta);
+        this.exact = exact;
+    }
+
+    /**
+     * The equation with parameters given exactly; the double-precision engine uses their nearest doubles, the
+     * high-precision replay the exact values.
+     */
+    public static Painleve3 of(ExactNumber alpha, ExactNumber beta, ExactNumber gamma, ExactNumber delta) {
+        ExactNumber[] e = {alpha, beta, gamma, delta};
+        String[] names = {"alpha", "beta", "gamma", "delta"};
+        for (int i = 0; i < 4; i++) {
+            if (e[i] == null) {
+                throw new InvalidInputException(names[i], "is required");
+            }
+        }
+        return new Painleve3(alpha.toComplex(), beta.toComplex(), gamma.toComplex(), delta.toComplex(), e);
+    }
+
+    /**
+     * The equation with parameters given as exact texts: decimals ({@code -0.5}, {@code 2.5e-3}), rationals
+     * ({@code 1/3}) or complex numbers of them ({@code 1/2+1/3i}); see {@link ExactNumber#parse}.
+     */
+    public static Painleve3 exact(String alpha, String beta, String gamma, String delta) {
+        return of(ExactNumber.parse("alpha", alpha), ExactNumber.parse("beta", beta), ExactNumber.parse("gamma", gamma),
+                ExactNumber.parse("delta", delta));
+    }
+
+    /**
+     * The parameters (alpha, beta, gamma, delta) as exact numbers: as given, or the binary values of the doubles
+     * (then vouched for to {@link ExactNumber#DOUBLE_DIGITS} digits only).
+     */
+    public ExactNumber[] exactParameters() {
+        if (exact != null) {
+            return exact.clone();
+        }
+        return new ExactNumber[] {ExactNumber.ofDouble("alpha", alpha), ExactNumber.ofDouble("beta", beta),
+            ExactNumber.ofDouble("gamma", gamma), ExactNumber.ofDouble("delta", delta)};
     }
 
     public static Painleve3 of(Complex alpha, Complex beta, Complex gamma, Complex delta) {
@@ -80,12 +124,15 @@ public final class Painleve3 {
      * (alpha, beta, gamma, delta) -> (-beta, -alpha, -delta, -gamma).
      */
     public Painleve3 reciprocal() {
-        return new Painleve3(beta.negate(), alpha.negate(), delta.negate(), gamma.negate());
+        return new Painleve3(beta.negate(), alpha.negate(), delta.negate(), gamma.negate(),
+                exact == null ? null : new ExactNumber[] {exact[1].negate(), exact[0].negate(), exact[3].negate(),
+                    exact[2].negate()});
     }
 
     /** The parameters of -w: (alpha, beta, gamma, delta) -> (-alpha, -beta, gamma, delta). */
     public Painleve3 negated() {
-        return new Painleve3(alpha.negate(), beta.negate(), gamma, delta);
+        return new Painleve3(alpha.negate(), beta.negate(), gamma, delta,
+                exact == null ? null : new ExactNumber[] {exact[0].negate(), exact[1].negate(), exact[2], exact[3]});
     }
 
     /**

@@ -2,8 +2,15 @@ package org.tertius.core.piii;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import org.hipparchus.complex.Complex;
 import org.tertius.core.InvalidInputException;
+import org.tertius.core.face.ComputedSolution;
+import org.tertius.core.face.Coordinate;
+import org.tertius.core.face.EngineReading;
+import org.tertius.core.face.HighPrecisionForm;
+import org.tertius.core.face.SolutionValue;
+import org.tertius.core.number.ExactNumber;
 import org.tertius.core.number.SurfacePoint;
 import org.tertius.core.step.SolverSettings;
 
@@ -15,7 +22,11 @@ import org.tertius.core.step.SolverSettings;
  * <p>Build one with {@link #builder(Painleve3)}; the symmetries of the equation act on solutions through
  * {@link #reciprocal()}, {@link #negated()} and {@link #scaledArgument(Complex)}.
  */
-public abstract class Painleve3Solution {
+public abstract class Painleve3Solution implements ComputedSolution {
+    /** Painleve III solutions live on the Riemann surface of log z. */
+    public static final Coordinate COORDINATE = Coordinate.logarithmic("z");
+    /** The values of a Painleve III solution on the face: w and w'. */
+    public static final List<String> VALUE_NAMES = List.of("w", "dw");
 
     Painleve3Solution() {
     }
@@ -45,34 +56,39 @@ public abstract class Painleve3Solution {
     /** A line describing the polynomial form integrated (for output headers). */
     public abstract String formDescription();
 
+    @Override
+    public String equationDescription() {
+        return equation() + " [" + equation().type().describe() + "]";
+    }
+
+    @Override
+    public String methodDescription() {
+        return "integrated in the " + formDescription();
+    }
+
+    @Override
+    public Coordinate coordinate() {
+        return COORDINATE;
+    }
+
+    @Override
+    public List<String> valueNames() {
+        return VALUE_NAMES;
+    }
+
+    @Override
+    public SolutionValue valueAt(SurfacePoint point) {
+        return evaluate(point).toSolutionValue();
+    }
+
     /** 1/w, a solution of {@link Painleve3#reciprocal()}. */
     public Painleve3Solution reciprocal() {
-        Painleve3Solution base = this;
-        return new SymmetryImage(base, equation().reciprocal(), "1/w") {
-            @Override
-            public Painleve3Value evaluate(SurfacePoint point) {
-                Painleve3Value v = base.evaluate(point);
-                Complex w = v.w();
-                double m = w.norm();
-                Complex iw = w.reciprocal();
-                Complex idw = v.dw().negate().divide(w.multiply(w));
-                double ew = v.errW() / (m * m);
-                double edw = v.errDw() / (m * m) + 2 * v.dw().norm() * v.errW() / (m * m * m);
-                return new Painleve3Value(point, iw, idw, ew, edw);
-            }
-        };
+        return new SymmetryImage(this, equation().reciprocal(), SymmetryImage.Kind.RECIPROCAL, Complex.ONE);
     }
 
     /** -w, a solution of {@link Painleve3#negated()}. */
     public Painleve3Solution negated() {
-        Painleve3Solution base = this;
-        return new SymmetryImage(base, equation().negated(), "-w") {
-            @Override
-            public Painleve3Value evaluate(SurfacePoint point) {
-                Painleve3Value v = base.evaluate(point);
-                return new Painleve3Value(point, v.w().negate(), v.dw().negate(), v.errW(), v.errDw());
-            }
-        };
+        return new SymmetryImage(this, equation().negated(), SymmetryImage.Kind.NEGATED, Complex.ONE);
     }
 
     /**
@@ -80,51 +96,11 @@ public abstract class Painleve3Solution {
      * point of w with log coordinate log z + Log lambda (principal Log lambda).
      */
     public Painleve3Solution scaledArgument(Complex lambda) {
-        Painleve3Solution base = this;
-        Painleve3 eq = equation().scaledArgument(lambda);
-        double lr = Math.log(lambda.norm());
-        double li = lambda.getArgument();
-        return new SymmetryImage(base, eq, "w(lambda z)") {
-            @Override
-            public Painleve3Value evaluate(SurfacePoint point) {
-                SurfacePoint q = SurfacePoint.fromLog(point.logRe() + lr, point.logIm() + li);
-                Painleve3Value v = base.evaluate(q);
-                return new Painleve3Value(point, v.w(), v.dw().multiply(lambda), v.errW(),
-                        v.errDw() * lambda.norm());
-            }
-        };
+        return new SymmetryImage(this, equation().scaledArgument(lambda), SymmetryImage.Kind.SCALED_ARGUMENT, lambda);
     }
 
     public static Builder builder(Painleve3 equation) {
         return new Builder(equation);
-    }
-
-    /** A solution obtained from another by a symmetry of the equation. */
-    private abstract static class SymmetryImage extends Painleve3Solution {
-        private final Painleve3Solution base;
-        private final Painleve3 eq;
-        private final String label;
-
-        SymmetryImage(Painleve3Solution base, Painleve3 eq, String label) {
-            this.base = base;
-            this.eq = eq;
-            this.label = label;
-        }
-
-        @Override
-        public Painleve3 equation() {
-            return eq;
-        }
-
-        @Override
-        public int nodeCount() {
-            return base.nodeCount();
-        }
-
-        @Override
-        public String formDescription() {
-            return label + " of: " + base.formDescription();
-        }
     }
 
     /**
@@ -137,6 +113,7 @@ public abstract class Painleve3Solution {
         private Complex w0;
         private Complex dw0;
         private Complex d3w0;
+        private ExactNumber[] exactStart;
         private SolverSettings settings = SolverSettings.defaults();
 
         private Builder(Painleve3 equation) {
@@ -148,6 +125,25 @@ public abstract class Painleve3Solution {
             this.z0 = z0;
             this.w0 = w0;
             this.dw0 = dw0;
+            this.exactStart = null;
+            return this;
+        }
+
+        /** Start data given as exact texts (decimals, rationals p/q, complex a+bi of them; see {@link ExactNumber#parse}). */
+        public Builder start(String z0, String w0, String dw0) {
+            return start(ExactNumber.parse("z0", z0), ExactNumber.parse("w0", w0), ExactNumber.parse("dw0", dw0));
+        }
+
+        /**
+         * Start data given exactly (decimals or rationals): the engine starts from their nearest doubles, the
+         * high-precision replay ({@link #highPrecisionForm()}) from the exact values.
+         */
+        public Builder start(ExactNumber z0, ExactNumber w0, ExactNumber dw0) {
+            if (z0 == null || w0 == null || dw0 == null) {
+                throw new InvalidInputException(z0 == null ? "z0" : w0 == null ? "w0" : "dw0", "is required");
+            }
+            start(z0.toComplex(), w0.toComplex(), dw0.toComplex());
+            this.exactStart = new ExactNumber[] {z0, w0, dw0};
             return this;
         }
 
@@ -173,7 +169,9 @@ public abstract class Painleve3Solution {
             check("w0", w0);
             check("dw0", dw0);
             SurfacePoint.of(z0, 0); // rejects z0 = 0 with a clear message
-            return IntegratedSolution.create(equation, z0, w0, dw0, d3w0, settings);
+            ExactNumber[] exact = exactStart != null ? exactStart : new ExactNumber[] {
+                ExactNumber.ofDouble("z0", z0), ExactNumber.ofDouble("w0", w0), ExactNumber.ofDouble("dw0", dw0)};
+            return IntegratedSolution.create(equation, z0, w0, dw0, d3w0, exact, settings);
         }
 
         private static void check(String name, Complex c) {

@@ -1,6 +1,7 @@
 package org.tertius.core.piii;
 
 import org.hipparchus.complex.Complex;
+import org.tertius.core.face.SolutionValue;
 import org.tertius.core.number.SurfacePoint;
 
 /**
@@ -47,6 +48,16 @@ public final class Painleve3Value {
     /** The larger of the two error estimates relative to 1 + |value|. */
     public double relativeError() {
         return Math.max(errW / (1 + w.norm()), errDw / (1 + dw.norm()));
+    }
+
+    /** The same value on the equation-neutral face (values w, w' in that order). */
+    public SolutionValue toSolutionValue() {
+        return SolutionValue.of(point, new Complex[] {w, dw}, new double[] {errW, errDw});
+    }
+
+    /** A value of the face with the layout of {@link Painleve3Solution#VALUE_NAMES} (w, w'). */
+    public static Painleve3Value of(SolutionValue v) {
+        return new Painleve3Value(v.point(), v.value(0), v.value(1), v.error(0), v.error(1));
     }
 
     @Override

@@ -1,6 +1,8 @@
 package org.tertius.core.region;
 
+import java.util.Locale;
 import org.tertius.core.InvalidInputException;
+import org.tertius.core.face.Coordinate;
 import org.tertius.core.number.SurfacePoint;
 
 /**
@@ -9,8 +11,8 @@ import org.tertius.core.number.SurfacePoint;
  * coordinates are log|z| and the continuous argument of z). Immutable.
  */
 public final class Grid {
-    /** Bytes per grid point held by a {@link GridResult} (five doubles). */
-    public static final long BYTES_PER_POINT = 5 * 8;
+    /** Bytes per value and grid point held by a {@link GridResult} (real and imaginary part, error). */
+    public static final long BYTES_PER_VALUE = 3 * 8;
 
     private final double re0;
     private final double re1;
@@ -182,14 +184,25 @@ public final class Grid {
     }
 
     /**
-     * Checks that the values of the grid fit in memory with room for the path tree, else refuses with the
-     * estimate.
+     * The point (i, j) on the surface of a solution with that coordinate: in the plane any point (the origin
+     * included, sheet 0), on a logarithmic surface as {@link #point(int, int)}.
      */
-    public void checkMemory(String argument) {
-        long need = BYTES_PER_POINT * size();
+    public SurfacePoint point(int i, int j, Coordinate coordinate) {
+        if (!logarithmic && !coordinate.hasSheets()) {
+            return SurfacePoint.planar(re(i), im(j));
+        }
+        return point(i, j);
+    }
+
+    /**
+     * Checks that the values of the grid (that many per point) fit in memory with room for the path tree, else
+     * refuses with the estimate.
+     */
+    public void checkMemory(String argument, int valuesPerPoint) {
+        long need = BYTES_PER_VALUE * valuesPerPoint * size();
         long max = Runtime.getRuntime().maxMemory();
         if (need > max / 2) {
-            throw new InvalidInputException(argument, String.format(java.util.Locale.ROOT,
+            throw new InvalidInputException(argument, String.format(Locale.ROOT,
                     "a %d x %d grid needs about %d MB for its values, more than half of the %d MB this JVM may"
                             + " use; choose fewer points or raise -Xmx", nx, ny, need >> 20, max >> 20));
         }

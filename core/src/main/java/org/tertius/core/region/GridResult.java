@@ -1,30 +1,33 @@
 package org.tertius.core.region;
 
+import java.util.List;
 import org.hipparchus.complex.Complex;
+import org.tertius.core.face.Coordinate;
+import org.tertius.core.face.SolutionValue;
+import org.tertius.core.number.Cx;
 import org.tertius.core.number.SurfacePoint;
-import org.tertius.core.piii.Painleve3Value;
 
 /**
- * Values of a solution on a {@link Grid}: w, w' and the error estimate (the larger of the absolute errors of w
- * and w') at every point, row-major (index j * nx + i); NaN values and an infinite error mark points that could
- * not be computed (or z = 0). Immutable after construction.
+ * Values of a solution on a {@link Grid}: every value of the solution (in the order of its value names) with its
+ * error estimate at every point, row-major (index j * nx + i); NaN values and infinite errors mark points that could
+ * not be computed. Immutable after construction.
  */
 public final class GridResult {
     private final Grid grid;
-    private final double[] wRe;
-    private final double[] wIm;
-    private final double[] dwRe;
-    private final double[] dwIm;
-    private final double[] err;
+    private final Coordinate coordinate;
+    private final List<String> names;
+    private final double[][] re;
+    private final double[][] im;
+    private final double[][] err;
     private final RegionStatistics statistics;
 
-    GridResult(Grid grid, double[] wRe, double[] wIm, double[] dwRe, double[] dwIm, double[] err,
+    GridResult(Grid grid, Coordinate coordinate, List<String> names, double[][] re, double[][] im, double[][] err,
                RegionStatistics statistics) {
         this.grid = grid;
-        this.wRe = wRe;
-        this.wIm = wIm;
-        this.dwRe = dwRe;
-        this.dwIm = dwIm;
+        this.coordinate = coordinate;
+        this.names = names;
+        this.re = re;
+        this.im = im;
         this.err = err;
         this.statistics = statistics;
     }
@@ -33,40 +36,66 @@ public final class GridResult {
         return grid;
     }
 
+    /** The names of the values (those of the solution). */
+    public List<String> names() {
+        return names;
+    }
+
     public RegionStatistics statistics() {
         return statistics;
     }
 
     public boolean computed(int i, int j) {
-        return Double.isFinite(err[j * grid.nx() + i]);
+        return Double.isFinite(err[0][j * grid.nx() + i]);
     }
 
-    public Complex w(int i, int j) {
+    /** Value v at (i, j). */
+    public Complex value(int v, int i, int j) {
         int k = j * grid.nx() + i;
-        return new Complex(wRe[k], wIm[k]);
+        return new Complex(re[v][k], im[v][k]);
     }
 
-    public Complex dw(int i, int j) {
-        int k = j * grid.nx() + i;
-        return new Complex(dwRe[k], dwIm[k]);
+    /** The first value (drawn in pictures) at (i, j). */
+    public Complex primary(int i, int j) {
+        return value(0, i, j);
     }
 
+    /** The largest error estimate of the values at (i, j). */
     public double error(int i, int j) {
-        return err[j * grid.nx() + i];
+        int k = j * grid.nx() + i;
+        double m = 0;
+        for (double[] e : err) {
+            m = Math.max(m, e[k]);
+        }
+        return m;
     }
 
-    /** The value at (i, j) as a value object (errors: both set to the grid error). */
-    public Painleve3Value value(int i, int j) {
-        SurfacePoint p = grid.point(i, j);
-        return new Painleve3Value(p, w(i, j), dw(i, j), error(i, j), error(i, j));
+    /** The point (i, j) of the solution's surface. */
+    public SurfacePoint point(int i, int j) {
+        return grid.point(i, j, coordinate);
     }
 
-    /** The largest error estimate relative to 1 + |w| over the computed points. */
+    /** The values at (i, j) as a value object. */
+    public SolutionValue value(int i, int j) {
+        int k = j * grid.nx() + i;
+        Complex[] v = new Complex[names.size()];
+        double[] e = new double[names.size()];
+        for (int n = 0; n < v.length; n++) {
+            v[n] = new Complex(re[n][k], im[n][k]);
+            e[n] = err[n][k];
+        }
+        return SolutionValue.of(point(i, j), v, e);
+    }
+
+    /** The largest error estimate (of any value) relative to 1 + |first value| over the computed points. */
     public double maxRelativeError() {
         double m = 0;
-        for (int k = 0; k < err.length; k++) {
-            if (Double.isFinite(err[k])) {
-                m = Math.max(m, err[k] / (1 + org.tertius.core.number.Cx.abs(wRe[k], wIm[k])));
+        for (int j = 0; j < grid.ny(); j++) {
+            for (int i = 0; i < grid.nx(); i++) {
+                int k = j * grid.nx() + i;
+                if (computed(i, j)) {
+                    m = Math.max(m, error(i, j) / (1 + Cx.abs(re[0][k], im[0][k])));
+                }
             }
         }
         return m;

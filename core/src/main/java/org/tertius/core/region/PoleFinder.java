@@ -4,24 +4,28 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import org.hipparchus.complex.Complex;
+import org.tertius.core.InvalidInputException;
+import org.tertius.core.face.ComputedSolution;
+import org.tertius.core.face.EngineReading;
 import org.tertius.core.number.Cx;
 import org.tertius.core.number.SurfacePoint;
 import org.tertius.core.pade.PadeApproximant;
 import org.tertius.core.pade.PolynomialRoots;
-import org.tertius.core.piii.EngineView;
-import org.tertius.core.piii.Painleve3Solution;
 import org.tertius.core.step.Node;
 
 /**
- * Poles and zeros of w in a rectangle of one sheet, read off the Pade approximants stored in the path tree:
- * the roots of the denominator (poles) and numerator (zeros) of the approximant of w at each node, in and
+ * Poles and zeros of the first value of a solution (w, or q of a hierarchy member) in a rectangle of one sheet, read
+ * off the Pade approximants stored in the path tree: the roots of the denominator (poles) and numerator (zeros) of
+ * the approximant of the state component that carries that value (see {@link EngineReading}) at each node, in and
  * around its disk. A root is kept only if the lower-order approximant of the same node has a root next to it (a spurious
  * pole-zero pair of one approximant does not survive this), and the distance between the two roots is the
  * position error estimate. Roots found by several overlapping nodes are merged, keeping the copy with the
  * smallest position error, whose error is raised to the distance of any copy that disagrees beyond both
- * estimates. The leading coefficient is computed from the approximant: at a pole of w(tau) the
- * residue in tau is r p(s0)/q'(s0), so that w ~ c/(z - z0) with c = z0 r p(s0)/q'(s0); at a zero,
- * w' = (p'(s0)/q(s0)) / (r z0). When the form carries 1/w, the roles of numerator and denominator swap.
+ * estimates. The leading coefficient is computed from the approximant: with the value v = f y (f the reading's
+ * factor) and y = P/Q in the scaled variable s = (tau - tau_n)/r, the residue of v in tau at a root s0 of Q is
+ * f r P(s0)/Q'(s0), and in the solution's variable u it is that times du/d tau (z0 times it on a logarithmic
+ * surface, where du/d tau = z); at a zero v' = f (P'(s0)/Q(s0)) / r divided by du/d tau. When the value is f / y, the
+ * roles of numerator and denominator swap and f enters inverted.
  */
 public final class PoleFinder {
     /**
@@ -41,22 +45,28 @@ public final class PoleFinder {
     }
 
     /**
-     * Finds the poles and zeros of w in the region of {@code grid} (a rectangle of one sheet or a strip in log z). Grow the tree over the
-     * rectangle first (for example with {@link RegionSolver}); only singularities inside stored disks are seen.
+     * Finds the poles and zeros of the first value of a solution in the region of {@code grid} (a rectangle of one
+     * sheet or a strip in log z). Grow the tree over the rectangle first (for example with {@link RegionSolver});
+     * only singularities inside stored disks are seen.
+     *
+     * @throws InvalidInputException for a solution not integrated by the engine (it has no path tree to read)
      */
-    public static List<Singularity> find(Painleve3Solution solution, Grid grid) {
-        EngineView view = EngineView.of(solution);
-        int comp = view.wComponent();
-        boolean reciprocal = view.wComponentIsReciprocal();
+    public static List<Singularity> find(ComputedSolution solution, Grid grid) {
+        EngineReading reading = solution.engineReading().orElseThrow(() -> new InvalidInputException("solution",
+                "poles and zeros are read off the engine's path tree; this solution (" + solution.methodDescription()
+                + ") is not integrated by the engine"));
+        int comp = reading.primaryComponent();
+        boolean reciprocal = reading.primaryReciprocal();
+        boolean logarithmic = solution.coordinate().hasSheets();
         List<Candidate> all = new ArrayList<>();
-        for (Node n : view.engine().nodes()) {
-            if (!near(n, grid)) {
+        for (Node n : reading.tree().nodes()) {
+            if (!near(reading, logarithmic, n, grid)) {
                 continue;
             }
             PadeApproximant hi = n.approximant(comp);
             PadeApproximant lo = n.lowerApproximant(comp);
-            collect(all, n, hi, lo, true, reciprocal ? Singularity.Kind.ZERO : Singularity.Kind.POLE, reciprocal, grid);
-            collect(all, n, hi, lo, false, reciprocal ? Singularity.Kind.POLE : Singularity.Kind.ZERO, reciprocal, grid);
+            collect(all, reading, n, hi, lo, true, reciprocal ? Singularity.Kind.ZERO : Singularity.Kind.POLE, grid);
+            collect(all, reading, n, hi, lo, false, reciprocal ? Singularity.Kind.POLE : Singularity.Kind.ZERO, grid);
         }
         // the best-determined copy first (smallest position error, then nearest to its node's centre), then merge
         all.sort(Comparator.comparingDouble((Candidate c) -> c.s.error()).thenComparingDouble(c -> c.centrality)
@@ -81,6 +91,37 @@ public final class PoleFinder {
         return found;
     }
 
+    /**
+     * The poles of the first value within half a spacing of the segment through the first and last of the points
+     * (equally spaced points of a line of one sheet, whose paths the tree already holds).
+     */
+    public static List<Singularity> alongLine(ComputedSolution solution, List<SurfacePoint> points) {
+        List<Singularity> out = new ArrayList<>();
+        if (points.size() < 2) {
+            return out;
+        }
+        SurfacePoint a = points.get(0);
+        SurfacePoint b = points.get(points.size() - 1);
+        double h = Math.hypot(b.re() - a.re(), b.im() - a.im()) / (points.size() - 1);
+        double m = Math.max(h, 1e-9);
+        Grid box = Grid.of(Math.min(a.re(), b.re()) - m, Math.max(a.re(), b.re()) + m, 2,
+                Math.min(a.im(), b.im()) - m, Math.max(a.im(), b.im()) + m, 2, a.sheet());
+        for (Singularity p : find(solution, box)) {
+            if (p.kind() == Singularity.Kind.POLE && distanceToSegment(p.point(), a, b) <= 0.5 * h + 1e-12) {
+                out.add(p);
+            }
+        }
+        return out;
+    }
+
+    private static double distanceToSegment(SurfacePoint p, SurfacePoint a, SurfacePoint b) {
+        double dx = b.re() - a.re();
+        double dy = b.im() - a.im();
+        double t = ((p.re() - a.re()) * dx + (p.im() - a.im()) * dy) / (dx * dx + dy * dy);
+        t = Math.max(0, Math.min(1, t));
+        return Math.hypot(p.re() - (a.re() + t * dx), p.im() - (a.im() + t * dy));
+    }
+
     private static final class Candidate {
         final Singularity s;
         final double centrality;
@@ -92,13 +133,19 @@ public final class PoleFinder {
     }
 
     /** Whether the node's search window (INSIDE radii) can reach the rectangle on the grid's sheet. */
-    private static boolean near(Node n, Grid g) {
+    private static boolean near(EngineReading reading, boolean logarithmic, Node n, Grid g) {
+        SurfacePoint c = reading.point(n.tauRe(), n.tauIm());
         if (g.logarithmic()) {
-            double dx = Math.max(0, Math.max(g.re0() - n.tauRe(), n.tauRe() - g.re1()));
-            double dy = Math.max(0, Math.max(g.im0() - n.tauIm(), n.tauIm() - g.im1()));
+            double dx = Math.max(0, Math.max(g.re0() - c.logRe(), c.logRe() - g.re1()));
+            double dy = Math.max(0, Math.max(g.im0() - c.logIm(), c.logIm() - g.im1()));
             return Math.hypot(dx, dy) <= INSIDE * n.radius();
         }
-        SurfacePoint c = SurfacePoint.fromLog(n.tauRe(), n.tauIm());
+        if (!logarithmic) {
+            double reach = INSIDE * n.radius() / reading.coordinateDerivative(c).norm() + 1e-12;
+            double dx = Math.max(0, Math.max(g.re0() - c.re(), c.re() - g.re1()));
+            double dy = Math.max(0, Math.max(g.im0() - c.im(), c.im() - g.im1()));
+            return Math.hypot(dx, dy) <= reach;
+        }
         double reach = Cx.abs(c.re(), c.im()) * (Math.exp(INSIDE * n.radius()) - 1) + 1e-12;
         if (Math.abs(c.sheet() - g.sheet()) > 1 || n.radius() * INSIDE > Math.PI) {
             return Math.abs(c.sheet() - g.sheet()) <= 1 || n.radius() * INSIDE > Math.PI;
@@ -108,8 +155,9 @@ public final class PoleFinder {
         return Math.hypot(dx, dy) <= reach;
     }
 
-    private static void collect(List<Candidate> out, Node n, PadeApproximant hi, PadeApproximant lo, boolean den,
-                                Singularity.Kind kind, boolean reciprocal, Grid grid) {
+    private static void collect(List<Candidate> out, EngineReading reading, Node n, PadeApproximant hi,
+                                PadeApproximant lo, boolean den, Singularity.Kind kind, Grid grid) {
+        boolean reciprocal = reading.primaryReciprocal();
         double[][] roots = den ? PolynomialRoots.roots(hi.denominatorRe(), hi.denominatorIm())
                 : PolynomialRoots.roots(hi.numeratorRe(), hi.numeratorIm());
         boolean any = false;
@@ -147,40 +195,44 @@ public final class PoleFinder {
             }
             double tr = n.tauRe() + n.radius() * sr;
             double ti = n.tauIm() + n.radius() * si;
-            SurfacePoint p = SurfacePoint.fromLog(tr, ti);
+            SurfacePoint p = reading.point(tr, ti);
             if (!grid.contains(p)) {
                 continue;
             }
-            Complex z0 = p.z();
-            Complex lead = lead(hi, sr, si, den, reciprocal, n.radius(), z0);
+            Complex du = reading.coordinateDerivative(p);
+            Complex lead = lead(hi, sr, si, den, reciprocal, n.radius(), du, reading.primaryFactor(p));
             if (lead == null) {
                 continue;
             }
-            double err = (near + positionError(n, sr, si, den != reciprocal, lead, z0)) * n.radius() * z0.norm();
+            double err = (near + positionError(n, sr, si, den != reciprocal, lead, du)) * n.radius() * du.norm();
             out.add(new Candidate(new Singularity(kind, p, lead, err), rad));
         }
     }
 
     /**
-     * The leading coefficient from the approximant f = P/Q of the carried component at the root s0 (of Q when
-     * {@code den}, of P otherwise).
+     * The leading coefficient from the approximant P/Q of the carried component at the root s0 (of Q when
+     * {@code den}, of P otherwise), with the value's factor f and du/d tau at the root.
      */
     private static Complex lead(PadeApproximant a, double sr, double si, boolean den, boolean reciprocal,
-                                double r, Complex z0) {
+                                double r, Complex du, Complex factor) {
         Complex s0 = new Complex(sr, si);
         Complex p = horner(a.numeratorRe(), a.numeratorIm(), s0);
         Complex dp = derivative(a.numeratorRe(), a.numeratorIm(), s0);
         Complex q = horner(a.denominatorRe(), a.denominatorIm(), s0);
         Complex dq = derivative(a.denominatorRe(), a.denominatorIm(), s0);
-        Complex zr = z0.multiply(r);
+        // r du/d tau: the scaled variable's step in units of the solution's variable (z0 r for tau = log z)
+        Complex zr = du.multiply(r);
         Complex out;
         if (!reciprocal) {
-            // w = P/Q: pole residue z0 r P/Q', zero slope (P'/Q) / (r z0)
+            // v = f P/Q: pole residue f zr P/Q', zero slope f (P'/Q) / zr
             out = den ? zr.multiply(p).divide(dq) : dp.divide(q).divide(zr);
         } else {
-            // w = Q/P: a root of Q is a zero of w with slope (Q'/P)/(r z0); a root of P is a pole with residue
-            // z0 r Q/P'
+            // v = f Q/P: a root of Q is a zero of v with slope f (Q'/P)/zr; a root of P is a pole with residue
+            // f zr Q/P'
             out = den ? dq.divide(p).divide(zr) : zr.multiply(q).divide(dp);
+        }
+        if (!factor.equals(Complex.ONE)) {
+            out = out.multiply(factor);
         }
         return Double.isFinite(out.getReal()) && Double.isFinite(out.getImaginary()) ? out : null;
     }
@@ -190,11 +242,11 @@ public final class PoleFinder {
      * at a pole, the value error at distance d is err(s0 + d) and the pole moves by err d^2 / |c_s|, with
      * c_s = residue in s (c = z0 r c_s).
      */
-    private static double positionError(Node n, double sr, double si, boolean pole, Complex lead, Complex z0) {
+    private static double positionError(Node n, double sr, double si, boolean pole, Complex lead, Complex du) {
         int dim = n.dimension();
         double[] out = new double[2 * dim];
         double[] err = new double[dim];
-        double scale = n.radius() * z0.norm();
+        double scale = n.radius() * du.norm();
         if (pole) {
             n.evaluateScaled(sr + PROBE, si, out, null, err);
             double maxErr = 0;

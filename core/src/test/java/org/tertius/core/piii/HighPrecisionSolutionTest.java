@@ -11,7 +11,10 @@ import org.hipparchus.complex.Complex;
 import org.junit.jupiter.api.Test;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.TertiusException;
+import org.tertius.core.highprecision.HighPrecisionSolution;
+import org.tertius.core.highprecision.HighPrecisionValue;
 import org.tertius.core.number.ExactNumber;
+import org.tertius.core.number.ExactPoint;
 import org.tertius.core.number.MpComplex;
 import org.tertius.core.number.MpContext;
 import org.tertius.core.number.SurfacePoint;
@@ -19,7 +22,8 @@ import org.tertius.core.number.SurfacePoint;
 class HighPrecisionSolutionTest {
     /** The generic D6 case of the benchmark. */
     private static HighPrecisionSolution generic(int digits) {
-        return HighPrecisionSolution.builder("1", "-1/2", "1", "-1").start("1", "1/2", "1/3").digits(digits).build();
+        return HighPrecisionSolution.of(Painleve3Solution.builder(Painleve3.exact("1", "-1/2", "1", "-1"))
+                .start("1", "1/2", "1/3").build(), digits);
     }
 
     /** log10 of |x - y| / |y|, computed at the given digits. */
@@ -32,8 +36,8 @@ class HighPrecisionSolutionTest {
     }
 
     private static void assertHonest(HighPrecisionValue v, Apcomplex[] ref, int digits) {
-        double ew = log10RelativeError(v.w(), ref[0], digits + 30);
-        double edw = log10RelativeError(v.dw(), ref[1], digits + 30);
+        double ew = log10RelativeError(v.value(0), ref[0], digits + 30);
+        double edw = log10RelativeError(v.value(1), ref[1], digits + 30);
         assertTrue(v.correctDigits() >= digits, "estimated " + v.correctDigits() + " digits, wanted " + digits);
         // honest: the true relative error is below the estimate 10^-correctDigits
         assertTrue(ew < -v.correctDigits(), "w error 1e" + ew + " exceeds the estimate 1e-" + v.correctDigits());
@@ -43,33 +47,9 @@ class HighPrecisionSolutionTest {
     private static HighPrecisionSolution riccati(BesselRiccatiReference ref, int digits) {
         String[] p = ref.parameters();
         Apcomplex[] start = ref.value(SurfacePoint.of(1, 0));
-        return HighPrecisionSolution.builder(p[0], p[1], p[2], p[3])
-                .start("1", BesselRiccatiReference.text(start[0]), BesselRiccatiReference.text(start[1]))
-                .digits(digits).build();
-    }
-
-    @Test
-    void straighteningDropsCollinearNodesAndKeepsCornersAndTheTarget() {
-        // common practice (polyline simplification): points on the line between their neighbours are dropped
-        List<double[]> straight = List.of(new double[] {0, 0}, new double[] {1, 0.001}, new double[] {2, 0},
-                new double[] {3, -0.002}, new double[] {4, 0});
-        assertEquals(List.of(4), toList(HighPrecisionSolution.straightenedPath(straight)));
-        // a corner that bends around a pole stays
-        List<double[]> bent = List.of(new double[] {0, 0}, new double[] {1, 0}, new double[] {2, 1},
-                new double[] {3, 2});
-        assertEquals(List.of(1, 3), toList(HighPrecisionSolution.straightenedPath(bent)));
-        // repeated points are kept as they are (no line through them)
-        List<double[]> repeated = List.of(new double[] {0, 0}, new double[] {0, 0}, new double[] {1, 1});
-        assertEquals(2, toList(HighPrecisionSolution.straightenedPath(repeated)).get(
-                toList(HighPrecisionSolution.straightenedPath(repeated)).size() - 1));
-    }
-
-    private static List<Integer> toList(int[] a) {
-        List<Integer> l = new ArrayList<>();
-        for (int x : a) {
-            l.add(x);
-        }
-        return l;
+        return HighPrecisionSolution.of(Painleve3Solution.builder(Painleve3.exact(p[0], p[1], p[2], p[3]))
+                .start("1", BesselRiccatiReference.text(start[0]), BesselRiccatiReference.text(start[1])).build(),
+                digits);
     }
 
     @Test
@@ -112,10 +92,10 @@ class HighPrecisionSolutionTest {
         assertTrue(v30.correctDigits() >= 30);
         // the 60-digit value serves as the reference for the 30-digit one: their difference must lie within the
         // 30-digit estimate
-        assertTrue(log10RelativeError(v30.w(), v60.w(), 90) < -v30.correctDigits());
-        assertTrue(log10RelativeError(v30.dw(), v60.dw(), 90) < -v30.correctDigits());
+        assertTrue(log10RelativeError(v30.value(0), v60.value(0), 90) < -v30.correctDigits());
+        assertTrue(log10RelativeError(v30.value(1), v60.value(1), 90) < -v30.correctDigits());
         // the printed strings carry the requested digits
-        String w = v30.wText();
+        String w = v30.text(0);
         assertTrue(w.startsWith("-1.16006808225917596926288703089"), w);
     }
 
@@ -142,7 +122,7 @@ class HighPrecisionSolutionTest {
                 v[j][k] = p;
                 p = c.multiply(p, e);
             }
-            v[j][m] = c.fromApcomplex(val.w());
+            v[j][m] = c.fromApcomplex(val.value(0));
         }
         MpComplex[] coef = solve(c, v);
         MpComplex w = coef[0];
@@ -197,8 +177,8 @@ class HighPrecisionSolutionTest {
         HighPrecisionValue hp = generic(40).evaluate(p);
         Painleve3Value d = Painleve3Solution.builder(Painleve3.of(1, -0.5, 1, -1))
                 .start(new Complex(1), new Complex(0.5), new Complex(1.0 / 3)).build().evaluate(p);
-        Complex w = new Complex(hp.w().real().doubleValue(), hp.w().imag().doubleValue());
-        Complex dw = new Complex(hp.dw().real().doubleValue(), hp.dw().imag().doubleValue());
+        Complex w = new Complex(hp.value(0).real().doubleValue(), hp.value(0).imag().doubleValue());
+        Complex dw = new Complex(hp.value(1).real().doubleValue(), hp.value(1).imag().doubleValue());
         assertTrue(w.subtract(d.w()).norm() <= d.errW(), "double error " + w.subtract(d.w()).norm() + " > " + d.errW());
         assertTrue(dw.subtract(d.dw()).norm() <= d.errDw());
     }
@@ -208,7 +188,7 @@ class HighPrecisionSolutionTest {
         HighPrecisionSolution s = generic(30);
         SurfacePoint a = SurfacePoint.of(1.5, 0.5);
         SurfacePoint b = SurfacePoint.of(2, 1.5);
-        List<HighPrecisionValue> t = s.tabulate(a, b, 7);
+        List<HighPrecisionValue> t = s.tabulate(ExactPoint.of(a), ExactPoint.of(b), 7);
         assertEquals(7, t.size());
         HighPrecisionSolution fresh = generic(30);
         // the end points are the given points exactly
@@ -216,12 +196,12 @@ class HighPrecisionSolutionTest {
             HighPrecisionValue v = fresh.evaluate(t.get(i).point());
             int digits = Math.min(v.correctDigits(), t.get(i).correctDigits());
             assertTrue(digits >= 30);
-            assertTrue(log10RelativeError(t.get(i).w(), v.w(), 60) < -digits + 1);
+            assertTrue(log10RelativeError(t.get(i).value(0), v.value(0), 60) < -digits + 1);
         }
         // an interior point: 2/6 of the way in a 7-point table is 1/3 of the way in a 4-point table
-        HighPrecisionValue third = fresh.tabulate(a, b, 4).get(1);
-        assertTrue(log10RelativeError(t.get(2).w(), third.w(), 60) < -29);
-        assertTrue(log10RelativeError(t.get(2).dw(), third.dw(), 60) < -29);
+        HighPrecisionValue third = fresh.tabulate(ExactPoint.of(a), ExactPoint.of(b), 4).get(1);
+        assertTrue(log10RelativeError(t.get(2).value(0), third.value(0), 60) < -29);
+        assertTrue(log10RelativeError(t.get(2).value(1), third.value(1), 60) < -29);
     }
 
     @Test
@@ -232,8 +212,8 @@ class HighPrecisionSolutionTest {
         for (SurfacePoint p : List.of(SurfacePoint.of(3, 2), SurfacePoint.of(-2, 1), SurfacePoint.of(0.5, -1.5))) {
             HighPrecisionValue again = shared.evaluate(p);
             HighPrecisionValue fresh = generic(40).evaluate(p);
-            assertEquals(fresh.wText(), again.wText(), "w at " + p);
-            assertEquals(fresh.dwText(), again.dwText(), "w' at " + p);
+            assertEquals(fresh.text(0), again.text(0), "w at " + p);
+            assertEquals(fresh.text(1), again.text(1), "w' at " + p);
             assertEquals(fresh.correctDigits(), again.correctDigits(), "estimated digits at " + p);
         }
     }
@@ -241,21 +221,22 @@ class HighPrecisionSolutionTest {
     @Test
     void dataGivenAsBinaryDoublesAreRefusedForMoreDigitsThanTheyHold() {
         ExactNumber third = ExactNumber.ofDouble("dw0", new Complex(1.0 / 3));
-        HighPrecisionSolution.Builder b = HighPrecisionSolution.builder("1", "-1/2", "1", "-1")
-                .start(ExactNumber.parse("z0", "1"), ExactNumber.parse("w0", "1/2"), third).digits(50);
-        InvalidInputException e = assertThrows(InvalidInputException.class, b::build);
+        Painleve3Solution bySomeDoubles = Painleve3Solution.builder(Painleve3.exact("1", "-1/2", "1", "-1"))
+                .start(ExactNumber.parse("z0", "1"), ExactNumber.parse("w0", "1/2"), third).build();
+        InvalidInputException e = assertThrows(InvalidInputException.class,
+                () -> HighPrecisionSolution.of(bySomeDoubles, 50));
         assertEquals("dw0", e.argument());
         assertTrue(e.getMessage().contains("binary double"), e.getMessage());
         assertThrows(InvalidInputException.class, () -> generic(15));
-        assertThrows(InvalidInputException.class,
-                () -> HighPrecisionSolution.builder("1", "-1/2", "1", "-1").start("1", "0", "1").digits(30).build());
+        assertThrows(InvalidInputException.class, () -> HighPrecisionSolution.of(Painleve3Solution.builder(
+                Painleve3.exact("1", "-1/2", "1", "-1")).start("1", "0", "1").build(), 30));
     }
 
     @Test
     void progressIsReportedUpToOneAndInterruptionCancels() {
         List<Double> seen = new ArrayList<>();
-        HighPrecisionSolution s = HighPrecisionSolution.builder("1", "-1/2", "1", "-1").start("1", "1/2", "1/3")
-                .digits(30).progress(seen::add).build();
+        HighPrecisionSolution s = HighPrecisionSolution.of(Painleve3Solution.builder(Painleve3.exact("1", "-1/2", "1",
+                "-1")).start("1", "1/2", "1/3").build(), 30, seen::add);
         s.evaluate(SurfacePoint.of(2, 1));
         assertEquals(1.0, seen.get(seen.size() - 1));
         for (int i = 1; i < seen.size(); i++) {
@@ -269,6 +250,6 @@ class HighPrecisionSolutionTest {
             Thread.interrupted();
         }
         // the cancelled solution stays usable, and gives what a fresh one gives
-        assertEquals(generic(30).evaluate(SurfacePoint.of(2, 1)).wText(), t.evaluate(SurfacePoint.of(2, 1)).wText());
+        assertEquals(generic(30).evaluate(SurfacePoint.of(2, 1)).text(0), t.evaluate(SurfacePoint.of(2, 1)).text(0));
     }
 }

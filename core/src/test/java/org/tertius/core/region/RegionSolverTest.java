@@ -37,7 +37,7 @@ class RegionSolverTest {
                 continue;
             }
             Painleve3Value direct = demo().evaluate(g.point(i, j));
-            double d = r.w(i, j).subtract(direct.w()).norm();
+            double d = r.primary(i, j).subtract(direct.w()).norm();
             assertTrue(d <= r.error(i, j) + direct.errW(), "grid and direct differ by " + d + " at " + g.point(i, j)
                     + " (estimates " + r.error(i, j) + ", " + direct.errW() + ")");
         }
@@ -52,8 +52,8 @@ class RegionSolverTest {
         double[] b = new double[g.size()];
         for (int j = 0; j < g.ny(); j++) {
             for (int i = 0; i < g.nx(); i++) {
-                a[j * g.nx() + i] = one.w(i, j).getReal() + one.error(i, j);
-                b[j * g.nx() + i] = two.w(i, j).getReal() + two.error(i, j);
+                a[j * g.nx() + i] = one.primary(i, j).getReal() + one.error(i, j);
+                b[j * g.nx() + i] = two.primary(i, j).getReal() + two.error(i, j);
             }
         }
         assertArrayEquals(a, b, 0.0);
@@ -118,7 +118,7 @@ class RegionSolverTest {
         // a value of the strip against the closed form
         SurfacePoint p = g.point(20, 130);
         Complex w = p.z().subtract(0.5).divide(p.z().add(0.5));
-        assertTrue(r.w(20, 130).subtract(w).norm() <= r.error(20, 130), "strip value at " + p);
+        assertTrue(r.primary(20, 130).subtract(w).norm() <= r.error(20, 130), "strip value at " + p);
     }
 
     @Test

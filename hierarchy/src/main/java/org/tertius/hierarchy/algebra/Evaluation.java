@@ -1,6 +1,10 @@
 package org.tertius.hierarchy.algebra;
 
 import java.util.function.Function;
+import org.tertius.core.number.ExactNumber;
+import org.tertius.core.number.MpArithmetic;
+import org.tertius.core.number.MpComplex;
+import org.tertius.core.number.MpContext;
 import org.hipparchus.complex.Complex;
 import org.tertius.core.number.Arithmetic;
 import org.tertius.core.number.ComplexArithmetic;
@@ -23,4 +27,10 @@ public record Evaluation<T>(Arithmetic<T> arithmetic, Function<GaussianRational,
     /** Moduli (values given as moduli): sum |c| prod |v|^e, the scale of the rounding error of COMPLEX. */
     public static final Evaluation<Double> MAGNITUDE =
             new Evaluation<>(MagnitudeArithmetic.INSTANCE, c -> c.toComplex().norm());
+
+    /** The high-precision engine's numbers at one working precision (coefficients rounded once to it). */
+    public static Evaluation<MpComplex> precise(MpContext ctx) {
+        return new Evaluation<>(new MpArithmetic(ctx), c -> ctx.fromExact(ExactNumber.ofComplexRational(
+                c.re().getNumerator(), c.re().getDenominator(), c.im().getNumerator(), c.im().getDenominator())));
+    }
 }

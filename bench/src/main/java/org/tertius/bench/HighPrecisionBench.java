@@ -1,4 +1,4 @@
-package org.tertius.core.piii;
+package org.tertius.bench;
 
 import java.util.Locale;
 import org.apfloat.Apcomplex;
@@ -7,16 +7,21 @@ import org.apfloat.Apfloat;
 import org.apfloat.ApfloatMath;
 import org.tertius.core.mp.KernelCost;
 import org.tertius.core.number.MpContext;
+import org.tertius.core.highprecision.HighPrecisionSolution;
+import org.tertius.core.highprecision.HighPrecisionValue;
+import org.tertius.core.highprecision.ReplayStatistics;
 import org.tertius.core.number.SurfacePoint;
+import org.tertius.core.piii.Painleve3;
+import org.tertius.core.piii.Painleve3Solution;
 
 /**
  * Benchmark of the high-precision layer (not a test): the generic D6 case alpha = 1, beta = -1/2, gamma = 1,
  * delta = -1, w(1) = 1/2, w'(1) = 1/3, evaluated at z = 3+2i.
  *
  * <pre>
- *   java -cp ... org.tertius.core.piii.HighPrecisionBench once 50        # one evaluation, as a whole process
- *   java -cp ... org.tertius.core.piii.HighPrecisionBench table 30 50 100 200 1000
- *   java -cp ... org.tertius.core.piii.HighPrecisionBench apfloat        # cost of Apfloat and BigInteger products
+ *   java -cp ... org.tertius.bench.HighPrecisionBench once 50        # one evaluation, as a whole process
+ *   java -cp ... org.tertius.bench.HighPrecisionBench table 30 50 100 200 1000
+ *   java -cp ... org.tertius.bench.HighPrecisionBench apfloat        # cost of Apfloat and BigInteger products
  * </pre>
  * The table reports, per number of digits, the wall and process CPU time of a fresh solution (in a warm JVM),
  * the steps and order of the accurate pass, the wall time per step (both passes), and the ratio of the times
@@ -51,7 +56,8 @@ public final class HighPrecisionBench {
     }
 
     static HighPrecisionSolution scenario(int digits) {
-        return HighPrecisionSolution.builder("1", "-1/2", "1", "-1").start("1", "1/2", "1/3").digits(digits).build();
+        return HighPrecisionSolution.of(Painleve3Solution.builder(Painleve3.exact("1", "-1/2", "1", "-1"))
+                .start("1", "1/2", "1/3").build(), digits);
     }
 
     private static void once(int digits) {
@@ -59,8 +65,8 @@ public final class HighPrecisionBench {
         HighPrecisionValue v = scenario(digits).evaluate(SurfacePoint.of(3, 2));
         long t1 = System.nanoTime();
         System.out.println("digits " + digits + "  correct digits " + v.correctDigits());
-        System.out.println("w(3+2i)  = " + v.wText());
-        System.out.println("w'(3+2i) = " + v.dwText());
+        System.out.println("w(3+2i)  = " + v.text(0));
+        System.out.println("w'(3+2i) = " + v.text(1));
         System.out.printf(Locale.ROOT, "elapsed in main %.3f s%n", (t1 - t0) / 1e9);
     }
 
@@ -79,7 +85,7 @@ public final class HighPrecisionBench {
             HighPrecisionValue v = s.evaluate(SurfacePoint.of(3, 2));
             double t = (System.nanoTime() - t0) / 1e9;
             double cpu = (processCpuNanos() - c0) / 1e9;
-            HighPrecisionSolution.Statistics st = s.statistics();
+            ReplayStatistics st = s.statistics();
             double mul = KernelCost.complexProductSeconds(st.fractionBits());
             double bound = st.productCount() * mul;
             System.out.printf(Locale.ROOT, "%6d  %5d  %5d  %7.3f  %6.3f  %12.2f  %19.3f  %8.3f  %10.2f  %9.2f   (%d"

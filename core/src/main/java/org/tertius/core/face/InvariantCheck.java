@@ -1,25 +1,22 @@
-package org.tertius.hierarchy;
+package org.tertius.core.face;
 
 import org.hipparchus.complex.Complex;
 
 /**
- * One first integral checked at one point: its value, the value it must keep, and the bound on the deviation
- * implied by the error estimates of the state (first-order propagation plus rounding). Immutable.
+ * A quantity a solution must keep, evaluated at a point: its value, the value it must have, the deviation and
+ * the bound of that deviation expected from the error estimates of the point's state. A first integral of a
+ * hierarchy member is one. Immutable.
  */
-public final class IntegralCheck {
-    /**
-     * The drift allowed, as a multiple of the first-order bound: the engine's error estimates are estimates
-     * (propagated to first order along the path), not rigorous bounds, and were measured up to about 1.2 times
-     * too small next to poles; a factor 2 separates that from a real drift.
-     */
-    public static final double ESTIMATE_SAFETY = 2;
+public final class InvariantCheck {
+    /** Deviations up to this multiple of the bound count as within the estimate. */
+    public static final double SAFETY = 2;
 
     private final String name;
     private final Complex value;
     private final Complex expected;
     private final double bound;
 
-    IntegralCheck(String name, Complex value, Complex expected, double bound) {
+    public InvariantCheck(String name, Complex value, Complex expected, double bound) {
         this.name = name;
         this.value = value;
         this.expected = expected;
@@ -44,19 +41,19 @@ public final class IntegralCheck {
         return value.subtract(expected).norm();
     }
 
-    /** The deviation allowed by the error estimates of the state. */
+    /** The deviation the error estimates allow. */
     public double bound() {
         return bound;
-    }
-
-    /** Whether the deviation lies within {@link #ESTIMATE_SAFETY} times the bound. */
-    public boolean withinEstimate() {
-        return deviation() <= ESTIMATE_SAFETY * bound;
     }
 
     /** deviation / bound (above 1: drift beyond the error estimate). */
     public double ratio() {
         return deviation() / bound;
+    }
+
+    /** Whether the deviation lies within {@link #SAFETY} times the bound. */
+    public boolean withinEstimate() {
+        return deviation() <= SAFETY * bound;
     }
 
     @Override

@@ -1,0 +1,43 @@
+package org.tertius.cli;
+
+import org.apache.commons.cli.Options;
+import org.tertius.core.face.ComputedSolution;
+import org.tertius.core.highprecision.HighPrecisionSolution;
+
+/** {@code --digits D}: values to D significant digits in arbitrary precision, for any solution that allows it. */
+final class DigitsOption implements OptionGroup {
+    /** What --digits accepts. */
+    static final String RANGE = "an integer in [" + HighPrecisionSolution.MIN_DIGITS + ", "
+            + HighPrecisionSolution.MAX_DIGITS + "]";
+
+    private final String help;
+    Integer digits;
+
+    DigitsOption(String help) {
+        this.help = help;
+    }
+
+    @Override
+    public void declare(Options o) {
+        o.addOption(Opts.value("--digits", "D", help));
+    }
+
+    @Override
+    public void read(Arguments a) {
+        digits = a.integer("--digits", RANGE);
+    }
+
+    /** Whether D digits were asked for (on the command line or in the problem file). */
+    boolean given(ProblemFile f) {
+        if (digits == null && f.has("digits")) {
+            digits = f.intValue("digits");
+        }
+        return digits != null;
+    }
+
+    /** The solution to D digits, reporting progress. */
+    HighPrecisionSolution solution(ComputedSolution solution, Progress progress) {
+        HighPrecisionSolution.checkDigits(digits);
+        return HighPrecisionSolution.of(solution, digits, f -> progress.update(Math.round(f * 1000), 1000));
+    }
+}
