@@ -4,10 +4,14 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import org.hipparchus.complex.Complex;
+import org.hipparchus.fraction.BigFraction;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.equation.IndependentVariable;
 import org.tertius.core.equation.PolynomialSystem;
+import org.tertius.core.number.Arithmetic;
+import org.tertius.core.number.ExactNumber;
 import org.tertius.hierarchy.algebra.Evaluation;
+import org.tertius.hierarchy.algebra.GaussianRational;
 import org.tertius.hierarchy.algebra.Polynomial;
 
 /**
@@ -94,14 +98,52 @@ public final class HierarchyMember {
         checkState(state);
         List<Complex> values = new ArrayList<>(state);
         values.addAll(p.ringValues(x));
+        return completeDiagonal(values, Evaluation.COMPLEX);
+    }
+
+    /**
+     * As {@link #completeDiagonal(MemberParameters, Complex, List)} in exact arithmetic, from exact data (the times
+     * and m as given exactly to the parameters): the completed state is exact too, so that the solution started from
+     * it can be computed to any number of digits.
+     */
+    public List<ExactNumber> completeDiagonalExactly(MemberParameters p, ExactNumber x, List<ExactNumber> state) {
+        requireSame(p);
+        if (state == null || state.size() != dimension()) {
+            throw new InvalidInputException("start state", "member " + order() + " has " + dimension()
+                    + " unknowns " + unknowns() + ", got " + (state == null ? "none" : state.size() + " values"));
+        }
+        List<GaussianRational> values = new ArrayList<>();
+        for (ExactNumber v : state) {
+            values.add(exact(v));
+        }
+        values.add(exact(x));
+        for (ExactNumber v : p.exactTimesAndM()) {
+            values.add(exact(v));
+        }
+        List<ExactNumber> out = new ArrayList<>();
+        for (GaussianRational v : completeDiagonal(values, Evaluation.EXACT)) {
+            out.add(ExactNumber.ofComplexRational(v.re().getNumerator(), v.re().getDenominator(),
+                    v.im().getNumerator(), v.im().getDenominator()));
+        }
+        return out;
+    }
+
+    private static GaussianRational exact(ExactNumber v) {
+        return GaussianRational.of(new BigFraction(v.realNumerator(), v.realDenominator()),
+                new BigFraction(v.imaginaryNumerator(), v.imaginaryDenominator()));
+    }
+
+    /** The diagonal entries solved from the constraints, each linear in its entry; values hold the whole ring. */
+    private <T> List<T> completeDiagonal(List<T> values, Evaluation<T> in) {
+        Arithmetic<T> ar = in.arithmetic();
         int n = order();
         for (Map.Entry<Integer, Polynomial> c : equations.constraints().entrySet()) {
             int slot = MemberEquations.index(c.getKey() - n + 1, 0);
-            values.set(slot, Complex.ZERO);
-            Complex c0 = c.getValue().evaluate(Evaluation.COMPLEX, values);
-            values.set(slot, Complex.ONE);
-            Complex c1 = c.getValue().evaluate(Evaluation.COMPLEX, values);
-            values.set(slot, c0.negate().divide(c1.subtract(c0)));
+            values.set(slot, ar.zero());
+            T c0 = c.getValue().evaluate(in, values);
+            values.set(slot, ar.one());
+            T c1 = c.getValue().evaluate(in, values);
+            values.set(slot, ar.divide(ar.negate(c0), ar.subtract(c1, c0)));
         }
         return List.copyOf(values.subList(0, dimension()));
     }

@@ -121,7 +121,8 @@ public final class Families {
             throw new InvalidInputException("x0", "must be real, got " + x0);
         }
         LocalValue<Complex> v = LogarithmicAtZero.at(x0.getReal());
-        return Painleve3Solution.builder(equation).start(v.z(), v.w(), v.dw()).settings(settings).build();
+        return Painleve3Solution.builder(equation).start(v.z(), v.w(), v.dw())
+                .startComputedBy("the logarithmic series at 0 of the decaying family").settings(settings).build();
     }
 
     private static Painleve3Solution algebraic(Painleve3 equation, Map<String, String> parameters,
@@ -167,7 +168,8 @@ public final class Families {
         } else {
             v = e.startData(ALGEBRAIC_TOLERANCE);
         }
-        return Painleve3Solution.builder(equation).start(v.z(), v.w(), v.dw()).settings(settings).build();
+        return Painleve3Solution.builder(equation).start(v.z(), v.w(), v.dw())
+                .startComputedBy("the algebraic expansion at infinity").settings(settings).build();
     }
 
     private static Painleve3Solution oscillating(Painleve3 equation, Map<String, String> parameters,
@@ -204,7 +206,8 @@ public final class Families {
                     + a.getReal() + ": its error estimate there is " + rel + " (relative); start further out,"
                     + " e.g. at the default x0 = " + OSCILLATING_X0);
         }
-        return Painleve3Solution.builder(equation).start(v.z(), v.w(), v.dw()).settings(settings).build();
+        return Painleve3Solution.builder(equation).start(v.z(), v.w(), v.dw())
+                .startComputedBy("the oscillating expansion at infinity").settings(settings).build();
     }
 
     private static Painleve3Solution atZero(Painleve3 equation, Complex sigma, Complex b, SolverSettings settings) {
@@ -212,7 +215,8 @@ public final class Families {
         List<Complex> p = List.of(equation.alpha(), equation.beta(), equation.gamma(), equation.delta());
         PowerSeriesAtZero<Complex> s = PowerSeriesAtZero.create(ar, p, sigma, b, 40);
         LocalValue<Complex> v = s.startData(new Complex(START_RADIUS), START_TOLERANCE);
-        return Painleve3Solution.builder(equation).start(v.z(), v.w(), v.dw()).settings(settings).build();
+        return Painleve3Solution.builder(equation).start(v.z(), v.w(), v.dw())
+                .startComputedBy("the power series at 0").settings(settings).build();
     }
 
     private static void allow(Map<String, String> parameters, Set<String> names) {

@@ -89,7 +89,8 @@ public final class DecayingConnection {
     /** The member lambda as an integrated solution of the core engine, started at x = MIDDLE. */
     public static Painleve3Solution solution(double lambda, SolverSettings settings) {
         Painleve3Value m = middleValue(lambda);
-        return Painleve3Solution.builder(equation()).start(m.point().z(), m.w(), m.dw()).settings(settings).build();
+        return Painleve3Solution.builder(equation()).start(m.point().z(), m.w(), m.dw())
+                .startComputedBy("the decaying family's transseries at infinity").settings(settings).build();
     }
 
     /** (sigma, B) of the member lambda in double precision, through the core engine, fitted at x0. */

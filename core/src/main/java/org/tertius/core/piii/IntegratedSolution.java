@@ -19,9 +19,12 @@ final class IntegratedSolution extends Painleve3Solution {
     /** The start data z0, w0, w'(z0) as given (exactly, or the binary values of doubles). */
     private final ExactNumber[] exactStart;
     private final boolean startsAtZero;
+    /** What computed the start data in double precision, or null when they were given. */
+    private final String computedBy;
 
     private IntegratedSolution(Painleve3 equation, Painleve3Form form, Solution engine, ExactNumber[] exactStart,
-                               boolean startsAtZero) {
+                               boolean startsAtZero, String computedBy) {
+        this.computedBy = computedBy;
         this.equation = equation;
         this.form = form;
         this.engine = engine;
@@ -30,7 +33,7 @@ final class IntegratedSolution extends Painleve3Solution {
     }
 
     static IntegratedSolution create(Painleve3 eq, Complex z0, Complex w0, Complex dw0, Complex d3w0,
-                                     ExactNumber[] exactStart, SolverSettings settings) {
+                                     ExactNumber[] exactStart, String computedBy, SolverSettings settings) {
         boolean atZero = w0.getReal() == 0 && w0.getImaginary() == 0;
         boolean deltaZero = Painleve3.isZero(eq.delta());
         boolean gammaZero = Painleve3.isZero(eq.gamma());
@@ -78,7 +81,7 @@ final class IntegratedSolution extends Painleve3Solution {
         }
         SurfacePoint p0 = SurfacePoint.of(z0, 0);
         Solution engine = Solution.start(form.system(), settings, form.projection(), p0.logRe(), p0.logIm(), re, im);
-        return new IntegratedSolution(eq, form, engine, exactStart, atZero);
+        return new IntegratedSolution(eq, form, engine, exactStart, atZero, computedBy);
     }
 
     @Override
@@ -124,6 +127,11 @@ final class IntegratedSolution extends Painleve3Solution {
 
     @Override
     public HighPrecisionForm highPrecisionForm() {
+        if (computedBy != null) {
+            throw new InvalidInputException("digits", "the start data of this solution come from " + computedBy
+                    + ", computed in double precision, so no more digits can be vouched for; give start data exactly"
+                    + " (--z0 --w0 --dw0) to compute to many digits");
+        }
         if (startsAtZero) {
             throw new InvalidInputException("w0", "w0 = 0 is not accepted at high precision: start the solution at a"
                     + " point where w != 0");

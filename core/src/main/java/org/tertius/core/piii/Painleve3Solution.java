@@ -114,6 +114,7 @@ public abstract class Painleve3Solution implements ComputedSolution {
         private Complex dw0;
         private Complex d3w0;
         private ExactNumber[] exactStart;
+        private String computedBy;
         private SolverSettings settings = SolverSettings.defaults();
 
         private Builder(Painleve3 equation) {
@@ -156,6 +157,15 @@ public abstract class Painleve3Solution implements ComputedSolution {
             return this;
         }
 
+        /**
+         * Marks the start data as computed (by an expansion, a fit, another solution) in double precision rather
+         * than given: the solution then refuses the high-precision replay with a message that names the source.
+         */
+        public Builder startComputedBy(String source) {
+            this.computedBy = source;
+            return this;
+        }
+
         public Builder settings(SolverSettings settings) {
             this.settings = settings;
             return this;
@@ -171,7 +181,7 @@ public abstract class Painleve3Solution implements ComputedSolution {
             SurfacePoint.of(z0, 0); // rejects z0 = 0 with a clear message
             ExactNumber[] exact = exactStart != null ? exactStart : new ExactNumber[] {
                 ExactNumber.ofDouble("z0", z0), ExactNumber.ofDouble("w0", w0), ExactNumber.ofDouble("dw0", dw0)};
-            return IntegratedSolution.create(equation, z0, w0, dw0, d3w0, exact, settings);
+            return IntegratedSolution.create(equation, z0, w0, dw0, d3w0, exact, computedBy, settings);
         }
 
         private static void check(String name, Complex c) {
