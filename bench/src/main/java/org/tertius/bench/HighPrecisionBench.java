@@ -1,15 +1,17 @@
 package org.tertius.bench;
 
+import java.lang.management.ManagementFactory;
+import java.lang.management.OperatingSystemMXBean;
 import java.util.Locale;
 import org.apfloat.Apcomplex;
 import org.apfloat.ApcomplexMath;
 import org.apfloat.Apfloat;
 import org.apfloat.ApfloatMath;
-import org.tertius.core.mp.KernelCost;
-import org.tertius.core.number.MpContext;
 import org.tertius.core.highprecision.HighPrecisionSolution;
 import org.tertius.core.highprecision.HighPrecisionValue;
 import org.tertius.core.highprecision.ReplayStatistics;
+import org.tertius.core.mp.KernelCost;
+import org.tertius.core.number.MpContext;
 import org.tertius.core.number.SurfacePoint;
 import org.tertius.core.piii.Painleve3;
 import org.tertius.core.piii.Painleve3Solution;
@@ -96,7 +98,7 @@ public final class HighPrecisionBench {
 
     /** CPU time of the whole process (all threads, the JIT's included), or -1 where the JVM does not tell. */
     private static long processCpuNanos() {
-        java.lang.management.OperatingSystemMXBean os = java.lang.management.ManagementFactory.getOperatingSystemMXBean();
+        OperatingSystemMXBean os = ManagementFactory.getOperatingSystemMXBean();
         if (os instanceof com.sun.management.OperatingSystemMXBean) {
             return ((com.sun.management.OperatingSystemMXBean) os).getProcessCpuTime();
         }

@@ -26,7 +26,7 @@ interface Command extends OptionGroup {
             g.declare(options);
         }
         declare(options);
-        Opts.standard(options);
+        OptionKinds.standard(options);
         return options;
     }
 

@@ -41,12 +41,12 @@ public final class ConnectCommand implements Command {
 
     @Override
     public void declare(Options o) {
-        o.addOption(Opts.value("--lambda", "L", "parameter at infinity, |lambda| < 1/pi"));
-        o.addOption(Opts.value("--sigma", "S", "exponent at 0, |sigma| < 1 (the other direction)"));
-        o.addOption(Opts.value("--x0", "X", "where (sigma, B) are fitted (default 1e-3)"));
-        o.addOption(Opts.value("--digits", "D",
+        o.addOption(OptionKinds.value("--lambda", "L", "parameter at infinity, |lambda| < 1/pi"));
+        o.addOption(OptionKinds.value("--sigma", "S", "exponent at 0, |sigma| < 1 (the other direction)"));
+        o.addOption(OptionKinds.value("--x0", "X", "where (sigma, B) are fitted (default 1e-3)"));
+        o.addOption(OptionKinds.value("--digits", "D",
                 "also match in arbitrary precision with this many digits (slow: tens of seconds)"));
-        o.addOption(Opts.value("--format", "FMT", "csv (default) or text"));
+        o.addOption(OptionKinds.value("--format", "FMT", "csv (default) or text"));
     }
 
     @Override

@@ -1,27 +1,29 @@
 package org.tertius.cli;
 
+import java.awt.image.BufferedImage;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
-import java.awt.image.BufferedImage;
+import java.util.Locale;
 import javax.imageio.ImageIO;
 import org.apache.commons.cli.Options;
+import org.hipparchus.complex.Complex;
+import org.tertius.core.InvalidInputException;
 import org.tertius.core.number.ComplexText;
+import org.tertius.core.number.SurfacePoint;
+import org.tertius.core.piii.Painleve3;
+import org.tertius.core.piii.Painleve3Solution;
+import org.tertius.core.piii.Painleve3Value;
 import org.tertius.core.region.Grid;
 import org.tertius.core.region.GridResult;
 import org.tertius.core.region.PoleFinder;
 import org.tertius.core.region.RegionSettings;
 import org.tertius.core.region.RegionSolver;
 import org.tertius.core.region.Singularity;
-import org.hipparchus.complex.Complex;
-import org.tertius.core.InvalidInputException;
-import org.tertius.core.number.SurfacePoint;
-import org.tertius.core.piii.Painleve3;
-import org.tertius.core.piii.Painleve3Solution;
-import org.tertius.core.piii.Painleve3Value;
 
 /**
  * The built-in demo scenario: a generic D6 solution (alpha = 1, beta = -1/2, gamma = 1, delta = -1,
@@ -58,7 +60,7 @@ public final class DemoCommand implements Command {
 
     @Override
     public void declare(Options o) {
-        o.addOption(Opts.value("--out", "DIR", "output folder (default tertius-demo)"));
+        o.addOption(OptionKinds.value("--out", "DIR", "output folder (default tertius-demo)"));
     }
 
     @Override
@@ -94,7 +96,7 @@ public final class DemoCommand implements Command {
         List<SurfacePoint> line = Targets.line("line", "0.25:10:400", 0, s.coordinate());
         Path table = out.resolve("real-axis.csv");
         List<Singularity> onLine;
-        List<Painleve3Value> lineValues = new java.util.ArrayList<>();
+        List<Painleve3Value> lineValues = new ArrayList<>();
         try (PrintWriter w = new PrintWriter(Files.newBufferedWriter(table, StandardCharsets.UTF_8))) {
             header(w, s.equation().toString(), "the positive real axis, 400 points from 0.25 to 10", rows.columns());
             RegionSolver.growTowards(s, line);
@@ -131,14 +133,14 @@ public final class DemoCommand implements Command {
         BufferedImage lp = LinePlot.draw(s.equation().toString(), "z (real axis)", "w", x, re, im, px, 900, 500);
         OutputFile.writeWhole("--out", plot, p -> ImageIO.write(lp, "png", p.toFile()));
         long poleCount = found.stream().filter(p -> p.kind() == Singularity.Kind.POLE).count();
-        console.printf(java.util.Locale.ROOT, "  %d poles and %d zeros in [-8,8]^2 (sheet 0); %d pole(s) on the real"
+        console.printf(Locale.ROOT, "  %d poles and %d zeros in [-8,8]^2 (sheet 0); %d pole(s) on the real"
                 + " segment [0.25, 10]%n", poleCount, found.size() - poleCount, onLine.size());
-        console.printf(java.util.Locale.ROOT, "  grid 321 x 321: %s%n", r.statistics());
+        console.printf(Locale.ROOT, "  grid 321 x 321: %s%n", r.statistics());
         console.println("wrote:");
         for (Path p : List.of(values, table, plot, picture, poles)) {
             console.println("  " + p.toAbsolutePath());
         }
-        console.printf(java.util.Locale.ROOT, "done in %.1f s%n", (System.nanoTime() - t0) / 1e9);
+        console.printf(Locale.ROOT, "done in %.1f s%n", (System.nanoTime() - t0) / 1e9);
         return 0;
     }
 }

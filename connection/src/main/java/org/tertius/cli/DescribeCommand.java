@@ -21,7 +21,7 @@ public final class DescribeCommand implements Command {
 
     @Override
     public void declare(Options o) {
-        o.addOption(Opts.required("--member", "N", "the member, 1.." + HierarchyMember.MAX_ORDER));
+        o.addOption(OptionKinds.required("--member", "N", "the member, 1.." + HierarchyMember.MAX_ORDER));
     }
 
     @Override

@@ -19,7 +19,7 @@ final class DigitsOption implements OptionGroup {
 
     @Override
     public void declare(Options o) {
-        o.addOption(Opts.value("--digits", "D", help));
+        o.addOption(OptionKinds.value("--digits", "D", help));
     }
 
     @Override

@@ -15,10 +15,10 @@ public final class EquationOptions implements OptionGroup {
 
     @Override
     public void declare(Options o) {
-        o.addOption(Opts.value("--alpha", "A", "alpha (complex a+bi or p/q)"));
-        o.addOption(Opts.value("--beta", "B", "beta"));
-        o.addOption(Opts.value("--gamma", "G", "gamma"));
-        o.addOption(Opts.value("--delta", "D", "delta"));
+        o.addOption(OptionKinds.value("--alpha", "A", "alpha (complex a+bi or p/q)"));
+        o.addOption(OptionKinds.value("--beta", "B", "beta"));
+        o.addOption(OptionKinds.value("--gamma", "G", "gamma"));
+        o.addOption(OptionKinds.value("--delta", "D", "delta"));
     }
 
     @Override

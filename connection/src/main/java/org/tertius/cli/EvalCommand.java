@@ -36,8 +36,8 @@ public final class EvalCommand implements Command {
 
     @Override
     public void declare(Options o) {
-        o.addOption(Opts.value("--at", "Z[,Z...]", "targets, complex numbers a+bi separated by commas"));
-        o.addOption(Opts.value("--sheet", "K", "sheet of the targets (argument in (-pi,pi] + 2 pi K)"));
+        o.addOption(OptionKinds.value("--at", "Z[,Z...]", "targets, complex numbers a+bi separated by commas"));
+        o.addOption(OptionKinds.value("--sheet", "K", "sheet of the targets (argument in (-pi,pi] + 2 pi K)"));
     }
 
     @Override

@@ -3,6 +3,7 @@ package org.tertius.cli;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import org.apache.commons.cli.Options;
 import org.tertius.connection.family.Families;
@@ -28,22 +29,22 @@ public final class FamilyOptions implements OptionGroup {
 
     @Override
     public void declare(Options o) {
-        o.addOption(Opts.value("--family", "NAME", "solution by connection data: decaying (needs --lambda; alpha=0"
+        o.addOption(OptionKinds.value("--family", "NAME", "solution by connection data: decaying (needs --lambda; alpha=0"
                 + " beta=0 gamma=1 delta=-1), power (--sigma, --amplitude: w ~ B z^sigma at 0), analytic"
                 + " (--value-at-zero: w(0)), algebraic (--background: w ~ c + sum a_k x^-k at +infinity,"
                 + " gamma c^4 + delta = 0), oscillating (--amplitude-infinity, --phase; alpha=0 beta=0 gamma=-1"
                 + " delta=1: log w ~ A x^(-1/2) cos(2x + (A^2/2) log x + phi))"));
-        o.addOption(Opts.value("--lambda", "L", "decaying family: w ~ 1 - 2 lambda K0(2x) at +infinity"));
-        o.addOption(Opts.value("--sigma", "S", "power family: exponent at 0, |Re sigma| < 1"));
-        o.addOption(Opts.value("--amplitude", "B", "power family: B in w ~ B z^sigma"));
-        o.addOption(Opts.value("--value-at-zero", "W", "analytic family: w(0) != 0"));
-        o.addOption(Opts.value("--background", "C", "algebraic family: the constant c at +infinity"
+        o.addOption(OptionKinds.value("--lambda", "L", "decaying family: w ~ 1 - 2 lambda K0(2x) at +infinity"));
+        o.addOption(OptionKinds.value("--sigma", "S", "power family: exponent at 0, |Re sigma| < 1"));
+        o.addOption(OptionKinds.value("--amplitude", "B", "power family: B in w ~ B z^sigma"));
+        o.addOption(OptionKinds.value("--value-at-zero", "W", "analytic family: w(0) != 0"));
+        o.addOption(OptionKinds.value("--background", "C", "algebraic family: the constant c at +infinity"
                 + " (gamma c^4 + delta = 0), a value or root0..root3 (the fourth roots of -delta/gamma, principal"
                 + " root times i^k)"));
-        o.addOption(Opts.value("--amplitude-infinity", "A", "oscillating family: A in log w ~ A x^(-1/2)"
+        o.addOption(OptionKinds.value("--amplitude-infinity", "A", "oscillating family: A in log w ~ A x^(-1/2)"
                 + " cos(2x + (A^2/2) log x + phi), real, |A| <= 3"));
-        o.addOption(Opts.value("--phase", "PHI", "oscillating family: the phase constant phi (real)"));
-        o.addOption(Opts.value("--family-x0", "X", "where the family's expansion hands over to the integrator"
+        o.addOption(OptionKinds.value("--phase", "PHI", "oscillating family: the phase constant phi (real)"));
+        o.addOption(OptionKinds.value("--family-x0", "X", "where the family's expansion hands over to the integrator"
                 + " (algebraic, oscillating: at +infinity; decaying at lambda = 1/pi: in (0, 0.2]); default: chosen"
                 + " from the error estimate"));
     }
@@ -90,7 +91,7 @@ public final class FamilyOptions implements OptionGroup {
         put(m, "A", amplitudeInfinity);
         put(m, "phi", phase);
         if (background != null) {
-            String b = background.trim().toLowerCase(java.util.Locale.ROOT);
+            String b = background.trim().toLowerCase(Locale.ROOT);
             if (b.matches("root[0-3]")) {
                 m.put("root", b.substring(4));
             } else {

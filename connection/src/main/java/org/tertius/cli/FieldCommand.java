@@ -48,10 +48,10 @@ public final class FieldCommand implements Command {
 
     @Override
     public void declare(Options o) {
-        o.addOption(Opts.value("--line", "A:B:N", "plot along this segment instead"));
-        o.addOption(Opts.required("--out", "FILE.png", "the PNG file"));
-        o.addOption(Opts.value("--size", "WxH", "picture size in pixels (default 900x720)"));
-        o.addOption(Opts.flag("--no-marks", "do not locate and mark poles and zeros"));
+        o.addOption(OptionKinds.value("--line", "A:B:N", "plot along this segment instead"));
+        o.addOption(OptionKinds.required("--out", "FILE.png", "the PNG file"));
+        o.addOption(OptionKinds.value("--size", "WxH", "picture size in pixels (default 900x720)"));
+        o.addOption(OptionKinds.flag("--no-marks", "do not locate and mark poles and zeros"));
     }
 
     @Override

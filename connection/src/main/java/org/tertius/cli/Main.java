@@ -117,7 +117,7 @@ public final class Main {
             throw new UsageException("Unknown command: '" + args[0] + "'");
         }
         Options options = new Options();
-        Opts.standard(options);
+        OptionKinds.standard(options);
         Arguments arguments = ArgumentParser.parse(options, args);
         if (arguments.has("--version") && !arguments.has("--help")) {
             out.println(version());

@@ -25,14 +25,14 @@ public final class MemberOptions implements OptionGroup {
 
     @Override
     public void declare(Options o) {
-        o.addOption(Opts.value("--member", "N", "integrate member N of the hierarchy instead of PIII"));
-        o.addOption(Opts.value("--times", "T2,..,TN", "the times t_2..t_N (complex, t_N != 0)"));
-        o.addOption(Opts.value("--s", "S", "the constant s of the phase (det a_{-2} = s^2)"));
-        o.addOption(Opts.value("--m", "M", "the constant m of a_{-1}"));
-        o.addOption(Opts.value("--x0", "X", "start point x0 (x0 != 0 for member 1)"));
-        o.addOption(Opts.value("--state", "V,..", "start state: the unknowns in the order of"
+        o.addOption(OptionKinds.value("--member", "N", "integrate member N of the hierarchy instead of PIII"));
+        o.addOption(OptionKinds.value("--times", "T2,..,TN", "the times t_2..t_N (complex, t_N != 0)"));
+        o.addOption(OptionKinds.value("--s", "S", "the constant s of the phase (det a_{-2} = s^2)"));
+        o.addOption(OptionKinds.value("--m", "M", "the constant m of a_{-1}"));
+        o.addOption(OptionKinds.value("--x0", "X", "start point x0 (x0 != 0 for member 1)"));
+        o.addOption(OptionKinds.value("--state", "V,..", "start state: the unknowns in the order of"
                 + " 'tertius describe --member N'"));
-        o.addOption(Opts.value("--origin", "A11,A12,A21",
+        o.addOption(OptionKinds.value("--origin", "A11,A12,A21",
                 "member 1 only: start at x = 0 on the solution analytic there, with a_{-2} = this"));
     }
 

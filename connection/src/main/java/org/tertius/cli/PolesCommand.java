@@ -41,8 +41,8 @@ public final class PolesCommand implements Command {
 
     @Override
     public void declare(Options o) {
-        o.addOption(Opts.value("--format", "csv|json", "output format (default csv)"));
-        o.addOption(Opts.value("--out", "FILE", "output file (default standard output)"));
+        o.addOption(OptionKinds.value("--format", "csv|json", "output format (default csv)"));
+        o.addOption(OptionKinds.value("--out", "FILE", "output file (default standard output)"));
     }
 
     @Override

@@ -7,6 +7,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Properties;
 import java.util.Set;
+import java.util.TreeSet;
 import org.tertius.core.InvalidInputException;
 
 /**
@@ -43,7 +44,7 @@ final class ProblemFile {
         for (String k : p.stringPropertyNames()) {
             if (!KEYS.contains(k)) {
                 throw new InvalidInputException("--problem", "unknown key '" + k + "' in " + path + "; known keys: "
-                        + new java.util.TreeSet<>(KEYS));
+                        + new TreeSet<>(KEYS));
             }
         }
         return new ProblemFile(p, path.toString());

@@ -1,6 +1,7 @@
 package org.tertius.cli;
 
 import java.time.Duration;
+import java.util.Optional;
 import me.tongfei.progressbar.ConsoleProgressBarConsumer;
 import me.tongfei.progressbar.ProgressBar;
 import me.tongfei.progressbar.ProgressBarBuilder;
@@ -33,7 +34,7 @@ final class Progress implements AutoCloseable {
             }
             bar = new ProgressBarBuilder().setTaskName(task).setInitialMax(total).setStyle(ProgressBarStyle.ASCII)
                     .setUpdateIntervalMillis(200).setConsumer(new ConsoleProgressBarConsumer(System.err))
-                    .setEtaFunction(state -> java.util.Optional.<Duration>empty()).build();
+                    .setEtaFunction(state -> Optional.<Duration>empty()).build();
         }
         bar.maxHint(total);
         bar.stepTo(done);

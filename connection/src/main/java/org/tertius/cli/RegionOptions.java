@@ -28,9 +28,9 @@ final class RegionOptions implements OptionGroup {
 
     @Override
     public void declare(Options o) {
-        o.addOption(Opts.value("--grid", "RE0:RE1:NX,IM0:IM1:NY", gridHelp));
-        o.addOption(Opts.value("--log-strip", "LOGR0:LOGR1:NX,ARG0:ARG1:NY", LOG_STRIP_HELP));
-        o.addOption(Opts.value("--sheet", "K", "sheet of the points (default 0)"));
+        o.addOption(OptionKinds.value("--grid", "RE0:RE1:NX,IM0:IM1:NY", gridHelp));
+        o.addOption(OptionKinds.value("--log-strip", "LOGR0:LOGR1:NX,ARG0:ARG1:NY", LOG_STRIP_HELP));
+        o.addOption(OptionKinds.value("--sheet", "K", "sheet of the points (default 0)"));
     }
 
     @Override

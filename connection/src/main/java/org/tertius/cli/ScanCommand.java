@@ -1,5 +1,6 @@
 package org.tertius.cli;
 
+import java.io.FilterWriter;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.io.UncheckedIOException;
@@ -44,12 +45,12 @@ public final class ScanCommand implements Command {
 
     @Override
     public void declare(Options o) {
-        o.addOption(Opts.required("--range", "A:B:N", "lambda from A to B, N values"));
-        o.addOption(Opts.value("--out", "FILE", "CSV file (rows already there are kept and their tasks skipped);"
+        o.addOption(OptionKinds.required("--range", "A:B:N", "lambda from A to B, N values"));
+        o.addOption(OptionKinds.value("--out", "FILE", "CSV file (rows already there are kept and their tasks skipped);"
                 + " default standard output"));
-        o.addOption(Opts.value("--output", "FILE", "the same as --out"));
-        o.addOption(Opts.value("--plot", "FILE.png", "PNG plot of the first singularity and sigma"));
-        o.addOption(Opts.value("--threads", "N", "worker threads (default: processors)"));
+        o.addOption(OptionKinds.value("--output", "FILE", "the same as --out"));
+        o.addOption(OptionKinds.value("--plot", "FILE.png", "PNG plot of the first singularity and sigma"));
+        o.addOption(OptionKinds.value("--threads", "N", "worker threads (default: processors)"));
     }
 
     @Override
@@ -101,7 +102,7 @@ public final class ScanCommand implements Command {
     }
 
     /** Standard output for the try-with-resources: flushed, not closed. */
-    private static final class KeepOpen extends java.io.FilterWriter {
+    private static final class KeepOpen extends FilterWriter {
         KeepOpen(Writer out) {
             super(out);
         }

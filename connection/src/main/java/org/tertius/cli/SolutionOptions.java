@@ -28,7 +28,7 @@ public final class SolutionOptions implements OptionGroup {
 
     @Override
     public void declare(Options o) {
-        o.addOption(Opts.value("--problem", "FILE", "problem file (key = value lines); options win"));
+        o.addOption(OptionKinds.value("--problem", "FILE", "problem file (key = value lines); options win"));
         for (OptionGroup g : parts) {
             g.declare(o);
         }

@@ -11,10 +11,10 @@ public final class SolverOptions implements OptionGroup {
 
     @Override
     public void declare(Options o) {
-        o.addOption(Opts.value("--tol", "TOL",
+        o.addOption(OptionKinds.value("--tol", "TOL",
                 "local error tolerance per step, relative to 1+|y| (default 1e-13; range 1e-16..1e-2)"));
-        o.addOption(Opts.value("--order", "N", "Taylor order per step, even, 8..400 (default 32)"));
-        o.addOption(Opts.value("--max-steps", "N", "step budget per path (default 20000)"));
+        o.addOption(OptionKinds.value("--order", "N", "Taylor order per step, even, 8..400 (default 32)"));
+        o.addOption(OptionKinds.value("--max-steps", "N", "step budget per path (default 20000)"));
     }
 
     @Override

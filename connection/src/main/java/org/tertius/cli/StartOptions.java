@@ -12,10 +12,10 @@ public final class StartOptions implements OptionGroup {
 
     @Override
     public void declare(Options o) {
-        o.addOption(Opts.value("--z0", "Z", "start point z0 != 0 (principal sheet)"));
-        o.addOption(Opts.value("--w0", "W", "w(z0)"));
-        o.addOption(Opts.value("--dw0", "DW", "w'(z0)"));
-        o.addOption(Opts.value("--d3w0", "D3W", "w'''(z0), needed only when w0 = 0 (a solution through a zero of w)"));
+        o.addOption(OptionKinds.value("--z0", "Z", "start point z0 != 0 (principal sheet)"));
+        o.addOption(OptionKinds.value("--w0", "W", "w(z0)"));
+        o.addOption(OptionKinds.value("--dw0", "DW", "w'(z0)"));
+        o.addOption(OptionKinds.value("--d3w0", "D3W", "w'''(z0), needed only when w0 = 0 (a solution through a zero of w)"));
     }
 
     @Override

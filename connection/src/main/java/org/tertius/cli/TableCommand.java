@@ -52,9 +52,9 @@ public final class TableCommand implements Command {
 
     @Override
     public void declare(Options o) {
-        o.addOption(Opts.value("--line", "A:B:N", "N points from A to B (complex), e.g. 0.5:10:200"));
-        o.addOption(Opts.value("--out", "FILE", "CSV file (default: standard output)"));
-        o.addOption(Opts.flag("--resume", "continue an interrupted run in --out FILE"));
+        o.addOption(OptionKinds.value("--line", "A:B:N", "N points from A to B (complex), e.g. 0.5:10:200"));
+        o.addOption(OptionKinds.value("--out", "FILE", "CSV file (default: standard output)"));
+        o.addOption(OptionKinds.flag("--resume", "continue an interrupted run in --out FILE"));
     }
 
     @Override

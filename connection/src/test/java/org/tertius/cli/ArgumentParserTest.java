@@ -12,12 +12,12 @@ import org.junit.jupiter.api.Test;
 class ArgumentParserTest {
     private static Options options() {
         Options o = new Options();
-        o.addOption(Opts.value("--beta", "B", "beta"));
-        o.addOption(Opts.value("--at", "Z", "targets"));
-        o.addOption(Opts.value("--digits", "D", "digits"));
-        o.addOption(Opts.required("--out", "FILE", "file"));
-        o.addOption(Opts.flag("--resume", "resume"));
-        Opts.standard(o);
+        o.addOption(OptionKinds.value("--beta", "B", "beta"));
+        o.addOption(OptionKinds.value("--at", "Z", "targets"));
+        o.addOption(OptionKinds.value("--digits", "D", "digits"));
+        o.addOption(OptionKinds.required("--out", "FILE", "file"));
+        o.addOption(OptionKinds.flag("--resume", "resume"));
+        OptionKinds.standard(o);
         return o;
     }
 

@@ -17,6 +17,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
+import org.tertius.core.region.Grid;
 
 /** The command-line tool end to end: output formats, resume, the picture and bad input. */
 class CommandLineToolTest {
@@ -164,7 +165,7 @@ class CommandLineToolTest {
         BufferedImage img = ImageIO.read(png.toFile());
         assertEquals(640, img.getWidth());
         assertEquals(520, img.getHeight());
-        org.tertius.core.region.Grid g = org.tertius.core.region.Grid.of(-1, 1, 201, -1, 1, 201, 0);
+        Grid g = Grid.of(-1, 1, 201, -1, 1, 201, 0);
         Color pole = new Color(img.getRGB(FieldPainter.px(g, -0.5, 640), FieldPainter.py(g, 0, 520)));
         Color zero = new Color(img.getRGB(FieldPainter.px(g, 0.5, 640), FieldPainter.py(g, 0, 520)));
         // legend: poles white, zeros black

@@ -1,9 +1,9 @@
 package org.tertius.hierarchy;
 
-import org.tertius.core.face.InvariantCheck;
 import java.util.ArrayList;
 import java.util.List;
 import org.hipparchus.complex.Complex;
+import org.tertius.core.face.InvariantCheck;
 import org.tertius.hierarchy.algebra.Polynomial;
 
 /**

@@ -1,6 +1,5 @@
 package org.tertius.hierarchy;
 
-import org.tertius.core.face.InvariantCheck;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
@@ -14,6 +13,7 @@ import org.tertius.core.face.ComputedSolution;
 import org.tertius.core.face.Coordinate;
 import org.tertius.core.face.EngineReading;
 import org.tertius.core.face.HighPrecisionForm;
+import org.tertius.core.face.InvariantCheck;
 import org.tertius.core.face.SolutionValue;
 import org.tertius.core.number.ComplexArithmetic;
 import org.tertius.core.number.ExactNumber;

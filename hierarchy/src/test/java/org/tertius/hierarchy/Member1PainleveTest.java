@@ -2,6 +2,8 @@ package org.tertius.hierarchy;
 
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.util.Set;
+import java.util.TreeSet;
 import org.hipparchus.complex.Complex;
 import org.junit.jupiter.api.Test;
 import org.tertius.core.number.SurfacePoint;
@@ -51,7 +53,7 @@ class Member1PainleveTest {
         // z-sheet 0 covers x-sheets -1, 0, 1 (x = (z/c)^2); the last two points lie on z-sheets 1 and -1
         double[][] points = {{1.5, 0.4, 0}, {0.3, -0.2, 0}, {0.2, 1.5, 0}, {-0.5, 1.0, 0}, {-1.2, 0.5, 0},
             {-1.2, -0.5, 0}, {-1.5, -0.2, 1}, {-1.5, 0.2, -1}};
-        java.util.Set<Integer> xSheets = new java.util.TreeSet<>();
+        Set<Integer> xSheets = new TreeSet<>();
         for (double[] p : points) {
             SurfacePoint z = SurfacePoint.of(p[0], p[1], (int) p[2]);
             xSheets.add(map.x(z).sheet());

@@ -1,13 +1,14 @@
 package org.tertius.hierarchy;
 
-import org.tertius.core.face.InvariantCheck;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import org.hipparchus.complex.Complex;
 import org.junit.jupiter.api.Test;
+import org.tertius.core.face.InvariantCheck;
 import org.tertius.core.number.SurfacePoint;
 import org.tertius.core.step.SolverSettings;
 
@@ -80,7 +81,7 @@ class MemberSolutionTest {
         values.set(1, values.get(1).add(1e-6));
         values.addAll(sol.parameters().ringValues(v.x()));
         double[] err = new double[v.state().size()];
-        java.util.Arrays.fill(err, 1e-12);
+        Arrays.fill(err, 1e-12);
         assertFalse(monitor.check(values, err).stream().allMatch(InvariantCheck::withinEstimate));
     }
 

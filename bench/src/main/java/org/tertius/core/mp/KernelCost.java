@@ -1,6 +1,7 @@
 package org.tertius.core.mp;
 
 import java.math.BigInteger;
+import java.util.Random;
 
 /**
  * Measured cost of the kernel's unit of work, for benchmarks that compare a run with its multiplication-count
@@ -23,7 +24,7 @@ public final class KernelCost {
     private static double complexProductSeconds(LimbFormat fmt) {
         int n = 32;
         LimbVector v = new LimbVector(fmt, n + 1);
-        java.util.Random r = new java.util.Random(1);
+        Random r = new Random(1);
         for (int i = 0; i < n; i++) {
             v.set(i, new BigInteger(fmt.fractionBits(), r), new BigInteger(fmt.fractionBits(), r).negate());
         }

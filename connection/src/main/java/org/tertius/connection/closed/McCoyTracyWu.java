@@ -1,5 +1,6 @@
 package org.tertius.connection.closed;
 
+import java.math.BigDecimal;
 import org.apfloat.Apcomplex;
 import org.apfloat.Apfloat;
 import org.apfloat.ApfloatMath;
@@ -59,7 +60,7 @@ public final class McCoyTracyWu {
 
     /** B(lambda) in double precision (Gamma values from Apfloat). */
     public static double amplitude(double lambda) {
-        return zeroData(new java.math.BigDecimal(lambda).toString(), 20)[1].real().doubleValue();
+        return zeroData(new BigDecimal(lambda).toString(), 20)[1].real().doubleValue();
     }
 
     /** The constant c of w ~ -x (log x + c) at lambda = 1/pi: c = gamma_E - log 4. */

@@ -1,6 +1,8 @@
 package org.tertius.connection.family;
 
+import java.util.HashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
 import org.hipparchus.complex.Complex;
@@ -69,7 +71,7 @@ public final class Families {
      */
     public static Painleve3Solution create(Painleve3 equation, String name, Map<String, String> parameters,
                                            SolverSettings settings) {
-        String n = name == null ? "" : name.trim().toLowerCase(java.util.Locale.ROOT);
+        String n = name == null ? "" : name.trim().toLowerCase(Locale.ROOT);
         switch (n) {
             case "decaying":
                 return decaying(equation, parameters, settings);
@@ -96,7 +98,7 @@ public final class Families {
 
     private static Painleve3Solution decaying(Painleve3 equation, Map<String, String> parameters,
                                               SolverSettings settings) {
-        Map<String, String> rest = new java.util.HashMap<>(parameters);
+        Map<String, String> rest = new HashMap<>(parameters);
         String x0text = rest.remove("x0");
         allow(rest, Set.of("lambda"));
         if (!equation.equals(DecayingConnection.equation())) {
@@ -174,7 +176,7 @@ public final class Families {
 
     private static Painleve3Solution oscillating(Painleve3 equation, Map<String, String> parameters,
                                                 SolverSettings settings) {
-        Map<String, String> rest = new java.util.HashMap<>(parameters);
+        Map<String, String> rest = new HashMap<>(parameters);
         String x0text = rest.remove("x0");
         allow(rest, Set.of("A", "phi"));
         if (!equation.equals(Painleve3.of(0, 0, -1, 1))) {

@@ -1,6 +1,7 @@
 package org.tertius.connection.infinity;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import org.tertius.connection.zero.LocalValue;
 import org.tertius.core.InvalidInputException;
@@ -125,7 +126,7 @@ public final class DecayingTransseries<T> {
     @SuppressWarnings("unchecked")
     private T[] zeros() {
         Object[] r = new Object[terms];
-        java.util.Arrays.fill(r, ar.zero());
+        Arrays.fill(r, ar.zero());
         return (T[]) r;
     }
 

@@ -1,6 +1,7 @@
 package org.tertius.connection.match;
 
 import java.util.List;
+import org.hipparchus.analysis.solvers.BrentSolver;
 import org.hipparchus.complex.Complex;
 import org.tertius.connection.infinity.DecayingTransseries;
 import org.tertius.connection.path.DeviationTaylor;
@@ -139,7 +140,7 @@ public final class DecayingConnection {
         double edge = 0.312;
         double err = 0;
         double[] slope = new double[1];
-        double lam = new org.hipparchus.analysis.solvers.BrentSolver(1e-15, 1e-15).solve(200, l -> {
+        double lam = new BrentSolver(1e-15, 1e-15).solve(200, l -> {
             ZeroFit.Result<Complex> r = zeroDataByEngine(l, x0, settings);
             return r.sigma().getReal() - sigma;
         }, -edge, edge);

@@ -1,5 +1,6 @@
 package org.tertius.connection.path;
 
+import java.util.Arrays;
 import java.util.List;
 import org.tertius.connection.zero.LocalValue;
 import org.tertius.core.InvalidInputException;
@@ -193,7 +194,7 @@ public final class DeviationTaylor<T> {
     @SuppressWarnings("unchecked")
     private T[] arr(int n) {
         Object[] r = new Object[n];
-        java.util.Arrays.fill(r, ar.zero());
+        Arrays.fill(r, ar.zero());
         return (T[]) r;
     }
 }

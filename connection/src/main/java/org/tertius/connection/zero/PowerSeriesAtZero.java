@@ -1,6 +1,7 @@
 package org.tertius.connection.zero;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.number.AnalyticArithmetic;
@@ -261,7 +262,7 @@ public final class PowerSeriesAtZero<T> {
         private T[] newRow(int len) {
             Object[] r = new Object[len];
             T z = ar.zero();
-            java.util.Arrays.fill(r, z);
+            Arrays.fill(r, z);
             return (T[]) r;
         }
 

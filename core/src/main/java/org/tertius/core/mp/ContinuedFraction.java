@@ -1,9 +1,8 @@
 package org.tertius.core.mp;
-import org.tertius.core.number.MpContext;
-import org.tertius.core.number.MpComplex;
-
 import java.util.ArrayList;
 import java.util.List;
+import org.tertius.core.number.MpComplex;
+import org.tertius.core.number.MpContext;
 
 /**
  * The corresponding continued fraction of a power series, whose convergents are Pade approximants along a

@@ -1,11 +1,10 @@
 package org.tertius.core.mp;
-import org.tertius.core.number.MpContext;
-import org.tertius.core.number.MpComplex;
-
 import java.math.BigInteger;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.UnreachableTargetException;
 import org.tertius.core.equation.IndependentVariable;
+import org.tertius.core.number.MpComplex;
+import org.tertius.core.number.MpContext;
 import org.tertius.core.taylor.RecurrencePlan;
 
 /**
@@ -206,7 +205,7 @@ final class FixedPointKernel {
             }
             base = baseSeries(tau0, scale, fmt);
             aux = new LimbVector(fmt, 2);
-            aux.set(0, MpContext.fixedRe(ctx.fromDouble(scale, 0), f), java.math.BigInteger.ZERO);
+            aux.set(0, MpContext.fixedRe(ctx.fromDouble(scale, 0), f), BigInteger.ZERO);
             log2Start = new double[n];
             for (int i = 0; i < n; i++) {
                 double l = y0[i].log2Abs();

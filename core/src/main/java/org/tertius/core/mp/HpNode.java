@@ -1,6 +1,6 @@
 package org.tertius.core.mp;
-import org.tertius.core.number.MpContext;
 import org.tertius.core.number.MpComplex;
+import org.tertius.core.number.MpContext;
 
 /**
  * One step of a high-precision path: the Taylor series at its start point and, when the step vaulted a pole,

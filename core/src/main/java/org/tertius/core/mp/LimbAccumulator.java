@@ -1,5 +1,8 @@
 package org.tertius.core.mp;
 
+import java.math.BigInteger;
+import java.util.Arrays;
+
 /**
  * An exact accumulator of complex fixed-point products in columns of longs: the real and imaginary parts of a
  * sum of products, re = sum (ar br - ai bi) and im = sum (ar bi + ai br), column by column. A sum of products is
@@ -20,9 +23,9 @@ final class LimbAccumulator {
     private int load;
     private final boolean big;
     /** With BigInteger products: the sums of ar br, ai bi and (ar + ai)(br + bi), in units of column 0. */
-    private java.math.BigInteger sum1 = java.math.BigInteger.ZERO;
-    private java.math.BigInteger sum2 = java.math.BigInteger.ZERO;
-    private java.math.BigInteger sum3 = java.math.BigInteger.ZERO;
+    private BigInteger sum1 = BigInteger.ZERO;
+    private BigInteger sum2 = BigInteger.ZERO;
+    private BigInteger sum3 = BigInteger.ZERO;
 
     /** An accumulator of fixed-point products rounded at 2^-F, forming the columns from the format's low one. */
     LimbAccumulator(LimbFormat format) {
@@ -43,13 +46,13 @@ final class LimbAccumulator {
 
     void clear() {
         if (big) {
-            sum1 = java.math.BigInteger.ZERO;
-            sum2 = java.math.BigInteger.ZERO;
-            sum3 = java.math.BigInteger.ZERO;
+            sum1 = BigInteger.ZERO;
+            sum2 = BigInteger.ZERO;
+            sum3 = BigInteger.ZERO;
             return;
         }
-        java.util.Arrays.fill(re, low, re.length, 0);
-        java.util.Arrays.fill(im, low, im.length, 0);
+        Arrays.fill(re, low, re.length, 0);
+        Arrays.fill(im, low, im.length, 0);
         load = 0;
     }
 
@@ -195,8 +198,8 @@ final class LimbAccumulator {
         format.carry(im, low);
         int t = Math.max(format.topColumn(re, low), format.topColumn(im, low));
         if (t < 0) {
-            java.util.Arrays.fill(dst.re, i * limbs, (i + 1) * limbs, 0);
-            java.util.Arrays.fill(dst.im, i * limbs, (i + 1) * limbs, 0);
+            Arrays.fill(dst.re, i * limbs, (i + 1) * limbs, 0);
+            Arrays.fill(dst.im, i * limbs, (i + 1) * limbs, 0);
             dst.changed(i);
             return Integer.MIN_VALUE;
         }

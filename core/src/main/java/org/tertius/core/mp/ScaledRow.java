@@ -1,8 +1,8 @@
 package org.tertius.core.mp;
-import org.tertius.core.number.MpContext;
-import org.tertius.core.number.MpComplex;
-
 import java.math.BigInteger;
+import java.util.Arrays;
+import org.tertius.core.number.MpComplex;
+import org.tertius.core.number.MpContext;
 
 /**
  * One row of Viskovatov's algorithm (see {@link ContinuedFraction}): complex floating values X_j 2^-F 2^(BITS e_j),
@@ -28,7 +28,7 @@ final class ScaledRow {
     static ScaledRow unit(LimbFormat format, int length) {
         ScaledRow r = new ScaledRow(format, length);
         r.length = length;
-        java.util.Arrays.fill(r.zero, true);
+        Arrays.fill(r.zero, true);
         r.set(0, new MpComplex(BigInteger.ONE, BigInteger.ZERO, 0));
         return r;
     }
@@ -173,8 +173,8 @@ final class ScaledRow {
 
     private void setZero(int j) {
         int o = j * values.limbs;
-        java.util.Arrays.fill(values.re, o, o + values.limbs, 0);
-        java.util.Arrays.fill(values.im, o, o + values.limbs, 0);
+        Arrays.fill(values.re, o, o + values.limbs, 0);
+        Arrays.fill(values.im, o, o + values.limbs, 0);
         values.changed(j);
         zero[j] = true;
         exponent[j] = 0;

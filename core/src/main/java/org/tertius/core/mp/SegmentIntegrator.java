@@ -1,13 +1,14 @@
 package org.tertius.core.mp;
-import org.tertius.core.number.MpContext;
-import org.tertius.core.number.MpComplex;
-
 import java.util.ArrayList;
 import java.util.List;
+import java.util.concurrent.Future;
 import java.util.concurrent.atomic.AtomicBoolean;
 import java.util.concurrent.atomic.AtomicLong;
+import org.tertius.core.InvalidInputException;
 import org.tertius.core.TertiusException;
 import org.tertius.core.UnreachableTargetException;
+import org.tertius.core.number.MpComplex;
+import org.tertius.core.number.MpContext;
 import org.tertius.core.taylor.RecurrencePlan;
 
 /**
@@ -176,7 +177,7 @@ public final class SegmentIntegrator {
      */
     public Result denseState(Result run, MpComplex from, MpComplex t) {
         if (run.nodes == null) {
-            throw new org.tertius.core.InvalidInputException("run", "was made without keepNodes: no dense output");
+            throw new InvalidInputException("run", "was made without keepNodes: no dense output");
         }
         if (run.nodes.isEmpty()) {
             return new Result(run.y, run.scale, 0, null);
@@ -540,7 +541,7 @@ public final class SegmentIntegrator {
         int n = series.order();
         ContinuedFraction[] out = new ContinuedFraction[series.dimension()];
         if (Workers.PARALLEL && out.length > 1 && n >= PARALLEL_ORDER) {
-            List<java.util.concurrent.Future<ContinuedFraction>> others = new ArrayList<>();
+            List<Future<ContinuedFraction>> others = new ArrayList<>();
             for (int i = 1; i < out.length; i++) {
                 int component = i;
                 others.add(Workers.submit(() -> fraction(series, wide, component)));

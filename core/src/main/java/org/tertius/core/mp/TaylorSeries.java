@@ -1,8 +1,7 @@
 package org.tertius.core.mp;
-import org.tertius.core.number.MpContext;
-import org.tertius.core.number.MpComplex;
-
 import java.math.BigInteger;
+import org.tertius.core.number.MpComplex;
+import org.tertius.core.number.MpContext;
 
 /**
  * The Taylor coefficients of every unknown of a system at one point, in the scaled variable s with

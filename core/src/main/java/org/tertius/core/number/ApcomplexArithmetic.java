@@ -1,5 +1,6 @@
 package org.tertius.core.number;
 
+import java.math.BigDecimal;
 import org.apfloat.Apcomplex;
 import org.apfloat.Apfloat;
 import org.apfloat.ApfloatMath;
@@ -30,7 +31,7 @@ public final class ApcomplexArithmetic implements AnalyticArithmetic<Apcomplex> 
 
     private static Apfloat exact(double x) {
         // a double is a binary fraction; BigDecimal(double) is its exact value
-        return new Apfloat(new java.math.BigDecimal(x));
+        return new Apfloat(new BigDecimal(x));
     }
 
     /** A decimal number given as text, read to the working precision. */

@@ -4,6 +4,7 @@ import java.math.BigDecimal;
 import java.math.BigInteger;
 import org.apfloat.Apcomplex;
 import org.apfloat.Apfloat;
+import org.hipparchus.complex.Complex;
 import org.tertius.core.InvalidInputException;
 
 /**
@@ -288,7 +289,7 @@ public final class MpContext {
         int e = 2 * (int) Math.floor(x.log2Abs() / 2);
         MpContext w = widenBits(16);
         MpComplex y = w.round(x.scalb(-e));
-        org.hipparchus.complex.Complex seed = y.toComplex().sqrt();
+        Complex seed = y.toComplex().sqrt();
         MpComplex s = w.fromDouble(seed.getReal(), seed.getImaginary());
         for (int good = 50; ; good *= 2) {
             s = w.divide(w.add(s, w.divide(y, s)), 2);
@@ -319,7 +320,7 @@ public final class MpContext {
 
     /** log y for |y| within a factor 2 of 1 (no scaling). */
     private MpComplex logNearOne(MpComplex y) {
-        org.hipparchus.complex.Complex seed = y.toComplex().log();
+        Complex seed = y.toComplex().log();
         MpComplex l0 = fromDouble(seed.getReal(), seed.getImaginary());
         MpComplex u = subtract(multiply(y, exp(l0.negate())), fromLong(1));
         MpComplex sum = MpComplex.ZERO;

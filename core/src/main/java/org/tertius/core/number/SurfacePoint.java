@@ -86,7 +86,7 @@ public final class SurfacePoint {
 
     /** Real part of the log coordinate, log|z|. */
     public double logRe() {
-        return Math.log(Cx.abs(re, im));
+        return Math.log(ComplexPairs.abs(re, im));
     }
 
     /** Imaginary part of the log coordinate: Arg z + 2 pi k with Arg z in (-pi, pi]. */

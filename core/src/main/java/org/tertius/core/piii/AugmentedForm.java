@@ -4,6 +4,7 @@ import org.hipparchus.complex.Complex;
 import org.tertius.core.equation.IndependentVariable;
 import org.tertius.core.equation.PolynomialSystem;
 import org.tertius.core.equation.StateProjection;
+import org.tertius.core.number.ComplexPairs;
 import org.tertius.core.number.MpComplex;
 import org.tertius.core.number.MpContext;
 
@@ -41,7 +42,7 @@ final class AugmentedForm implements Painleve3Form {
     @Override
     public StateProjection projection() {
         return (tr, ti, re, im) -> {
-            double wm = org.tertius.core.number.Cx.abs(re[0], im[0]);
+            double wm = ComplexPairs.abs(re[0], im[0]);
             if (wm >= 1) {
                 double d = re[0] * re[0] + im[0] * im[0];
                 re[2] = re[0] / d;

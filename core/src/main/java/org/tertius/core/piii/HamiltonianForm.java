@@ -5,6 +5,7 @@ import org.tertius.core.InvalidInputException;
 import org.tertius.core.equation.IndependentVariable;
 import org.tertius.core.equation.PolynomialSystem;
 import org.tertius.core.equation.StateProjection;
+import org.tertius.core.number.ComplexPairs;
 import org.tertius.core.number.MpComplex;
 import org.tertius.core.number.MpContext;
 
@@ -111,12 +112,12 @@ final class HamiltonianForm implements Painleve3Form {
         double dr = (nr * zr + ni * zi) / zz;
         double di = (ni * zr - nr * zi) / zz;
         double zm = Math.sqrt(zz);
-        double wm = org.tertius.core.number.Cx.abs(wr, wi);
+        double wm = ComplexPairs.abs(wr, wi);
         // |d w'/d w| = |4 w p + B| / |z|, |d w'/d p| = 2 |w|^2 / |z|
-        double dwdw = org.tertius.core.number.Cx.abs(4 * (wr * pr - wi * pi) + br, 4 * (wr * pi + wi * pr) + bi) / zm;
+        double dwdw = ComplexPairs.abs(4 * (wr * pr - wi * pi) + br, 4 * (wr * pi + wi * pr) + bi) / zm;
         double dwdp = 2 * wm * wm / zm;
         errOut[0] = err[0];
-        errOut[1] = dwdw * err[0] + dwdp * err[1] + 1e-16 * org.tertius.core.number.Cx.abs(dr, di);
+        errOut[1] = dwdw * err[0] + dwdp * err[1] + 1e-16 * ComplexPairs.abs(dr, di);
         return new Complex[] {new Complex(wr, wi), new Complex(dr, di)};
     }
 

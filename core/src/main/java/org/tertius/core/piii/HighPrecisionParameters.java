@@ -1,5 +1,7 @@
 package org.tertius.core.piii;
 
+import org.hipparchus.complex.Complex;
+import org.tertius.core.number.ComplexPairs;
 import org.tertius.core.number.MpComplex;
 import org.tertius.core.number.MpContext;
 
@@ -46,12 +48,12 @@ public final class HighPrecisionParameters {
     }
 
     /** The square root of -delta with the sign of the double-precision value {@code c} used by a form. */
-    MpComplex c(org.hipparchus.complex.Complex c) {
+    MpComplex c(Complex c) {
         MpComplex r = ctx.sqrt(delta.negate());
-        org.hipparchus.complex.Complex d = r.toComplex();
+        Complex d = r.toComplex();
         double re = d.getReal() - c.getReal();
         double im = d.getImaginary() - c.getImaginary();
-        if (org.tertius.core.number.Cx.abs(re, im) > 1e-6 * Math.max(1, c.norm())) {
+        if (ComplexPairs.abs(re, im) > 1e-6 * Math.max(1, c.norm())) {
             r = r.negate();
         }
         return r;

@@ -3,6 +3,7 @@ package org.tertius.core.piii;
 import org.hipparchus.complex.Complex;
 import org.tertius.core.equation.PolynomialSystem;
 import org.tertius.core.equation.StateProjection;
+import org.tertius.core.number.MpComplex;
 
 /**
  * A polynomial first-order form of Painleve III handed to the engine, with the maps between (z, w, w') and
@@ -40,15 +41,15 @@ interface Painleve3Form {
      * The coefficient values of {@link #system()} (same order) computed in arbitrary precision from
      * high-precision parameters, for kernels that run the same recurrence plan at higher precision.
      */
-    org.tertius.core.number.MpComplex[] coefficients(HighPrecisionParameters p);
+    MpComplex[] coefficients(HighPrecisionParameters p);
 
     /**
      * The state for (z, w, w') in arbitrary precision (same layout as {@link #toState}); w != 0.
      */
-    org.tertius.core.number.MpComplex[] toState(HighPrecisionParameters p, org.tertius.core.number.MpComplex z,
-                                            org.tertius.core.number.MpComplex w, org.tertius.core.number.MpComplex dw);
+    MpComplex[] toState(HighPrecisionParameters p, MpComplex z,
+                                            MpComplex w, MpComplex dw);
 
     /** {w, w'} from a high-precision state. */
-    org.tertius.core.number.MpComplex[] fromState(HighPrecisionParameters p, org.tertius.core.number.MpComplex z,
-                                              org.tertius.core.number.MpComplex[] y);
+    MpComplex[] fromState(HighPrecisionParameters p, MpComplex z,
+                                              MpComplex[] y);
 }

@@ -4,7 +4,7 @@ import java.util.List;
 import org.hipparchus.complex.Complex;
 import org.tertius.core.face.Coordinate;
 import org.tertius.core.face.SolutionValue;
-import org.tertius.core.number.Cx;
+import org.tertius.core.number.ComplexPairs;
 import org.tertius.core.number.SurfacePoint;
 
 /**
@@ -94,7 +94,7 @@ public final class GridResult {
             for (int i = 0; i < grid.nx(); i++) {
                 int k = j * grid.nx() + i;
                 if (computed(i, j)) {
-                    m = Math.max(m, error(i, j) / (1 + Cx.abs(re[0][k], im[0][k])));
+                    m = Math.max(m, error(i, j) / (1 + ComplexPairs.abs(re[0][k], im[0][k])));
                 }
             }
         }

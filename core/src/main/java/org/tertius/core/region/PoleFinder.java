@@ -7,7 +7,7 @@ import org.hipparchus.complex.Complex;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.face.ComputedSolution;
 import org.tertius.core.face.EngineReading;
-import org.tertius.core.number.Cx;
+import org.tertius.core.number.ComplexPairs;
 import org.tertius.core.number.SurfacePoint;
 import org.tertius.core.pade.PadeApproximant;
 import org.tertius.core.pade.PolynomialRoots;
@@ -81,7 +81,7 @@ public final class PoleFinder {
             // two copies of one singularity that disagree beyond their estimates: the kept one's error becomes
             // at least their distance, so that no position is claimed more precisely than the copies agree
             Singularity s = found.get(k);
-            double d = Cx.abs(s.point().re() - c.s.point().re(), s.point().im() - c.s.point().im());
+            double d = ComplexPairs.abs(s.point().re() - c.s.point().re(), s.point().im() - c.s.point().im());
             if (d > s.error() + c.s.error()) {
                 found.set(k, new Singularity(s.kind(), s.point(), s.lead(), d));
             }
@@ -146,7 +146,7 @@ public final class PoleFinder {
             double dy = Math.max(0, Math.max(g.im0() - c.im(), c.im() - g.im1()));
             return Math.hypot(dx, dy) <= reach;
         }
-        double reach = Cx.abs(c.re(), c.im()) * (Math.exp(INSIDE * n.radius()) - 1) + 1e-12;
+        double reach = ComplexPairs.abs(c.re(), c.im()) * (Math.exp(INSIDE * n.radius()) - 1) + 1e-12;
         if (Math.abs(c.sheet() - g.sheet()) > 1 || n.radius() * INSIDE > Math.PI) {
             return Math.abs(c.sheet() - g.sheet()) <= 1 || n.radius() * INSIDE > Math.PI;
         }
@@ -162,7 +162,7 @@ public final class PoleFinder {
                 : PolynomialRoots.roots(hi.numeratorRe(), hi.numeratorIm());
         boolean any = false;
         for (int j = 0; j < roots[0].length && !any; j++) {
-            any = Cx.abs(roots[0][j], roots[1][j]) < INSIDE;
+            any = ComplexPairs.abs(roots[0][j], roots[1][j]) < INSIDE;
         }
         if (!any) {
             return;
@@ -174,13 +174,13 @@ public final class PoleFinder {
         for (int j = 0; j < roots[0].length; j++) {
             double sr = roots[0][j];
             double si = roots[1][j];
-            double rad = Cx.abs(sr, si);
+            double rad = ComplexPairs.abs(sr, si);
             if (!(rad < INSIDE)) {
                 continue;
             }
             double near = Double.POSITIVE_INFINITY;
             for (int k = 0; k < check[0].length; k++) {
-                near = Math.min(near, Cx.abs(check[0][k] - sr, check[1][k] - si));
+                near = Math.min(near, ComplexPairs.abs(check[0][k] - sr, check[1][k] - si));
             }
             if (!(near <= CONFIRM)) {
                 continue;
@@ -188,7 +188,7 @@ public final class PoleFinder {
             // a root of the numerator next to one of the denominator is a spurious pair, not a pole or zero
             double pair = Double.POSITIVE_INFINITY;
             for (int k = 0; k < other[0].length; k++) {
-                pair = Math.min(pair, Cx.abs(other[0][k] - sr, other[1][k] - si));
+                pair = Math.min(pair, ComplexPairs.abs(other[0][k] - sr, other[1][k] - si));
             }
             if (pair < DOUBLET) {
                 continue;
@@ -281,7 +281,7 @@ public final class PoleFinder {
         for (int k = 0; k < found.size(); k++) {
             Singularity s = found.get(k);
             if (s.kind() == c.kind() && s.point().sheet() == c.point().sheet()) {
-                double d = Cx.abs(s.point().re() - c.point().re(), s.point().im() - c.point().im());
+                double d = ComplexPairs.abs(s.point().re() - c.point().re(), s.point().im() - c.point().im());
                 if (d <= Math.max(1e-6 * (1 + c.point().z().norm()), 100 * (s.error() + c.error()))) {
                     return k;
                 }

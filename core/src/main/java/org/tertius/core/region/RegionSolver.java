@@ -15,7 +15,7 @@ import org.tertius.core.TertiusException;
 import org.tertius.core.face.ComputedSolution;
 import org.tertius.core.face.EngineReading;
 import org.tertius.core.face.SolutionValue;
-import org.tertius.core.number.Cx;
+import org.tertius.core.number.ComplexPairs;
 import org.tertius.core.number.SurfacePoint;
 import org.tertius.core.solution.StateEstimate;
 
@@ -239,7 +239,7 @@ public final class RegionSolver {
         if (p == null || start == null) {
             return 0;
         }
-        return Cx.abs(p.re() - start.re(), p.im() - start.im()) + Math.abs(p.sheet() - start.sheet()) * 10.0;
+        return ComplexPairs.abs(p.re() - start.re(), p.im() - start.im()) + Math.abs(p.sheet() - start.sheet()) * 10.0;
     }
 
     private static void checkCancelled(RegionSettings s) {

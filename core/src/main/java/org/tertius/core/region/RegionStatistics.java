@@ -1,5 +1,7 @@
 package org.tertius.core.region;
 
+import java.util.Locale;
+
 /**
  * What a region computation did: nodes of the tree, steps taken, points served from stored approximants,
  * points that needed their own path, points that could not be computed, and the wall time of each phase.
@@ -62,7 +64,7 @@ public final class RegionStatistics {
 
     @Override
     public String toString() {
-        return String.format(java.util.Locale.ROOT,
+        return String.format(Locale.ROOT,
                 "%d nodes (%d new), %d points from stored approximants, %d by own path, %d failed;"
                         + " tree %.3f s, grid %.3f s, tree %.1f MB",
                 nodes, newNodes, servedFromTree, integrated, failed, treeNanos / 1e9, gridNanos / 1e9, treeBytes / 1e6);

@@ -9,6 +9,7 @@ import org.tertius.core.equation.IndependentVariable;
 import org.tertius.core.equation.PolynomialSystem;
 import org.tertius.core.equation.StateProjection;
 import org.tertius.core.equation.Term;
+import org.tertius.core.number.ComplexPairs;
 import org.tertius.core.path.PathSelector;
 import org.tertius.core.step.Node;
 import org.tertius.core.step.SolverSettings;
@@ -216,7 +217,7 @@ public final class Solution {
             path.add(next);
             current = next;
             steps++;
-            double d = org.tertius.core.number.Cx.abs(tauRe - next.tauRe(), tauIm - next.tauIm());
+            double d = ComplexPairs.abs(tauRe - next.tauRe(), tauIm - next.tauIm());
             if (d < bestDistance * 0.999) {
                 bestDistance = d;
                 lastProgress = steps;
@@ -235,13 +236,13 @@ public final class Solution {
     }
 
     private static boolean inDisk(Node n, double tRe, double tIm) {
-        return org.tertius.core.number.Cx.abs(tRe - n.tauRe(), tIm - n.tauIm()) <= n.radius();
+        return ComplexPairs.abs(tRe - n.tauRe(), tIm - n.tauIm()) <= n.radius();
     }
 
     /** Largest radius allowed at tau: half the distance to a singular origin in PLAIN mode. */
     private double maxRadius(double tRe, double tIm) {
         if (singularAtOrigin) {
-            return 0.5 * org.tertius.core.number.Cx.abs(tRe, tIm);
+            return 0.5 * ComplexPairs.abs(tRe, tIm);
         }
         return 4.0;
     }
@@ -274,7 +275,7 @@ public final class Solution {
                 continue;
             }
             Node n = snapshot[id];
-            double d = org.tertius.core.number.Cx.abs(tRe - n.tauRe(), tIm - n.tauIm());
+            double d = ComplexPairs.abs(tRe - n.tauRe(), tIm - n.tauIm());
             if (d > n.radius()) {
                 continue;
             }
@@ -314,7 +315,7 @@ public final class Solution {
                 continue;
             }
             Node c = snapshot[id];
-            double d = org.tertius.core.number.Cx.abs(tauRe - c.tauRe(), tauIm - c.tauIm()) / c.radius();
+            double d = ComplexPairs.abs(tauRe - c.tauRe(), tauIm - c.tauIm()) / c.radius();
             if (d <= 1) {
                 rel[count] = d;
                 order[count++] = id;
@@ -334,7 +335,7 @@ public final class Solution {
             c.evaluateScaled(sr, si, out, trunc, err);
             boolean ok = true;
             for (int i = 0; i < n && ok; i++) {
-                ok = trunc[i] <= maxRelativeError * (1 + org.tertius.core.number.Cx.abs(out[2 * i], out[2 * i + 1]));
+                ok = trunc[i] <= maxRelativeError * (1 + ComplexPairs.abs(out[2 * i], out[2 * i + 1]));
             }
             if (ok) {
                 return toEstimate(tauRe, tauIm, out, err, c.id(), 0);
@@ -360,7 +361,7 @@ public final class Solution {
             if (Math.max(Math.abs(dx), Math.abs(dy)) - n.radius() > bestScore * (1 + 1e-12)) {
                 continue;
             }
-            double d = org.tertius.core.number.Cx.abs(dx, dy) - n.radius();
+            double d = ComplexPairs.abs(dx, dy) - n.radius();
             double decades = Math.max(0, Math.log10(Math.max(n.accumulatedError(), 1e-300) / PENALTY_FROM));
             double score = Math.max(d, 0) + 0.5 * n.radius() * decades;
             if (score < bestScore) {
@@ -388,7 +389,7 @@ public final class Solution {
         for (int i = 0; i < n; i++) {
             re[i] = out[2 * i];
             im[i] = out[2 * i + 1];
-            e[i] = err[i] + 4 * Math.ulp(1.0) * org.tertius.core.number.Cx.abs(re[i], im[i]);
+            e[i] = err[i] + 4 * Math.ulp(1.0) * ComplexPairs.abs(re[i], im[i]);
         }
         return new StateEstimate(tRe, tIm, re, im, e, nodeId, steps);
     }

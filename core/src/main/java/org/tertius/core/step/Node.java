@@ -1,5 +1,7 @@
 package org.tertius.core.step;
 
+import java.util.Arrays;
+import org.tertius.core.number.ComplexPairs;
 import org.tertius.core.pade.PadeApproximant;
 
 /**
@@ -59,7 +61,7 @@ public final class Node {
         this.suggestedRadius = suggestedRadius;
         double acc = 0;
         for (int i = 0; i < yRe.length; i++) {
-            acc = Math.max(acc, org.tertius.core.number.Cx.abs(errRe[i], errIm[i]) / (1 + org.tertius.core.number.Cx.abs(yRe[i], yIm[i])));
+            acc = Math.max(acc, ComplexPairs.abs(errRe[i], errIm[i]) / (1 + ComplexPairs.abs(yRe[i], yIm[i])));
         }
         this.accumulatedError = acc;
     }
@@ -133,8 +135,8 @@ public final class Node {
      */
     public void inheritedError(double sr, double si, double[] outRe, double[] outIm) {
         if (perturbed == null) {
-            java.util.Arrays.fill(outRe, 0);
-            java.util.Arrays.fill(outIm, 0);
+            Arrays.fill(outRe, 0);
+            Arrays.fill(outIm, 0);
             return;
         }
         double[] a = new double[4];
@@ -235,7 +237,7 @@ public final class Node {
             low[i].evaluate(sr, si, b);
             out[2 * i] = a[0];
             out[2 * i + 1] = a[1];
-            double e = org.tertius.core.number.Cx.abs(a[0] - b[0], a[1] - b[1]) + a[3] + b[3];
+            double e = ComplexPairs.abs(a[0] - b[0], a[1] - b[1]) + a[3] + b[3];
             if (trunc != null) {
                 trunc[i] = Double.isFinite(e) ? e : Double.POSITIVE_INFINITY;
             }
@@ -243,7 +245,7 @@ public final class Node {
                 double t = SAFETY * (e + a[4] + roundingFloor[i]);
                 if (perturbed != null && withInherited) {
                     perturbed[i].evaluate(sr, si, b);
-                    t += org.tertius.core.number.Cx.abs(b[0] - a[0], b[1] - a[1]) / eta;
+                    t += ComplexPairs.abs(b[0] - a[0], b[1] - a[1]) / eta;
                 }
                 total[i] = Double.isFinite(t) ? t : Double.POSITIVE_INFINITY;
             }

@@ -3,6 +3,7 @@ package org.tertius.core.step;
 import java.util.Arrays;
 import org.tertius.core.equation.PolynomialSystem;
 import org.tertius.core.equation.StateProjection;
+import org.tertius.core.number.ComplexPairs;
 import org.tertius.core.pade.PadeApproximant;
 import org.tertius.core.pade.PolynomialRoots;
 import org.tertius.core.pade.RobustPade;
@@ -116,7 +117,7 @@ public final class TaylorPadeStepper {
             double e = circleError(hi, lo);
             double factor = Math.pow(tol / Math.max(e, 1e-300), 1.0 / m);
             if (!(e <= tol)) {
-                if (r < 1e-13 * Math.max(1, org.tertius.core.number.Cx.abs(tRe, tIm))) {
+                if (r < 1e-13 * Math.max(1, ComplexPairs.abs(tRe, tIm))) {
                     break;
                 }
                 r *= Math.max(0.2, Math.min(0.9, 0.9 * factor));
@@ -130,7 +131,7 @@ public final class TaylorPadeStepper {
         for (int i = 0; i < n; i++) {
             double mx = 0;
             for (int k = 0; k <= order; k++) {
-                mx = Math.max(mx, org.tertius.core.number.Cx.abs(cRe[i][k], cIm[i][k]));
+                mx = Math.max(mx, ComplexPairs.abs(cRe[i][k], cIm[i][k]));
             }
             // rounding of the coefficients reaches the values in proportion to the largest one (common practice)
             floor[i] = ROUNDING_ULPS * Math.ulp(1.0) * mx;
@@ -162,7 +163,7 @@ public final class TaylorPadeStepper {
         node.evaluateScaled(sr, si, val, err, true);
         double e = 0;
         for (int i = 0; i < n; i++) {
-            double mod = org.tertius.core.number.Cx.abs(val[2 * i], val[2 * i + 1]);
+            double mod = ComplexPairs.abs(val[2 * i], val[2 * i + 1]);
             double rel = err[i] / (1 + mod);
             if (!Double.isFinite(rel)) {
                 return Double.POSITIVE_INFINITY;
@@ -189,7 +190,7 @@ public final class TaylorPadeStepper {
         double[] eIm = new double[n];
         propagate(from, sr, si, eRe, eIm);
         for (int i = 0; i < n; i++) {
-            double m = org.tertius.core.number.Cx.abs(eRe[i], eIm[i]);
+            double m = ComplexPairs.abs(eRe[i], eIm[i]);
             if (m > 0) {
                 eRe[i] += local[i] * eRe[i] / m;
                 eIm[i] += local[i] * eIm[i] / m;
@@ -211,7 +212,7 @@ public final class TaylorPadeStepper {
     private double perturbationSize(double[] yRe, double[] yIm, double[] eRe, double[] eIm) {
         double rel = 0;
         for (int i = 0; i < n; i++) {
-            rel = Math.max(rel, org.tertius.core.number.Cx.abs(eRe[i], eIm[i]) / (1 + org.tertius.core.number.Cx.abs(yRe[i], yIm[i])));
+            rel = Math.max(rel, ComplexPairs.abs(eRe[i], eIm[i]) / (1 + ComplexPairs.abs(yRe[i], yIm[i])));
         }
         return ETA / rel;
     }
@@ -244,7 +245,7 @@ public final class TaylorPadeStepper {
             for (int j = 0; j < roots[0].length; j++) {
                 double x = roots[0][j];
                 double y = roots[1][j];
-                if (Double.isFinite(x) && Double.isFinite(y) && org.tertius.core.number.Cx.abs(x, y) < SINGULARITY_WINDOW) {
+                if (Double.isFinite(x) && Double.isFinite(y) && ComplexPairs.abs(x, y) < SINGULARITY_WINDOW) {
                     sr = Arrays.copyOf(sr, sr.length + 1);
                     si = Arrays.copyOf(si, si.length + 1);
                     sr[sr.length - 1] = x;
@@ -273,7 +274,7 @@ public final class TaylorPadeStepper {
         for (int k = Math.max(1, order / 3); k <= order; k++) {
             double s = 0;
             for (int i = 0; i < n; i++) {
-                s = Math.max(s, org.tertius.core.number.Cx.abs(rawRe[i][k], rawIm[i][k]) / (1 + org.tertius.core.number.Cx.abs(rawRe[i][0], rawIm[i][0])));
+                s = Math.max(s, ComplexPairs.abs(rawRe[i][k], rawIm[i][k]) / (1 + ComplexPairs.abs(rawRe[i][0], rawIm[i][0])));
             }
             if (s > 0) {
                 g = Math.max(g, Math.pow(s, 1.0 / k));
@@ -324,7 +325,7 @@ public final class TaylorPadeStepper {
             for (int i = 0; i < n; i++) {
                 hi[i].evaluate(sr, si, a);
                 lo[i].evaluate(sr, si, b);
-                double rel = (org.tertius.core.number.Cx.abs(a[0] - b[0], a[1] - b[1]) + a[3] + b[3]) / (1 + org.tertius.core.number.Cx.abs(a[0], a[1]));
+                double rel = (ComplexPairs.abs(a[0] - b[0], a[1] - b[1]) + a[3] + b[3]) / (1 + ComplexPairs.abs(a[0], a[1]));
                 e = Math.max(e, Double.isFinite(rel) ? rel : Double.POSITIVE_INFINITY);
             }
             es[p] = e;

@@ -5,6 +5,7 @@ import java.util.Arrays;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.TreeMap;
 import java.util.TreeSet;
 import org.tertius.core.equation.IndependentVariable;
 import org.tertius.core.equation.PolynomialSystem;
@@ -59,7 +60,7 @@ public final class RecurrencePlan {
         List<Integer> tCoef = new ArrayList<>();
         List<int[]> tMono = new ArrayList<>();
         for (int e = 0; e < n; e++) {
-            Map<Integer, List<Term>> byPower = new java.util.TreeMap<>();
+            Map<Integer, List<Term>> byPower = new TreeMap<>();
             for (Term t : system.terms(e)) {
                 byPower.computeIfAbsent(t.basePower(), k -> new ArrayList<>()).add(t);
             }

@@ -1,7 +1,4 @@
 package org.tertius.core.mp;
-import org.tertius.core.number.MpContext;
-import org.tertius.core.number.MpComplex;
-
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.quicktheories.QuickTheory.qt;
@@ -12,6 +9,8 @@ import static org.quicktheories.generators.SourceDSL.longs;
 import java.math.BigInteger;
 import java.util.Random;
 import org.junit.jupiter.api.Test;
+import org.tertius.core.number.MpComplex;
+import org.tertius.core.number.MpContext;
 
 /** The limb fixed-point arithmetic of the high-precision kernel against exact BigInteger arithmetic. */
 class LimbArithmeticTest {

@@ -1,14 +1,12 @@
 package org.tertius.core.mp;
-import org.tertius.core.number.ExactNumber;
-import org.tertius.core.number.MpContext;
-import org.tertius.core.number.MpComplex;
-
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.quicktheories.QuickTheory.qt;
 import static org.quicktheories.generators.SourceDSL.doubles;
 import static org.quicktheories.generators.SourceDSL.longs;
 
+import java.math.BigDecimal;
 import java.math.BigInteger;
+import java.util.Random;
 import org.apfloat.Apcomplex;
 import org.apfloat.ApcomplexMath;
 import org.apfloat.Apfloat;
@@ -16,6 +14,9 @@ import org.hipparchus.complex.Complex;
 import org.junit.jupiter.api.Test;
 import org.tertius.core.equation.IndependentVariable;
 import org.tertius.core.equation.PolynomialSystem;
+import org.tertius.core.number.ExactNumber;
+import org.tertius.core.number.MpComplex;
+import org.tertius.core.number.MpContext;
 import org.tertius.core.taylor.DoubleTaylorKernel;
 import org.tertius.core.taylor.RecurrencePlan;
 
@@ -33,8 +34,8 @@ class MpArithmeticTest {
     }
 
     private static Apcomplex ap(double re, double im) {
-        return new Apcomplex(new Apfloat(new java.math.BigDecimal(re), DIGITS + 30),
-                new Apfloat(new java.math.BigDecimal(im), DIGITS + 30));
+        return new Apcomplex(new Apfloat(new BigDecimal(re), DIGITS + 30),
+                new Apfloat(new BigDecimal(im), DIGITS + 30));
     }
 
     @Test
@@ -259,7 +260,7 @@ class MpArithmeticTest {
         // operands with binary exponents up to +-5000 (beyond any double); reference: the same operations in
         // MpContext at 60 digits; budget 1e-14 relative (a few double roundings; sums of terms of equal size)
         qt().withExamples(300).forAll(longs().all()).checkAssert(seed -> {
-                    java.util.Random r = new java.util.Random(seed);
+                    Random r = new Random(seed);
                     double a = 2 * r.nextDouble() - 1;
                     double b = 2 * r.nextDouble() - 1;
                     double c = 2 * r.nextDouble() - 1;

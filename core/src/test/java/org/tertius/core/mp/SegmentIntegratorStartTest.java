@@ -1,7 +1,4 @@
 package org.tertius.core.mp;
-import org.tertius.core.number.MpContext;
-import org.tertius.core.number.MpComplex;
-
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -11,6 +8,8 @@ import org.hipparchus.complex.Complex;
 import org.junit.jupiter.api.Test;
 import org.tertius.core.equation.IndependentVariable;
 import org.tertius.core.equation.PolynomialSystem;
+import org.tertius.core.number.MpComplex;
+import org.tertius.core.number.MpContext;
 import org.tertius.core.taylor.RecurrencePlan;
 
 /** A run from a first series expanded ahead ({@link SegmentIntegrator#start}) is the run that expands it itself. */

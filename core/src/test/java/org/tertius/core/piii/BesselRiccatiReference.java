@@ -1,5 +1,6 @@
 package org.tertius.core.piii;
 
+import java.math.BigInteger;
 import org.apfloat.Apcomplex;
 import org.apfloat.ApcomplexMath;
 import org.apfloat.Apfloat;
@@ -94,12 +95,12 @@ public final class BesselRiccatiReference {
 
     /** A small exact rational type for deriving the parameters. */
     static final class Rational {
-        static final Rational ONE = new Rational(java.math.BigInteger.ONE, java.math.BigInteger.ONE);
-        final java.math.BigInteger p;
-        final java.math.BigInteger q;
+        static final Rational ONE = new Rational(BigInteger.ONE, BigInteger.ONE);
+        final BigInteger p;
+        final BigInteger q;
 
-        Rational(java.math.BigInteger p, java.math.BigInteger q) {
-            java.math.BigInteger g = p.gcd(q);
+        Rational(BigInteger p, BigInteger q) {
+            BigInteger g = p.gcd(q);
             if (q.signum() < 0) {
                 g = g.negate();
             }
@@ -129,7 +130,7 @@ public final class BesselRiccatiReference {
 
         @Override
         public String toString() {
-            return q.equals(java.math.BigInteger.ONE) ? p.toString() : p + "/" + q;
+            return q.equals(BigInteger.ONE) ? p.toString() : p + "/" + q;
         }
     }
 }

@@ -4,6 +4,13 @@ import static org.quicktheories.QuickTheory.qt;
 import static org.quicktheories.generators.SourceDSL.doubles;
 import static org.quicktheories.generators.SourceDSL.integers;
 
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.List;
+import java.util.Random;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
 import org.hipparchus.complex.Complex;
 import org.junit.jupiter.api.Test;
 import org.tertius.core.number.SurfacePoint;
@@ -148,19 +155,19 @@ class SolutionPropertiesTest {
         // lock); every value must agree with a sequential evaluation within the two estimates
         Painleve3Solution shared = generic(0.5, 0.3);
         Painleve3Solution alone = generic(0.5, 0.3);
-        java.util.List<SurfacePoint> pts = new java.util.ArrayList<>();
-        java.util.Random rnd = new java.util.Random(SEED);
+        List<SurfacePoint> pts = new ArrayList<>();
+        Random rnd = new Random(SEED);
         for (int k = 0; k < 40; k++) {
             pts.add(SurfacePoint.of(rnd.nextDouble() * 12 - 6 + 0.01, rnd.nextDouble() * 12 - 6, rnd.nextInt(3) - 1));
         }
-        java.util.concurrent.ExecutorService pool = java.util.concurrent.Executors.newFixedThreadPool(4);
-        java.util.List<java.util.concurrent.Future<java.util.List<Painleve3Value>>> futures = new java.util.ArrayList<>();
+        ExecutorService pool = Executors.newFixedThreadPool(4);
+        List<Future<List<Painleve3Value>>> futures = new ArrayList<>();
         for (int t = 0; t < 4; t++) {
-            java.util.List<SurfacePoint> order = new java.util.ArrayList<>(pts);
-            java.util.Collections.shuffle(order, new java.util.Random(t));
+            List<SurfacePoint> order = new ArrayList<>(pts);
+            Collections.shuffle(order, new Random(t));
             futures.add(pool.submit(() -> shared.evaluate(order)));
         }
-        for (java.util.concurrent.Future<java.util.List<Painleve3Value>> f : futures) {
+        for (Future<List<Painleve3Value>> f : futures) {
             for (Painleve3Value v : f.get()) {
                 // which thread grows which part of the tree varies from run to run, so only the honesty of the
                 // two estimates is asserted here (their size depends on the path taken)

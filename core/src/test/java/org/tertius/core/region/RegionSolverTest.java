@@ -15,6 +15,7 @@ import org.tertius.core.number.SurfacePoint;
 import org.tertius.core.piii.Painleve3;
 import org.tertius.core.piii.Painleve3Solution;
 import org.tertius.core.piii.Painleve3Value;
+import org.tertius.core.piii.RiccatiReferenceAccess;
 
 /** Grids against direct evaluations, determinism, cancellation and bad regions. */
 class RegionSolverTest {
@@ -126,7 +127,7 @@ class RegionSolverTest {
         // w = -u'/(a u) with u built from 0F1 (DLMF 10.16.9, §32.10): poles of w are zeros of u with residue -1/a.
         // Independent check: Newton's method on 1/w evaluated with Apfloat from each reported pole must move it
         // by less than its error estimate.
-        org.tertius.core.piii.RiccatiReferenceAccess ref = new org.tertius.core.piii.RiccatiReferenceAccess(
+        RiccatiReferenceAccess ref = new RiccatiReferenceAccess(
                 new Complex(1), new Complex(0.3), new Complex(1), new Complex(1), new Complex(0.7, 0.2));
         SurfacePoint p0 = SurfacePoint.of(1, 0.2);
         Complex[] s0 = ref.value(p0);

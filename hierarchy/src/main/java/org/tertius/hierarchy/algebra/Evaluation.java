@@ -1,14 +1,14 @@
 package org.tertius.hierarchy.algebra;
 
 import java.util.function.Function;
-import org.tertius.core.number.ExactNumber;
-import org.tertius.core.number.MpArithmetic;
-import org.tertius.core.number.MpComplex;
-import org.tertius.core.number.MpContext;
 import org.hipparchus.complex.Complex;
 import org.tertius.core.number.Arithmetic;
 import org.tertius.core.number.ComplexArithmetic;
+import org.tertius.core.number.ExactNumber;
 import org.tertius.core.number.MagnitudeArithmetic;
+import org.tertius.core.number.MpArithmetic;
+import org.tertius.core.number.MpComplex;
+import org.tertius.core.number.MpContext;
 
 /**
  * What {@link Polynomial#evaluate} needs of a number type: its arithmetic and the value of an exact coefficient

@@ -3,8 +3,8 @@ package org.tertius.core.number;
 /**
  * Small static helpers for complex numbers held as pairs of doubles in hot loops.
  */
-public final class Cx {
-    private Cx() {
+public final class ComplexPairs {
+    private ComplexPairs() {
     }
 
     /**

@@ -7,8 +7,8 @@ import org.apache.commons.cli.Options;
  * The kinds of option the tool has, as Commons CLI options: long options written with their dashes
  * ({@code "--alpha"}), with a value label for the help, or flags; -h/--help and -V/--version are the only short ones.
  */
-final class Opts {
-    private Opts() {
+final class OptionKinds {
+    private OptionKinds() {
     }
 
     /** An option with a value, e.g. {@code value("--alpha", "A", "alpha (complex a+bi or p/q)")}. */
