@@ -26,12 +26,14 @@ for module in core hierarchy connection; do
     for suffix in .jar -sources.jar -javadoc.jar .pom; do
         [ -s "$dir/tertius-$module-$version$suffix" ] || fail "tertius-$module-$version$suffix is not in $dir"
     done
-    name=$(unzip -p "$dir/tertius-$module-$version.jar" META-INF/MANIFEST.MF | tr -d '\r' \
-        | sed -n 's/^Automatic-Module-Name: //p')
+    manifest=$(mktemp -d)
+    (cd "$manifest" && jar xf "$dir/tertius-$module-$version.jar" META-INF/MANIFEST.MF)
+    name=$(tr -d '\r' < "$manifest/META-INF/MANIFEST.MF" | sed -n 's/^Automatic-Module-Name: //p')
+    rm -rf "$manifest"
     [ "$name" = "org.tertius.$module" ] || fail "tertius-$module's jar names module '$name', not org.tertius.$module"
     jar --describe-module --file "$dir/tertius-$module-$version.jar" 2> /dev/null | grep "^org.tertius.$module@" > /dev/null \
         || fail "the JDK does not read tertius-$module's jar as module org.tertius.$module"
-    [ "$(unzip -Z1 "$dir/tertius-$module-$version-javadoc.jar" | grep -cx 'index.html')" = 1 ] \
+    [ "$(jar tf "$dir/tertius-$module-$version-javadoc.jar" | grep -cx 'index.html')" = 1 ] \
         || fail "tertius-$module's javadoc jar has no index.html"
 done
 say "installed $version: tertius-bom; tertius-core, -hierarchy, -connection with sources, javadoc and module names org.tertius.*"
@@ -48,6 +50,6 @@ diff -u "$example" target/readme-example.java > target/readme-example.diff \
 
 # the consumer project, built and run against the installed artifacts
 out=$(mvn -B -q -Dstyle.color=never -f examples/consumer/pom.xml clean package exec:java 2>&1) || { echo "$out"; fail "the consumer example did not build or run"; }
-echo "$out" | sed 's/^/  /'
+echo "$out" | sed -e 's/\x1b\[[0-9;]*m//g' -e '/^[[:space:]]*$/d' -e 's/^/  /'
 [[ "$out" == *"correct digits"* ]] || fail "the consumer example printed no 40-digit value"
 say "examples/consumer built and run against the installed $version"

@@ -184,7 +184,8 @@ public final class ScanCommand implements Command {
             }
             Shard other = existing.shard("--out");
             if (!other.equals(part)) {
-                throw new InvalidInputException("--out", output + " holds shard " + other + ", not "
+                throw new InvalidInputException("--out", output + " holds " + (other.isWhole() ? "the whole sweep"
+                        : "shard " + other) + ", not "
                         + (part.isWhole() ? "the whole sweep" : "shard " + part) + "; give another file");
             }
             throw new InvalidInputException("--out", output + " has another title or CSV header than this sweep;"
