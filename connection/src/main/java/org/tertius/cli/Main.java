@@ -26,7 +26,7 @@ public final class Main {
 
     /** The commands in the order of the help text. */
     static final List<String> COMMANDS = List.of("eval", "table", "field", "poles", "describe", "connect", "scan",
-            "demo");
+            "merge", "demo");
 
     private Main() {
     }
@@ -48,6 +48,8 @@ public final class Main {
                 return new ConnectCommand();
             case "scan":
                 return new ScanCommand();
+            case "merge":
+                return new MergeCommand();
             case "demo":
                 return new DemoCommand();
             default:

@@ -127,7 +127,7 @@ class CommandLineToolTest {
                 && help.out.contains("--member <N>") && help.out.contains("the member, 1..8"), help.out);
         Run tool = run();
         assertEquals(0, tool.status);
-        assertTrue(tool.out.contains("Commands:") && tool.out.contains("  scan      Sweep lambda"), tool.out);
+        assertTrue(tool.out.contains("Commands:") && tool.out.contains("  scan      Sweep a family"), tool.out);
         assertTrue(run("eval", "-V").out.startsWith("tertius "));
         Run missing = run("describe");
         assertEquals(2, missing.status);

@@ -45,10 +45,10 @@ class CommandLineTest {
         assertEquals(0, run(new StringWriter(), err, "scan", "--range", "0.2:0.6:3", "--output",
                 csv.toString(), "--threads", "2"));
         List<String> first = Files.readAllLines(csv);
-        assertEquals(5, first.size());
-        assertTrue(first.get(2).contains(",true,"), first.get(2));
-        assertTrue(first.get(4).contains(",zero,"), first.get(4));
-        Files.write(csv, first.subList(0, 4)); // as if interrupted after two rows
+        assertEquals(6, first.size()); // title, signature, CSV header, three rows
+        assertTrue(first.get(3).contains(",true,"), first.get(3));
+        assertTrue(first.get(5).contains(",zero,"), first.get(5));
+        Files.write(csv, first.subList(0, 5)); // as if interrupted after two rows
         StringWriter err2 = new StringWriter();
         assertEquals(0, run(new StringWriter(), err2, "scan", "--range", "0.2:0.6:3", "--output",
                 csv.toString(), "--plot", png.toString()));

@@ -33,7 +33,7 @@ public final class HierarchyMember {
         this.equations = new MemberEquations(n);
     }
 
-    /** Member n, 1 <= n <= {@link #MAX_ORDER}. */
+    /** Member n, 1 &lt;= n &lt;= {@link #MAX_ORDER}. */
     public static HierarchyMember of(int n) {
         checkOrder(n);
         return new HierarchyMember(n);

@@ -30,7 +30,7 @@ public final class MemberParameters {
         this.exactM = b.exactM;
     }
 
-    /** A builder for member n (1 <= n <= {@link HierarchyMember#MAX_ORDER}). */
+    /** A builder for member n (1 &lt;= n &lt;= {@link HierarchyMember#MAX_ORDER}). */
     public static Builder builder(int n) {
         HierarchyMember.checkOrder(n);
         return new Builder(n);
@@ -45,7 +45,7 @@ public final class MemberParameters {
         return times;
     }
 
-    /** t_j for 2 <= j <= n. */
+    /** t_j for 2 &lt;= j &lt;= n. */
     public Complex time(int j) {
         if (j < 2 || j > order) {
             throw new InvalidInputException("j", "times t_2 .. t_" + order + " exist for member " + order

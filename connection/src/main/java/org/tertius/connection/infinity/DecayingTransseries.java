@@ -146,7 +146,7 @@ public final class DecayingTransseries<T> {
     /**
      * w = e^u and w' at x (Re x > 0), each sector truncated at its smallest term.
      *
-     * @throws InvalidInputException if Re x <= 0
+     * @throws InvalidInputException if Re x &lt;= 0
      */
     public LocalValue<T> at(T x) {
         return value(x, false);

@@ -16,7 +16,7 @@ import org.tertius.core.InvalidInputException;
  *       (see {@link DecayingClassifier}).</li>
  * </ul>
  */
-public final class Classification {
+public final class Classification implements ScanRow {
     public static final String CSV_HEADER = "index,parameter,pole_free,first_singularity,kind,at_zero,sigma,invariant";
     private final int index;
     private final double parameter;
@@ -39,6 +39,7 @@ public final class Classification {
         this.invariant = invariant;
     }
 
+    @Override
     public int index() {
         return index;
     }
@@ -55,6 +56,7 @@ public final class Classification {
         return firstSingularity;
     }
 
+    @Override
     public String kind() {
         return kind;
     }
@@ -76,20 +78,35 @@ public final class Classification {
         return new Classification(i, parameter, poleFree, firstSingularity, kind, atZero, sigma, invariant);
     }
 
+    @Override
     public String csvRow() {
         return String.format(Locale.ROOT, "%d,%.17g,%b,%.17g,%s,%s,%.17g,%.6e", index, parameter, poleFree,
                 firstSingularity, kind, atZero, sigma, invariant);
     }
 
-    /** Reads a row written by {@link #csvRow()}. */
+    /** The parameter and the kind of the first singularity, for progress lines. */
+    @Override
+    public String summary() {
+        return String.format(Locale.ROOT, "lambda=%.6g %s", parameter, kind);
+    }
+
+    /**
+     * Reads a row written by {@link #csvRow()}.
+     *
+     * @throws InvalidInputException ("scan file") if it is not such a row
+     */
     public static Classification parse(String row) {
-        String[] f = row.split(",");
-        if (f.length != 8) {
-            throw new InvalidInputException("scan file", "malformed row '" + row + "' (expected "
-                    + CSV_HEADER + ")");
+        String[] f = row.split(",", -1);
+        try {
+            if (f.length == 8) {
+                return new Classification(Integer.parseInt(f[0]), Double.parseDouble(f[1]),
+                        Boolean.parseBoolean(f[2]), Double.parseDouble(f[3]), f[4], f[5], Double.parseDouble(f[6]),
+                        Double.parseDouble(f[7]));
+            }
+        } catch (NumberFormatException e) {
+            // reported below
         }
-        return new Classification(Integer.parseInt(f[0]), Double.parseDouble(f[1]), Boolean.parseBoolean(f[2]),
-                Double.parseDouble(f[3]), f[4], f[5], Double.parseDouble(f[6]), Double.parseDouble(f[7]));
+        throw new InvalidInputException("scan file", "malformed row '" + row + "' (expected " + CSV_HEADER + ")");
     }
 
     @Override

@@ -1,16 +1,12 @@
 package org.tertius.connection.scan;
 
-import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.io.Writer;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
-import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Collections;
 import java.util.List;
 import java.util.Map;
-import java.util.TreeMap;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorCompletionService;
 import java.util.concurrent.ExecutorService;
@@ -19,23 +15,16 @@ import org.tertius.core.InvalidInputException;
 import org.tertius.core.TertiusException;
 
 /**
- * Runs a sweep of independent classification tasks (one per parameter value) on a thread pool and streams the
- * results as CSV rows in task order (a row is written as soon as it and all rows before it are done, so the
- * output is the same for any number of threads). Resume: rows already present in the output file are read
- * back and their tasks skipped. Each task is a pure function of its index, so a sweep can be split between
- * machines by index range.
+ * Runs the tasks of a sweep, or of one shard of it, on a thread pool and streams the rows as CSV lines in task
+ * order (a row is written as soon as it and all rows before it are done, so the output is the same for any
+ * number of threads). Rows already known (resume) are not run again. Each task is a pure function of its
+ * index, so shards run on different machines give, together, the rows of the whole sweep.
  */
 public final class ScanRunner {
-    /** A classification task. */
+    /** Progress: tasks done (including resumed ones) out of the shard's total. */
     @FunctionalInterface
-    public interface Task {
-        Classification run(int index, double parameter);
-    }
-
-    /** Progress: tasks done (including resumed ones) out of the total. */
-    @FunctionalInterface
-    public interface Progress {
-        void update(int done, int total, Classification last);
+    public interface Progress<R> {
+        void update(int done, int total, R last);
     }
 
     private final int threads;
@@ -47,49 +36,26 @@ public final class ScanRunner {
         this.threads = threads;
     }
 
-    /** Parameter values a, a + h, ..., b (n >= 2 values). */
-    public static List<Double> grid(double a, double b, int n) {
-        List<Double> out = new ArrayList<>();
-        for (int i = 0; i < n; i++) {
-            out.add(n == 1 ? a : a + (b - a) * i / (n - 1));
-        }
-        return out;
-    }
-
-    /** Rows of an existing output file (empty if it does not exist), keyed by task index. */
-    public static Map<Integer, Classification> readExisting(Path file) {
-        Map<Integer, Classification> done = new TreeMap<>();
-        if (file == null || !Files.exists(file)) {
-            return done;
-        }
-        try (BufferedReader r = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
-            String line;
-            while ((line = r.readLine()) != null) {
-                if (line.isBlank() || line.startsWith("#") || line.startsWith("index")) {
-                    continue;
-                }
-                Classification c = Classification.parse(line);
-                done.put(c.index(), c);
-            }
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
-        }
-        return done;
-    }
-
     /**
-     * Runs the tasks not in {@code done} and writes every row (old and new, in index order) to {@code out}.
-     * A task that fails is written with kind "failed" and the message goes to the progress listener's row.
+     * Runs the tasks of {@code shard} that are not in {@code done} and writes the rows of the shard in task order
+     * to {@code out}, leaving out the first {@code written} of them (the output holds them already). A task that
+     * fails with a {@link TertiusException} gets the sweep's failed row.
      *
-     * @return all classifications in index order
+     * @param done rows known already, by task index (tasks outside the shard are ignored)
+     * @return the rows of the shard's tasks in task order
      */
-    public List<Classification> run(List<Double> parameters, Task task, Map<Integer, Classification> done,
-                                    Writer out, Progress progress) throws InterruptedException {
-        int total = parameters.size();
-        Classification[] result = new Classification[total];
-        for (Map.Entry<Integer, Classification> e : done.entrySet()) {
-            if (e.getKey() < total) {
-                result[e.getKey()] = e.getValue();
+    public <R extends ScanRow> List<R> run(Sweep<R> sweep, Shard shard, Map<Integer, R> done, int written,
+                                           Writer out, Progress<? super R> progress) throws InterruptedException {
+        int[] tasks = shard.tasks(sweep.size());
+        int total = tasks.length;
+        List<R> result = new ArrayList<>(Collections.nCopies(total, null));
+        int pending = 0;
+        for (int k = 0; k < total; k++) {
+            R known = done.get(tasks[k]);
+            if (known != null) {
+                result.set(k, known);
+            } else {
+                pending++;
             }
         }
         ExecutorService pool = Executors.newFixedThreadPool(threads, r -> {
@@ -98,42 +64,51 @@ public final class ScanRunner {
             return t;
         });
         try {
-            ExecutorCompletionService<Classification> cs = new ExecutorCompletionService<>(pool);
-            int submitted = 0;
-            for (int i = 0; i < total; i++) {
-                if (result[i] == null) {
-                    int idx = i;
-                    double p = parameters.get(i);
-                    cs.submit(() -> safeRun(task, idx, p));
-                    submitted++;
+            ExecutorCompletionService<Slot<R>> cs = new ExecutorCompletionService<>(pool);
+            for (int k = 0; k < total; k++) {
+                if (result.get(k) == null) {
+                    int slot = k;
+                    int task = tasks[k];
+                    cs.submit(() -> new Slot<>(slot, safeRun(sweep, task)));
                 }
             }
-            int written = writeReady(result, 0, out);
-            int count = total - submitted;
-            for (int k = 0; k < submitted; k++) {
-                Classification c = take(cs);
-                result[c.index()] = c;
+            int next = writeReady(result, written, out);
+            int count = total - pending;
+            for (int k = 0; k < pending; k++) {
+                Slot<R> s = take(cs);
+                result.set(s.slot, s.row);
                 count++;
-                written = writeReady(result, written, out);
+                next = writeReady(result, next, out);
                 if (progress != null) {
-                    progress.update(count, total, c);
+                    progress.update(count, total, s.row);
                 }
             }
         } finally {
             pool.shutdownNow();
         }
-        return List.of(result);
+        return Collections.unmodifiableList(result);
     }
 
-    private static Classification safeRun(Task task, int idx, double p) {
-        try {
-            return task.run(idx, p).withIndex(idx);
-        } catch (TertiusException e) {
-            return new Classification(idx, p, false, Double.NaN, "failed", "unknown", Double.NaN, Double.NaN);
+    /** A finished task and its place in the shard. */
+    private static final class Slot<R> {
+        final int slot;
+        final R row;
+
+        Slot(int slot, R row) {
+            this.slot = slot;
+            this.row = row;
         }
     }
 
-    private static Classification take(ExecutorCompletionService<Classification> cs) throws InterruptedException {
+    private static <R extends ScanRow> R safeRun(Sweep<R> sweep, int task) {
+        try {
+            return sweep.classify(task);
+        } catch (TertiusException e) {
+            return sweep.failed(task);
+        }
+    }
+
+    private static <R> Slot<R> take(ExecutorCompletionService<Slot<R>> cs) throws InterruptedException {
         try {
             return cs.take().get();
         } catch (ExecutionException e) {
@@ -141,11 +116,11 @@ public final class ScanRunner {
         }
     }
 
-    private static int writeReady(Classification[] result, int from, Writer out) {
+    private static <R extends ScanRow> int writeReady(List<R> result, int from, Writer out) {
         int i = from;
         try {
-            while (i < result.length && result[i] != null) {
-                out.write(result[i].csvRow());
+            while (i < result.size() && result.get(i) != null) {
+                out.write(result.get(i).csvRow());
                 out.write('\n');
                 i++;
             }

@@ -251,7 +251,7 @@ public final class MpContext {
     // ---- elementary functions -----------------------------------------------------------------------------
 
     /**
-     * e^x by the Taylor series after halving the argument until |x| < 2^-m (m about the square root of the bit
+     * e^x by the Taylor series after halving the argument until |x| &lt; 2^-m (m about the square root of the bit
      * count), then squaring back m times (common practice); the work is done with m + 16 extra bits.
      */
     public MpComplex exp(MpComplex x) {
