@@ -55,6 +55,7 @@ public final class EvalCommand implements Command {
         ValueRows rows = new ValueRows(s);
         if (precision.given(f)) {
             List<ExactPoint> points = Targets.exactList("--at", targets, k, s.coordinate());
+            WorkLimits.checkPrecise("--at", points, precision.digits);
             try (Progress progress = new Progress("eval")) {
                 HighPrecisionSolution hp = precision.solution(s, progress);
                 for (String c : rows.preciseComments(hp.digits())) {

@@ -82,6 +82,10 @@ public final class FieldCommand implements Command {
         if (g.nx() < 2 || g.ny() < 2) {
             throw new InvalidInputException("--grid", "a picture needs at least 2 x 2 points");
         }
+        String note = RegionOptions.branchPointNote(g, s.coordinate());
+        if (note != null) {
+            err.println("tertius: " + note);
+        }
         GridResult r;
         try (Progress progress = new Progress("field")) {
             r = RegionSolver.solve(s, g, RegionSettings.builder().progress(progress::update).build());

@@ -7,6 +7,7 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Map;
+import java.util.concurrent.CancellationException;
 import org.apache.commons.cli.Options;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.TertiusException;
@@ -14,12 +15,15 @@ import org.tertius.core.TertiusException;
 /**
  * The tertius command-line tool. Exit status: 0 success, 2 bad input (one line on standard error naming the
  * argument), 3 some targets could not be computed to the requested accuracy (reported, never silent),
- * 130 interrupted.
+ * 130 interrupted, 70 an error of the tool itself (reported in one line; the command-line tests make sure none is
+ * left).
  */
 public final class Main {
     public static final int EXIT_BAD_INPUT = 2;
     public static final int EXIT_UNREACHED = 3;
     public static final int EXIT_INTERRUPTED = 130;
+    /** An error of the tool itself (a bug): one line on standard error, never a stack trace. */
+    public static final int EXIT_INTERNAL = 70;
 
     static final String DESCRIPTION = "Painleve III transcendents on their Riemann surface: values, tables, pole"
             + " fields, connection problems and solution scans, with error estimates.";
@@ -86,10 +90,18 @@ public final class Main {
             Thread.currentThread().interrupt();
             err.println("tertius: interrupted");
             return EXIT_INTERRUPTED;
-        } catch (RuntimeException e) {
-            throw e;
+        } catch (CancellationException e) {
+            err.println("tertius: interrupted");
+            return EXIT_INTERRUPTED;
+        } catch (OutOfMemoryError e) {
+            err.println("tertius: out of memory (" + (Runtime.getRuntime().maxMemory() >> 20) + " MB allowed): ask for"
+                    + " fewer points or a smaller region, or raise the JVM's -Xmx");
+            return EXIT_INTERNAL;
         } catch (Exception e) {
-            throw new IllegalStateException(e);
+            // never a stack trace for the user: one line, and a status that tests and scripts can tell apart
+            err.println("tertius: internal error (" + e.getClass().getSimpleName() + ": " + e.getMessage()
+                    + "); please report it with the command line");
+            return EXIT_INTERNAL;
         } finally {
             out.flush();
             err.flush();

@@ -23,6 +23,13 @@ final class OutputFile {
         if (Files.isDirectory(path)) {
             throw new InvalidInputException(option, "cannot write " + path + ": it is a folder");
         }
+        // the permissions may say yes where the file system says no (a read-only or virtual file system): try it
+        try {
+            Path probe = Files.createTempFile(dir, "." + path.getFileName(), ".probe");
+            Files.delete(probe);
+        } catch (IOException | SecurityException e) {
+            throw new InvalidInputException(option, "cannot write " + path + ": " + e.getMessage());
+        }
     }
 
     /** Writes through a temporary file in the same folder, then moves it into place. */

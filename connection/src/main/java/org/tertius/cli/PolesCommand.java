@@ -62,6 +62,10 @@ public final class PolesCommand implements Command {
         }
         ComputedSolution s = solution.solution();
         Grid g = region.grid(gridSpec, solution.sheet(region.sheet), s.coordinate());
+        String note = RegionOptions.branchPointNote(g, s.coordinate());
+        if (note != null) {
+            err.println("tertius: " + note);
+        }
         List<Singularity> found;
         try (Progress progress = new Progress("poles")) {
             RegionSolver.solve(s, g, RegionSettings.builder().progress(progress::update).build());

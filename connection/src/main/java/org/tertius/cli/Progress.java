@@ -1,7 +1,5 @@
 package org.tertius.cli;
 
-import java.time.Duration;
-import java.util.Optional;
 import me.tongfei.progressbar.ConsoleProgressBarConsumer;
 import me.tongfei.progressbar.ProgressBar;
 import me.tongfei.progressbar.ProgressBarBuilder;
@@ -34,7 +32,7 @@ final class Progress implements AutoCloseable {
             }
             bar = new ProgressBarBuilder().setTaskName(task).setInitialMax(total).setStyle(ProgressBarStyle.ASCII)
                     .setUpdateIntervalMillis(200).setConsumer(new ConsoleProgressBarConsumer(System.err))
-                    .setEtaFunction(state -> Optional.<Duration>empty()).build();
+                    .showSpeed().build();
         }
         bar.maxHint(total);
         bar.stepTo(done);

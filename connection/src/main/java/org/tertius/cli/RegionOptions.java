@@ -50,6 +50,21 @@ final class RegionOptions implements OptionGroup {
         return grid != null ? grid : (!lineGiven && logStrip == null ? f.get("grid") : null);
     }
 
+    /**
+     * A note when the region holds the branch point z = 0 of a solution on a logarithmic surface (no value exists
+     * there, and poles or zeros may accumulate at it), else null.
+     */
+    static String branchPointNote(Grid g, Coordinate coordinate) {
+        if (!coordinate.hasSheets() || g.logarithmic() || !(g.re0() <= 0 && g.re1() >= 0 && g.im0() <= 0
+                && g.im1() >= 0)) {
+            return null;
+        }
+        String z = coordinate.name();
+        return z + " = 0, the branch point, lies in the region: there is no value at it (a grid point there is left"
+                + " as nan), and poles or zeros that accumulate at it are seen only as far as the path tree resolves them"
+                + " (take a --log-strip to follow them towards 0)";
+    }
+
     /** The region from the grid text (with the sheet) or --log-strip; exactly one may be given. */
     Grid grid(String gridSpec, int sheetNumber, Coordinate coordinate) {
         if (gridSpec != null && logStrip != null) {
@@ -60,9 +75,13 @@ final class RegionOptions implements OptionGroup {
                 throw new InvalidInputException("--log-strip", "the solution is single-valued in " + coordinate.name()
                         + " (no branch point at 0); give a --grid");
             }
-            return Grid.parseLogStrip("--log-strip", logStrip);
+            Grid strip = Grid.parseLogStrip("--log-strip", logStrip);
+            WorkLimits.checkRegion("--log-strip", strip);
+            return strip;
         }
         coordinate.point("--sheet", 1, 0, sheetNumber);
-        return Grid.parse("--grid", gridSpec, sheetNumber);
+        Grid g = Grid.parse("--grid", gridSpec, sheetNumber);
+        WorkLimits.checkRegion("--grid", g);
+        return g;
     }
 }

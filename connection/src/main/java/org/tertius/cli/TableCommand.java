@@ -76,13 +76,28 @@ public final class TableCommand implements Command {
                     + " RE0:RE1:NX,IM0:IM1:NY and --log-strip");
         }
         int k = solution.sheet(region.sheet);
+        if (out != null) {
+            OutputFile.checkWritable("--out", out);
+        }
         ComputedSolution s = solution.solution();
         ValueRows rows = new ValueRows(s);
         if (precision.given(f)) {
             if (lineSpec == null) {
                 throw new InvalidInputException("--digits", "applies to --line tables (and eval), not to grids");
             }
-            return preciseLine(s, rows, Targets.exactLine("--line", lineSpec, k, s.coordinate()), lineSpec, k);
+            List<ExactPoint> exact = Targets.exactLine("--line", lineSpec, k, s.coordinate());
+            WorkLimits.checkPrecise("--line", exact, precision.digits);
+            return preciseLine(s, rows, exact, lineSpec, k);
+        }
+        // every argument is read and checked before the first line is written
+        List<SurfacePoint> linePoints = lineSpec == null ? null : Targets.line("--line", lineSpec, k, s.coordinate());
+        Grid grid = lineSpec != null ? null : region.grid(gridSpec, k, s.coordinate());
+        if (grid != null) {
+            grid.checkMemory("--grid", s.valueNames().size());
+            String note = RegionOptions.branchPointNote(grid, s.coordinate());
+            if (note != null) {
+                console.println("tertius: " + note);
+            }
         }
         String signature = "tertius table " + solution.describe() + (lineSpec != null ? " line=" + lineSpec
                 : " grid=" + gridSpec + " log-strip=" + region.logStrip) + " sheet=" + k;
@@ -93,10 +108,10 @@ public final class TableCommand implements Command {
             Thread hook = new Thread(w::flushQuietly);
             Runtime.getRuntime().addShutdownHook(hook);
             try {
-                if (lineSpec != null) {
-                    status = line(s, rows, Targets.line("--line", lineSpec, k, s.coordinate()), w, progress);
+                if (linePoints != null) {
+                    status = line(s, rows, linePoints, w, progress);
                 } else {
-                    status = grid(s, rows, region.grid(gridSpec, k, s.coordinate()), w, progress);
+                    status = grid(s, rows, grid, w, progress);
                 }
             } finally {
                 try {
@@ -158,7 +173,6 @@ public final class TableCommand implements Command {
     }
 
     private int grid(ComputedSolution s, ValueRows rows, Grid g, TableWriter w, Progress progress) {
-        g.checkMemory("--grid", s.valueNames().size());
         long skip = w.existingRows();
         int nx = g.nx();
         int failed = 0;

@@ -25,6 +25,7 @@ final class Targets {
             Complex z = ComplexText.parse(option, part);
             out.add(point(option, z, sheet, coordinate, "target 0 is the branch point of the equation; choose z != 0"));
         }
+        WorkLimits.checkTargets(option, out);
         return out;
     }
 
@@ -56,6 +57,7 @@ final class Targets {
         if (n > 1 && a.equals(b)) {
             throw new InvalidInputException(option, "empty range: the end points are equal");
         }
+        WorkLimits.checkLine(option, n, a.getReal(), a.getImaginary(), b.getReal(), b.getImaginary());
         List<SurfacePoint> out = new ArrayList<>();
         for (int i = 0; i < n; i++) {
             double t = n == 1 ? 0 : (double) i / (n - 1);
@@ -74,6 +76,8 @@ final class Targets {
         if (n > 1 && a.equals(b)) {
             throw new InvalidInputException(option, "empty range: the end points are equal");
         }
+        WorkLimits.checkLine(option, n, a.toComplex().getReal(), a.toComplex().getImaginary(), b.toComplex().getReal(),
+                b.toComplex().getImaginary());
         List<ExactPoint> out = new ArrayList<>();
         ExactNumber step = b.subtract(a);
         for (int i = 0; i < n; i++) {
@@ -105,7 +109,8 @@ final class Targets {
         try {
             n = Integer.parseInt(text.trim());
         } catch (NumberFormatException e) {
-            throw new InvalidInputException(option, "the point count must be an integer, got '" + text + "'");
+            throw new InvalidInputException(option, "the point count must be an integer in [" + min + ", "
+                    + WorkLimits.MAX_LINE_POINTS + "], got '" + text + "'");
         }
         if (n < min) {
             throw new InvalidInputException(option, "the point count must be at least " + min + ", got " + n);
