@@ -86,7 +86,12 @@ public final class RationalSolution extends ClosedFormSolution {
     }
 
     @Override
-    public ExactParameters parameters() {
+    public ParameterSet parameters() {
+        return ParameterSet.of(parameters);
+    }
+
+    /** The parameters, exactly. */
+    public ExactParameters exactParameters() {
         return parameters;
     }
 

@@ -13,8 +13,8 @@ public interface SpecialSolution {
     /** Largest number of digits accepted by {@link #evaluate(SurfacePoint, int)}. */
     int MAX_DIGITS = 10000;
 
-    /** The equation solved, with its parameters exactly. */
-    ExactParameters parameters();
+    /** The parameters of the equation solved (exact, or exact parts and multiples of square roots). */
+    ParameterSet parameters();
 
     /** The equation solved (parameters rounded to double). */
     default Painleve3 equation() {

@@ -22,11 +22,11 @@ final class Residuals {
         ClosedFormSolution.Estimate<MpComplex> plus = s.compute(ar, ar.add(z, h), p.sheet());
         ClosedFormSolution.Estimate<MpComplex> minus = s.compute(ar, ar.subtract(z, h), p.sheet());
         MpComplex d2w = ar.divide(ar.subtract(plus.dw(), minus.dw()), ar.multiply(ar.of(2, 0), h));
-        ExactParameters q = s.parameters();
-        MpComplex alpha = Conversions.of(ar, q.alpha());
-        MpComplex beta = Conversions.of(ar, q.beta());
-        MpComplex gamma = Conversions.of(ar, q.gamma());
-        MpComplex delta = Conversions.of(ar, q.delta());
+        ParameterSet q = s.parameters();
+        MpComplex alpha = q.alpha(ar);
+        MpComplex beta = q.beta(ar);
+        MpComplex gamma = q.gamma(ar);
+        MpComplex delta = q.delta(ar);
         MpComplex w = v.w();
         MpComplex dw = v.dw();
         MpComplex r = EquationValues.residual(ar, alpha, beta, gamma, delta, z, w, dw, d2w);
