@@ -1,5 +1,6 @@
 package org.tertius.connection.special;
 
+import java.math.BigInteger;
 import java.util.ArrayList;
 import java.util.List;
 import org.tertius.core.InvalidInputException;
@@ -72,8 +73,8 @@ public final class AlgebraicSolution extends ClosedFormSolution {
         if (!Conversions.isInteger(k2) || k2.re().signum() < 0) {
             return -1;
         }
-        java.math.BigInteger n = k2.re().getNumerator();
-        java.math.BigInteger r = n.sqrt();
+        BigInteger n = k2.re().getNumerator();
+        BigInteger r = n.sqrt();
         return r.multiply(r).equals(n) && r.bitLength() < 20 ? r.longValue() : -1;
     }
 

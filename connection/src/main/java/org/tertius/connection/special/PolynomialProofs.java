@@ -2,6 +2,7 @@ package org.tertius.connection.special;
 
 import java.math.BigInteger;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 
 /**
@@ -83,7 +84,7 @@ public final class PolynomialProofs {
         while (n > 0 && a[n - 1] == 0) {
             n--;
         }
-        return java.util.Arrays.copyOf(a, n);
+        return Arrays.copyOf(a, n);
     }
 
     /** Degree of gcd(a, b) over F_p (Euclid); -1 if both are zero. */
@@ -115,7 +116,7 @@ public final class PolynomialProofs {
         while (n > 0 && r[n - 1] == 0) {
             n--;
         }
-        return java.util.Arrays.copyOf(r, n);
+        return Arrays.copyOf(r, n);
     }
 
     /**
@@ -136,10 +137,10 @@ public final class PolynomialProofs {
         BigInteger[][] mr = new BigInteger[n][n];
         BigInteger[][] mi = new BigInteger[n][n];
         for (BigInteger[] row : mr) {
-            java.util.Arrays.fill(row, BigInteger.ZERO);
+            Arrays.fill(row, BigInteger.ZERO);
         }
         for (BigInteger[] row : mi) {
-            java.util.Arrays.fill(row, BigInteger.ZERO);
+            Arrays.fill(row, BigInteger.ZERO);
         }
         for (int row = 0; row < d - 1; row++) {
             for (int k = 0; k <= d; k++) {

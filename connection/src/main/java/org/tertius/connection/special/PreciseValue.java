@@ -1,5 +1,6 @@
 package org.tertius.connection.special;
 
+import java.math.RoundingMode;
 import org.apfloat.Apcomplex;
 import org.apfloat.Apfloat;
 import org.apfloat.ApfloatMath;
@@ -102,7 +103,7 @@ public record PreciseValue(SurfacePoint point, Apcomplex w, Apcomplex dw, double
         if (keep < 1) {
             return "0";
         }
-        Apfloat r = ApfloatMath.round(v, Math.min(keep, v.precision()), java.math.RoundingMode.HALF_EVEN);
+        Apfloat r = ApfloatMath.round(v, Math.min(keep, v.precision()), RoundingMode.HALF_EVEN);
         return r.toString(false);
     }
 }

@@ -3,6 +3,7 @@ package org.tertius.connection.special;
 import java.util.ArrayList;
 import java.util.List;
 import org.tertius.core.piii.Painleve3Type;
+import org.tertius.hierarchy.algebra.GaussianRational;
 
 /**
  * Which special solutions exist for given parameters, and why: the rational solutions built from the special
@@ -98,8 +99,8 @@ public final class SpecialSolutions {
                 e.append("; ");
             }
             long n = (f.sum() - 2) / 4;
-            BesselTypeSolution s = BesselTypeSolution.of(p, f, org.tertius.hierarchy.algebra.GaussianRational.ONE,
-                    org.tertius.hierarchy.algebra.GaussianRational.ZERO);
+            BesselTypeSolution s = BesselTypeSolution.of(p, f, GaussianRational.ONE,
+                    GaussianRational.ZERO);
             e.append(f.text()).append(": alpha/a + beta/c = ").append(f.sum()).append(", a one-parameter family")
                     .append(" (u = A U1 + B U2) of Bessel order nu = ").append(s.order())
                     .append(Conversions.isInteger(s.order()) ? " (integer: logarithmic second solution)" : "")

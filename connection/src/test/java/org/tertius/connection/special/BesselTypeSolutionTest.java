@@ -4,7 +4,17 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.io.BufferedReader;
+import java.io.IOException;
+import java.io.InputStreamReader;
+import java.math.BigDecimal;
+import java.math.BigInteger;
+import java.math.RoundingMode;
+import java.nio.charset.StandardCharsets;
+import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
+import java.util.TreeMap;
 import org.apfloat.Apcomplex;
 import org.apfloat.ApcomplexMath;
 import org.apfloat.Apfloat;
@@ -14,6 +24,7 @@ import org.hipparchus.fraction.BigFraction;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.tertius.core.InvalidInputException;
+import org.tertius.core.mp.MpComplex;
 import org.tertius.core.number.SurfacePoint;
 import org.tertius.core.piii.Painleve3Solution;
 import org.tertius.core.piii.Painleve3Value;
@@ -58,20 +69,20 @@ class BesselTypeSolutionTest {
      * at the first point (A : B solved from the basis there) must reproduce the reference at the others.
      */
     @Test
-    void integerOrderAgreesWithMpmathBesselFunctions() throws java.io.IOException {
-        java.util.Map<Integer, List<String[]>> rows = new java.util.TreeMap<>();
-        try (java.io.BufferedReader r = new java.io.BufferedReader(new java.io.InputStreamReader(
+    void integerOrderAgreesWithMpmathBesselFunctions() throws IOException {
+        Map<Integer, List<String[]>> rows = new TreeMap<>();
+        try (BufferedReader r = new BufferedReader(new InputStreamReader(
                 getClass().getResourceAsStream("/special/bessel-type-integer-order.csv"),
-                java.nio.charset.StandardCharsets.UTF_8))) {
+                StandardCharsets.UTF_8))) {
             for (String line = r.readLine(); line != null; line = r.readLine()) {
                 if (!line.startsWith("#") && !line.isBlank()) {
                     String[] f = line.split(",");
-                    rows.computeIfAbsent(Integer.parseInt(f[0]), k -> new java.util.ArrayList<>()).add(f);
+                    rows.computeIfAbsent(Integer.parseInt(f[0]), k -> new ArrayList<>()).add(f);
                 }
             }
         }
         assertEquals(4, rows.size());
-        for (java.util.Map.Entry<Integer, List<String[]>> e : rows.entrySet()) {
+        for (Map.Entry<Integer, List<String[]>> e : rows.entrySet()) {
             int nu = e.getKey();
             ExactParameters p = ExactParameters.of(2L * nu, 2 - 2L * nu, 1, -1);
             String[] first = e.getValue().get(0);
@@ -91,22 +102,22 @@ class BesselTypeSolutionTest {
     /** A : B of u = A U1 + B U2 (a = c = 1) with -u'/u = w0 at p0: A = U2' + w0 U2, B = -(U1' + w0 U1). */
     private static GaussianRational[] throughValue(int nu, SurfacePoint p0, String re, String im) {
         MpArithmetic ar = new MpArithmetic(80);
-        org.tertius.core.mp.MpComplex z = ar.of(p0.re(), p0.im());
-        List<Tracked<org.tertius.core.mp.MpComplex>> basis = RiccatiSeries.basis(ar, ar.one(),
+        MpComplex z = ar.of(p0.re(), p0.im());
+        List<Tracked<MpComplex>> basis = RiccatiSeries.basis(ar, ar.one(),
                 GaussianRational.of(nu, 0), z, ar.log(z));
-        org.tertius.core.mp.MpComplex w0 = ar.context().fromApcomplex(new Apcomplex(new Apfloat(re, 50),
+        MpComplex w0 = ar.context().fromApcomplex(new Apcomplex(new Apfloat(re, 50),
                 new Apfloat(im, 50)));
-        org.tertius.core.mp.MpComplex a = ar.add(basis.get(1).derivative, ar.multiply(w0, basis.get(1).value));
-        org.tertius.core.mp.MpComplex b = ar.negate(ar.add(basis.get(0).derivative, ar.multiply(w0,
+        MpComplex a = ar.add(basis.get(1).derivative, ar.multiply(w0, basis.get(1).value));
+        MpComplex b = ar.negate(ar.add(basis.get(0).derivative, ar.multiply(w0,
                 basis.get(0).value)));
         return new GaussianRational[] {rational(ar.context().toApcomplex(a)), rational(ar.context().toApcomplex(b))};
     }
 
     private static GaussianRational rational(Apcomplex x) {
-        return GaussianRational.of(new BigFraction(new java.math.BigDecimal(x.real().toString(true))
-                .unscaledValue(), java.math.BigInteger.TEN.pow(Math.max(0, new java.math.BigDecimal(
-                x.real().toString(true)).scale()))), new BigFraction(new java.math.BigDecimal(x.imag().toString(true))
-                .unscaledValue(), java.math.BigInteger.TEN.pow(Math.max(0, new java.math.BigDecimal(
+        return GaussianRational.of(new BigFraction(new BigDecimal(x.real().toString(true))
+                .unscaledValue(), BigInteger.TEN.pow(Math.max(0, new BigDecimal(
+                x.real().toString(true)).scale()))), new BigFraction(new BigDecimal(x.imag().toString(true))
+                .unscaledValue(), BigInteger.TEN.pow(Math.max(0, new BigDecimal(
                 x.imag().toString(true)).scale()))));
     }
 
@@ -202,11 +213,11 @@ class BesselTypeSolutionTest {
     private static Apcomplex[] hypergeometricReference(BesselTypeSolution s, SurfacePoint p) {
         long prec = DIGITS + 20;
         FixedPrecisionApcomplexHelper h = new FixedPrecisionApcomplexHelper(prec);
-        Apcomplex z = new Apcomplex(new Apfloat(new java.math.BigDecimal(p.re()), prec),
-                new Apfloat(new java.math.BigDecimal(p.im()), prec));
+        Apcomplex z = new Apcomplex(new Apfloat(new BigDecimal(p.re()), prec),
+                new Apfloat(new BigDecimal(p.im()), prec));
         Apcomplex nu = h.valueOf(new Apcomplex(new Apfloat(s.order().re().bigDecimalValue((int) prec + 5,
-                java.math.RoundingMode.HALF_EVEN), prec), new Apfloat(s.order().im().bigDecimalValue((int) prec + 5,
-                java.math.RoundingMode.HALF_EVEN), prec)));
+                RoundingMode.HALF_EVEN), prec), new Apfloat(s.order().im().bigDecimalValue((int) prec + 5,
+                RoundingMode.HALF_EVEN), prec)));
         Apcomplex one = h.valueOf(Apcomplex.ONE);
         Apcomplex two = h.valueOf(new Apcomplex(new Apfloat(2, prec)));
         Apcomplex x = h.divide(h.negate(h.multiply(z, z)), h.valueOf(new Apcomplex(new Apfloat(4, prec))));
@@ -221,8 +232,8 @@ class BesselTypeSolutionTest {
         Apcomplex logz = h.add(h.log(z), new Apcomplex(Apfloat.ZERO, twoPiK));
         Apcomplex zp = h.exp(h.multiply(h.multiply(two, nu), logz));
         Apcomplex a = h.valueOf(new Apcomplex(new Apfloat(A.re().doubleValue(), prec)));
-        Apcomplex bb = h.valueOf(new Apcomplex(new Apfloat(new java.math.BigDecimal("0.7"), prec),
-                new Apfloat(new java.math.BigDecimal("0.2"), prec)));
+        Apcomplex bb = h.valueOf(new Apcomplex(new Apfloat(new BigDecimal("0.7"), prec),
+                new Apfloat(new BigDecimal("0.2"), prec)));
         Apcomplex u = h.add(h.multiply(a, h.multiply(zp, f1)), h.multiply(bb, f2));
         Apcomplex du = h.add(h.multiply(a, h.add(h.multiply(h.divide(h.multiply(two, nu), z), h.multiply(zp, f1)),
                 h.multiply(zp, h.multiply(f1p, dx)))), h.multiply(bb, h.multiply(f2p, dx)));
@@ -253,8 +264,8 @@ class BesselTypeSolutionTest {
         /** {f1, f1', f2, f2'} with f1 = z^nu J_nu(z), f2 = z^nu Y_nu(z); (z^nu C_nu)' = z^nu C_{nu-1} (DLMF 10.6.6). */
         private Apcomplex[] basis(SurfacePoint p) {
             long prec = h.precision();
-            Apcomplex z = h.valueOf(new Apcomplex(new Apfloat(new java.math.BigDecimal(p.re()), prec),
-                    new Apfloat(new java.math.BigDecimal(p.im()), prec)));
+            Apcomplex z = h.valueOf(new Apcomplex(new Apfloat(new BigDecimal(p.re()), prec),
+                    new Apfloat(new BigDecimal(p.im()), prec)));
             Apcomplex zn = h.pow(z, nu);
             Apcomplex nm1 = h.subtract(nu, h.valueOf(Apcomplex.ONE));
             Apcomplex j = ApcomplexMath.besselJ(nu, z);

@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.util.ArrayList;
 import java.util.List;
 import org.apfloat.Apcomplex;
 import org.hipparchus.complex.Complex;
@@ -46,7 +47,7 @@ class RationalSolutionTest {
      */
     @Test
     void residualOfTheEquationVanishesAtHighPrecision() {
-        List<RationalSolution> cases = new java.util.ArrayList<>();
+        List<RationalSolution> cases = new ArrayList<>();
         cases.add(RationalSolution.normalized(3, SpecialPolynomials.mu(1, 3), 1));
         cases.add(RationalSolution.normalized(4, GaussianRational.of(new BigFraction(1, 5), new BigFraction(2, 3)), -1));
         // gamma = 4, delta = -9: a = 2, c = 3; alpha/2 + beta/3 = 8 with alpha = 3, beta = 39/2 (n = 2)

@@ -7,6 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.math.BigInteger;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import org.hipparchus.fraction.BigFraction;
 import org.junit.jupiter.api.Test;
@@ -116,7 +117,7 @@ class SpecialPolynomialsTest {
     private static List<GaussianRational> expand(GaussianRational mu, GaussianRational[] y) {
         int d = y.length - 1;
         GaussianRational[] z = new GaussianRational[d + 1];
-        java.util.Arrays.fill(z, GaussianRational.ZERO);
+        Arrays.fill(z, GaussianRational.ZERO);
         for (int k = 0; k <= d; k++) {
             if (y[k] == null) {
                 continue;
