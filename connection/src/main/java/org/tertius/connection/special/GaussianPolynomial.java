@@ -131,6 +131,9 @@ public final class GaussianPolynomial {
         if (isZero() || o.isZero()) {
             return ZERO;
         }
+        if (Math.min(re.length, o.re.length) >= Kronecker.THRESHOLD) {
+            return kroneckerProduct(o);
+        }
         int n = re.length + o.re.length - 1;
         BigInteger[] r = new BigInteger[n];
         BigInteger[] s = new BigInteger[n];
@@ -148,6 +151,35 @@ public final class GaussianPolynomial {
             }
         }
         return new GaussianPolynomial(r, s);
+    }
+
+    /** The product by Kronecker substitution: one integer product when both are real, four otherwise. */
+    private GaussianPolynomial kroneckerProduct(GaussianPolynomial o) {
+        BigInteger[] rr = Kronecker.multiply(re, o.re);
+        if (isReal() && o.isReal()) {
+            BigInteger[] zero = new BigInteger[rr.length];
+            Arrays.fill(zero, BigInteger.ZERO);
+            return new GaussianPolynomial(rr, zero);
+        }
+        BigInteger[] ii = Kronecker.multiply(im, o.im);
+        BigInteger[] ri = Kronecker.multiply(re, o.im);
+        BigInteger[] ir = Kronecker.multiply(im, o.re);
+        BigInteger[] r = new BigInteger[rr.length];
+        BigInteger[] s = new BigInteger[rr.length];
+        for (int k = 0; k < rr.length; k++) {
+            r[k] = rr[k].subtract(ii[k]);
+            s[k] = ri[k].add(ir[k]);
+        }
+        return new GaussianPolynomial(r, s);
+    }
+
+    /** The complex conjugate polynomial (conjugated coefficients). */
+    public GaussianPolynomial conjugate() {
+        BigInteger[] s = new BigInteger[im.length];
+        for (int k = 0; k < im.length; k++) {
+            s[k] = im[k].negate();
+        }
+        return new GaussianPolynomial(re.clone(), s);
     }
 
     /** x times this polynomial. */
@@ -196,6 +228,9 @@ public final class GaussianPolynomial {
         if (degree() < dd) {
             throw new ArithmeticException("the divisor has a larger degree than the dividend");
         }
+        if (dd >= Kronecker.THRESHOLD) {
+            return kroneckerQuotient(divisor);
+        }
         BigInteger[] r = re.clone();
         BigInteger[] s = im.clone();
         int qn = degree() - dd + 1;
@@ -222,6 +257,37 @@ public final class GaussianPolynomial {
             }
         }
         return new GaussianPolynomial(qr, qi);
+    }
+
+    /**
+     * The exact quotient by Kronecker substitution; for a non-real divisor B through A conj(B) / (B conj(B)), whose
+     * denominator is real and monic.
+     */
+    private GaussianPolynomial kroneckerQuotient(GaussianPolynomial divisor) {
+        GaussianPolynomial num = this;
+        GaussianPolynomial den = divisor;
+        if (!divisor.isReal()) {
+            num = multiply(divisor.conjugate());
+            den = divisor.multiply(divisor.conjugate());
+        }
+        BigInteger[] qr = Kronecker.divideExactly(pad(num.re, num.re.length), den.re);
+        BigInteger[] qi = num.isReal() ? null : Kronecker.divideExactly(pad(num.im, num.re.length), den.re);
+        if (qr == null || (!num.isReal() && qi == null)) {
+            throw new ArithmeticException("the division leaves a remainder");
+        }
+        if (qi == null) {
+            qi = new BigInteger[qr.length];
+            Arrays.fill(qi, BigInteger.ZERO);
+        }
+        return new GaussianPolynomial(qr, qi);
+    }
+
+    private static BigInteger[] pad(BigInteger[] c, int n) {
+        BigInteger[] out = Arrays.copyOf(c, n);
+        for (int k = c.length; k < n; k++) {
+            out[k] = BigInteger.ZERO;
+        }
+        return out;
     }
 
     /** The largest number of decimal digits of a coefficient part (a size measure for planning precision). */

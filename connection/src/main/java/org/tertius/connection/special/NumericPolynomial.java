@@ -1,6 +1,8 @@
 package org.tertius.connection.special;
 
 import java.math.BigInteger;
+import org.hipparchus.complex.Complex;
+import org.tertius.core.number.ComplexArithmetic;
 import org.tertius.core.number.AnalyticArithmetic;
 
 /**
@@ -43,6 +45,65 @@ final class NumericPolynomial<T> {
             ok &= !Double.isNaN(a) && !Double.isInfinite(a);
         }
         this.finite = ok;
+    }
+
+    private NumericPolynomial(AnalyticArithmetic<T> ar, T[] c, double[] logAbs) {
+        this.ar = ar;
+        this.c = c;
+        this.logAbs = logAbs;
+        boolean ok = true;
+        for (T x : c) {
+            double a = ar.abs(x);
+            ok &= !Double.isNaN(a) && !Double.isInfinite(a);
+        }
+        this.finite = ok;
+    }
+
+    /**
+     * p(R y) / M in double precision with R = |a_0 / a_d|^(1/d) (the geometric mean of the root moduli) and M the
+     * largest scaled coefficient, so that neither coefficients nor values near the roots overflow; the roots y of
+     * this polynomial are the roots of p divided by R. Requires a_0 != 0. Scaled coefficients below the double
+     * range become 0 (they cannot move a root at double precision).
+     *
+     * @return the polynomial and R
+     */
+    static Scaled scaledDouble(GaussianPolynomial p) {
+        int d = p.degree();
+        double[] l = new double[d + 1];
+        for (int k = 0; k <= d; k++) {
+            l[k] = Conversions.logAbs(p.re(k), p.im(k));
+        }
+        double logR = (l[0] - l[d]) / d;
+        double max = Double.NEGATIVE_INFINITY;
+        for (int k = 0; k <= d; k++) {
+            max = Math.max(max, l[k] + k * logR);
+        }
+        Complex[] c = new Complex[d + 1];
+        double[] logs = new double[d + 1];
+        for (int k = 0; k <= d; k++) {
+            logs[k] = l[k] + k * logR - max;
+            if (l[k] == Double.NEGATIVE_INFINITY) {
+                c[k] = Complex.ZERO;
+                continue;
+            }
+            int shift = Math.max(0, Math.max(p.re(k).bitLength(), p.im(k).bitLength()) - 60);
+            double x = p.re(k).shiftRight(shift).doubleValue();
+            double y = p.im(k).shiftRight(shift).doubleValue();
+            double m = Math.hypot(x, y);
+            double size = Math.exp(logs[k]);
+            c[k] = new Complex(x / m * size, y / m * size);
+        }
+        return new Scaled(new NumericPolynomial<>(ComplexArithmetic.INSTANCE, c, logs),
+                Math.exp(logR));
+    }
+
+    /**
+     * A scaled double-precision polynomial and its scale R.
+     *
+     * @param polynomial p(R y) / M
+     * @param scale R
+     */
+    record Scaled(NumericPolynomial<Complex> polynomial, double scale) {
     }
 
     /** False if a coefficient overflowed the arithmetic (double only): evaluate in Apfloat instead. */

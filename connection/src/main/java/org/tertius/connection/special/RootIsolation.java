@@ -72,16 +72,20 @@ public final class RootIsolation {
     private static List<CertifiedRoot> isolate(GaussianPolynomial p, int digits, boolean squareFree) {
         int d = p.degree();
         ComplexArithmetic dbl = ComplexArithmetic.INSTANCE;
-        NumericPolynomial<Complex> pd = p.degree() > 0 ? new NumericPolynomial<>(dbl, p, BigInteger.ONE) : null;
+        // approximations in double precision on p(R y) (no overflow near the roots), then scaled back
+        NumericPolynomial.Scaled scaled = NumericPolynomial.scaledDouble(p);
+        NumericPolynomial<Complex> pd = scaled.polynomial();
         List<Complex> start = null;
-        if (pd != null && pd.finite()) {
+        if (pd.finite() && Double.isFinite(scaled.scale()) && scaled.scale() > 0) {
             start = AberthIteration.circle(pd);
             AberthIteration.iterate(pd, start, 1e-14, 400, 40);
-            for (Complex c : start) {
+            for (int i = 0; i < start.size(); i++) {
+                Complex c = start.get(i).multiply(scaled.scale());
                 if (c.isNaN() || c.isInfinite()) {
                     start = null;
                     break;
                 }
+                start.set(i, c);
             }
         }
         long precision = digits + 15L + Math.max(0, p.maxCoefficientDigits() / 4);
