@@ -6,12 +6,15 @@ import java.util.Map;
 import java.util.concurrent.ConcurrentHashMap;
 import org.apfloat.Apcomplex;
 import org.apfloat.Apfloat;
+import org.hipparchus.complex.Complex;
 import org.hipparchus.fraction.BigFraction;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.mp.MpComplex;
 import org.tertius.core.number.AnalyticArithmetic;
+import org.tertius.core.number.ComplexArithmetic;
 import org.tertius.core.number.SurfacePoint;
 import org.tertius.core.piii.Painleve3Type;
+import org.tertius.core.piii.Painleve3Value;
 import org.tertius.hierarchy.algebra.GaussianRational;
 
 /**
@@ -35,6 +38,7 @@ public final class RationalSolution extends ClosedFormSolution {
     private final GaussianRational mu;
     private final SpecialPolynomial[] polys; // S_n(mu-1), S_{n-1}(mu), S_n(mu), S_{n-1}(mu-1)
     private final Map<Long, NumericPolynomial<?>[]> numeric = new ConcurrentHashMap<>();
+    private volatile ProductForm productForm;
 
     private RationalSolution(ExactParameters parameters, RootChoice choice, int sigma) {
         this.parameters = parameters;
@@ -64,6 +68,34 @@ public final class RationalSolution extends ClosedFormSolution {
             out.add(new RationalSolution(p, choice, -1));
         }
         return out;
+    }
+
+    /**
+     * The rational solution number {@code index} of {@link #all} (0 and 1 are the members sigma = +1, -1 of the
+     * first family).
+     *
+     * @throws InvalidInputException if the equation has none (the message says which condition fails) or the
+     *     index is out of range
+     */
+    public static RationalSolution of(ExactParameters p, int index) {
+        List<RationalSolution> all = all(p);
+        if (all.isEmpty()) {
+            throw new InvalidInputException("family", "no rational solution: " + whyNot(p));
+        }
+        if (index < 0 || index >= all.size()) {
+            throw new InvalidInputException("index", "must be in [0, " + (all.size() - 1) + "], got " + index);
+        }
+        return all.get(index);
+    }
+
+    /** The condition that fails, in words (for parameters without a rational solution of this form). */
+    static String whyNot(ExactParameters p) {
+        if (p.type() != Painleve3Type.D6) {
+            return "the special-polynomial solutions need gamma delta != 0 (type D6), got " + p.type().describe();
+        }
+        return "alpha/a + beta/c = 4n (n >= 1) fails for every a = +-sqrt(gamma), c = +-sqrt(-delta) (DLMF 32.8(iii):"
+                + " alpha + epsilon beta = 4n when gamma = 1, delta = -1); here alpha^2/gamma = " + p.alphaInvariant()
+                + " and -beta^2/delta = " + p.betaInvariant() + " (alpha/a + beta/c = 0 gives the constants)";
     }
 
     /**
@@ -130,6 +162,54 @@ public final class RationalSolution extends ClosedFormSolution {
                 + " PIII(" + choice.x() + ", " + choice.y() + ", 1, -1); " + choice.text() + ", lambda = "
                 + (sigma > 0 ? "" : "-") + "1/sqrt(a c), kappa = a lambda; degrees " + polys[0].degree() + "/"
                 + polys[2].degree() + " in numerator/denominator before cancellation";
+    }
+
+    /** Horner's rule in double is accepted up to this relative error bound; beyond it the product form is used. */
+    static final double HORNER_TOLERANCE = 1e-13;
+
+    /**
+     * In double precision: Horner's rule on the four polynomials when its bound is small enough, else the product
+     * form over the roots ({@link ProductForm}, roots computed once), else the multiprecision evaluation.
+     */
+    @Override
+    public Painleve3Value evaluate(SurfacePoint point) {
+        ComplexArithmetic dbl = ComplexArithmetic.INSTANCE;
+        try {
+            Estimate<Complex> e = compute(dbl, point);
+            if (e.finite(dbl) && e.relativeError(dbl) <= HORNER_TOLERANCE) {
+                return new Painleve3Value(point, e.w(), e.dw(), Math.exp(e.logErrorW()), Math.exp(e.logErrorDw()));
+            }
+        } catch (ArithmeticException overflow) {
+            // coefficients beyond the double range: try the product form
+        }
+        ProductForm f = productForm();
+        Painleve3Value v = f.evaluate(point, this);
+        if (v != null) {
+            return v;
+        }
+        return super.evaluate(point);
+    }
+
+    private ProductForm productForm() {
+        ProductForm f = productForm;
+        if (f == null) {
+            synchronized (this) {
+                if (productForm == null) {
+                    productForm = ProductForm.of(polys);
+                }
+                f = productForm;
+            }
+        }
+        return f;
+    }
+
+    /** lambda, kappa, c in double precision (each within a few units of rounding). */
+    Complex[] scalesDouble() {
+        ComplexArithmetic ar = ComplexArithmetic.INSTANCE;
+        Complex a = choice.a(ar, parameters);
+        Complex c = choice.c(ar, parameters);
+        Complex lambda = a.multiply(c).sqrt().reciprocal().multiply(sigma);
+        return new Complex[] {lambda, a.multiply(lambda), c};
     }
 
     @SuppressWarnings("unchecked")

@@ -59,15 +59,9 @@ public final class SpecialSolutions {
     private static Finding rational(ExactParameters p) {
         String condition = "type D6 and alpha/a + beta/c = 4n, n >= 1, for some a = +-sqrt(gamma), c = +-sqrt(-delta)"
                 + " (DLMF 32.8(iii): alpha + epsilon beta = 4n when gamma = 1, delta = -1)";
-        if (p.type() != Painleve3Type.D6) {
-            return new Finding("rational", false, 0, condition, "the special-polynomial solutions need gamma delta"
-                    + " != 0, got " + p.type().describe());
-        }
         List<RationalSolution> all = RationalSolution.all(p);
         if (all.isEmpty()) {
-            return new Finding("rational", false, 0, condition, "alpha/a + beta/c is not a positive multiple of 4 for"
-                    + " any sign choice (alpha^2/gamma = " + p.alphaInvariant() + ", -beta^2/delta = "
-                    + p.betaInvariant() + "; 0 gives the constant solutions)");
+            return new Finding("rational", false, 0, condition, RationalSolution.whyNot(p));
         }
         StringBuilder e = new StringBuilder();
         for (int k = 0; k < all.size(); k += 2) {

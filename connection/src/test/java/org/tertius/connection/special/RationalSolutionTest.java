@@ -87,6 +87,29 @@ class RationalSolutionTest {
         }
     }
 
+    /**
+     * Degree 36 over 28 (n = 8): far from the origin Horner's rule on the monomial coefficients loses digits and
+     * the double values come from the product over the roots ({@link ProductForm}); both that form and the value
+     * returned must agree with 30-digit values within their estimates, which must stay near 1e-13.
+     */
+    @Test
+    void doubleValuesFarOutAgreeWithManyDigitValues() {
+        RationalSolution s = RationalSolution.normalized(8, SpecialPolynomials.mu(1, 3), 1);
+        ProductForm form = ProductForm.of(s.polynomials().toArray(new SpecialPolynomial[0]));
+        for (int k = 0; k < 8; k++) {
+            double t = 2 * Math.PI * k / 8 + 0.1;
+            SurfacePoint p = SurfacePoint.of(9.1 * Math.cos(t), 9.1 * Math.sin(t));
+            PreciseValue ref = s.evaluate(p, 30);
+            for (Painleve3Value v : new Painleve3Value[] {s.evaluate(p), form.evaluate(p, s)}) {
+                double ew = v.w().subtract(ref.wDouble()).norm();
+                double edw = v.dw().subtract(ref.dwDouble()).norm();
+                assertTrue(ew <= v.errW() + 1e-16 * v.w().norm(), "w at " + p + ": " + ew + " vs " + v.errW());
+                assertTrue(edw <= v.errDw() + 1e-16 * v.dw().norm(), "w' at " + p + ": " + edw + " vs " + v.errDw());
+                assertTrue(v.errW() <= 1e-12 * v.w().norm() && v.errDw() <= 1e-12 * v.dw().norm(), "estimate " + v);
+            }
+        }
+    }
+
     @Test
     void zerosAndPolesAreWhereTheValuesVanishAndBlowUp() {
         RationalSolution s = RationalSolution.all(ExactParameters.parse("3", "39/2", "4", "-9")).get(0);

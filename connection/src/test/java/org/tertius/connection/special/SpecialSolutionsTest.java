@@ -120,5 +120,13 @@ class SpecialSolutionsTest {
         assertTrue(e.getMessage().contains("gamma beta^2 + delta alpha^2 = 0"), e.getMessage());
         e = assertThrows(InvalidInputException.class, () -> AlgebraicSolution.of(ExactParameters.of(1, 1, 1, -1), 0));
         assertTrue(e.getMessage().contains("type D7"), e.getMessage());
+        e = assertThrows(InvalidInputException.class, () -> RationalSolution.of(ExactParameters.parse("1/3", "1", "1",
+                "-1"), 0));
+        assertTrue(e.getMessage().contains("alpha/a + beta/c = 4n (n >= 1) fails") && e.getMessage().contains("1/9"),
+                e.getMessage());
+        e = assertThrows(InvalidInputException.class, () -> RationalSolution.of(ExactParameters.of(1, 1, 0, -1), 0));
+        assertTrue(e.getMessage().contains("gamma delta != 0"), e.getMessage());
+        e = assertThrows(InvalidInputException.class, () -> RationalSolution.of(ExactParameters.of(2, 2, 1, -1), 2));
+        assertTrue(e.getMessage().contains("[0, 1]"), e.getMessage());
     }
 }
