@@ -16,7 +16,7 @@ import org.tertius.core.piii.Painleve3Value;
  */
 abstract class ClosedFormSolution implements SpecialSolution {
     /** Relative error estimate above which a double evaluation is redone in multiprecision. */
-    static final double DOUBLE_TOLERANCE = 1e-10;
+    static final double DOUBLE_TOLERANCE = 1e-12;
     /** Attempts at growing precision. */
     static final int TRIES = 4;
     private static final double LN10 = Math.log(10);

@@ -82,7 +82,7 @@ public record PreciseValue(SurfacePoint point, Apcomplex w, Apcomplex dw, double
      * A complex number with {@code digits} significant digits (relative to its modulus) as re+imi, each part in
      * plain or scientific notation as Apfloat writes it.
      */
-    static String text(Apcomplex x, long digits) {
+    public static String text(Apcomplex x, long digits) {
         double lg = log10Abs(x);
         if (lg == Double.NEGATIVE_INFINITY) {
             return "0";
