@@ -58,7 +58,7 @@ public final class AlgebraicSolution extends ClosedFormSolution {
         int sign = 1;
         if (k > 0) {
             // the sign of c = +-sqrt(-delta) with beta / c = 2k > 0
-            sign = b.beta().toComplex().divide(b.delta().toComplex().negate().sqrt()).getReal() > 0 ? 1 : -1;
+            sign = b.beta().toComplex().divide(b.delta().negate().toComplex().sqrt()).getReal() > 0 ? 1 : -1;
         }
         for (int j = 0; j < 3; j++) {
             out.add(new AlgebraicSolution(p, b, rec, j, (int) k, sign));
@@ -138,7 +138,8 @@ public final class AlgebraicSolution extends ClosedFormSolution {
         Tracked.Ops<T> ops = new Tracked.Ops<>(ar);
         T twoPi = ar.multiply(ar.of(2, 0), ar.pi());
         T tau = ar.add(ar.log(z), ar.multiply(ar.of(0, sheet), twoPi));
-        T ratio = ar.divide(ar.negate(Conversions.of(ar, base.delta())), Conversions.of(ar, base.alpha()));
+        // -delta/alpha exactly, so that its principal logarithm is the same in every arithmetic (no signed zeros)
+        T ratio = Conversions.of(ar, base.delta().negate().multiply(base.alpha().reciprocal()));
         T third = ar.ratio(1, 3);
         T a = ar.exp(ar.multiply(third, ar.log(ratio)));
         if (root > 0) {

@@ -177,7 +177,7 @@ public final class BacklundTransformation {
         switch (kind) {
             case D6: {
                 Tracked<T> a = ops.constant(signed(ar, ar.sqrt(gamma), signA));
-                Tracked<T> c = ops.constant(signed(ar, ar.sqrt(ar.negate(delta)), signC));
+                Tracked<T> c = ops.constant(signed(ar, ar.sqrt(p.minusDelta(ar)), signC));
                 Tracked<T> azw2 = ops.multiply(a, ops.multiply(zt, ops.multiply(w, w)));
                 Tracked<T> cz = ops.multiply(c, zt);
                 Tracked<T> one = ops.exact(ar.one());
@@ -188,7 +188,7 @@ public final class BacklundTransformation {
                 return ops.divide(ops.multiply(c, num), ops.multiply(ops.multiply(a, w), den), where);
             }
             case GAMMA_ZERO: {
-                Tracked<T> c = ops.constant(signed(ar, ar.sqrt(ar.negate(delta)), signC));
+                Tracked<T> c = ops.constant(signed(ar, ar.sqrt(p.minusDelta(ar)), signC));
                 Tracked<T> num = ops.subtract(ops.subtract(ops.multiply(c, zdw), ops.multiply(ops.constant(delta), zt)),
                         ops.multiply(ops.add(ops.constant(beta), c), w));
                 return ops.divide(num, ops.multiply(ops.constant(alpha), ops.multiply(w, w)), where);

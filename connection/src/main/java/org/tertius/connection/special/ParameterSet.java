@@ -85,12 +85,20 @@ public final class ParameterSet {
         return Conversions.of(ar, delta);
     }
 
+    /**
+     * -delta converted from the exact value (negating a converted delta would give -0 imaginary parts in double,
+     * which moves the principal square root of a negative number to the other side of the cut).
+     */
+    <T> T minusDelta(AnalyticArithmetic<T> ar) {
+        return Conversions.of(ar, delta.negate());
+    }
+
     /** The equation with the parameters rounded to double. */
     public Painleve3 equation() {
         Complex a = alphaRoots == 0 ? alphaBase.toComplex()
                 : alphaBase.toComplex().add(gamma.toComplex().sqrt().multiply(2.0 * alphaRoots));
         Complex b = betaRoots == 0 ? betaBase.toComplex()
-                : betaBase.toComplex().add(delta.toComplex().negate().sqrt().multiply(2.0 * betaRoots));
+                : betaBase.toComplex().add(delta.negate().toComplex().sqrt().multiply(2.0 * betaRoots));
         return Painleve3.of(a, b, gamma.toComplex(), delta.toComplex());
     }
 

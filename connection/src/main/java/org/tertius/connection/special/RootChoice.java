@@ -36,7 +36,7 @@ public record RootChoice(int signA, int signC, long sum, GaussianRational x, Gau
         GaussianRational a2 = p.alphaInvariant();
         GaussianRational b2 = p.betaInvariant();
         Complex ra = p.gamma().toComplex().sqrt();
-        Complex rc = p.delta().toComplex().negate().sqrt();
+        Complex rc = p.delta().negate().toComplex().sqrt();
         Complex alpha = p.alpha().toComplex();
         Complex beta = p.beta().toComplex();
         for (int sa : new int[] {1, -1}) {

@@ -55,6 +55,8 @@ class BacklundTest {
         for (String chain : new String[] {"T1", "T2", "T3", "T4", "T1 T3", "S2 T2"}) {
             twoRoutesAgree(p, w0, dw0, BacklundChain.parse(chain));
         }
+        // gamma < 0 < delta: sqrt(gamma) and sqrt(-delta) on the cut of the principal root (no signed zeros)
+        twoRoutesAgree(ExactParameters.parse("3/10", "-11/10", "-1", "1"), w0, dw0, BacklundChain.parse("T1 T4 T3"));
     }
 
     @Test

@@ -69,7 +69,9 @@ class SpecialSolutionsTest {
         ExactParameters[] sets = {ExactParameters.of(2, 2, 1, -1), ExactParameters.of(1, 1, 1, -1),
             ExactParameters.parse("-2", "3", "4", "-1"), ExactParameters.of(1, 4, 0, -1),
             ExactParameters.parse("6", "1/2", "9", "0"), ExactParameters.of(1, -4, 0, 0),
-            ExactParameters.parse("0", "0", "2", "-8")};
+            ExactParameters.parse("0", "0", "2", "-8"),
+            // gamma < 0 < delta: the square roots are imaginary (principal branch on the negative axis)
+            ExactParameters.parse("2i", "2i", "-1", "1"), ExactParameters.parse("i", "i", "-1", "1")};
         for (ExactParameters p : sets) {
             List<ClosedFormSolution> built = new ArrayList<>();
             built.addAll(RationalSolution.all(p));
