@@ -1,3 +1,4 @@
+import java.util.Arrays;
 import java.util.List;
 import org.tertius.connection.special.BesselTypeSolution;
 import org.tertius.connection.special.CertifiedRoot;
@@ -6,6 +7,7 @@ import org.tertius.connection.special.RationalSolution;
 import org.tertius.connection.special.RootIsolation;
 import org.tertius.connection.special.SpecialPolynomial;
 import org.tertius.connection.special.SpecialPolynomials;
+import org.tertius.connection.special.SpecialSolution;
 import org.tertius.core.number.SurfacePoint;
 import org.tertius.hierarchy.algebra.GaussianRational;
 
@@ -29,7 +31,7 @@ public class SpecialTiming {
             task.run();
             warm[k] = (System.nanoTime() - t) / 1e6;
         }
-        java.util.Arrays.sort(warm);
+        Arrays.sort(warm);
         System.out.printf("%-58s cold %9.1f ms   warm %9.1f ms   (%s)%n", name, cold, warm[1], r);
     }
 
@@ -65,7 +67,7 @@ public class SpecialTiming {
         return c;
     }
 
-    static String values(org.tertius.connection.special.SpecialSolution s, int n) {
+    static String values(SpecialSolution s, int n) {
         double worst = 0;
         for (int k = 0; k < n; k++) {
             double t = 2 * Math.PI * k / n;
@@ -75,7 +77,7 @@ public class SpecialTiming {
         return "largest relative error estimate " + String.format("%.1e", worst);
     }
 
-    static String precise(org.tertius.connection.special.SpecialSolution s, int n, int digits) {
+    static String precise(SpecialSolution s, int n, int digits) {
         long least = Long.MAX_VALUE;
         for (int k = 0; k < n; k++) {
             double t = 2 * Math.PI * k / n;
