@@ -6,9 +6,10 @@ import java.util.Locale;
 import org.apfloat.Apcomplex;
 import org.hipparchus.complex.Complex;
 import org.tertius.core.InvalidInputException;
-import org.tertius.core.mp.MpComplex;
 import org.tertius.core.number.AnalyticArithmetic;
 import org.tertius.core.number.ComplexArithmetic;
+import org.tertius.core.number.MpArithmetic;
+import org.tertius.core.number.MpComplex;
 import org.tertius.core.piii.Painleve3Value;
 
 /**

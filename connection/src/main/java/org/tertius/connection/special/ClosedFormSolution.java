@@ -4,6 +4,8 @@ import org.hipparchus.complex.Complex;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.number.AnalyticArithmetic;
 import org.tertius.core.number.ComplexArithmetic;
+import org.tertius.core.number.MpArithmetic;
+import org.tertius.core.number.MpComplex;
 import org.tertius.core.number.SurfacePoint;
 import org.tertius.core.piii.Painleve3Value;
 
@@ -68,7 +70,7 @@ abstract class ClosedFormSolution implements SpecialSolution {
         PreciseValue best = null;
         for (int attempt = 0; attempt < TRIES; attempt++) {
             MpArithmetic mp = new MpArithmetic(Math.min(100000, Math.max(20, precision)));
-            Estimate<org.tertius.core.mp.MpComplex> e = compute(mp, point);
+            Estimate<MpComplex> e = compute(mp, point);
             PreciseValue v = new PreciseValue(point, mp.context().toApcomplex(e.w()), mp.context().toApcomplex(e.dw()),
                     e.logErrorW() / LN10, e.logErrorDw() / LN10);
             best = v;

@@ -7,12 +7,13 @@ import org.apfloat.Apcomplex;
 import org.apfloat.Apfloat;
 import org.hipparchus.complex.Complex;
 import org.hipparchus.fraction.BigFraction;
-import org.tertius.core.mp.ExactNumber;
-import org.tertius.core.mp.MpComplex;
-import org.tertius.core.mp.MpContext;
 import org.tertius.core.number.AnalyticArithmetic;
 import org.tertius.core.number.ApcomplexArithmetic;
 import org.tertius.core.number.ComplexArithmetic;
+import org.tertius.core.number.ExactNumber;
+import org.tertius.core.number.MpArithmetic;
+import org.tertius.core.number.MpComplex;
+import org.tertius.core.number.MpContext;
 import org.tertius.hierarchy.algebra.GaussianRational;
 
 /**

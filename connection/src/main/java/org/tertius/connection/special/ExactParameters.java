@@ -3,7 +3,7 @@ package org.tertius.connection.special;
 import java.math.BigInteger;
 import org.hipparchus.complex.Complex;
 import org.hipparchus.fraction.BigFraction;
-import org.tertius.core.mp.ExactNumber;
+import org.tertius.core.number.ExactNumber;
 import org.tertius.core.piii.Painleve3;
 import org.tertius.core.piii.Painleve3Type;
 import org.tertius.hierarchy.algebra.GaussianRational;

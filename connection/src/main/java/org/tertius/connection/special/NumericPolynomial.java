@@ -2,8 +2,8 @@ package org.tertius.connection.special;
 
 import java.math.BigInteger;
 import org.hipparchus.complex.Complex;
-import org.tertius.core.number.ComplexArithmetic;
 import org.tertius.core.number.AnalyticArithmetic;
+import org.tertius.core.number.ComplexArithmetic;
 
 /**
  * A polynomial with exact coefficients c_k = a_k / q^(d-k) (a_k Gaussian integers, q a positive integer, d the

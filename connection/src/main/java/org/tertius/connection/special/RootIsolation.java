@@ -8,8 +8,9 @@ import org.apfloat.Apfloat;
 import org.hipparchus.complex.Complex;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.number.AnalyticArithmetic;
-import org.tertius.core.mp.MpComplex;
 import org.tertius.core.number.ComplexArithmetic;
+import org.tertius.core.number.MpArithmetic;
+import org.tertius.core.number.MpComplex;
 
 /**
  * All roots of a Gaussian-integer polynomial to a requested number of digits, each with a disk proved to contain

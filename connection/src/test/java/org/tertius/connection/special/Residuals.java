@@ -1,6 +1,7 @@
 package org.tertius.connection.special;
 
-import org.tertius.core.mp.MpComplex;
+import org.tertius.core.number.MpArithmetic;
+import org.tertius.core.number.MpComplex;
 import org.tertius.core.number.SurfacePoint;
 
 /**
