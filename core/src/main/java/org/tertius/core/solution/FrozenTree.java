@@ -50,6 +50,7 @@ public final class FrozenTree {
      * start rule), whose nodes are dropped afterwards. The answer depends on the frozen nodes and tau only.
      *
      * @throws UnreachableTargetException as {@link Solution#evaluate}
+     * @throws PoleProximityException as {@link Solution#evaluateCanonical}
      */
     public StateEstimate evaluate(double tauRe, double tauIm) {
         owner.checkTarget(tauRe, tauIm);

@@ -163,14 +163,19 @@ public final class Solution {
 
     /**
      * Evaluates the state at tau from the tree, growing it when no stored node serves tau; the value may depend
-     * on what was evaluated before (see the class comment; {@link #evaluateCanonical} does not).
+     * on what was evaluated before (see the class comment; {@link #evaluateCanonical} does not). Next to a pole
+     * of a component, closer than the uncertainty of the pole's position, the error estimate of that component
+     * is infinite (the other evaluations refuse such a point with a {@link PoleProximityException}); the serving
+     * node is still the one a path in more digits may follow.
      *
-     * @throws UnreachableTargetException if no path reaches tau within the step budget and the error bound
+     * @throws UnreachableTargetException if neither the path from the nearest node nor the one from the root (the
+     *     path of a fresh solution, so that a point reachable alone is reachable in any batch) reaches tau within
+     *     the step budget and the error bound
      */
     public StateEstimate evaluate(double tauRe, double tauIm) {
         int[] steps = new int[1];
         Node node = reach(tauRe, tauIm, steps);
-        return finish(node, tauRe, tauIm, steps[0]);
+        return TreeReader.estimate(node, tauRe, tauIm, steps[0]);
     }
 
     /**
@@ -182,6 +187,8 @@ public final class Solution {
      *
      * @throws UnreachableTargetException if neither the canonical path nor the direct path from the root reaches
      *     tau within the step budget and the error bound
+     * @throws PoleProximityException if tau lies next to a pole of a component, closer than the uncertainty of
+     *     the pole's position (no digit of that component is known)
      */
     public StateEstimate evaluateCanonical(double tauRe, double tauIm) {
         checkTarget(tauRe, tauIm);
@@ -236,7 +243,21 @@ public final class Solution {
             return served;
         }
         Node start = TreeReader.nearest(snapshot, tauRe, tauIm);
-        PathTracer.Trace t = PathTracer.trace(start, tauRe, tauIm, stepper, settings, singularAtOrigin);
+        PathTracer.Trace t;
+        try {
+            t = PathTracer.trace(start, tauRe, tauIm, stepper, settings, singularAtOrigin);
+        } catch (UnreachableTargetException fromNearest) {
+            // the path a fresh solution would take: a point reachable alone stays reachable in any batch
+            if (start == snapshot[0]) {
+                throw fromNearest;
+            }
+            try {
+                start = snapshot[0];
+                t = PathTracer.trace(start, tauRe, tauIm, stepper, settings, singularAtOrigin);
+            } catch (UnreachableTargetException fromRoot) {
+                throw fromNearest;
+            }
+        }
         stepsOut[0] = t.steps();
         return t.steps() == 0 ? t.end() : merge(start, t.nodes());
     }
