@@ -30,7 +30,7 @@ public final class DecayingClassifier {
     private static final int PER_DECADE = 40;
     /** Further points where the invariant must have the value it has at X_MIN (the second criterion). */
     static final double[] CHECK_POINTS = {X_MIN * Math.sqrt(10), 10 * X_MIN};
-    /** Smallest margin of the decisions on the sign of the invariant (as before the cross-checks). */
+    /** The band of the invariant about 0 labelled logarithmic (as before the cross-checks). */
     static final double DECISION_FLOOR = 1e-12;
     private final SolverSettings settings;
 
@@ -98,14 +98,16 @@ public final class DecayingClassifier {
 
         /**
          * From the invariant: E > 0 a power law, sigma = 1 - sqrt(2E) (form w) or sqrt(2E) - 1 (form 1/w), kept
-         * only if |sigma| < 1; E = 0 within its error logarithmic (sigma = +-1); E &lt; 0 accumulating zeros (form
-         * w) or poles (form 1/w); not conserved: undecided.
+         * only if |sigma| < 1; |E| <= {@link #DECISION_FLOOR} logarithmic (sigma = +-1); E &lt; 0 accumulating
+         * zeros (form w) or poles (form 1/w); not conserved: undecided.
          */
         static Behaviour of(Invariant e, boolean conserved) {
             if (!conserved) {
                 return new Behaviour("undecided", Double.NaN);
             }
-            double margin = 3 * e.error() + DECISION_FLOOR;
+            // the sign is decided at the floor, not at the (conservative) error of E: the edge lambda = 1/pi,
+            // where E changes sign, is then found to about 1e-12 (measured 2e-14)
+            double margin = DECISION_FLOOR;
             if (e.value() > margin) {
                 double root = Math.sqrt(2 * e.value());
                 double sigma = e.reciprocal() ? root - 1 : 1 - root;
