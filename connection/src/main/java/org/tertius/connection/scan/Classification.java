@@ -1,6 +1,7 @@
 package org.tertius.connection.scan;
 
 import java.util.Locale;
+import org.tertius.core.InvalidInputException;
 
 /**
  * What one member of a family does on the positive real axis. Immutable.
@@ -86,7 +87,7 @@ public final class Classification {
     public static Classification parse(String row) {
         String[] f = row.split(",");
         if (f.length != 8) {
-            throw new org.tertius.core.InvalidInputException("scan file", "malformed row '" + row + "' (expected "
+            throw new InvalidInputException("scan file", "malformed row '" + row + "' (expected "
                     + CSV_HEADER + ")");
         }
         return new Classification(Integer.parseInt(f[0]), Double.parseDouble(f[1]), Boolean.parseBoolean(f[2]),

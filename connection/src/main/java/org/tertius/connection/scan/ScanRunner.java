@@ -15,6 +15,7 @@ import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorCompletionService;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
+import org.tertius.core.InvalidInputException;
 import org.tertius.core.TertiusException;
 
 /**
@@ -41,7 +42,7 @@ public final class ScanRunner {
 
     public ScanRunner(int threads) {
         if (threads < 1) {
-            throw new org.tertius.core.InvalidInputException("threads", "must be >= 1, got " + threads);
+            throw new InvalidInputException("threads", "must be >= 1, got " + threads);
         }
         this.threads = threads;
     }

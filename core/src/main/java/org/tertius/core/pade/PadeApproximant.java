@@ -1,5 +1,8 @@
 package org.tertius.core.pade;
 
+import java.util.Arrays;
+import org.tertius.core.number.Cx;
+
 /**
  * A rational function p(s)/q(s) with complex coefficients, q(0) = 1. Immutable; evaluation allocates
  * nothing.
@@ -35,19 +38,19 @@ public final class PadeApproximant {
         int start = 0;
         double head = 0;
         while (start < dRe.length - 1 && Math.abs(dRe[start]) + Math.abs(dIm[start]) < 1e-3 * max) {
-            head += org.tertius.core.number.Cx.abs(dRe[start], dIm[start]);
+            head += Cx.abs(dRe[start], dIm[start]);
             start++;
         }
         this.dStart = start;
         this.dHead = head;
-        this.dRe = java.util.Arrays.copyOfRange(dRe, start, dRe.length);
-        this.dIm = java.util.Arrays.copyOfRange(dIm, start, dIm.length);
+        this.dRe = Arrays.copyOfRange(dRe, start, dRe.length);
+        this.dIm = Arrays.copyOfRange(dIm, start, dIm.length);
     }
 
     private static double[] moduli(double[] re, double[] im) {
         double[] m = new double[re.length];
         for (int k = 0; k < re.length; k++) {
-            m[k] = org.tertius.core.number.Cx.abs(re[k], im[k]);
+            m[k] = Cx.abs(re[k], im[k]);
         }
         return m;
     }
@@ -70,7 +73,7 @@ public final class PadeApproximant {
      * If {@code out} has a fifth slot, out[4] receives a bound of the rounding error of the evaluation itself.
      */
     public void evaluate(double sr, double si, double[] out) {
-        double sm = org.tertius.core.number.Cx.abs(sr, si);
+        double sm = Cx.abs(sr, si);
         double nr = 0;
         double ni = 0;
         for (int k = pRe.length - 1; k >= 0; k--) {
@@ -97,7 +100,7 @@ public final class PadeApproximant {
             er = t;
         }
         double big = Math.max(1, sm);
-        out[3] = (org.tertius.core.number.Cx.abs(er, ei) * Math.pow(sm, dStart) + dHead * Math.pow(big, dStart))
+        out[3] = (Cx.abs(er, ei) * Math.pow(sm, dStart) + dHead * Math.pow(big, dStart))
                 / out[2];
         // rounding of the two Horner sums (a standard bound, about 2 deg ulps of the sum of |terms|), divided
         // through: large next to a pole, where |q(s)| is small against its terms
@@ -111,7 +114,7 @@ public final class PadeApproximant {
                 da = da * sm + qAbs[k];
             }
             double u = Math.ulp(1.0);
-            double pm = org.tertius.core.number.Cx.abs(nr, ni);
+            double pm = Cx.abs(nr, ni);
             double ep = 2 * pRe.length * u * na;
             double eq = 2 * qRe.length * u * da;
             out[4] = (ep + eq * pm / out[2]) / out[2];

@@ -1,5 +1,7 @@
 package org.tertius.core.pade;
 
+import org.tertius.core.number.Cx;
+
 /**
  * Roots of a complex polynomial by the Aberth-Ehrlich simultaneous iteration (O. Aberth, Math. Comp. 27
  * (1973)), started on a circle given by the Cauchy bound. Used to locate the poles of Pade denominators.
@@ -34,10 +36,10 @@ public final class PolynomialRoots {
         }
         double bound = 0;
         for (int k = 0; k < deg; k++) {
-            bound = Math.max(bound, org.tertius.core.number.Cx.abs(ar[k], ai[k]));
+            bound = Math.max(bound, Cx.abs(ar[k], ai[k]));
         }
         // a root radius estimate: geometric mean of |a_0|^(1/deg) and the Cauchy bound, kept positive
-        double r0 = Math.pow(Math.max(org.tertius.core.number.Cx.abs(ar[0], ai[0]), 1e-300), 1.0 / deg);
+        double r0 = Math.pow(Math.max(Cx.abs(ar[0], ai[0]), 1e-300), 1.0 / deg);
         double radius = Math.min(1 + bound, Math.max(r0, 1e-12));
         double[] zr = new double[deg];
         double[] zi = new double[deg];
@@ -102,7 +104,7 @@ public final class PolynomialRoots {
                 double wi = (ni * er - nr * ei) / ed;
                 zr[k] -= wr;
                 zi[k] -= wi;
-                double mv = org.tertius.core.number.Cx.abs(wr, wi) / Math.max(1e-300, org.tertius.core.number.Cx.abs(zr[k], zi[k]));
+                double mv = Cx.abs(wr, wi) / Math.max(1e-300, Cx.abs(zr[k], zi[k]));
                 if (mv < 1e-15) {
                     done[k] = true;
                 }

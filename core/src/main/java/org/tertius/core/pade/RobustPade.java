@@ -1,5 +1,8 @@
 package org.tertius.core.pade;
 
+import java.util.Arrays;
+import org.tertius.core.number.Cx;
+
 /**
  * Diagonal (or near-diagonal) Pade approximants from Taylor coefficients, with robust degree reduction in the
  * spirit of Gonnet, Guttel and Trefethen, "Robust Pade approximation via SVD", SIAM Review 55 (2013): the
@@ -59,14 +62,14 @@ public final class RobustPade {
                 last = k;
             }
         }
-        return new PadeApproximant(pr, pi, qr, qi, java.util.Arrays.copyOf(dr, last + 1),
-                java.util.Arrays.copyOf(di, last + 1));
+        return new PadeApproximant(pr, pi, qr, qi, Arrays.copyOf(dr, last + 1),
+                Arrays.copyOf(di, last + 1));
     }
 
     private static PadeApproximant solve(double[] cRe, double[] cIm, int m, int n, double tol) {
         double norm = 0;
         for (int k = 0; k <= m + n; k++) {
-            norm = Math.max(norm, org.tertius.core.number.Cx.abs(cRe[k], cIm[k]));
+            norm = Math.max(norm, Cx.abs(cRe[k], cIm[k]));
         }
         double ts = tol * norm;
         if (norm == 0) {
@@ -75,7 +78,7 @@ public final class RobustPade {
         // all numerator-relevant coefficients negligible -> the zero function
         boolean allSmall = true;
         for (int k = 0; k <= m; k++) {
-            if (org.tertius.core.number.Cx.abs(cRe[k], cIm[k]) > ts) {
+            if (Cx.abs(cRe[k], cIm[k]) > ts) {
                 allSmall = false;
                 break;
             }
@@ -161,18 +164,18 @@ public final class RobustPade {
         // remove a common factor s^lambda (leading zeros of q and p)
         double qn = 0;
         for (int j = 0; j < qr.length; j++) {
-            qn = Math.max(qn, org.tertius.core.number.Cx.abs(qr[j], qi[j]));
+            qn = Math.max(qn, Cx.abs(qr[j], qi[j]));
         }
         int lead = 0;
-        while (lead < qr.length - 1 && org.tertius.core.number.Cx.abs(qr[lead], qi[lead]) <= tol * qn) {
+        while (lead < qr.length - 1 && Cx.abs(qr[lead], qi[lead]) <= tol * qn) {
             lead++;
         }
         if (lead > 0) {
-            qr = java.util.Arrays.copyOfRange(qr, lead, qr.length);
-            qi = java.util.Arrays.copyOfRange(qi, lead, qi.length);
+            qr = Arrays.copyOfRange(qr, lead, qr.length);
+            qi = Arrays.copyOfRange(qi, lead, qi.length);
             int pl = Math.min(lead, pr.length - 1);
-            pr = java.util.Arrays.copyOfRange(pr, pl, pr.length);
-            pi = java.util.Arrays.copyOfRange(pi, pl, pi.length);
+            pr = Arrays.copyOfRange(pr, pl, pr.length);
+            pi = Arrays.copyOfRange(pi, pl, pi.length);
         }
         // normalise q0 = 1
         double d = qr[0] * qr[0] + qi[0] * qi[0];
@@ -184,23 +187,23 @@ public final class RobustPade {
         int qd = trimmedLength(qr, qi, tol);
         double pnorm = 0;
         for (int k = 0; k < pr.length; k++) {
-            pnorm = Math.max(pnorm, org.tertius.core.number.Cx.abs(pr[k], pi[k]));
+            pnorm = Math.max(pnorm, Cx.abs(pr[k], pi[k]));
         }
         int pd = pr.length;
-        while (pd > 1 && org.tertius.core.number.Cx.abs(pr[pd - 1], pi[pd - 1]) <= tol * pnorm) {
+        while (pd > 1 && Cx.abs(pr[pd - 1], pi[pd - 1]) <= tol * pnorm) {
             pd--;
         }
-        return new PadeApproximant(java.util.Arrays.copyOf(pr, pd), java.util.Arrays.copyOf(pi, pd),
-                java.util.Arrays.copyOf(qr, qd), java.util.Arrays.copyOf(qi, qd), new double[] {0}, new double[] {0});
+        return new PadeApproximant(Arrays.copyOf(pr, pd), Arrays.copyOf(pi, pd),
+                Arrays.copyOf(qr, qd), Arrays.copyOf(qi, qd), new double[] {0}, new double[] {0});
     }
 
     private static int trimmedLength(double[] re, double[] im, double tol) {
         double norm = 0;
         for (int k = 0; k < re.length; k++) {
-            norm = Math.max(norm, org.tertius.core.number.Cx.abs(re[k], im[k]));
+            norm = Math.max(norm, Cx.abs(re[k], im[k]));
         }
         int len = re.length;
-        while (len > 1 && org.tertius.core.number.Cx.abs(re[len - 1], im[len - 1]) <= tol * norm) {
+        while (len > 1 && Cx.abs(re[len - 1], im[len - 1]) <= tol * norm) {
             len--;
         }
         return len;
@@ -265,7 +268,7 @@ public final class RobustPade {
             double alpha = Math.sqrt(bestNorm);
             double x0r = ar[k * cols + k];
             double x0i = ai[k * cols + k];
-            double x0m = org.tertius.core.number.Cx.abs(x0r, x0i);
+            double x0m = Cx.abs(x0r, x0i);
             double phr = x0m == 0 ? 1 : x0r / x0m;
             double phi = x0m == 0 ? 0 : x0i / x0m;
             // v = x + e^{i arg x0} alpha e1 ; R_kk = -e^{i arg x0} alpha

@@ -1,5 +1,6 @@
 package org.tertius.core.path;
 
+import org.tertius.core.number.Cx;
 import org.tertius.core.step.Node;
 import org.tertius.core.step.TaylorPadeStepper;
 
@@ -65,7 +66,7 @@ public final class PathSelector {
         double r = node.radius();
         double dr = (targetRe - node.tauRe()) / r;
         double di = (targetIm - node.tauIm()) / r;
-        double dist = org.tertius.core.number.Cx.abs(dr, di);
+        double dist = Cx.abs(dr, di);
         if (dist <= 1.0 && stepper.localError(node, dr, di) <= tol) {
             return new Choice(dr, di, true);
         }
@@ -107,7 +108,7 @@ public final class PathSelector {
         for (int j = 0; j < node.singularityCount(); j++) {
             double xr = (node.singularityRe(j) - node.tauRe()) / r - sr;
             double xi = (node.singularityIm(j) - node.tauIm()) / r - si;
-            best = Math.min(best, org.tertius.core.number.Cx.abs(xr, xi));
+            best = Math.min(best, Cx.abs(xr, xi));
         }
         return best;
     }

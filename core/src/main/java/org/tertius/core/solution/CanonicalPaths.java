@@ -14,24 +14,28 @@ import org.tertius.core.step.SolverSettings;
 import org.tertius.core.step.TaylorPadeStepper;
 
 /**
- * Paths that depend on their target alone: the canonical path to tau runs from the root through a chain of
- * waypoints on nested square lattices about the root (spacings 1, 1/2, 1/4, 1/8 in the integration variable),
- * then to tau. With x = tau - tau_root, the waypoint of level l is {@code tau_root + h_l trunc(x / h_l)} per
- * coordinate (truncation towards the root), so each waypoint lies between the root and the target and the
- * waypoint of level l - 1 is a function of the one of level l alone: the chain of a waypoint, and the nodes of
- * its legs, do not depend on which target asked for it. A leg is the path traced from the end node of the
- * previous level towards the waypoint ({@link PathTracer}); a leg that cannot be traced is skipped (the next
- * level starts where the previous one ended), which is again a function of the waypoint alone.
+ * Paths that depend on their target alone: the canonical path to tau runs from the root out along the ray
+ * towards tau through waypoints on rings about the root ({@link #RING} apart in the integration variable), then
+ * to tau. Ring k is cut into 2^m(k) angular bins whose arcs are at most {@link #ARC} long, m(k) not decreasing
+ * outwards, and its waypoint for tau is the middle of the bin that holds the direction of tau. The bins nest (the
+ * bin of ring k - 1 is the bin of ring k shifted right), so the waypoint of ring k - 1 is a function of the one
+ * of ring k alone: the chain of a waypoint, and the nodes of its legs, do not depend on which target asked for
+ * it, while the chain stays within half an arc of the straight ray (a detour of a few per cent). A leg is the
+ * path traced from the end node of the previous ring towards the waypoint ({@link PathTracer}); a leg that cannot
+ * be traced is skipped (the next ring starts where the previous one ended), which is again a function of the
+ * waypoint alone.
  *
  * <p>The legs are cached (up to {@link #FOOTPRINT_CAP} bytes of nodes): reusing one gives exactly the nodes that
  * tracing it again would give, so the cache changes the cost of an answer, never the answer. Thread-safe: two
  * threads that trace the same leg at once obtain identical nodes and one of them is kept.
  */
 final class CanonicalPaths {
-    /** Spacing of the coarsest lattice (a power of two, so that the levels nest exactly). */
-    static final double COARSEST_SPACING = 1.0;
-    /** Number of lattice levels. */
-    static final int LEVELS = 4;
+    /** Distance between the rings of waypoints about the root (integration variable). */
+    static final double RING = 0.25;
+    /** Largest arc between neighbouring waypoints of one ring. */
+    static final double ARC = 0.25;
+    /** Rings beyond this many are not used (targets further out go the rest of the way in one leg). */
+    static final int MAX_RINGS = 4096;
     /** Bytes of nodes the cache may hold; legs beyond it are traced again when asked. */
     static final long FOOTPRINT_CAP = 64L << 20;
 
@@ -49,7 +53,7 @@ final class CanonicalPaths {
         this.rootLeg = new Leg(null, new Node[0], root);
     }
 
-    /** A waypoint: lattice level and integer coordinates relative to the root. */
+    /** A waypoint: ring and angular bin (the third field is unused). */
     private static final class Waypoint {
         private final int level;
         private final long i;
@@ -127,32 +131,43 @@ final class CanonicalPaths {
         return footprint.get();
     }
 
-    /** The leg of the finest waypoint of tau. */
+    /** The leg of the outermost waypoint of tau (the root's when tau lies within the first ring). */
     private Leg chainTo(double tauRe, double tauIm, TaylorPadeStepper stepper, int[] steps) {
-        int level = LEVELS - 1;
-        double h = spacing(level);
-        // x / h is exact (h is a power of two), and truncation nests: trunc(trunc(y) / 2) = trunc(y / 2)
-        long i = (long) ((tauRe - root.tauRe()) / h);
-        long j = (long) ((tauIm - root.tauIm()) / h);
-        return leg(level, i, j, stepper, steps);
-    }
-
-    private Leg leg(int level, long i, long j, TaylorPadeStepper stepper, int[] steps) {
-        if (level < 0) {
+        double xRe = tauRe - root.tauRe();
+        double xIm = tauIm - root.tauIm();
+        int rings = (int) Math.min(MAX_RINGS, Math.floor(Cx.abs(xRe, xIm) / RING));
+        if (rings == 0) {
             return rootLeg;
         }
-        Waypoint key = new Waypoint(level, i, j);
-        Leg cached = legs.get(key);
-        if (cached != null) {
-            return cached;
+        // the angle as a fraction of the turn in [0, 1); bins of 2^m per turn nest: the bin of a coarser ring is
+        // the bin of a finer one shifted right, exactly (u 2^m is an exact scaling)
+        double u = (Math.atan2(xIm, xRe) + Math.PI) / (2 * Math.PI);
+        u = u >= 1 ? 0 : u;
+        long[] bins = new long[rings + 1];
+        for (int k = 1; k <= rings; k++) {
+            bins[k] = (long) Math.floor(u * (1L << binsExponent(k)));
         }
-        Leg previous = level == 0 ? rootLeg : leg(level - 1, i / 2, j / 2, stepper, steps);
-        boolean samePoint = level == 0 ? i == 0 && j == 0 : i % 2 == 0 && j % 2 == 0;
-        double h = spacing(level);
-        double wRe = root.tauRe() + h * i;
-        double wIm = root.tauIm() + h * j;
+        // the outermost waypoint already cached, then the legs beyond it, ring by ring
+        int k = rings;
+        Leg known = null;
+        while (k > 0 && (known = legs.get(new Waypoint(k, bins[k], 0))) == null) {
+            k--;
+        }
+        Leg previous = k == 0 ? rootLeg : known;
+        for (int ring = k + 1; ring <= rings; ring++) {
+            previous = leg(ring, bins[ring], previous, stepper, steps);
+        }
+        return previous;
+    }
+
+    /** The leg to waypoint (ring, bin) from the end of its parent's leg; cached while the cap allows. */
+    private Leg leg(int ring, long bin, Leg previous, TaylorPadeStepper stepper, int[] steps) {
+        Waypoint key = new Waypoint(ring, bin, 0);
+        double angle = -Math.PI + (bin + 0.5) * (2 * Math.PI / (1L << binsExponent(ring)));
+        double wRe = root.tauRe() + RING * ring * Math.cos(angle);
+        double wIm = root.tauIm() + RING * ring * Math.sin(angle);
         Leg made = previous;
-        if (!samePoint && !(singularAtOrigin && Cx.abs(wRe, wIm) < h)) {
+        if (!(singularAtOrigin && Cx.abs(wRe, wIm) < RING)) {
             try {
                 PathTracer.Trace t = PathTracer.trace(previous.end, wRe, wIm, stepper, settings, singularAtOrigin);
                 if (t.steps() > 0) {
@@ -160,7 +175,7 @@ final class CanonicalPaths {
                     steps[0] += t.steps();
                 }
             } catch (UnreachableTargetException e) {
-                // skipped: the next level starts from the end of this one's predecessor
+                // skipped: the next ring starts from the end of this one's predecessor
             }
         }
         long bytes = 64;
@@ -177,7 +192,16 @@ final class CanonicalPaths {
         return made;
     }
 
-    private static double spacing(int level) {
-        return COARSEST_SPACING / (1L << level);
+    /**
+     * log2 of the number of angular bins of ring k: the smallest power of two (at least 4) whose arcs on the
+     * ring are at most {@link #ARC} long; it does not decrease outwards, so the bins nest.
+     */
+    static int binsExponent(int ring) {
+        double needed = 2 * Math.PI * RING * ring / ARC;
+        int m = 2;
+        while ((1L << m) < needed && m < 62) {
+            m++;
+        }
+        return m;
     }
 }

@@ -2,6 +2,7 @@ package org.tertius.core.solution;
 
 import java.util.Arrays;
 import java.util.concurrent.ConcurrentHashMap;
+import org.tertius.core.number.Cx;
 import org.tertius.core.step.Node;
 
 /**
@@ -49,7 +50,7 @@ final class NodeIndex {
                 // only cells that the disk really meets
                 double cx = Math.max(i * CELL, Math.min(n.tauRe(), (i + 1) * CELL));
                 double cy = Math.max(j * CELL, Math.min(n.tauIm(), (j + 1) * CELL));
-                if (org.tertius.core.number.Cx.abs(cx - n.tauRe(), cy - n.tauIm()) > r) {
+                if (Cx.abs(cx - n.tauRe(), cy - n.tauIm()) > r) {
                     continue;
                 }
                 cells.merge(key(i, j), new int[] {n.id()}, (a, b) -> {

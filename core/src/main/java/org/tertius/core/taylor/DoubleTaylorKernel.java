@@ -1,7 +1,9 @@
 package org.tertius.core.taylor;
 
+import java.util.Arrays;
 import org.tertius.core.equation.IndependentVariable;
 import org.tertius.core.equation.PolynomialSystem;
+import org.tertius.core.number.Cx;
 
 /**
  * Runs a {@link RecurrencePlan} in double-precision complex arithmetic on primitive arrays. A kernel owns its
@@ -100,8 +102,8 @@ public final class DoubleTaylorKernel {
                 re[o] = sr;
                 im[o] = si;
             }
-            java.util.Arrays.fill(fr, 0.0);
-            java.util.Arrays.fill(fi, 0.0);
+            Arrays.fill(fr, 0.0);
+            Arrays.fill(fi, 0.0);
             // groups, coefficient k, and their contribution to F_k
             for (int g = 0; g < ng; g++) {
                 double sr = 0;
@@ -182,7 +184,7 @@ public final class DoubleTaylorKernel {
                 }
             } else {
                 // (x0 + r s)^j = x0^j sum binom(j, k) (r s / x0)^k
-                double mod = org.tertius.core.number.Cx.abs(t0r, t0i);
+                double mod = Cx.abs(t0r, t0i);
                 double arg = Math.atan2(t0i, t0r);
                 double m = Math.pow(mod, j);
                 double cr = m * Math.cos(j * arg);
