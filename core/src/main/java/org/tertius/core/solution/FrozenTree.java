@@ -47,7 +47,8 @@ public final class FrozenTree {
     /**
      * The value at tau: from the stored node that covers it with a local error below the tolerance and the
      * least total error, else from a detached path traced from the nearest node of the tree (Fornberg-Weideman
-     * start rule), whose nodes are dropped afterwards. The answer depends on the frozen nodes and tau only.
+     * start rule), or from the root if that path fails, whose nodes are dropped afterwards. The answer depends on
+     * the frozen nodes and tau only.
      *
      * @throws UnreachableTargetException as {@link Solution#evaluate}
      * @throws PoleProximityException as {@link Solution#evaluateCanonical}
@@ -59,8 +60,21 @@ public final class FrozenTree {
         if (served != null) {
             return owner.finish(served, tauRe, tauIm, 0);
         }
-        PathTracer.Trace t = PathTracer.trace(TreeReader.nearest(nodes, tauRe, tauIm), tauRe, tauIm, stepper,
-                owner.settings(), owner.singularAtOrigin());
+        Node start = TreeReader.nearest(nodes, tauRe, tauIm);
+        PathTracer.Trace t;
+        try {
+            t = PathTracer.trace(start, tauRe, tauIm, stepper, owner.settings(), owner.singularAtOrigin());
+        } catch (UnreachableTargetException fromNearest) {
+            // the path from the root, as a fresh solution would take it
+            if (start == nodes[0]) {
+                throw fromNearest;
+            }
+            try {
+                t = PathTracer.trace(nodes[0], tauRe, tauIm, stepper, owner.settings(), owner.singularAtOrigin());
+            } catch (UnreachableTargetException fromRoot) {
+                throw fromNearest;
+            }
+        }
         return owner.finish(t.end(), tauRe, tauIm, t.steps());
     }
 }
