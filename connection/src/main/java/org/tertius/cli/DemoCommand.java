@@ -23,6 +23,7 @@ import org.tertius.core.region.GridResult;
 import org.tertius.core.region.PoleFinder;
 import org.tertius.core.region.RegionSettings;
 import org.tertius.core.region.RegionSolver;
+import org.tertius.core.region.RegionTree;
 import org.tertius.core.region.Singularity;
 
 /**
@@ -86,7 +87,7 @@ public final class DemoCommand implements Command {
         try (PrintWriter w = new PrintWriter(Files.newBufferedWriter(values, StandardCharsets.UTF_8))) {
             header(w, s.equation().toString(), s.methodDescription(), rows.columns());
             for (SurfacePoint p : pts) {
-                Painleve3Value v = s.evaluate(p);
+                Painleve3Value v = Painleve3Value.of(s.valueAt(p));
                 w.println(rows.row(v.toSolutionValue()));
                 console.printf("  w(%s) = %s  (err %.1e)%n", p, ComplexText.format(v.w()),
                         Math.max(v.errW(), v.errDw()));
@@ -99,13 +100,13 @@ public final class DemoCommand implements Command {
         List<Painleve3Value> lineValues = new ArrayList<>();
         try (PrintWriter w = new PrintWriter(Files.newBufferedWriter(table, StandardCharsets.UTF_8))) {
             header(w, s.equation().toString(), "the positive real axis, 400 points from 0.25 to 10", rows.columns());
-            RegionSolver.growTowards(s, line);
+            RegionTree tree = RegionTree.growAlong(s, line, RegionSettings.defaults());
             for (SurfacePoint p : line) {
-                Painleve3Value v = s.evaluate(p);
+                Painleve3Value v = Painleve3Value.of(tree.value(p));
                 lineValues.add(v);
                 w.println(rows.row(v.toSolutionValue()));
             }
-            onLine = PoleFinder.alongLine(s, line);
+            onLine = PoleFinder.alongLine(tree, line);
             for (Singularity p : onLine) {
                 w.println("# pole on the line at " + p.point() + ", residue " + ComplexText.format(p.lead()));
             }
@@ -113,7 +114,7 @@ public final class DemoCommand implements Command {
         // the pole field of the principal sheet, its picture and its pole list
         Grid g = Grid.of(-8, 8, 321, -8, 8, 321, 0);
         GridResult r = RegionSolver.solve(s, g, RegionSettings.defaults());
-        List<Singularity> found = PoleFinder.find(s, g);
+        List<Singularity> found = PoleFinder.find(r);
         Path picture = out.resolve("pole-field.png");
         BufferedImage img = FieldPainter.paint(r, found, s.equation().toString(), "w", "z", 900, 720);
         OutputFile.writeWhole("--out", picture, p -> ImageIO.write(img, "png", p.toFile()));

@@ -17,6 +17,7 @@ import org.tertius.core.region.GridResult;
 import org.tertius.core.region.PoleFinder;
 import org.tertius.core.region.RegionSettings;
 import org.tertius.core.region.RegionSolver;
+import org.tertius.core.region.RegionTree;
 import org.tertius.core.region.Singularity;
 
 /** A PNG picture of a solution's first value over a region, or a line plot of it along a segment. */
@@ -90,7 +91,7 @@ public final class FieldCommand implements Command {
         try (Progress progress = new Progress("field")) {
             r = RegionSolver.solve(s, g, RegionSettings.builder().progress(progress::update).build());
         }
-        List<Singularity> marks = noMarks || s.engineReading().isEmpty() ? List.of() : PoleFinder.find(s, g);
+        List<Singularity> marks = noMarks || s.engineReading().isEmpty() ? List.of() : PoleFinder.find(r);
         String value = s.valueNames().get(0);
         BufferedImage img = FieldPainter.paint(r, marks, title(s), value, s.coordinate().name(), wh[0], wh[1]);
         OutputFile.writeWhole("--out", out, p -> ImageIO.write(img, "png", p.toFile()));
@@ -115,12 +116,13 @@ public final class FieldCommand implements Command {
         SurfacePoint a = points.get(0);
         SurfacePoint b = points.get(points.size() - 1);
         boolean realSegment = a.im() == 0 && b.im() == 0;
+        RegionTree tree = RegionTree.growAlong(s, points, RegionSettings.defaults());
         int failed = 0;
         for (int i = 0; i < points.size(); i++) {
             SurfacePoint p = points.get(i);
             x[i] = realSegment ? p.re() : Math.hypot(p.re() - a.re(), p.im() - a.im());
             try {
-                Complex v = s.valueAt(p).value(0);
+                Complex v = tree.value(p).value(0);
                 re[i] = v.getReal();
                 im[i] = v.getImaginary();
             } catch (TertiusException e) {
@@ -130,7 +132,7 @@ public final class FieldCommand implements Command {
             }
         }
         double len = Math.hypot(b.re() - a.re(), b.im() - a.im());
-        List<Singularity> poles = s.engineReading().isPresent() ? PoleFinder.alongLine(s, points) : List.of();
+        List<Singularity> poles = tree.integrated() ? PoleFinder.alongLine(tree, points) : List.of();
         double[] poleX = new double[poles.size()];
         for (int i = 0; i < poleX.length; i++) {
             SurfacePoint p = poles.get(i).point();

@@ -28,6 +28,8 @@ final class FieldPainter {
     static final int TOP = 56;
     static final int BOTTOM = 56;
     static final Color MISSING = new Color(128, 128, 128);
+    /** A value without a known digit but larger than this in modulus is drawn as a pole (white). */
+    static final double NEXT_TO_POLE = 1e6;
 
     private FieldPainter() {
     }
@@ -113,9 +115,12 @@ final class FieldPainter {
             for (int x = 0; x < pw; x++) {
                 int i = g.nx() == 1 ? 0 : (int) Math.round((double) x / Math.max(1, pw - 1) * (g.nx() - 1));
                 int c;
+                Complex w = r.primary(i, j);
                 if (r.computed(i, j)) {
-                    Complex w = r.primary(i, j);
                     c = rgb(w.getReal(), w.getImaginary());
+                } else if (w.isInfinite() || w.norm() > NEXT_TO_POLE) {
+                    // closer to a pole than its position is known: no digit, but certainly next to a pole
+                    c = Color.WHITE.getRGB();
                 } else {
                     c = MISSING.getRGB();
                 }

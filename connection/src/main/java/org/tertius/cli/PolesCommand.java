@@ -9,6 +9,7 @@ import org.apache.commons.cli.Options;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.face.ComputedSolution;
 import org.tertius.core.region.Grid;
+import org.tertius.core.region.GridResult;
 import org.tertius.core.region.PoleFinder;
 import org.tertius.core.region.RegionSettings;
 import org.tertius.core.region.RegionSolver;
@@ -68,8 +69,8 @@ public final class PolesCommand implements Command {
         }
         List<Singularity> found;
         try (Progress progress = new Progress("poles")) {
-            RegionSolver.solve(s, g, RegionSettings.builder().progress(progress::update).build());
-            found = PoleFinder.find(s, g);
+            GridResult r = RegionSolver.solve(s, g, RegionSettings.builder().progress(progress::update).build());
+            found = PoleFinder.find(r);
         }
         String text = format.equals("csv") ? SingularityRows.csv(s.coordinate().name(), found)
                 : SingularityRows.json(s, g, found);

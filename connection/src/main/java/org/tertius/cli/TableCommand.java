@@ -16,6 +16,7 @@ import org.tertius.core.region.GridResult;
 import org.tertius.core.region.PoleFinder;
 import org.tertius.core.region.RegionSettings;
 import org.tertius.core.region.RegionSolver;
+import org.tertius.core.region.RegionTree;
 import org.tertius.core.region.Singularity;
 
 /** Values of any solution on a line or a grid, streamed to CSV, resumable. */
@@ -145,11 +146,12 @@ public final class TableCommand implements Command {
     private int line(ComputedSolution s, ValueRows rows, List<SurfacePoint> points, TableWriter w, Progress progress) {
         int unreached = 0;
         long skip = w.existingRows();
-        RegionSolver.growTowards(s, points.subList((int) Math.min(skip, points.size()), points.size()));
+        // the tree is grown along the whole line, also on resume: every row is the row of an uninterrupted run
+        RegionTree tree = RegionTree.growAlong(s, points, RegionSettings.defaults());
         for (int i = (int) skip; i < points.size(); i++) {
             SurfacePoint p = points.get(i);
             try {
-                w.row(rows.row(s.valueAt(p)));
+                w.row(rows.row(tree.value(p)));
             } catch (TertiusException e) {
                 unreached++;
                 w.row(rows.unreachedRow(p));
@@ -160,8 +162,8 @@ public final class TableCommand implements Command {
             }
             progress.update(i + 1, points.size());
         }
-        if (s.engineReading().isPresent()) {
-            for (Singularity pole : PoleFinder.alongLine(s, points)) {
+        if (tree.integrated()) {
+            for (Singularity pole : PoleFinder.alongLine(tree, points)) {
                 String msg = String.format(Locale.ROOT, "%s on the line at %s (lead %s, position error %.1e)",
                         pole.kind().label(), pole.point(), pole.lead(), pole.error());
                 w.comment(msg);
@@ -176,10 +178,12 @@ public final class TableCommand implements Command {
         long skip = w.existingRows();
         int nx = g.nx();
         int failed = 0;
+        // the tree is grown over the whole grid, also on resume, so that every band reads the same tree
+        RegionTree tree = RegionTree.grow(s, g, RegionSettings.defaults());
         for (int j0 = (int) (skip / nx); j0 < g.ny(); j0 += BAND) {
             int j1 = Math.min(g.ny() - 1, j0 + BAND - 1);
             Grid band = g.rows(j0, j1);
-            GridResult r = RegionSolver.solve(s, band, RegionSettings.defaults());
+            GridResult r = RegionSolver.solve(tree, band, RegionSettings.defaults());
             failed += r.statistics().failed();
             for (int j = 0; j < band.ny(); j++) {
                 for (int i = 0; i < nx; i++) {

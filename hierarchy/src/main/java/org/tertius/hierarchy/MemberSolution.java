@@ -147,10 +147,15 @@ public final class MemberSolution implements ComputedSolution {
         return monitor.names();
     }
 
+    /**
+     * The values q, r, q', r' at a point along its canonical path: a function of the start data, the settings and the
+     * point alone, bit for bit; {@link #evaluate(Complex, int)} reuses the path tree grown so far instead.
+     */
     @Override
     public SolutionValue valueAt(SurfacePoint point) {
         coordinate().check("x", point);
-        return evaluate(point.z(), point.sheet()).toSolutionValue(point);
+        double[] tau = tau(point.z(), point.sheet());
+        return valueFrom(point.z(), point.sheet(), engine.evaluateCanonical(tau[0], tau[1])).toSolutionValue(point);
     }
 
     @Override

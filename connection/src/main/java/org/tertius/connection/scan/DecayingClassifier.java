@@ -18,13 +18,20 @@ import org.tertius.core.step.SolverSettings;
  * u = t + L, the equation is L'' = delta e^(-2L) + x^4 e^(2L) (alpha = beta = 0, gamma = 1, delta = -1), and
  * without the x^4 term E = (L')^2/2 + delta e^(-2L)/2 = ((q - 1)^2 - x^2/w^2)/2, q = x w'/w, is conserved.
  * E > 0: w ~ B x^sigma with sigma = 1 - sqrt(2E); E = 0: logarithmic; E &lt; 0: e^L oscillates, zeros of w
- * accumulate at 0. For q &lt; 0 the same holds for 1/w with E = ((q + 1)^2 - x^2 w^2)/2 (poles accumulate).
- * At X_MIN = 1e-5 the neglected term changes E by about x^4 log^2 x, below 1e-18. Immutable, thread-safe.
+ * accumulate at 0. 1/w solves the same equation, so the same holds for 1/w with E = ((q + 1)^2 - x^2 w^2)/2
+ * (poles accumulate). Each form neglects a term, x^2 w^2 for w and x^2 / w^2 for 1/w; the one used is the one
+ * whose neglected term is the smaller at the point (|w| &lt;= 1: w), see {@link Invariant}. (The sign of q chose
+ * the form before: just past a zero of w, q &lt; 0 picked the 1/w form, which is not conserved there, and
+ * labelled members with accumulating zeros "power" with sigma 23.3, 6.84 or -0.92.) Immutable, thread-safe.
  */
 public final class DecayingClassifier {
     /** Lower end of the integrated window. */
     public static final double X_MIN = 1e-5;
     private static final int PER_DECADE = 40;
+    /** Further points where the invariant must have the value it has at X_MIN (the second criterion). */
+    static final double[] CHECK_POINTS = {X_MIN * Math.sqrt(10), 10 * X_MIN};
+    /** The band of the invariant about 0 labelled logarithmic (as before the cross-checks). */
+    static final double DECISION_FLOOR = 1e-12;
     private final SolverSettings settings;
 
     public DecayingClassifier(SolverSettings settings) {
@@ -34,19 +41,17 @@ public final class DecayingClassifier {
     /** The invariant E at X_MIN for the member lambda (continuous in lambda; zero at the edge 1/pi). */
     public double invariant(double lambda) {
         Painleve3Solution s = DecayingConnection.solution(lambda, settings);
-        return invariant(s.evaluate(SurfacePoint.of(X_MIN, 0)));
+        Painleve3Value v = s.evaluate(SurfacePoint.of(X_MIN, 0));
+        return Invariant.at(v, Invariant.reciprocalFormAt(v)).value();
     }
 
-    static double invariant(Painleve3Value v) {
-        double x = v.point().re();
-        double w = v.w().getReal();
-        double q = x * v.dw().getReal() / w;
-        if (q >= 0) {
-            return ((q - 1) * (q - 1) - x * x / (w * w)) / 2;
-        }
-        return ((q + 1) * (q + 1) - x * x * w * w) / 2;
-    }
-
+    /**
+     * The classification of the member lambda. The behaviour at 0 is read from the invariant at X_MIN, in the
+     * form (w or 1/w) whose neglected term is the smaller there, and cross-checked: the invariant must be
+     * conserved at {@link #CHECK_POINTS} further points within their error estimates, and a power law must have
+     * |sigma| < 1 (necessary: w ~ B x^sigma with |sigma| >= 1 is not a solution of this equation at 0). A member
+     * that fails a check is "undecided" (sigma NaN) rather than given a label it cannot have.
+     */
     public Classification classify(int index, double lambda) {
         Painleve3Value hand = DecayingConnection.middleValue(lambda);
         Painleve3Solution s = Painleve3Solution.builder(DecayingConnection.equation())
@@ -70,22 +75,49 @@ public final class DecayingClassifier {
             prevW = w;
         }
         Painleve3Value end = s.evaluate(SurfacePoint.of(X_MIN, 0));
-        double e = invariant(end);
-        double q = X_MIN * end.dw().getReal() / end.w().getReal();
-        double tol = 1e-12;
-        String atZero;
-        double sigma = Double.NaN;
-        if (e > tol) {
-            atZero = "power";
-            sigma = Math.signum(q) * (1 - Math.sqrt(2 * e));
-        } else if (e >= -tol) {
-            atZero = "logarithmic";
-            sigma = Math.signum(q);
-        } else {
-            atZero = "accumulating";
+        boolean reciprocal = Invariant.reciprocalFormAt(end);
+        Invariant e = Invariant.at(end, reciprocal);
+        boolean conserved = e.isFinite();
+        for (double x : CHECK_POINTS) {
+            conserved &= e.agreesWith(Invariant.at(s.evaluate(SurfacePoint.of(x, 0)), reciprocal));
         }
-        boolean poleFree = Double.isNaN(first) && !"accumulating".equals(atZero);
-        return new Classification(index, lambda, poleFree, first, kind, atZero, sigma, e);
+        Behaviour b = Behaviour.of(e, conserved);
+        boolean poleFree = Double.isNaN(first) && ("power".equals(b.label) || "logarithmic".equals(b.label));
+        return new Classification(index, lambda, poleFree, first, kind, b.label, b.sigma, e.value());
+    }
+
+    /** A label at 0 and its exponent. */
+    static final class Behaviour {
+        final String label;
+        final double sigma;
+
+        private Behaviour(String label, double sigma) {
+            this.label = label;
+            this.sigma = sigma;
+        }
+
+        /**
+         * From the invariant: E > 0 a power law, sigma = 1 - sqrt(2E) (form w) or sqrt(2E) - 1 (form 1/w), kept
+         * only if |sigma| < 1; |E| <= {@link #DECISION_FLOOR} logarithmic (sigma = +-1); E &lt; 0 accumulating
+         * zeros (form w) or poles (form 1/w); not conserved: undecided.
+         */
+        static Behaviour of(Invariant e, boolean conserved) {
+            if (!conserved) {
+                return new Behaviour("undecided", Double.NaN);
+            }
+            // the sign is decided at the floor, not at the (conservative) error of E: the edge lambda = 1/pi,
+            // where E changes sign, is then found to about 1e-12 (measured 2e-14)
+            double margin = DECISION_FLOOR;
+            if (e.value() > margin) {
+                double root = Math.sqrt(2 * e.value());
+                double sigma = e.reciprocal() ? root - 1 : 1 - root;
+                return Math.abs(sigma) < 1 ? new Behaviour("power", sigma) : new Behaviour("undecided", Double.NaN);
+            }
+            if (e.value() >= -margin) {
+                return new Behaviour("logarithmic", e.reciprocal() ? -1 : 1);
+            }
+            return new Behaviour("accumulating", Double.NaN);
+        }
     }
 
     private static double value(Painleve3Solution s, double x) {

@@ -11,6 +11,7 @@ import org.tertius.core.piii.Painleve3Solution;
 import org.tertius.core.piii.Painleve3Value;
 import org.tertius.core.region.Grid;
 import org.tertius.core.region.PoleFinder;
+import org.tertius.core.region.RegionTree;
 import org.tertius.core.region.Singularity;
 import org.tertius.core.step.SolverSettings;
 
@@ -103,7 +104,7 @@ public final class PowerFamilyClassifier {
     private static PowerFamilyClassification singularity(int index, double sigma, double b, Painleve3Solution s,
                                                          double xa, double wa, double xb, double wb) {
         double width = xb - xa;
-        List<Singularity> found = PoleFinder.find(s, Grid.of(xa, xb, 2, -width, width, 2, 0));
+        List<Singularity> found = PoleFinder.find(RegionTree.current(s), Grid.of(xa, xb, 2, -width, width, 2, 0));
         Singularity first = null;
         for (Singularity c : found) {
             double re = c.point().re();

@@ -1,8 +1,7 @@
 /**
- * First-order polynomial systems as the engine takes them: {@link org.tertius.core.equation.PolynomialSystem}
- * (structure and coefficient values kept apart, so that one structure runs in several precisions), its terms, the
- * independent variable (plain, or logarithmic for a branch point at 0) and projections onto invariant manifolds.
+ * First-order polynomial systems (unknowns, terms, the independent variable and invariant-manifold
+ * projections): what the engine integrates.
  *
- * <p>May depend on: {@code number}. Knows no equation in particular.
+ * <p>May depend on {@code org.tertius.core} (exceptions) and {@code number}.
  */
 package org.tertius.core.equation;

@@ -1,7 +1,7 @@
 /**
- * Robust Pade approximants of Taylor series (rank-revealing QR, degree reduction, defect against every known
- * coefficient) and polynomial roots, in double precision.
+ * Robust Pade approximants from Taylor coefficients and roots of their denominators. Works on arrays of
+ * doubles; stateless.
  *
- * <p>May depend on: {@code number}.
+ * <p>May depend on {@code number} only.
  */
 package org.tertius.core.pade;

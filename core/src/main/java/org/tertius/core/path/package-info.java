@@ -1,6 +1,7 @@
 /**
- * Path selection through a field of poles (after Fornberg and Weideman): where the next Taylor-Pade step goes.
+ * The choice of the next step towards a target (Fornberg-Weideman path selection, avoiding the poles of every
+ * component). Stateless.
  *
- * <p>May depend on: {@code number}, {@code step}.
+ * <p>May depend on {@code number} and {@code step}.
  */
 package org.tertius.core.path;

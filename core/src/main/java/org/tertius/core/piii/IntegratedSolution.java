@@ -5,6 +5,7 @@ import org.hipparchus.complex.Complex;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.face.EngineReading;
 import org.tertius.core.face.HighPrecisionForm;
+import org.tertius.core.face.SolutionValue;
 import org.tertius.core.number.ExactNumber;
 import org.tertius.core.number.SurfacePoint;
 import org.tertius.core.solution.Solution;
@@ -92,6 +93,11 @@ final class IntegratedSolution extends Painleve3Solution {
     @Override
     public Painleve3Value evaluate(SurfacePoint point) {
         return value(point, engine.evaluate(point.logRe(), point.logIm()));
+    }
+
+    @Override
+    public SolutionValue valueAt(SurfacePoint point) {
+        return value(point, engine.evaluateCanonical(point.logRe(), point.logIm())).toSolutionValue();
     }
 
     /** The PIII value from an engine estimate at the point. */

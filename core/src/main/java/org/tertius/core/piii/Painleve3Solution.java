@@ -35,7 +35,8 @@ public abstract class Painleve3Solution implements ComputedSolution {
     public abstract Painleve3 equation();
 
     /**
-     * The value at a point of the Riemann surface.
+     * The value at a point of the Riemann surface, from the path tree grown so far (see {@link #valueAt} for the
+     * reproducible evaluation).
      *
      * @throws org.tertius.core.UnreachableTargetException if the point cannot be reached to the tolerance
      */
@@ -76,10 +77,17 @@ public abstract class Painleve3Solution implements ComputedSolution {
         return VALUE_NAMES;
     }
 
+    /**
+     * The values w, w' at a point along its canonical path: a function of the start data, the settings and the point
+     * alone, bit for bit (whatever was asked before, on whatever thread). {@link #evaluate} reuses the path tree
+     * grown so far instead: faster for many nearby points, with values that may differ in the last digits (within
+     * their estimates) with the order of the queries.
+     *
+     * @throws org.tertius.core.UnreachableTargetException if the point cannot be reached, or lies closer to a pole
+     *     than the pole's position is known
+     */
     @Override
-    public SolutionValue valueAt(SurfacePoint point) {
-        return evaluate(point).toSolutionValue();
-    }
+    public abstract SolutionValue valueAt(SurfacePoint point);
 
     /** 1/w, a solution of {@link Painleve3#reciprocal()}. */
     public Painleve3Solution reciprocal() {

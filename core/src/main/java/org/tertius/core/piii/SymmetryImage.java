@@ -83,6 +83,11 @@ final class SymmetryImage extends Painleve3Solution {
         return transform(point, base.evaluate(toBase(point)));
     }
 
+    @Override
+    public SolutionValue valueAt(SurfacePoint point) {
+        return transform(point, Painleve3Value.of(base.valueAt(toBase(point)))).toSolutionValue();
+    }
+
     /** The image's value at p from the base's value at the corresponding point (first-order error propagation). */
     private Painleve3Value transform(SurfacePoint point, Painleve3Value v) {
         switch (kind) {

@@ -14,6 +14,7 @@ import org.tertius.core.number.SurfacePoint;
  */
 public final class GridResult {
     private final Grid grid;
+    private final RegionTree tree;
     private final Coordinate coordinate;
     private final List<String> names;
     private final double[][] re;
@@ -21,11 +22,11 @@ public final class GridResult {
     private final double[][] err;
     private final RegionStatistics statistics;
 
-    GridResult(Grid grid, Coordinate coordinate, List<String> names, double[][] re, double[][] im, double[][] err,
-               RegionStatistics statistics) {
+    GridResult(Grid grid, RegionTree tree, double[][] re, double[][] im, double[][] err, RegionStatistics statistics) {
         this.grid = grid;
-        this.coordinate = coordinate;
-        this.names = names;
+        this.tree = tree;
+        this.coordinate = tree.solution().coordinate();
+        this.names = tree.solution().valueNames();
         this.re = re;
         this.im = im;
         this.err = err;
@@ -34,6 +35,11 @@ public final class GridResult {
 
     public Grid grid() {
         return grid;
+    }
+
+    /** The tree the values were read from (for the poles and zeros of the same region). */
+    public RegionTree tree() {
+        return tree;
     }
 
     /** The names of the values (those of the solution). */

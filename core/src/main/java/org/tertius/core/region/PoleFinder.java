@@ -44,22 +44,30 @@ public final class PoleFinder {
     private PoleFinder() {
     }
 
+    /** The poles and zeros of the first value in the region of a grid result, from the tree it was read from. */
+    public static List<Singularity> find(GridResult result) {
+        return find(result.tree(), result.grid());
+    }
+
     /**
      * Finds the poles and zeros of the first value of a solution in the region of {@code grid} (a rectangle of one
-     * sheet or a strip in log z). Grow the tree over the rectangle first (for example with {@link RegionSolver});
-     * only singularities inside stored disks are seen.
+     * sheet or a strip in log z), from a tree grown over it ({@link RegionTree}); only singularities inside stored
+     * disks are seen.
      *
      * @throws InvalidInputException for a solution not integrated by the engine (it has no path tree to read)
      */
-    public static List<Singularity> find(ComputedSolution solution, Grid grid) {
-        EngineReading reading = solution.engineReading().orElseThrow(() -> new InvalidInputException("solution",
-                "poles and zeros are read off the engine's path tree; this solution (" + solution.methodDescription()
-                + ") is not integrated by the engine"));
+    public static List<Singularity> find(RegionTree tree, Grid grid) {
+        ComputedSolution solution = tree.solution();
+        EngineReading reading = tree.reading();
+        if (reading == null) {
+            throw new InvalidInputException("solution", "poles and zeros are read off the engine's path tree; this"
+                    + " solution (" + solution.methodDescription() + ") is not integrated by the engine");
+        }
         int comp = reading.primaryComponent();
         boolean reciprocal = reading.primaryReciprocal();
         boolean logarithmic = solution.coordinate().hasSheets();
         List<Candidate> all = new ArrayList<>();
-        for (Node n : reading.tree().nodes()) {
+        for (Node n : tree.nodes()) {
             if (!near(reading, logarithmic, n, grid)) {
                 continue;
             }
@@ -93,9 +101,10 @@ public final class PoleFinder {
 
     /**
      * The poles of the first value within half a spacing of the segment through the first and last of the points
-     * (equally spaced points of a line of one sheet, whose paths the tree already holds).
+     * (equally spaced points of a line of one sheet), from the tree grown along them
+     * ({@link RegionTree#growAlong}).
      */
-    public static List<Singularity> alongLine(ComputedSolution solution, List<SurfacePoint> points) {
+    public static List<Singularity> alongLine(RegionTree tree, List<SurfacePoint> points) {
         List<Singularity> out = new ArrayList<>();
         if (points.size() < 2) {
             return out;
@@ -106,7 +115,7 @@ public final class PoleFinder {
         double m = Math.max(h, 1e-9);
         Grid box = Grid.of(Math.min(a.re(), b.re()) - m, Math.max(a.re(), b.re()) + m, 2,
                 Math.min(a.im(), b.im()) - m, Math.max(a.im(), b.im()) + m, 2, a.sheet());
-        for (Singularity p : find(solution, box)) {
+        for (Singularity p : find(tree, box)) {
             if (p.kind() == Singularity.Kind.POLE && distanceToSegment(p.point(), a, b) <= 0.5 * h + 1e-12) {
                 out.add(p);
             }

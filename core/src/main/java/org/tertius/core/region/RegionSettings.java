@@ -58,6 +58,19 @@ public final class RegionSettings {
         return cancelled;
     }
 
+    /**
+     * The same settings reporting progress as the part [offset, offset + width] of the whole (in thousandths),
+     * for one phase of a computation of several.
+     */
+    RegionSettings withProgressScaled(double offset, double width) {
+        Builder b = builder().threads(threads).cancelled(cancelled);
+        b.maxRelativeError = maxRelativeError;
+        Progress whole = progress;
+        b.progress((done, total) -> whole.update(Math.round(1000 * (offset + width * done / Math.max(1.0, total))),
+                1000));
+        return b.build();
+    }
+
     /** Builder with validation. */
     public static final class Builder {
         private double maxRelativeError = 1e-10;

@@ -13,51 +13,54 @@ import java.util.concurrent.Future;
 import java.util.concurrent.atomic.AtomicLong;
 import org.tertius.core.TertiusException;
 import org.tertius.core.face.ComputedSolution;
-import org.tertius.core.face.EngineReading;
 import org.tertius.core.face.SolutionValue;
-import org.tertius.core.number.ComplexPairs;
 import org.tertius.core.number.SurfacePoint;
-import org.tertius.core.solution.StateEstimate;
+import org.tertius.core.solution.PoleProximityException;
 
 /**
  * A solution over a whole grid. For a solution integrated by the engine, in three passes (after Fornberg and
  * Weideman, J. Comput. Phys. 230 (2011)):
  * <ol>
- *   <li>tree: a coarse subset of the grid, taken in order of distance from the start point, is evaluated one
- *   by one; each target is reached by a path from the nearest stored node, so the tree grows outwards;</li>
+ *   <li>tree: a tree grown for the grid from the solution's root alone ({@link RegionTree}), then frozen;</li>
  *   <li>grid: every point is evaluated from the stored approximant that covers it best (read-only, on all
  *   threads);</li>
- *   <li>rest: the few points that no stored node covers to the accuracy get their own paths, one by one.</li>
+ *   <li>rest: the few points that no stored node covers to the accuracy get their own detached paths from the
+ *   frozen tree, which are dropped afterwards.</li>
  * </ol>
- * Passes 1 and 3 are sequential and pass 2 does not change the tree, so the values do not depend on the number
- * of threads. A solution not integrated by the engine (a closed form) is evaluated point by point on all threads.
+ * Every value depends on the solution's start, the grid the tree was grown for and the point only: not on the
+ * number of threads, not on what was computed before, not on the band of a table being computed (so a resumed
+ * table equals an uninterrupted one). A point closer to a pole than the pole's position is known counts as failed
+ * and is drawn as a pole. A solution not integrated by the engine (a closed form) is evaluated point by point.
  */
 public final class RegionSolver {
-    /** Target spacing of the coarse pass in units of |z| (a fraction of the typical pole spacing). */
-    private static final double COARSE_SPACING = 0.45;
-
     private RegionSolver() {
     }
 
-    /** Computes the solution on the grid. */
+    /** Computes the solution on the grid, from a tree grown for this grid ({@link RegionTree#grow}). */
     public static GridResult solve(ComputedSolution solution, Grid grid, RegionSettings settings) {
+        grid.checkMemory("grid", solution.valueNames().size());
+        long t0 = System.nanoTime();
+        RegionTree tree = RegionTree.grow(solution, grid, settings.withProgressScaled(0, 0.2));
+        long t1 = System.nanoTime();
+        return solve(tree, grid, settings.withProgressScaled(0.2, 0.8), t1 - t0);
+    }
+
+    /**
+     * Computes the solution on a grid from a tree grown before (for instance over a larger grid whose bands are
+     * computed one by one: the values do not depend on the band).
+     */
+    public static GridResult solve(RegionTree tree, Grid grid, RegionSettings settings) {
+        return solve(tree, grid, settings, 0);
+    }
+
+    private static GridResult solve(RegionTree tree, Grid grid, RegionSettings settings, long treeNanos) {
+        ComputedSolution solution = tree.solution();
         int values = solution.valueNames().size();
         grid.checkMemory("grid", values);
         int nx = grid.nx();
         int total = nx * grid.ny();
         Store store = new Store(values, total);
-        int nodesBefore = solution.nodeCount();
         AtomicLong done = new AtomicLong();
-        long work = total + (long) total / 4;
-        EngineReading reading = solution.engineReading().orElse(null);
-        SurfacePoint start = reading == null ? null : reading.point(reading.tree().root().tauRe(),
-                reading.tree().root().tauIm());
-
-        // pass 1: the tree, from a coarse subset in order of distance from the start
-        long t0 = System.nanoTime();
-        if (reading != null) {
-            growTree(solution, reading, grid, start, settings, done, work);
-        }
         long t1 = System.nanoTime();
 
         // pass 2: every point from the stored tree (or, without a tree, directly), in parallel by rows
@@ -76,19 +79,19 @@ public final class RegionSolver {
                         if (settings.cancelled().getAsBoolean()) {
                             return;
                         }
-                        SurfacePoint p = pointOrNull(solution, grid, i, row);
+                        SurfacePoint p = grid.point(i, row, solution.coordinate());
                         int k = row * nx + i;
                         if (p == null) {
                             continue;
                         }
-                        SolutionValue v = reading == null ? direct(solution, p) : stored(reading, p, settings);
+                        SolutionValue v = tree.stored(p, settings.maxRelativeError());
                         if (v == null) {
                             missing.add(k);
                         } else {
                             store.put(v, k);
                         }
                     }
-                    settings.progress().update(done.addAndGet(nx), work);
+                    settings.progress().update(done.addAndGet(nx), total);
                 }));
             }
             for (Future<?> f : rows) {
@@ -103,109 +106,32 @@ public final class RegionSolver {
             pool.shutdownNow();
         }
         checkCancelled(settings);
-        int failed = 0;
         int served = total - missing.size();
 
-        // pass 3: the rest, one by one in a fixed order
+        // pass 3: the rest, one by one, each from the frozen tree by a detached path (independent of the others)
         List<Integer> rest = new ArrayList<>(missing);
-        rest.sort(Comparator.comparingDouble((Integer k) -> distance(solution, grid, k % nx, k / nx, start))
-                .thenComparingInt(k -> k));
+        rest.sort(null);
         int integrated = 0;
+        int failed = 0;
         for (int k : rest) {
             checkCancelled(settings);
-            SurfacePoint p = pointOrNull(solution, grid, k % nx, k / nx);
+            SurfacePoint p = grid.point(k % nx, k / nx, solution.coordinate());
             try {
-                store.put(solution.valueAt(p), k);
+                store.put(tree.value(p), k);
                 integrated++;
+            } catch (PoleProximityException e) {
+                // closer to a pole than its position is known: the value is infinite for all we know
+                store.putPole(k);
+                failed++;
             } catch (TertiusException e) {
                 failed++;
             }
         }
         long t2 = System.nanoTime();
-        settings.progress().update(work, work);
-        long footprint = reading == null ? 0 : reading.tree().footprint();
-        RegionStatistics stats = new RegionStatistics(solution.nodeCount(), solution.nodeCount() - nodesBefore,
-                served, integrated, failed, t1 - t0, t2 - t1, footprint);
-        return new GridResult(grid, solution.coordinate(), solution.valueNames(), store.re, store.im, store.err, stats);
-    }
-
-    private static void growTree(ComputedSolution solution, EngineReading reading, Grid grid, SurfacePoint start,
-                                 RegionSettings settings, AtomicLong done, long work) {
-        int total = grid.size();
-        int stride = Math.max(1, (int) Math.round(COARSE_SPACING / Math.max(grid.zSpacing(), 1e-300)));
-        List<int[]> coarse = new ArrayList<>();
-        for (int j = 0; j < grid.ny(); j += stride) {
-            for (int i = 0; i < grid.nx(); i += stride) {
-                coarse.add(new int[] {i, j});
-            }
-        }
-        coarse.sort(Comparator.comparingDouble((int[] c) -> distance(solution, grid, c[0], c[1], start))
-                .thenComparingInt(c -> c[1]).thenComparingInt(c -> c[0]));
-        for (int[] c : coarse) {
-            checkCancelled(settings);
-            SurfacePoint p = pointOrNull(solution, grid, c[0], c[1]);
-            if (p != null) {
-                try {
-                    reading.tree().extendTo(reading.tauRe(p), reading.tauIm(p));
-                } catch (TertiusException e) {
-                    // left for pass 3, which reports it
-                }
-            }
-            settings.progress().update(done.addAndGet(total / 4 / Math.max(1, coarse.size())), work);
-        }
-    }
-
-    /**
-     * Grows the tree of a solution towards a list of points (for example a line) the way the first pass of
-     * {@link #solve} does: a subset spaced about {@value #COARSE_SPACING} apart, taken in order of distance from
-     * the start, so that paths radiate from the start point instead of chaining along the list (a chain that
-     * hugs a line of poles and zeros gathers error at every one of them). Does nothing for a solution not
-     * integrated by the engine.
-     */
-    public static void growTowards(ComputedSolution solution, List<SurfacePoint> points) {
-        EngineReading reading = solution.engineReading().orElse(null);
-        if (reading == null) {
-            return;
-        }
-        SurfacePoint start = reading.point(reading.tree().root().tauRe(), reading.tree().root().tauIm());
-        List<SurfacePoint> coarse = new ArrayList<>();
-        SurfacePoint last = null;
-        for (SurfacePoint p : points) {
-            if (last == null || Math.hypot(p.re() - last.re(), p.im() - last.im()) >= COARSE_SPACING
-                    || p.sheet() != last.sheet()) {
-                coarse.add(p);
-                last = p;
-            }
-        }
-        coarse.sort(Comparator.comparingDouble((SurfacePoint p) -> Math.hypot(p.re() - start.re(), p.im() - start.im())
-                + Math.abs(p.sheet() - start.sheet()) * 10.0));
-        for (SurfacePoint p : coarse) {
-            try {
-                reading.tree().extendTo(reading.tauRe(p), reading.tauIm(p));
-            } catch (TertiusException e) {
-                // the point itself will report it when evaluated
-            }
-        }
-    }
-
-    /** The grid point on the solution's surface, or null where it is not a point of it (the branch point). */
-    private static SurfacePoint pointOrNull(ComputedSolution solution, Grid grid, int i, int j) {
-        return grid.point(i, j, solution.coordinate());
-    }
-
-    private static SolutionValue stored(EngineReading reading, SurfacePoint p, RegionSettings settings) {
-        StateEstimate s = reading.tree().evaluateStored(reading.tauRe(p), reading.tauIm(p),
-                settings.maxRelativeError());
-        return s == null ? null : reading.read(p, s);
-    }
-
-    /** A closed-form value, or null (left to pass 3, which reports the failure) when it cannot be computed. */
-    private static SolutionValue direct(ComputedSolution solution, SurfacePoint p) {
-        try {
-            return solution.valueAt(p);
-        } catch (TertiusException e) {
-            return null;
-        }
+        settings.progress().update(total, total);
+        RegionStatistics stats = new RegionStatistics(tree.nodes().size(), tree.nodesGrown(), served, integrated, failed,
+                treeNanos, t2 - t1, tree.footprint());
+        return new GridResult(grid, tree, store.re, store.im, store.err, stats);
     }
 
     /** The value arrays of a grid: per value, real and imaginary parts and errors at every point. */
@@ -232,17 +158,15 @@ public final class RegionSolver {
                 err[n][k] = v.error(n);
             }
         }
-    }
 
-    private static double distance(ComputedSolution solution, Grid g, int i, int j, SurfacePoint start) {
-        SurfacePoint p = pointOrNull(solution, g, i, j);
-        if (p == null || start == null) {
-            return 0;
+        /** A point next to a pole: the first value infinite (drawn as a pole), no digit known. */
+        void putPole(int k) {
+            re[0][k] = Double.POSITIVE_INFINITY;
+            im[0][k] = 0;
         }
-        return ComplexPairs.abs(p.re() - start.re(), p.im() - start.im()) + Math.abs(p.sheet() - start.sheet()) * 10.0;
     }
 
-    private static void checkCancelled(RegionSettings s) {
+    static void checkCancelled(RegionSettings s) {
         if (s.cancelled().getAsBoolean() || Thread.currentThread().isInterrupted()) {
             throw new CancellationException("region computation cancelled");
         }

@@ -1,6 +1,5 @@
 package org.tertius.core.solution;
 
-import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import org.tertius.core.InvalidInputException;
@@ -9,22 +8,30 @@ import org.tertius.core.equation.IndependentVariable;
 import org.tertius.core.equation.PolynomialSystem;
 import org.tertius.core.equation.StateProjection;
 import org.tertius.core.equation.Term;
-import org.tertius.core.number.ComplexPairs;
-import org.tertius.core.path.PathSelector;
 import org.tertius.core.step.Node;
 import org.tertius.core.step.SolverSettings;
 import org.tertius.core.step.TaylorPadeStepper;
 import org.tertius.core.taylor.RecurrencePlan;
 
 /**
- * One solution of a polynomial system, fixed by its state at a start point, with dense output. It keeps the
- * nodes of its path tree (each with its Pade approximants); an evaluation is answered from a stored node whose
- * disk holds the point when its error estimate allows, otherwise a path is integrated from the nearest stored
- * node (Fornberg-Weideman path selection) and its nodes are added to the tree.
+ * One solution of a polynomial system, fixed by its state at a start point, with dense output. Three ways to
+ * evaluate, by what the value may depend on:
+ * <ul>
+ *   <li>{@link #evaluateCanonical}: a function of the start, the settings and the point only, bit for bit,
+ *   whatever was evaluated before and on however many threads: the path is planned from the root through
+ *   waypoints fixed by the point ({@link CanonicalPaths}) and never reads the tree.</li>
+ *   <li>{@link #freeze()} then {@link FrozenTree#evaluate} or {@link FrozenTree#evaluateStored}: a function of
+ *   the frozen tree and the point; a tree grown by {@link #extendTo} over a declared set of points in a fixed
+ *   order (from {@link #withRootOnly()}) is itself a function of that set, and its dense output is the fast
+ *   way to fill grids.</li>
+ *   <li>{@link #evaluate}: answered from a stored node whose disk holds the point when its error estimate
+ *   allows, otherwise from a path integrated from the nearest stored node (Fornberg-Weideman path selection)
+ *   whose nodes join the tree. The value may then depend on what was evaluated before (in its last digits,
+ *   within the error estimates).</li>
+ * </ul>
  *
  * <p>Thread-safe: the tree only grows, under a lock, and readers work on immutable snapshots; each thread has
- * its own stepper. Values do not depend on which thread asks, but a point may be reached along a different
- * path depending on what was evaluated before; values agree within their error estimates.
+ * its own stepper.
  */
 public final class Solution {
     private final PolynomialSystem system;
@@ -32,19 +39,14 @@ public final class Solution {
     private final SolverSettings settings;
     private final StateProjection projection;
     private final ThreadLocal<TaylorPadeStepper> steppers;
-    /** Steps towards a target already inside the disk of the current node before its value is accepted. */
-    private static final int MAX_APPROACHES = 6;
-    /** Steps without getting closer to the target before it is declared unreachable. */
-    private static final int STALL_STEPS = 60;
-    /** Carried relative error above which a node is penalised as the start of a new path. */
-    private static final double PENALTY_FROM = 1e-10;
     private final Object lock = new Object();
     private final boolean singularAtOrigin;
     private volatile Node[] nodes;
     private final NodeIndex index = new NodeIndex();
+    private final CanonicalPaths canonical;
 
     private Solution(PolynomialSystem system, RecurrencePlan plan, SolverSettings settings,
-                     StateProjection projection, Node root) {
+                     StateProjection projection, Node root, CanonicalPaths canonical) {
         this.system = system;
         this.plan = plan;
         this.settings = settings;
@@ -61,6 +63,8 @@ public final class Solution {
             }
         }
         this.singularAtOrigin = system.variable() == IndependentVariable.PLAIN && neg;
+        this.canonical = canonical != null || root == null ? canonical
+                : new CanonicalPaths(root, settings, singularAtOrigin);
     }
 
     /**
@@ -102,14 +106,23 @@ public final class Solution {
         double[] re = y0Re.clone();
         double[] im = y0Im.clone();
         projection.project(tau0Re, tau0Im, re, im);
-        Solution probe = new Solution(system, plan, settings, projection, null);
-        double maxR = probe.maxRadius(tau0Re, tau0Im);
+        Solution probe = new Solution(system, plan, settings, projection, null, null);
+        double maxR = PathTracer.maxRadius(probe.singularAtOrigin, tau0Re, tau0Im);
         if (e0Re.length != system.dimension() || e0Im.length != system.dimension()) {
             throw new InvalidInputException("start error", "expected " + system.dimension() + " components");
         }
         Node root = stepper.expand(0, -1, tau0Re, tau0Im, re, im, e0Re.clone(), e0Im.clone(),
                 Math.min(settings.initialStep(), maxR), maxR);
-        return new Solution(system, plan, settings, projection, root);
+        return new Solution(system, plan, settings, projection, root, null);
+    }
+
+    /**
+     * A solution with the same start, settings and canonical paths whose tree holds the root alone: a tree
+     * grown from it over a declared set of points in a fixed order does not depend on what this solution was
+     * asked before.
+     */
+    public Solution withRootOnly() {
+        return new Solution(system, plan, settings, projection, root(), canonical);
     }
 
     public PolynomialSystem system() {
@@ -143,15 +156,60 @@ public final class Solution {
         return s;
     }
 
+    /** The canonical paths' cache size in bytes. */
+    public long canonicalFootprint() {
+        return canonical.footprint();
+    }
+
     /**
-     * Evaluates the state at tau.
+     * Evaluates the state at tau from the tree, growing it when no stored node serves tau; the value may depend
+     * on what was evaluated before (see the class comment; {@link #evaluateCanonical} does not). Next to a pole
+     * of a component, closer than the uncertainty of the pole's position, the error estimate of that component
+     * is infinite (the other evaluations refuse such a point with a {@link PoleProximityException}); the serving
+     * node is still the one a path in more digits may follow.
      *
-     * @throws UnreachableTargetException if no path reaches tau within the step budget and the error bound
+     * @throws UnreachableTargetException if neither the path from the nearest node nor the one from the root (the
+     *     path of a fresh solution, so that a point reachable alone is reachable in any batch) reaches tau within
+     *     the step budget and the error bound
      */
     public StateEstimate evaluate(double tauRe, double tauIm) {
         int[] steps = new int[1];
         Node node = reach(tauRe, tauIm, steps);
-        return estimate(node, tauRe, tauIm, steps[0]);
+        return TreeReader.estimate(node, tauRe, tauIm, steps[0]);
+    }
+
+    /**
+     * Evaluates the state at tau along its canonical path (root, waypoints on nested lattices fixed by tau, tau):
+     * the result is a function of the start data, the settings and tau alone, bit for bit, independent of the
+     * order of queries, of the tree and of the number of threads. Neither reads nor grows the tree; the legs of
+     * the paths are cached where reusing them gives the same nodes. The node id of the estimate is negative (the
+     * serving node is not in the tree).
+     *
+     * @throws UnreachableTargetException if neither the canonical path nor the direct path from the root reaches
+     *     tau within the step budget and the error bound
+     * @throws PoleProximityException if tau lies next to a pole of a component, closer than the uncertainty of
+     *     the pole's position (no digit of that component is known)
+     */
+    public StateEstimate evaluateCanonical(double tauRe, double tauIm) {
+        checkTarget(tauRe, tauIm);
+        int[] steps = new int[1];
+        List<Node> path = canonical.path(tauRe, tauIm, steppers.get(), steps);
+        return finish(path.get(path.size() - 1), tauRe, tauIm, steps[0]);
+    }
+
+    /**
+     * The nodes of the canonical path to tau, from the root to the node that serves tau (see
+     * {@link #evaluateCanonical}); ids other than the root's are negative, each node's parent is the one
+     * before it in the list. For layers that integrate again along the same path in another precision.
+     */
+    public List<Node> canonicalPath(double tauRe, double tauIm) {
+        checkTarget(tauRe, tauIm);
+        return canonical.path(tauRe, tauIm, steppers.get(), new int[1]);
+    }
+
+    /** The tree as it stands now, for evaluations that depend on it and the point alone. */
+    public FrozenTree freeze() {
+        return new FrozenTree(this, nodes, index);
     }
 
     /**
@@ -163,88 +221,45 @@ public final class Solution {
         reach(tauRe, tauIm, new int[1]);
     }
 
+    /**
+     * The value at tau from the stored tree only (no new steps), with the inherited error bounded over the
+     * serving node's disk: the fast path for evaluating many points (grids, tables) once a tree covers them.
+     *
+     * @param maxRelativeError the largest accepted local truncation error relative to 1 + |y|
+     * @return the estimate, or null if no stored node covers tau to that accuracy
+     */
+    public StateEstimate evaluateStored(double tauRe, double tauIm, double maxRelativeError) {
+        return TreeReader.stored(nodes, index, tauRe, tauIm, maxRelativeError);
+    }
+
     /** The node that serves tau, after growing the tree if needed; steps[0] receives the new steps. */
     private Node reach(double tauRe, double tauIm, int[] stepsOut) {
-        InvalidInputException.requireFinite("target", tauRe);
-        InvalidInputException.requireFinite("target", tauIm);
-        if (singularAtOrigin && tauRe == 0 && tauIm == 0) {
-            throw new InvalidInputException("target", "x = 0 is a singular point of this system");
-        }
+        checkTarget(tauRe, tauIm);
         TaylorPadeStepper stepper = steppers.get();
-        double tol = settings.tolerance();
         Node[] snapshot = nodes;
-        Node served = bestCovering(snapshot, tauRe, tauIm, stepper, tol);
+        Node served = TreeReader.bestCovering(snapshot, index, tauRe, tauIm, stepper, settings.tolerance());
         if (served != null) {
             stepsOut[0] = 0;
             return served;
         }
-        Node start = nearest(snapshot, tauRe, tauIm);
-        List<Node> path = new ArrayList<>();
-        Node current = start;
-        int baseId = -1;
-        int steps = 0;
-        int approaches = 0;
-        double bestDistance = Double.POSITIVE_INFINITY;
-        int lastProgress = 0;
-        while (true) {
-            PathSelector.Choice choice = PathSelector.choose(current, tauRe, tauIm, stepper, tol);
-            if (choice != null && choice.reachesTarget()) {
-                break;
+        Node start = TreeReader.nearest(snapshot, tauRe, tauIm);
+        PathTracer.Trace t;
+        try {
+            t = PathTracer.trace(start, tauRe, tauIm, stepper, settings, singularAtOrigin);
+        } catch (UnreachableTargetException fromNearest) {
+            // the path a fresh solution would take: a point reachable alone stays reachable in any batch
+            if (start == snapshot[0]) {
+                throw fromNearest;
             }
-            if (inDisk(current, tauRe, tauIm)) {
-                // the target is in the disk but its local error is above the tolerance (it lies next to a
-                // singularity of some component): approach it a few times, then accept the value with its
-                // larger, honest error estimate rather than circling for ever
-                if (++approaches > MAX_APPROACHES) {
-                    break;
-                }
-            }
-            if (choice == null || steps >= settings.maxSteps()) {
-                throw new UnreachableTargetException("could not reach tau = " + tauRe + (tauIm < 0 ? "" : "+")
-                        + tauIm + "i within " + settings.maxSteps() + " steps at tolerance " + tol
-                        + " (last node at " + current.tauRe() + "," + current.tauIm() + " with radius "
-                        + current.radius() + "); the point may lie on or next to a singularity: move it slightly"
-                        + " or loosen the tolerance");
-            }
-            double maxR = maxRadius(current.tauRe() + current.radius() * choice.sr(),
-                    current.tauIm() + current.radius() * choice.si());
-            Node next = stepper.step(current, choice.sr(), choice.si(), baseId - steps - 1, maxR);
-            if (!(next.accumulatedError() <= settings.maxError())) {
-                throw new UnreachableTargetException("the accumulated error estimate " + next.accumulatedError()
-                        + " exceeds " + settings.maxError() + " on the way to tau = " + tauRe + "," + tauIm
-                        + "; tighten the tolerance or raise the order");
-            }
-            path.add(next);
-            current = next;
-            steps++;
-            double d = ComplexPairs.abs(tauRe - next.tauRe(), tauIm - next.tauIm());
-            if (d < bestDistance * 0.999) {
-                bestDistance = d;
-                lastProgress = steps;
-            } else if (steps - lastProgress > STALL_STEPS) {
-                throw new UnreachableTargetException("no progress towards tau = " + tauRe + "," + tauIm + " in "
-                        + STALL_STEPS + " steps (last node at " + next.tauRe() + "," + next.tauIm()
-                        + "); the target is hemmed in by singularities: move it slightly or loosen the tolerance");
+            try {
+                start = snapshot[0];
+                t = PathTracer.trace(start, tauRe, tauIm, stepper, settings, singularAtOrigin);
+            } catch (UnreachableTargetException fromRoot) {
+                throw fromNearest;
             }
         }
-        Node last = current;
-        if (!path.isEmpty()) {
-            last = merge(start, path);
-        }
-        stepsOut[0] = steps;
-        return last;
-    }
-
-    private static boolean inDisk(Node n, double tRe, double tIm) {
-        return ComplexPairs.abs(tRe - n.tauRe(), tIm - n.tauIm()) <= n.radius();
-    }
-
-    /** Largest radius allowed at tau: half the distance to a singular origin in PLAIN mode. */
-    private double maxRadius(double tRe, double tIm) {
-        if (singularAtOrigin) {
-            return 0.5 * ComplexPairs.abs(tRe, tIm);
-        }
-        return 4.0;
+        stepsOut[0] = t.steps();
+        return t.steps() == 0 ? t.end() : merge(start, t.nodes());
     }
 
     private Node merge(Node start, List<Node> path) {
@@ -267,130 +282,39 @@ public final class Solution {
         }
     }
 
-    private Node bestCovering(Node[] snapshot, double tRe, double tIm, TaylorPadeStepper stepper, double tol) {
-        Node best = null;
-        double bestErr = Double.POSITIVE_INFINITY;
-        for (int id : index.candidates(tRe, tIm)) {
-            if (id >= snapshot.length) {
-                continue;
-            }
-            Node n = snapshot[id];
-            double d = ComplexPairs.abs(tRe - n.tauRe(), tIm - n.tauIm());
-            if (d > n.radius()) {
-                continue;
-            }
-            double e = stepper.localError(n, (tRe - n.tauRe()) / n.radius(), (tIm - n.tauIm()) / n.radius());
-            if (e > tol) {
-                continue;
-            }
-            double total = e + n.accumulatedError();
-            if (total < bestErr) {
-                bestErr = total;
-                best = n;
-            }
+    /** Refuses targets that are not finite or sit on a singular origin. */
+    void checkTarget(double tauRe, double tauIm) {
+        InvalidInputException.requireFinite("target", tauRe);
+        InvalidInputException.requireFinite("target", tauIm);
+        if (singularAtOrigin && tauRe == 0 && tauIm == 0) {
+            throw new InvalidInputException("target", "x = 0 is a singular point of this system");
         }
-        return best;
     }
 
     /**
-     * The value at tau from the stored tree only (no new steps), with the inherited error bounded over the
-     * serving node's disk: the fast path for evaluating many points (grids, tables) once a tree covers them.
+     * The estimate at tau from the node that serves it.
      *
-     * @param maxRelativeError the largest accepted local truncation error relative to 1 + |y|
-     * @return the estimate, or null if no stored node covers tau to that accuracy
+     * @throws PoleProximityException if the error estimate of a component is not finite: next to a pole of
+     *     that component, closer than the uncertainty of the pole's position, no digit of it is known
      */
-    public StateEstimate evaluateStored(double tauRe, double tauIm, double maxRelativeError) {
-        Node[] snapshot = nodes;
-        int n = system.dimension();
-        double[] out = new double[2 * n];
-        double[] err = new double[n];
-        double[] trunc = new double[n];
-        // candidates in order of relative distance d / r: the first whose truncation error is acceptable serves
-        int[] ids = index.candidates(tauRe, tauIm);
-        double[] rel = new double[ids.length];
-        int count = 0;
-        int[] order = new int[ids.length];
-        for (int id : ids) {
-            if (id >= snapshot.length) {
-                continue;
-            }
-            Node c = snapshot[id];
-            double d = ComplexPairs.abs(tauRe - c.tauRe(), tauIm - c.tauIm()) / c.radius();
-            if (d <= 1) {
-                rel[count] = d;
-                order[count++] = id;
+    StateEstimate finish(Node node, double tauRe, double tauIm, int steps) {
+        StateEstimate e = TreeReader.estimate(node, tauRe, tauIm, steps);
+        for (int i = 0; i < e.dimension(); i++) {
+            if (!Double.isFinite(e.error(i)) || !Double.isFinite(e.re(i)) || !Double.isFinite(e.im(i))) {
+                throw new PoleProximityException("no digit of " + system.unknowns().get(i) + " is known at tau = "
+                        + tauRe + (tauIm < 0 ? "" : "+") + tauIm + "i: the point lies next to a pole of it, closer"
+                        + " than the uncertainty of the pole's position in double precision; move it away from the"
+                        + " pole or compute in more digits", i);
             }
         }
-        for (int pass = 0; pass < count; pass++) {
-            int bestK = -1;
-            for (int k = 0; k < count; k++) {
-                if (order[k] >= 0 && (bestK < 0 || rel[k] < rel[bestK])) {
-                    bestK = k;
-                }
-            }
-            Node c = snapshot[order[bestK]];
-            order[bestK] = -1;
-            double sr = (tauRe - c.tauRe()) / c.radius();
-            double si = (tauIm - c.tauIm()) / c.radius();
-            c.evaluateScaled(sr, si, out, trunc, err);
-            boolean ok = true;
-            for (int i = 0; i < n && ok; i++) {
-                ok = trunc[i] <= maxRelativeError * (1 + ComplexPairs.abs(out[2 * i], out[2 * i + 1]));
-            }
-            if (ok) {
-                return toEstimate(tauRe, tauIm, out, err, c.id(), 0);
-            }
-        }
-        return null;
+        return e;
     }
 
-    /**
-     * The node a new path starts from: the nearest disk, with a penalty for nodes that carry a large error
-     * (half a radius per decade above {@link #PENALTY_FROM}), so that paths do not grow from nodes placed next to poles when a
-     * cleaner node is almost as near (after the Fornberg-Weideman rule of starting from the nearest node).
-     */
-    private static Node nearest(Node[] snapshot, double tRe, double tIm) {
-        Node best = snapshot[0];
-        double bestScore = Double.POSITIVE_INFINITY;
-        for (Node n : snapshot) {
-            double dx = tRe - n.tauRe();
-            double dy = tIm - n.tauIm();
-            // the score is at least max(|dx|, |dy|) - radius (the penalty is not negative): a node that cannot
-            // beat the best so far is passed over without its distance and logarithm (a margin of 1e-12 keeps
-            // rounding from deciding, so the choice is the one of the full comparison)
-            if (Math.max(Math.abs(dx), Math.abs(dy)) - n.radius() > bestScore * (1 + 1e-12)) {
-                continue;
-            }
-            double d = ComplexPairs.abs(dx, dy) - n.radius();
-            double decades = Math.max(0, Math.log10(Math.max(n.accumulatedError(), 1e-300) / PENALTY_FROM));
-            double score = Math.max(d, 0) + 0.5 * n.radius() * decades;
-            if (score < bestScore) {
-                bestScore = score;
-                best = n;
-            }
-        }
-        return best;
+    TaylorPadeStepper stepper() {
+        return steppers.get();
     }
 
-    private StateEstimate estimate(Node node, double tRe, double tIm, int steps) {
-        int n = system.dimension();
-        double[] out = new double[2 * n];
-        double[] err = new double[n];
-        node.evaluateScaled((tRe - node.tauRe()) / node.radius(), (tIm - node.tauIm()) / node.radius(), out, null, err);
-        return toEstimate(tRe, tIm, out, err, node.id(), steps);
-    }
-
-    /** Packs interleaved values and their errors (plus a few ulps of the value) into an estimate. */
-    private static StateEstimate toEstimate(double tRe, double tIm, double[] out, double[] err, int nodeId, int steps) {
-        int n = err.length;
-        double[] re = new double[n];
-        double[] im = new double[n];
-        double[] e = new double[n];
-        for (int i = 0; i < n; i++) {
-            re[i] = out[2 * i];
-            im[i] = out[2 * i + 1];
-            e[i] = err[i] + 4 * Math.ulp(1.0) * ComplexPairs.abs(re[i], im[i]);
-        }
-        return new StateEstimate(tRe, tIm, re, im, e, nodeId, steps);
+    boolean singularAtOrigin() {
+        return singularAtOrigin;
     }
 }

@@ -47,7 +47,10 @@ public final class StateEstimate {
         return error[i];
     }
 
-    /** The node whose approximant gave the value. */
+    /**
+     * The id of the node whose approximant gave the value; negative for a node outside the tree (canonical and
+     * detached paths).
+     */
     public int nodeId() {
         return nodeId;
     }

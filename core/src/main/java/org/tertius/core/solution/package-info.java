@@ -1,7 +1,9 @@
 /**
- * The engine's solution of a polynomial system: the path tree from a start state, grown on demand along selected
- * paths, with dense output from the stored Pade approximants and error estimates carried along the paths.
+ * Solutions of polynomial systems with dense output: path trees of Taylor-Pade nodes, and three ways to evaluate
+ * them by what a value may depend on (canonical paths from the root, frozen trees, growing trees; see
+ * {@link org.tertius.core.solution.Solution}).
  *
- * <p>May depend on: {@code number}, {@code equation}, {@code taylor}, {@code pade}, {@code step}, {@code path}.
+ * <p>May depend on {@code org.tertius.core} (exceptions), {@code number}, {@code equation}, {@code taylor},
+ * {@code step} and {@code path}; nothing in the core below it depends on it.
  */
 package org.tertius.core.solution;

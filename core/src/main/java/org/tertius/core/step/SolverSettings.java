@@ -8,7 +8,11 @@ import org.tertius.core.InvalidInputException;
  * <ul>
  *   <li>order N: Taylor order per node; Pade approximants [N/2 / N/2] and [N/2-1 / N/2-1] are formed and
  *       their difference is the local error estimate.</li>
- *   <li>tolerance: accepted local error per step, relative to 1 + |y| per component.</li>
+ *   <li>tolerance: accepted local error per step, relative to 1 + |y| per component. What limits it: below
+ *       1e-14 the Pade rank test follows the tolerance down to 1e-15 only, and a truncation error below the
+ *       rounding level of the approximants (at most 2e-15 relative) is not chased with smaller steps, so that
+ *       tolerances under about 2e-15 act alike (the values are then as accurate as double precision allows along
+ *       the path, and their estimates say how accurate that is; more digits need high precision).</li>
  *   <li>padeTolerance: the relative threshold of the rank test of the robust Pade algorithm.</li>
  *   <li>maxSteps: the largest number of steps of one path before the target is declared unreachable.</li>
  *   <li>maxError: a path whose carried error (relative to 1 + |y| per component) exceeds this is abandoned and its

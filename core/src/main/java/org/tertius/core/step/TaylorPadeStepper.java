@@ -36,6 +36,18 @@ public final class TaylorPadeStepper {
     private static final double RHO_FACTOR = 1.0;
     /** Relative size of the perturbation used for the directional derivative. */
     private static final double ETA = 1e-7;
+    /**
+     * The largest relative rounding level that step control lets stand in for a tighter tolerance (see
+     * {@link #controlled}): the rounding bound of double-precision Pade values in small disks (measured on the
+     * demo solution of the README: 1.8e-15 at radii 1e-4 to 1e-6, 3e-13 at radius 0.1).
+     */
+    static final double ROUNDING_CAP = 2e-15;
+    /**
+     * The smallest rank tolerance of the robust Pade approximants: below it their rank decisions follow the
+     * rounding of the Taylor coefficients (measured on the demo solution of the README: 1e-16 lost two to three
+     * digits against 1e-15 at tolerance 1e-16).
+     */
+    static final double RANK_TOLERANCE_FLOOR = 1e-15;
 
     private final SolverSettings settings;
     private final DoubleTaylorKernel kernel;
@@ -48,6 +60,8 @@ public final class TaylorPadeStepper {
     private final double[][] cIm;
     private final double[] val;
     private final double[] err;
+    private final double[] rounding;
+    private final double rankTolerance;
     private long expansions;
 
     public TaylorPadeStepper(PolynomialSystem system, RecurrencePlan plan, SolverSettings settings,
@@ -63,6 +77,17 @@ public final class TaylorPadeStepper {
         this.cIm = new double[n][order + 1];
         this.val = new double[2 * n];
         this.err = new double[n];
+        this.rounding = new double[n];
+        this.rankTolerance = rankTolerance(settings);
+    }
+
+    /**
+     * The rank tolerance of the robust Pade approximants: the settings' one, lowered to the step tolerance when
+     * that is tighter (a degree dropped at the rank tolerance leaves a misfit of about that size, which a
+     * tolerance below it would chase with ever smaller steps), but not below {@link #RANK_TOLERANCE_FLOOR}.
+     */
+    static double rankTolerance(SolverSettings settings) {
+        return Math.min(settings.padeTolerance(), Math.max(settings.tolerance(), RANK_TOLERANCE_FLOOR));
     }
 
     public SolverSettings settings() {
@@ -111,8 +136,8 @@ public final class TaylorPadeStepper {
         for (int iter = 0; iter < 30; iter++) {
             rescale(rawRe, rawIm, r / r0);
             for (int i = 0; i < n; i++) {
-                hi[i] = RobustPade.approximate(cRe[i], cIm[i], m, m, settings.padeTolerance(), order);
-                lo[i] = RobustPade.approximate(cRe[i], cIm[i], m - 1, m - 1, settings.padeTolerance(), order);
+                hi[i] = RobustPade.approximate(cRe[i], cIm[i], m, m, rankTolerance, order);
+                lo[i] = RobustPade.approximate(cRe[i], cIm[i], m - 1, m - 1, rankTolerance, order);
             }
             double e = circleError(hi, lo);
             double factor = Math.pow(tol / Math.max(e, 1e-300), 1.0 / m);
@@ -156,21 +181,36 @@ public final class TaylorPadeStepper {
 
     /**
      * The relative local truncation error estimate of a node at the scaled point s (what step control acts
-     * on): max over components of truncation error / (1 + |value|). Rounding errors are not included here
-     * but are carried into the error vector and the reported errors.
+     * on): max over components of truncation error / (1 + |value|), each scaled by
+     * {@code tol / max(tol, rounding level)} (see {@link #controlled}), so that comparing it with the tolerance
+     * compares the truncation error with the larger of the tolerance and the rounding level. Rounding errors
+     * are not included here but are carried into the error vector and the reported errors.
      */
     public double localError(Node node, double sr, double si) {
-        node.evaluateScaled(sr, si, val, err, true);
+        node.localErrors(sr, si, val, err, rounding);
         double e = 0;
         for (int i = 0; i < n; i++) {
-            double mod = ComplexPairs.abs(val[2 * i], val[2 * i + 1]);
-            double rel = err[i] / (1 + mod);
+            double scale = 1 + ComplexPairs.abs(val[2 * i], val[2 * i + 1]);
+            double rel = controlled(err[i] / scale, rounding[i] / scale, settings.tolerance());
             if (!Double.isFinite(rel)) {
                 return Double.POSITIVE_INFINITY;
             }
             e = Math.max(e, rel);
         }
         return e;
+    }
+
+    /**
+     * A relative truncation error as step control sees it: scaled by {@code tol / max(tol, level)}, where level
+     * is the relative rounding level of the value capped at {@link #ROUNDING_CAP}. A truncation error below the
+     * rounding of the coefficients and of the evaluation cannot be told from it, and no smaller step lowers
+     * that rounding: a tolerance below it acts as that level (at most {@link #ROUNDING_CAP}), instead of
+     * shrinking the steps towards zero after noise. Tolerances above the cap, the default among them, are not
+     * affected.
+     */
+    static double controlled(double relativeTruncation, double relativeRounding, double tol) {
+        double level = Math.min(relativeRounding, ROUNDING_CAP);
+        return level > tol ? relativeTruncation * (tol / level) : relativeTruncation;
     }
 
     /**
@@ -232,7 +272,7 @@ public final class TaylorPadeStepper {
         rescale(xr, xi, r / r0);
         PadeApproximant[] out = new PadeApproximant[n];
         for (int i = 0; i < n; i++) {
-            out[i] = RobustPade.approximate(cRe[i], cIm[i], m, m, settings.padeTolerance(), order);
+            out[i] = RobustPade.approximate(cRe[i], cIm[i], m, m, rankTolerance, order);
         }
         return out;
     }
@@ -312,10 +352,25 @@ public final class TaylorPadeStepper {
         }
     }
 
-    /** Second largest over points of the unit circle of the relative local error estimate. */
+    /**
+     * Second largest over points of the unit circle of the relative local error estimate, as step control sees
+     * it ({@link #controlled}: tolerances below the rounding level act as that level).
+     */
     private double circleError(PadeApproximant[] hi, PadeApproximant[] lo) {
-        double[] a = new double[4];
+        double tol = settings.tolerance();
+        boolean belowCap = tol < ROUNDING_CAP;
+        double[] a = new double[belowCap ? 5 : 4];
         double[] b = new double[4];
+        double[] coefficientRounding = new double[n];
+        if (belowCap) {
+            for (int i = 0; i < n; i++) {
+                double mx = 0;
+                for (int k = 0; k <= order; k++) {
+                    mx = Math.max(mx, ComplexPairs.abs(cRe[i][k], cIm[i][k]));
+                }
+                coefficientRounding[i] = ROUNDING_ULPS * Math.ulp(1.0) * mx;
+            }
+        }
         double[] es = new double[CIRCLE_POINTS];
         for (int p = 0; p < CIRCLE_POINTS; p++) {
             double th = 2 * Math.PI * p / CIRCLE_POINTS + 0.1;
@@ -325,7 +380,11 @@ public final class TaylorPadeStepper {
             for (int i = 0; i < n; i++) {
                 hi[i].evaluate(sr, si, a);
                 lo[i].evaluate(sr, si, b);
-                double rel = (ComplexPairs.abs(a[0] - b[0], a[1] - b[1]) + a[3] + b[3]) / (1 + ComplexPairs.abs(a[0], a[1]));
+                double scale = 1 + ComplexPairs.abs(a[0], a[1]);
+                double rel = (ComplexPairs.abs(a[0] - b[0], a[1] - b[1]) + a[3] + b[3]) / scale;
+                if (belowCap) {
+                    rel = controlled(rel, (a[4] + coefficientRounding[i]) / scale, tol);
+                }
                 e = Math.max(e, Double.isFinite(rel) ? rel : Double.POSITIVE_INFINITY);
             }
             es[p] = e;

@@ -1,7 +1,8 @@
 /**
- * One Taylor-Pade step: the settings, the immutable node (state, disk, approximants of two orders, error
- * propagation, singularities found) and the thread-confined stepper that makes nodes.
+ * One Taylor-Pade step: the expansion of a polynomial system at a point into a node (Pade approximants of two
+ * orders, radius adapted to the tolerance, error vector carried by the flow), and the settings of the integrator.
  *
- * <p>May depend on: {@code number}, {@code equation}, {@code taylor}, {@code pade}.
+ * <p>May depend on {@code org.tertius.core} (exceptions), {@code number}, {@code equation}, {@code taylor} and
+ * {@code pade}.
  */
 package org.tertius.core.step;

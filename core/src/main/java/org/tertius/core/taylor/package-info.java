@@ -1,7 +1,7 @@
 /**
- * Taylor coefficients of polynomial systems: a recurrence plan compiled once per system (shared products, no
- * numbers) and the double-precision kernel that runs it on primitive arrays.
+ * Taylor coefficients of the solutions of polynomial systems: recurrence plans compiled once per system, and
+ * the double-precision kernel that runs them.
  *
- * <p>May depend on: {@code equation}.
+ * <p>May depend on {@code number} and {@code equation}.
  */
 package org.tertius.core.taylor;

@@ -86,8 +86,7 @@ class RegionSolverTest {
         Painleve3Solution s = Painleve3Solution.builder(Painleve3.of(2, 2, 1, -1))
                 .start(z0, z0.subtract(0.5).divide(z0.add(0.5)), z0.add(0.5).pow(-2)).build();
         Grid g = Grid.of(-2, 2, 41, -2, 2, 41, 0);
-        RegionSolver.solve(s, g, RegionSettings.defaults());
-        List<Singularity> found = PoleFinder.find(s, g);
+        List<Singularity> found = PoleFinder.find(RegionSolver.solve(s, g, RegionSettings.defaults()));
         assertEquals(2, found.size(), found.toString());
         for (Singularity x : found) {
             Complex expect = x.kind() == Singularity.Kind.POLE ? new Complex(-0.5) : new Complex(0.5);
@@ -109,7 +108,7 @@ class RegionSolverTest {
         GridResult r = RegionSolver.solve(s, g, RegionSettings.defaults());
         assertEquals(0, r.statistics().failed());
         int poles = 0;
-        for (Singularity x : PoleFinder.find(s, g)) {
+        for (Singularity x : PoleFinder.find(r)) {
             if (x.kind() == Singularity.Kind.POLE) {
                 poles++;
                 assertTrue(x.point().z().subtract(new Complex(-0.5)).norm() <= x.error() + 1e-12, x.toString());
@@ -133,9 +132,9 @@ class RegionSolverTest {
         Complex[] s0 = ref.value(p0);
         Painleve3Solution s = Painleve3Solution.builder(ref.equation()).start(p0.z(), s0[0], s0[1]).build();
         Grid g = Grid.of(-3, 3, 61, -3, 3, 61, 0);
-        RegionSolver.solve(s, g, RegionSettings.defaults());
+        GridResult r = RegionSolver.solve(s, g, RegionSettings.defaults());
         int poles = 0;
-        for (Singularity x : PoleFinder.find(s, g)) {
+        for (Singularity x : PoleFinder.find(r)) {
             if (x.kind() != Singularity.Kind.POLE) {
                 continue;
             }

@@ -119,8 +119,7 @@ abstract class ComputedSolutionChecks {
     void everyListedPoleOrZeroShowsInTheValuesBesideIt() {
         ComputedSolution s = fresh();
         Grid g = region();
-        RegionSolver.solve(s, g, RegionSettings.defaults());
-        List<Singularity> found = PoleFinder.find(s, g);
+        List<Singularity> found = PoleFinder.find(RegionSolver.solve(s, g, RegionSettings.defaults()));
         assertTrue(!found.isEmpty(), "no pole or zero found in " + g.re0() + ".." + g.re1());
         for (Singularity p : found) {
             double h = 1e-3;
