@@ -44,7 +44,7 @@ final class TaylorStepper {
         for (int shrink = 0; series == null; shrink++) {
             try {
                 series = expand(tau, y, r, counter);
-            } catch (FixedPointKernel.ScaleTooLarge e) {
+            } catch (CoefficientGrowth.ScaleTooLarge e) {
                 if (shrink >= 12) {
                     throw new UnreachableTargetException("the high-precision series near tau = " + tau.toComplex()
                             + " keeps growing as its scale shrinks: the path runs into a singularity");
