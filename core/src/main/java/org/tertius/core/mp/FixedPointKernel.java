@@ -2,7 +2,6 @@ package org.tertius.core.mp;
 import java.math.BigInteger;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.UnreachableTargetException;
-import org.tertius.core.equation.IndependentVariable;
 import org.tertius.core.number.MpComplex;
 import org.tertius.core.number.MpContext;
 import org.tertius.core.taylor.RecurrencePlan;
@@ -14,7 +13,8 @@ import org.tertius.core.taylor.RecurrencePlan;
  * product takes four limb products per pair of limbs (three BigInteger products, after Gauss, when the format
  * asks for them); nothing is allocated per product. The integer limbs start small and
  * are doubled when a value outgrows them. Stateless apart from its immutable inputs, so one kernel can serve
- * several threads.
+ * several threads. The series of the powers of the base are made by {@code BaseSeries}, the root test of the
+ * coefficients' growth is {@code CoefficientGrowth}'s.
  */
 final class FixedPointKernel {
     /**
@@ -137,41 +137,6 @@ final class FixedPointKernel {
     }
 
     /**
-     * Raised when the scaled coefficients grow by more than GROWTH_LIMIT per order (a root test at orders 16, 32,
-     * 64, ...): the scale lies well beyond the radius of convergence, and finishing the expansion would only fill
-     * integer limbs (and cost their products). Carries the growth factor seen, so that the caller can shrink the
-     * scale at once.
-     */
-    static final class ScaleTooLarge extends RuntimeException {
-        private static final long serialVersionUID = 1L;
-        final double growth;
-
-        ScaleTooLarge(double growth) {
-            super("scaled Taylor coefficients grow by " + growth + " per order", null, false, false);
-            this.growth = growth;
-        }
-    }
-
-    /** Largest growth per order of the scaled coefficients accepted at the root-test checkpoints. */
-    private static final double GROWTH_LIMIT = 1.5;
-
-    /**
-     * log2 of the growth per order shown by coefficient m: max over the components of
-     * (log2 |y_{i,m}| - log2(1 + |y_{i,0}|)) / m.
-     */
-    private static double growthBits(LimbVector w, LimbFormat fmt, int n, int st, int m, double[] log2Start) {
-        double g = Double.NEGATIVE_INFINITY;
-        for (int i = 0; i < n; i++) {
-            int o = (i * st + m) * fmt.limbs();
-            double a = Math.hypot(fmt.approximate(w.re, o), fmt.approximate(w.im, o));
-            if (a > 0) {
-                g = Math.max(g, (Math.log(a) / Math.log(2) - log2Start[i]) / m);
-            }
-        }
-        return g;
-    }
-
-    /**
      * The work arrays of one expansion in one limb format, and the loop over the orders; widened in place of a
      * fresh start when a value outgrows the integer limbs.
      */
@@ -203,7 +168,7 @@ final class FixedPointKernel {
             for (int c = 0; c < coefRe.length; c++) {
                 coef.set(c, coefRe[c], coefIm[c]);
             }
-            base = baseSeries(tau0, scale, fmt);
+            base = BaseSeries.of(plan, ctx, order, f, tau0, scale, fmt);
             aux = new LimbVector(fmt, 2);
             aux.set(0, MpContext.fixedRe(ctx.fromDouble(scale, 0), f), BigInteger.ZERO);
             log2Start = new double[n];
@@ -255,10 +220,7 @@ final class FixedPointKernel {
                         expandOrder(k, w, base, coef, aux, acc, rhs, known, split ? partner : null);
                         int m = k + 1;
                         if (m >= 16 && m < order && (m & (m - 1)) == 0) {
-                            double g = growthBits(w, fmt, n, st, m, log2Start);
-                            if (g > Math.log(GROWTH_LIMIT) / Math.log(2)) {
-                                throw new ScaleTooLarge(Math.pow(2, g));
-                            }
+                            CoefficientGrowth.check(w, fmt, n, st, m, log2Start);
                         }
                     }
                     break;
@@ -268,7 +230,7 @@ final class FixedPointKernel {
                     }
                     // the growth seen at the last complete order, carried to the full order, plus a margin; order
                     // k is done again (its stores overwrite whatever it had written)
-                    double g = k >= 4 ? Math.max(0, growthBits(w, fmt, n, st, k, log2Start)) : 1;
+                    double g = k >= 4 ? Math.max(0, CoefficientGrowth.growthBits(w, fmt, n, st, k, log2Start)) : 1;
                     if (partner != null) {
                         partner.close();
                         partner = null;
@@ -412,51 +374,5 @@ final class FixedPointKernel {
                 }
             }
         }
-    }
-
-    /**
-     * Series in s of b^j for each distinct power j of the base: for tau = log z, e^{j tau0} (j r)^k / k!; for the
-     * plain variable, x0^j binom(j, k) (r / x0)^k. Both are c_k = c_{k-1} * m * a_k / k with a_k = 1 or j-k+1.
-     */
-    private LimbVector baseSeries(MpComplex tau0, double scale, LimbFormat fmt) {
-        final int st = order + 1;
-        int q = plan.basePowerCount();
-        LimbVector base = new LimbVector(fmt, q * st);
-        boolean log = plan.variable() == IndependentVariable.LOG;
-        MpComplex b0 = log ? ctx.exp(tau0) : tau0;
-        for (int qi = 0; qi < q; qi++) {
-            int j = plan.basePower(qi);
-            MpComplex c0 = power(b0, j);
-            MpComplex m = log ? ctx.fromDouble(j * scale, 0) : ctx.divide(ctx.fromDouble(scale, 0), b0);
-            BigInteger mr = MpContext.fixedRe(m, f);
-            BigInteger mi = MpContext.fixedIm(m, f);
-            BigInteger ms = mr.add(mi);
-            int o = qi * st;
-            BigInteger ar = MpContext.fixedRe(c0, f);
-            BigInteger ai = MpContext.fixedIm(c0, f);
-            base.set(o, ar, ai);
-            for (int k = 1; k <= order; k++) {
-                BigInteger t1 = ar.multiply(mr);
-                BigInteger t2 = ai.multiply(mi);
-                BigInteger t3 = ar.add(ai).multiply(ms);
-                BigInteger pr = t1.subtract(t2);
-                BigInteger pi = t3.subtract(t1).subtract(t2);
-                long a = log ? 1 : j - k + 1;
-                BigInteger d = BigInteger.valueOf(k);
-                BigInteger am = BigInteger.valueOf(a);
-                ar = MpContext.shiftRound(pr.multiply(am), f).divide(d);
-                ai = MpContext.shiftRound(pi.multiply(am), f).divide(d);
-                base.set(o + k, ar, ai);
-            }
-        }
-        return base;
-    }
-
-    private MpComplex power(MpComplex b, int j) {
-        MpComplex r = ctx.fromLong(1);
-        for (int i = 0; i < Math.abs(j); i++) {
-            r = ctx.multiply(r, b);
-        }
-        return j < 0 ? ctx.reciprocal(r) : r;
     }
 }

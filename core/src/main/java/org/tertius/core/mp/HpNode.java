@@ -39,6 +39,6 @@ final class HpNode {
         if (fractions == null) {
             return series.evaluate(ctx, s);
         }
-        return SegmentIntegrator.padeValue(ctx, fractions, s, log2Tolerance);
+        return PadeStepper.padeValue(ctx, fractions, s, log2Tolerance);
     }
 }

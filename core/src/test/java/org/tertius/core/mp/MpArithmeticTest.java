@@ -222,9 +222,9 @@ class MpArithmeticTest {
         double log2Diff = c400.subtract(conv[2], conv[1]).log2Abs();
         assertTrue(log2Diff < -1023 && log2Diff > -400 * MpContext.LOG2_10, "difference 2^" + log2Diff
                 + " should lie between 1e-400 and the double range");
-        assertTrue(SegmentIntegrator.padeValue(c400, f, s, -400 * MpContext.LOG2_10) == null,
+        assertTrue(PadeStepper.padeValue(c400, f, s, -400 * MpContext.LOG2_10) == null,
                 "a Pade value 1e-370 off was accepted at a tolerance of 1e-400");
-        assertTrue(SegmentIntegrator.padeValue(c400, f, s, -300 * MpContext.LOG2_10) != null,
+        assertTrue(PadeStepper.padeValue(c400, f, s, -300 * MpContext.LOG2_10) != null,
                 "the same value must pass a tolerance of 1e-300");
     }
 
@@ -344,7 +344,7 @@ class MpArithmeticTest {
         TaylorSeries series = new TaylorSeries(work.fromLong(0), 1, f, re, im);
         ContinuedFraction plain = ContinuedFraction.of(wide, exactCoefficients(series, wide, n));
         assertTrue(plain.rowGrowth() > 80, "rows grew by 2^" + plain.rowGrowth());
-        ContinuedFraction adapted = SegmentIntegrator.fraction(series, wide, 0);
+        ContinuedFraction adapted = PadeStepper.fraction(series, wide, 0);
         assertTrue(adapted.context().digits() > wide.digits(), "the fraction was not built again in more digits");
         MpContext ref = wide.widen(80);
         MpComplex s = work.fromDouble(0.7, 0.4);
