@@ -41,9 +41,17 @@ public final class MemberSolution {
     private final Solution engine;
     private final IntegralMonitor monitor;
     private final Linearized[] observables;
+    /** Member 1 started at x = 0: its series there (null otherwise). */
+    private final OriginSeries origin;
 
     private MemberSolution(HierarchyMember member, MemberParameters parameters, SolverSettings settings, Complex x0,
                            int x0Sheet, List<Complex> startState, double[] startError) {
+        this(member, parameters, settings, x0, x0Sheet, startState, startError, null);
+    }
+
+    private MemberSolution(HierarchyMember member, MemberParameters parameters, SolverSettings settings, Complex x0,
+                           int x0Sheet, List<Complex> startState, double[] startError, OriginSeries origin) {
+        this.origin = origin;
         this.member = member;
         this.parameters = parameters;
         this.settings = settings;
@@ -148,6 +156,57 @@ public final class MemberSolution {
             qrErr[k] = observables[k].bound(values, err);
         }
         return new MemberValue(x, sheet, state, err, qr, qrErr, monitor.check(values, err));
+    }
+
+    /** A member n >= 2 solution started at x0 with a state whose uncertainty is carried by the flow. */
+    static MemberSolution started(HierarchyMember member, MemberParameters parameters, SolverSettings settings,
+                                  Complex x0, List<Complex> state, double[] error) {
+        member.checkState(state);
+        return new MemberSolution(member, parameters, settings, x0, 0, state, error);
+    }
+
+    /**
+     * The value at x = 0 of member 1 started there ({@link Builder#startAtOrigin}): the state is the origin data,
+     * q, r, dq/dx, dr/dx come from the series at x = 0 (q = a(-1)12 / x there); errors are rounding only.
+     */
+    public MemberValue valueAtOrigin() {
+        if (origin == null) {
+            throw new InvalidInputException("x", "x = 0 is the fixed singular point of member 1; its value there is"
+                    + " defined for the solution started there (startAtOrigin) only");
+        }
+        List<Complex> state = Arrays.asList(origin.coefficients(0));
+        Complex[] qr = {origin.coefficients(1)[4], origin.coefficients(1)[5], origin.coefficients(2)[4],
+            origin.coefficients(2)[5]};
+        double[] qrErr = new double[4];
+        for (int k = 0; k < 4; k++) {
+            qrErr[k] = 8 * Math.ulp(1.0) * qr[k].norm();
+        }
+        double[] err = new double[state.size()];
+        return new MemberValue(Complex.ZERO, 0, state, err, qr, qrErr, monitor.check(ringValues(state,
+                Complex.ZERO), err));
+    }
+
+    /**
+     * q alone at x with its error estimate (first-order propagation of the state's errors plus rounding),
+     * without the other observables and the integrals: the cheap evaluation for grids.
+     */
+    public PotentialValue potential(Complex x) {
+        if (x == null || !Double.isFinite(x.getReal()) || !Double.isFinite(x.getImaginary())) {
+            throw new InvalidInputException("x", "must be a finite complex number, got " + x);
+        }
+        if (member.order() == 1 && x.norm() == 0) {
+            return new PotentialValue(x, valueAtOrigin().q(), valueAtOrigin().errorQ());
+        }
+        double[] tau = tau(x, 0);
+        StateEstimate e = engine.evaluate(tau[0], tau[1]);
+        List<Complex> state = new ArrayList<>(e.dimension());
+        double[] err = new double[e.dimension()];
+        for (int i = 0; i < e.dimension(); i++) {
+            state.add(new Complex(e.re(i), e.im(i)));
+            err[i] = e.error(i);
+        }
+        List<Complex> values = ringValues(state, x);
+        return new PotentialValue(x, observables[0].value(values), observables[0].bound(values, err));
     }
 
     /**
@@ -281,8 +340,10 @@ public final class MemberSolution {
         }
 
         /**
-         * Member 1 only: the solution analytic at x = 0 with a_-2(0) = [[a11, a12], [a21, -a11]] (det = s^2);
-         * there a_-1(0) = diag(m, -m), and the trace form equals 2 m a11. Needs 2m not a non-zero integer.
+         * The solution analytic at x = 0 with a_-2(0) = [[a11, a12], [a21, -a11]] (det = s^2); needs 2m not a
+         * non-zero integer. Member 1: there a_-1(0) = diag(m, -m), and the trace form equals 2 m a11. Members
+         * n >= 2 (with t_2 .. t_{n-1} = 0): the solution analytic at x = t_n = 0 whose slice t_n = 0 is that
+         * member-1 solution, carried on x = 0 to the parameters' t_n (see {@link OriginSolution}).
          */
         public Builder startAtOrigin(Complex a11, Complex a12, Complex a21) {
             this.origin = new Complex[] {a11, a12, a21};
@@ -297,11 +358,7 @@ public final class MemberSolution {
             }
             int n = member.order();
             if (origin != null) {
-                if (n != 1) {
-                    throw new InvalidInputException("start", "a start at x = 0 exists for member 1 only; members n >= 2"
-                            + " start at any x0");
-                }
-                return fromOrigin();
+                return n == 1 ? fromOrigin() : fromTimeOrigin();
             }
             if (x0 == null) {
                 throw new InvalidInputException("x0", "start data are missing: give x0 and the start state");
@@ -317,6 +374,20 @@ public final class MemberSolution {
             }
             member.checkState(state);
             return new MemberSolution(member, parameters, settings, x0, x0Sheet, state, new double[state.size()]);
+        }
+
+        /** Members n >= 2: the solution analytic at x = t_n = 0, carried to the parameters' t_n on x = 0. */
+        private MemberSolution fromTimeOrigin() {
+            int n = member.order();
+            for (int j = 2; j < n; j++) {
+                if (parameters.time(j).norm() != 0) {
+                    throw new InvalidInputException("times", "a start at x = t_" + n + " = 0 needs t_2 .. t_" + (n - 1)
+                            + " = 0 (only there is t_" + n + " = 0 a regular singular point of the t_" + n
+                            + "-flow), got t_" + j + " = " + parameters.time(j));
+                }
+            }
+            return OriginSolution.create(n, parameters.s(), parameters.m(), origin[0], origin[1], origin[2], settings)
+                    .atTime(parameters.time(n));
         }
 
         private MemberSolution fromOrigin() {
@@ -340,7 +411,8 @@ public final class MemberSolution {
             Complex xs = new Complex(x);
             double[] err = new double[y0.length];
             Arrays.fill(err, 16 * series.lastTerm(x));
-            return new MemberSolution(member, parameters, settings, xs, 0, Arrays.asList(series.value(xs)), err);
+            return new MemberSolution(member, parameters, settings, xs, 0, Arrays.asList(series.value(xs)), err,
+                    series);
         }
     }
 }

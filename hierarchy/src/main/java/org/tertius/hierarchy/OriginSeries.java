@@ -142,6 +142,11 @@ final class OriginSeries {
         return c.length - 1;
     }
 
+    /** Coefficient j (a copy), one entry per unknown. */
+    Complex[] coefficients(int j) {
+        return c[j].clone();
+    }
+
     /** Root-test estimate of the radius of convergence from the last coefficients. */
     double radius() {
         double r = Double.POSITIVE_INFINITY;
