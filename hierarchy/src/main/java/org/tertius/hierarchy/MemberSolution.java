@@ -130,9 +130,7 @@ public final class MemberSolution {
      * @throws org.tertius.core.UnreachableTargetException if the engine cannot reach x to its tolerance
      */
     public MemberValue evaluate(Complex x, int sheet) {
-        if (x == null || !Double.isFinite(x.getReal()) || !Double.isFinite(x.getImaginary())) {
-            throw new InvalidInputException("x", "must be a finite complex number, got " + x);
-        }
+        requireFinite(x);
         if (member.order() == 1 && x.norm() == 0) {
             throw new InvalidInputException("x", "x = 0 is the fixed singular point of member 1");
         }
@@ -140,14 +138,8 @@ public final class MemberSolution {
             throw new InvalidInputException("sheet", "member " + member.order() + " is single-valued in x; the sheet"
                     + " must be 0, got " + sheet);
         }
-        double[] tau = tau(x, sheet);
-        StateEstimate e = engine.evaluate(tau[0], tau[1]);
-        List<Complex> state = new ArrayList<>();
-        double[] err = new double[e.dimension()];
-        for (int i = 0; i < e.dimension(); i++) {
-            state.add(new Complex(e.re(i), e.im(i)));
-            err[i] = e.error(i);
-        }
+        double[] err = new double[member.dimension()];
+        List<Complex> state = stateAt(x, sheet, err);
         List<Complex> values = ringValues(state, x);
         Complex[] qr = new Complex[4];
         double[] qrErr = new double[4];
@@ -191,21 +183,12 @@ public final class MemberSolution {
      * without the other observables and the integrals: the cheap evaluation for grids.
      */
     public PotentialValue potential(Complex x) {
-        if (x == null || !Double.isFinite(x.getReal()) || !Double.isFinite(x.getImaginary())) {
-            throw new InvalidInputException("x", "must be a finite complex number, got " + x);
-        }
+        requireFinite(x);
         if (member.order() == 1 && x.norm() == 0) {
             return new PotentialValue(x, valueAtOrigin().q(), valueAtOrigin().errorQ());
         }
-        double[] tau = tau(x, 0);
-        StateEstimate e = engine.evaluate(tau[0], tau[1]);
-        List<Complex> state = new ArrayList<>(e.dimension());
-        double[] err = new double[e.dimension()];
-        for (int i = 0; i < e.dimension(); i++) {
-            state.add(new Complex(e.re(i), e.im(i)));
-            err[i] = e.error(i);
-        }
-        List<Complex> values = ringValues(state, x);
+        double[] err = new double[member.dimension()];
+        List<Complex> values = ringValues(stateAt(x, 0, err), x);
         return new PotentialValue(x, observables[0].value(values), observables[0].bound(values, err));
     }
 
@@ -267,6 +250,24 @@ public final class MemberSolution {
             err[i] += e.error(i);
         }
         return new MemberSolution(member, moved, settings, x0, 0, state, err);
+    }
+
+    private static void requireFinite(Complex x) {
+        if (x == null || !Double.isFinite(x.getReal()) || !Double.isFinite(x.getImaginary())) {
+            throw new InvalidInputException("x", "must be a finite complex number, got " + x);
+        }
+    }
+
+    /** The engine's state at x on the sheet; its errors into err. */
+    private List<Complex> stateAt(Complex x, int sheet, double[] err) {
+        double[] tau = tau(x, sheet);
+        StateEstimate e = engine.evaluate(tau[0], tau[1]);
+        List<Complex> state = new ArrayList<>(e.dimension());
+        for (int i = 0; i < e.dimension(); i++) {
+            state.add(new Complex(e.re(i), e.im(i)));
+            err[i] = e.error(i);
+        }
+        return state;
     }
 
     private List<Complex> ringValues(List<Complex> state, Complex x) {
@@ -358,7 +359,7 @@ public final class MemberSolution {
             }
             int n = member.order();
             if (origin != null) {
-                return n == 1 ? fromOrigin() : fromTimeOrigin();
+                return n == 1 ? fromOrigin() : OriginSolution.startFor(parameters, origin, settings);
             }
             if (x0 == null) {
                 throw new InvalidInputException("x0", "start data are missing: give x0 and the start state");
@@ -374,20 +375,6 @@ public final class MemberSolution {
             }
             member.checkState(state);
             return new MemberSolution(member, parameters, settings, x0, x0Sheet, state, new double[state.size()]);
-        }
-
-        /** Members n >= 2: the solution analytic at x = t_n = 0, carried to the parameters' t_n on x = 0. */
-        private MemberSolution fromTimeOrigin() {
-            int n = member.order();
-            for (int j = 2; j < n; j++) {
-                if (parameters.time(j).norm() != 0) {
-                    throw new InvalidInputException("times", "a start at x = t_" + n + " = 0 needs t_2 .. t_" + (n - 1)
-                            + " = 0 (only there is t_" + n + " = 0 a regular singular point of the t_" + n
-                            + "-flow), got t_" + j + " = " + parameters.time(j));
-                }
-            }
-            return OriginSolution.create(n, parameters.s(), parameters.m(), origin[0], origin[1], origin[2], settings)
-                    .atTime(parameters.time(n));
         }
 
         private MemberSolution fromOrigin() {

@@ -106,6 +106,22 @@ public final class OriginSolution {
     }
 
     /**
+     * The member-n solution at the parameters' t_n started from a_-2(0) = origin (a11, a12, a21) at x = t_n = 0;
+     * the lower times must be zero (only there is t_n = 0 a regular singular point of the t_n-flow).
+     */
+    static MemberSolution startFor(MemberParameters p, Complex[] origin, SolverSettings settings) {
+        int n = p.order();
+        for (int j = 2; j < n; j++) {
+            if (p.time(j).norm() != 0) {
+                throw new InvalidInputException("times", "a start at x = t_" + n + " = 0 needs t_2 .. t_" + (n - 1)
+                        + " = 0 (only there is t_" + n + " = 0 a regular singular point of the t_" + n + "-flow), got t_"
+                        + j + " = " + p.time(j));
+            }
+        }
+        return create(n, p.s(), p.m(), origin[0], origin[1], origin[2], settings).atTime(p.time(n));
+    }
+
+    /**
      * The Taylor series in t_n of the state on x = 0 in any arithmetic (double, or arbitrary precision with
      * {@code new ApcomplexArithmetic(digits)}); the data are not checked here.
      */
