@@ -107,7 +107,7 @@ final class GridRows {
             left = Math.max(left, -x[j]);
         }
         RealRow row = RealRow.of(solution, new Complex(t[i]), axisState.get(i), axisError.get(i), left, right,
-                tolerance, halt);
+                tolerance, halt, false);
         for (int j : cols) {
             put(row.potential(x[j]), j, re, im, err);
         }

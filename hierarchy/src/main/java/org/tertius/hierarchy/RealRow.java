@@ -1,6 +1,7 @@
 package org.tertius.hierarchy;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.function.BooleanSupplier;
 import org.hipparchus.complex.Complex;
@@ -20,12 +21,18 @@ public final class RealRow {
     private final int n;
     private final TaylorLine forward;
     private final TaylorLine backward;
+    /** For rows that keep every unknown: the observables and integrals; null otherwise. */
+    private final StateObservables full;
+    private final int component;
 
-    private RealRow(Complex time, int n, TaylorLine forward, TaylorLine backward) {
+    private RealRow(Complex time, int n, TaylorLine forward, TaylorLine backward, StateObservables full,
+                    int component) {
         this.time = time;
         this.n = n;
         this.forward = forward;
         this.backward = backward;
+        this.full = full;
+        this.component = component;
     }
 
     /**
@@ -45,22 +52,40 @@ public final class RealRow {
         }
         List<Complex> state = new ArrayList<>();
         double[] err = solution.stateOnTheAxis(tn, state);
-        return of(solution, tn, state.toArray(new Complex[0]), err, left, right, tolerance, halt);
+        return of(solution, tn, state.toArray(new Complex[0]), err, left, right, tolerance, halt, false);
+    }
+
+    /**
+     * As {@link #of(OriginSolution, Complex, double, double, double, BooleanSupplier)}, keeping every unknown so
+     * that {@link #value(double)} can report them with r, the derivatives and the first integrals.
+     */
+    public static RealRow withAllUnknowns(OriginSolution solution, Complex tn, double left, double right,
+                                          double tolerance, BooleanSupplier halt) {
+        List<Complex> state = new ArrayList<>();
+        double[] err = solution.stateOnTheAxis(tn, state);
+        return of(solution, tn, state.toArray(new Complex[0]), err, left, right, tolerance, halt, true);
     }
 
     /** As {@link #of(OriginSolution, Complex, double, double, double, BooleanSupplier)} from a known axis state. */
     static RealRow of(OriginSolution solution, Complex tn, Complex[] state, double[] err, double left, double right,
-                      double tolerance, BooleanSupplier halt) {
+                      double tolerance, BooleanSupplier halt, boolean all) {
         HierarchyMember member = solution.member();
         int n = member.order();
-        PolynomialSystem flow = member.xFlow(solution.parameters(tn));
-        int[] component = {MemberEquations.index(n - 2, 1)};
+        MemberParameters p = solution.parameters(tn);
+        PolynomialSystem flow = member.xFlow(p);
+        int q = MemberEquations.index(n - 2, 1);
+        int[] component = all ? new int[member.dimension()] : new int[] {q};
+        for (int i = 0; all && i < component.length; i++) {
+            component[i] = i;
+        }
         BooleanSupplier stop = halt == null ? () -> false : halt;
         TaylorLine forward = TaylorLine.integrate(flow, ORDER, tolerance, Complex.ZERO, Complex.ONE, right, state, err,
                 component, MAX_STEPS, stop);
         TaylorLine backward = left > 0 ? TaylorLine.integrate(flow, ORDER, tolerance, Complex.ZERO,
                 Complex.ONE.negate(), left, state, err, component, MAX_STEPS, stop) : null;
-        return new RealRow(tn, n, forward, backward);
+        StateObservables observables = all ? new StateObservables(member, p, Complex.ZERO, Arrays.asList(state))
+                : null;
+        return new RealRow(tn, n, forward, backward, observables, all ? q : 0);
     }
 
     /** The time t_n of the row. */
@@ -75,7 +100,7 @@ public final class RealRow {
 
     /** q at real x in [-left, right] with its error (first-order propagation, truncation and rounding). */
     public PotentialValue potential(double x) {
-        double[] v = line(x).value(0, Math.abs(x));
+        double[] v = line(x).value(component, Math.abs(x));
         Complex q = new Complex(v[0], v[1]).divide(time.multiply(n));
         double scale = n * time.norm();
         return new PotentialValue(new Complex(x), q, v[2] / scale + 4 * Math.ulp(1.0) * q.norm());
@@ -83,9 +108,25 @@ public final class RealRow {
 
     /** dq/dx at real x in [-left, right] (from the Taylor polynomials of the steps). */
     public Complex derivative(double x) {
-        double[] d = line(x).derivative(0, Math.abs(x));
+        double[] d = line(x).derivative(component, Math.abs(x));
         Complex dq = new Complex(d[0], d[1]).divide(time.multiply(n));
         return x < 0 ? dq.negate() : dq;
+    }
+
+    /** Every unknown at real x with q, r, their x-derivatives and the first integrals (rows made withAllUnknowns). */
+    public MemberValue value(double x) {
+        if (full == null) {
+            throw new InvalidInputException("row", "this row keeps q only; make it with RealRow.withAllUnknowns");
+        }
+        TaylorLine line = line(x);
+        List<Complex> state = new ArrayList<>();
+        double[] err = new double[n * 3 + 3];
+        for (int i = 0; i < err.length; i++) {
+            double[] v = line.value(i, Math.abs(x));
+            state.add(new Complex(v[0], v[1]));
+            err[i] = v[2];
+        }
+        return full.value(new Complex(x), state, err);
     }
 
     private TaylorLine line(double x) {

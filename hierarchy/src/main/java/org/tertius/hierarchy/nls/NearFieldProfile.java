@@ -9,6 +9,7 @@ import org.tertius.core.number.SurfacePoint;
 import org.tertius.core.piii.Painleve3;
 import org.tertius.core.piii.Painleve3Value;
 import org.tertius.core.step.SolverSettings;
+import org.tertius.hierarchy.IntegralCheck;
 import org.tertius.hierarchy.Member1Map;
 import org.tertius.hierarchy.MemberSolution;
 import org.tertius.hierarchy.MemberValue;
@@ -148,6 +149,23 @@ public final class NearFieldProfile {
                     new Complex(x)).dq();
         }
         return row(t, x).derivative(x);
+    }
+
+    /**
+     * The first integrals of the member solution at real (X, T) as values with the bounds implied by the errors
+     * (det a_-2 = s^2 = 4, the trace integral 0, the top coefficients of det A): member 1's at T = 0, else from
+     * the x-flow along the real axis with every unknown kept (about X^2 / (20 |T|) steps: for tiny |T| it may
+     * refuse with an UnreachableTargetException).
+     */
+    public List<IntegralCheck> integrals(double x, double t) {
+        requireFinite("X", x);
+        requireFinite("T", t);
+        if (t == 0) {
+            MemberSolution one = solution.memberOne();
+            return (x == 0 ? one.valueAtOrigin() : one.evaluate(new Complex(x))).integrals();
+        }
+        RealRow row = RealRow.withAllUnknowns(solution, new Complex(t), Math.max(0, -x), Math.max(0, x), 1e-14, null);
+        return row.value(x).integrals();
     }
 
     /** Psi at complex (X, T) by the core engine's path tree (slower; for T real prefer {@link #value(double, double)}). */

@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.util.List;
 import java.util.function.DoubleUnaryOperator;
 import org.hipparchus.analysis.integration.gauss.GaussIntegrator;
 import org.hipparchus.analysis.integration.gauss.GaussIntegratorFactory;
@@ -15,6 +16,7 @@ import org.tertius.core.piii.Painleve3;
 import org.tertius.core.piii.Painleve3Solution;
 import org.tertius.core.piii.Painleve3Value;
 import org.tertius.core.step.SolverSettings;
+import org.tertius.hierarchy.IntegralCheck;
 import org.tertius.hierarchy.NlsCheck;
 
 /**
@@ -157,6 +159,20 @@ class NearFieldProfileTest {
         assertTrue(a.psi().subtract(b.psi()).norm() < 1e-6 && a.psi().getImaginary() != 0, a.psi() + " vs "
                 + b.psi());
         assertTrue(a.error() < 1e-11, "error " + a.error());
+    }
+
+    @Test
+    void firstIntegralsAreKeptAsValues() {
+        for (double[] p : new double[][] {{2.0, 0.7}, {-3.0, 1.5}, {1.5, 0.0}, {0.0, 0.0}}) {
+            List<IntegralCheck> checks = PROFILE.integrals(p[0], p[1]);
+            assertTrue(checks.size() >= 3, checks.toString());
+            for (IntegralCheck c : checks) {
+                assertTrue(c.withinEstimate(), "at " + p[0] + ", " + p[1] + ": " + c);
+            }
+            // det a_-2 = s^2 = 4 and the trace integral tr(a_-2 a_-1) = 2 m a11 = 0
+            assertEquals(4.0, checks.get(0).value().getReal(), 1e-10);
+            assertEquals(0.0, checks.get(1).value().norm(), 1e-10);
+        }
     }
 
     @Test
