@@ -14,6 +14,8 @@ import org.tertius.core.UnreachableTargetException;
  * in a fixed order, by {@link #prepare}; then each row independently (thread-safe). Package-private.
  */
 final class GridRows {
+    /** A small-time series value is kept when its error estimate is below this times 1 + |q|. */
+    private static final double SERIES_ACCEPT = 1e-10;
     private final OriginSolution solution;
     private final HierarchyMember member;
     private final double[] x;
@@ -75,6 +77,7 @@ final class GridRows {
         if (smallTime.get(i)) {
             NlsTimeSeries series = new NlsTimeSeries(solution.memberOne().parameters());
             Complex time = new Complex(t[i]);
+            List<Integer> close = new ArrayList<>();
             for (int j : cols) {
                 PotentialValue v;
                 if (x[j] == 0) {
@@ -84,6 +87,13 @@ final class GridRows {
                     v = series.at(new Complex(x[j]), m1.state(), m1.errors(), time, 0.5 * Math.abs(x[j]));
                 }
                 put(v, j, re, im, err);
+                if (!(v.error() <= SERIES_ACCEPT * (1 + v.q().norm()))) {
+                    close.add(j);
+                }
+            }
+            // near x = 0 (x^2 of the order of |t|) the series converges slowly; there the line is short
+            if (!close.isEmpty()) {
+                lines(i, close.stream().mapToInt(Integer::intValue).toArray(), re, im, err);
             }
             return "small-time series";
         }

@@ -89,6 +89,25 @@ class PlaneGridTest {
     }
 
     @Test
+    void tinyTimesAreSummedFromMemberOneAndAgreeWithTheLines() {
+        // |t| = 1e-5: the x-flow would need about x^2 / (20 |t|) = 80000 steps to reach x = 4; the row is summed
+        // by the small-time series from member 1 (x^2 of the order of |t|: by a short line)
+        OriginSolution o = OriginSolutionTest.profile();
+        double[] x = range(-4, 4, 41);
+        PlaneGrid.Result r = PlaneGrid.of(o, x, new double[] {0, 1e-5, 0.5}).compute(2, null, null);
+        assertEquals("small-time series", r.method(1));
+        assertEquals("member 1", r.method(0));
+        assertEquals("line", r.method(2));
+        RealRow line = RealRow.of(o, new Complex(1e-5), 0, 0.6, 1e-14, null);
+        for (int j = 20; j <= 23; j++) {
+            PotentialValue v = line.potential(x[j]);
+            assertTrue(v.q().subtract(r.q(1, j)).norm() <= v.error() + r.error(1, j), "x = " + x[j] + ": "
+                    + v.q() + " vs " + r.q(1, j));
+            assertTrue(r.q(1, j).getImaginary() != 0 && r.error(1, j) < 1e-9, r.q(1, j) + " +- " + r.error(1, j));
+        }
+    }
+
+    @Test
     void progressIsReportedAndCancellationStops() {
         double[] x = range(0, 4, 9);
         double[] t = range(0.2, 1.4, 7);
