@@ -70,6 +70,32 @@ class PlaneGridTest {
     }
 
     @Test
+    void memberThreeHasThePointSymmetryAndRealValues() {
+        // n = 3 (hierarchy/README.md): a11 = 0 gives q(x, t) = q(-x, -t); imaginary a_-2(0) and real m give
+        // q(x, t) = conj q(x, t), i.e. q real on the real plane
+        OriginSolution even = OriginSolution.create(3, Complex.ONE, new Complex(0.1), Complex.ZERO, Complex.I,
+                Complex.I, SolverSettings.defaults());
+        OriginSolution odd = OriginSolution.create(3, Complex.ONE, new Complex(0.1), new Complex(0, 0.6),
+                new Complex(0, 0.8), new Complex(0, 0.8), SolverSettings.defaults());
+        for (OriginSolution o : new OriginSolution[] {even, odd}) {
+            RealRow plus = RealRow.of(o, new Complex(0.3), 2, 2, 1e-14, null);
+            RealRow minus = RealRow.of(o, new Complex(-0.3), 2, 2, 1e-14, null);
+            for (double x : new double[] {0.5, 1.5}) {
+                PotentialValue a = plus.potential(x);
+                PotentialValue b = minus.potential(-x);
+                assertTrue(Math.abs(a.q().getImaginary()) <= a.error(), "q real: " + a.q());
+                double gap = a.q().subtract(b.q()).norm();
+                if (o == even) {
+                    assertTrue(gap <= a.error() + b.error(), "x = " + x + ": " + a.q() + " vs " + b.q());
+                } else {
+                    assertTrue(gap > 0.1, "a11 != 0 breaks the point symmetry: " + a.q() + " vs " + b.q());
+                }
+            }
+        }
+        assertEquals(2, PlaneGrid.of(even, new double[] {-1, 1}, new double[] {-0.3, 0.3}).symmetries().size());
+    }
+
+    @Test
     void otherDataUseOnlyTheSymmetriesTheyHave() {
         // a11 = 0.6i: anti-Hermitian (the reduction holds, reflection in t applies) but not even in x
         OriginSolution o = OriginSolution.create(2, Complex.ONE, Complex.ZERO, new Complex(0, 0.6),
