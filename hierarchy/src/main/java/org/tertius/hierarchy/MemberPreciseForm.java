@@ -123,15 +123,16 @@ final class MemberPreciseForm implements HighPrecisionForm {
             y0d[i] = y0[i].toComplex();
             scale = Math.max(scale, y0d[i].norm());
         }
-        double radius = OriginSeries.compute(flow, flow.coefficientValues(), y0d, 60, ComplexArithmetic.INSTANCE,
-                Complex::norm).radius();
+        double radius = FrobeniusSeries.compute(ComplexArithmetic.INSTANCE, OriginTimeSeries.fromSystem(flow), y0d, 60,
+                "start state at x = 0").radius();
         double x = x0.abs();
         double wanted = Math.log(scale) - ctx.bits() * Math.log(2) - 10;
         int order = (int) Math.ceil(wanted / Math.log(x / radius)) + 8;
-        List<MpComplex> coefficients = List.of(coefficients(ctx));
+        List<List<FrobeniusSeries.Term<MpComplex>>> terms = OriginTimeSeries.fromSystem(flow,
+                List.of(coefficients(ctx)));
         MpArithmetic ar = new MpArithmetic(ctx);
         while (order <= MAX_SERIES_ORDER) {
-            OriginSeries<MpComplex> series = OriginSeries.compute(flow, coefficients, y0, order, ar, MpComplex::abs);
+            FrobeniusSeries<MpComplex> series = FrobeniusSeries.compute(ar, terms, y0, order, "start state at x = 0");
             if (Math.log(series.lastTerm(x)) <= wanted) {
                 return series.value(x0);
             }

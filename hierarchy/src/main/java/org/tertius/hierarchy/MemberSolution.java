@@ -54,10 +54,14 @@ public final class MemberSolution implements ComputedSolution {
     private final Linearized[] observables;
     /** How the start was given exactly (for the high-precision replay), or null when it was not. */
     private final ExactStart exactStart;
+    /** Member 1 started at x = 0: its series there (null otherwise). */
+    private final FrobeniusSeries<Complex> origin;
 
     private MemberSolution(HierarchyMember member, MemberParameters parameters, SolverSettings settings, Complex x0,
-                           int x0Sheet, List<Complex> startState, double[] startError, ExactStart exactStart) {
+                           int x0Sheet, List<Complex> startState, double[] startError, ExactStart exactStart,
+                           FrobeniusSeries<Complex> origin) {
         this.exactStart = exactStart;
+        this.origin = origin;
         this.member = member;
         this.parameters = parameters;
         this.settings = settings;
@@ -203,9 +207,7 @@ public final class MemberSolution implements ComputedSolution {
      * @throws org.tertius.core.UnreachableTargetException if the engine cannot reach x to its tolerance
      */
     public MemberValue evaluate(Complex x, int sheet) {
-        if (x == null || !Double.isFinite(x.getReal()) || !Double.isFinite(x.getImaginary())) {
-            throw new InvalidInputException("x", "must be a finite complex number, got " + x);
-        }
+        requireFinite(x);
         if (member.order() == 1 && x.norm() == 0) {
             throw new InvalidInputException("x", "x = 0 is the fixed singular point of member 1");
         }
@@ -215,6 +217,64 @@ public final class MemberSolution implements ComputedSolution {
         }
         double[] tau = tau(x, sheet);
         return valueFrom(x, sheet, engine.evaluate(tau[0], tau[1]));
+    }
+
+    /** A member n >= 2 solution started at x0 with a state whose uncertainty is carried by the flow. */
+    static MemberSolution started(HierarchyMember member, MemberParameters parameters, SolverSettings settings,
+                                  Complex x0, List<Complex> state, double[] error) {
+        member.checkState(state);
+        return new MemberSolution(member, parameters, settings, x0, 0, state, error, null, null);
+    }
+
+    /**
+     * The value at x = 0 of member 1 started there ({@link Builder#startAtOrigin}): the state is the origin data,
+     * q, r, dq/dx, dr/dx come from the series at x = 0 (q = a(-1)12 / x there); errors are rounding only.
+     */
+    public MemberValue valueAtOrigin() {
+        if (origin == null) {
+            throw new InvalidInputException("x", "x = 0 is the fixed singular point of member 1; its value there is"
+                    + " defined for the solution started there (startAtOrigin) only");
+        }
+        List<Complex> state = new ArrayList<>();
+        for (int i = 0; i < member.dimension(); i++) {
+            state.add(origin.coefficient(0, i));
+        }
+        Complex[] qr = {origin.coefficient(1, 4), origin.coefficient(1, 5), origin.coefficient(2, 4),
+            origin.coefficient(2, 5)};
+        double[] qrErr = new double[4];
+        for (int k = 0; k < 4; k++) {
+            qrErr[k] = 8 * Math.ulp(1.0) * qr[k].norm();
+        }
+        double[] err = new double[state.size()];
+        return new MemberValue(Complex.ZERO, 0, state, err, qr, qrErr, monitor.check(ringValues(state,
+                Complex.ZERO), err));
+    }
+
+    /**
+     * q alone at x with its error estimate (first-order propagation of the state's errors plus rounding),
+     * without the other observables and the integrals: the cheap evaluation for grids.
+     */
+    public PotentialValue potential(Complex x) {
+        requireFinite(x);
+        if (member.order() == 1 && x.norm() == 0) {
+            return new PotentialValue(x, valueAtOrigin().q(), valueAtOrigin().errorQ());
+        }
+        double[] tau = tau(x, 0);
+        StateEstimate e = engine.evaluate(tau[0], tau[1]);
+        double[] err = new double[member.dimension()];
+        List<Complex> state = new ArrayList<>(e.dimension());
+        for (int i = 0; i < e.dimension(); i++) {
+            state.add(new Complex(e.re(i), e.im(i)));
+            err[i] = e.error(i);
+        }
+        List<Complex> values = ringValues(state, x);
+        return new PotentialValue(x, observables[0].value(values), observables[0].bound(values, err));
+    }
+
+    private static void requireFinite(Complex x) {
+        if (x == null || !Double.isFinite(x.getReal()) || !Double.isFinite(x.getImaginary())) {
+            throw new InvalidInputException("x", "must be a finite complex number, got " + x);
+        }
     }
 
     /** The value at x from an engine estimate there. */
@@ -292,7 +352,7 @@ public final class MemberSolution implements ComputedSolution {
             state.add(new Complex(e.re(i), e.im(i)));
             err[i] += e.error(i);
         }
-        return new MemberSolution(member, moved, settings, x0, 0, state, err, null);
+        return new MemberSolution(member, moved, settings, x0, 0, state, err, null, null);
     }
 
     private List<Complex> ringValues(List<Complex> state, Complex x) {
@@ -381,8 +441,10 @@ public final class MemberSolution implements ComputedSolution {
         }
 
         /**
-         * Member 1 only: the solution analytic at x = 0 with a_-2(0) = [[a11, a12], [a21, -a11]] (det = s^2);
-         * there a_-1(0) = diag(m, -m), and the trace form equals 2 m a11. Needs 2m not a non-zero integer.
+         * The solution analytic at x = 0 with a_-2(0) = [[a11, a12], [a21, -a11]] (det = s^2); needs 2m not a
+         * non-zero integer. Member 1: there a_-1(0) = diag(m, -m), and the trace form equals 2 m a11. Members
+         * n >= 2 (with t_2 .. t_{n-1} = 0): the solution analytic at x = t_n = 0 whose slice t_n = 0 is that
+         * member-1 solution, carried on x = 0 to the parameters' t_n (see {@link OriginSolution}).
          */
         public Builder startAtOrigin(Complex a11, Complex a12, Complex a21) {
             this.origin = new Complex[] {a11, a12, a21};
@@ -408,11 +470,7 @@ public final class MemberSolution implements ComputedSolution {
             }
             int n = member.order();
             if (origin != null) {
-                if (n != 1) {
-                    throw new InvalidInputException("start", "a start at x = 0 exists for member 1 only; members n >= 2"
-                            + " start at any x0");
-                }
-                return fromOrigin();
+                return n == 1 ? fromOrigin() : OriginSolution.startFor(parameters, origin, settings);
             }
             if (x0 == null) {
                 throw new InvalidInputException("x0", "start data are missing: give x0 and the start state");
@@ -430,7 +488,7 @@ public final class MemberSolution implements ComputedSolution {
             ExactStart e = exact != null ? exact : ExactStart.atPoint(ExactNumber.ofDouble("x0", x0),
                     ExactStart.ofDoubles("start state", state));
             return new MemberSolution(member, parameters, settings, x0, x0Sheet, state, new double[state.size()],
-                    x0Sheet == 0 ? e : null);
+                    x0Sheet == 0 ? e : null, null);
         }
 
         private MemberSolution fromOrigin() {
@@ -443,8 +501,8 @@ public final class MemberSolution implements ComputedSolution {
             Complex[] y0 = {origin[0], origin[1], origin[2], m, Complex.ZERO, Complex.ZERO};
             member.checkState(Arrays.asList(y0));
             PolynomialSystem flow = member.xFlow(parameters);
-            OriginSeries<Complex> series = OriginSeries.compute(flow, flow.coefficientValues(), y0, SERIES_ORDER,
-                    ComplexArithmetic.INSTANCE, Complex::norm);
+            FrobeniusSeries<Complex> series = FrobeniusSeries.compute(ComplexArithmetic.INSTANCE,
+                    OriginTimeSeries.fromSystem(flow), y0, SERIES_ORDER, "start state at x = 0");
             double scale = 1;
             for (Complex c : y0) {
                 scale = Math.max(scale, c.norm());
@@ -458,7 +516,8 @@ public final class MemberSolution implements ComputedSolution {
             Arrays.fill(err, 16 * series.lastTerm(x));
             ExactStart e = exact != null ? exact : ExactStart.atOrigin(ExactStart.ofDoubles("origin",
                     Arrays.asList(origin)));
-            return new MemberSolution(member, parameters, settings, xs, 0, Arrays.asList(series.value(xs)), err, e);
+            return new MemberSolution(member, parameters, settings, xs, 0, Arrays.asList(series.value(xs)), err, e,
+                    series);
         }
     }
 }

@@ -67,6 +67,29 @@ public final class NlsCheck {
         return new Residual(res, qt.norm() + 0.5 * qxx.norm() + q2 * q.norm());
     }
 
+    /** A member-2 potential as a function of real (x, t) (for example a profile's values). */
+    @FunctionalInterface
+    public interface Field {
+        Complex q(double x, double t);
+    }
+
+    /**
+     * The NLS residual i q_t + q_xx / 2 + |q|^2 q of a field at (x, t) by central differences with steps h in x
+     * and k in t: finite-difference error O(h^2 + k^2), rounding O(eps / h^2 + eps / k).
+     */
+    public static Residual residual(Field field, double x, double t, double h, double k) {
+        if (!(h > 0) || !(k > 0) || !Double.isFinite(x) || !Double.isFinite(t)) {
+            throw new InvalidInputException("h", "the steps h, k must be > 0 and x, t finite, got h = " + h + ", k = "
+                    + k + ", x = " + x + ", t = " + t);
+        }
+        Complex q = field.q(x, t);
+        Complex qt = field.q(x, t + k).subtract(field.q(x, t - k)).divide(2 * k);
+        Complex qxx = field.q(x + h, t).add(field.q(x - h, t)).subtract(q.multiply(2)).divide(h * h);
+        double q2 = q.norm() * q.norm();
+        Complex res = Complex.I.multiply(qt).add(qxx.multiply(0.5)).add(q.multiply(q2));
+        return new Residual(res, qt.norm() + 0.5 * qxx.norm() + q2 * q.norm());
+    }
+
     /** The mass density |q|^2. */
     public static double density(MemberValue v) {
         return v.q().norm() * v.q().norm();

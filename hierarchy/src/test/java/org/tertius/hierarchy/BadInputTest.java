@@ -79,15 +79,16 @@ class BadInputTest {
     }
 
     @Test
-    void originStartIsRejectedForResonantMAndWrongDeterminantAndHigherMembers() {
+    void originStartIsRejectedForResonantMAndWrongDeterminantAndNonZeroLowerTimes() {
         MemberParameters resonant = MemberParameters.builder(1).s(Complex.ONE).m(new Complex(0.5)).build();
         assertRejected("m", () -> MemberSolution.builder(resonant).startAtOrigin(Complex.ZERO, Complex.ONE,
                 Complex.ONE.negate()).build());
         MemberParameters p = MemberParameters.builder(1).s(Complex.ONE).m(new Complex(0.2)).build();
         assertRejected("s", () -> MemberSolution.builder(p).startAtOrigin(Complex.ZERO, Complex.ONE,
                 new Complex(-2)).build());
-        MemberParameters p2 = MemberParameters.builder(2).times(Complex.ONE).s(Complex.ONE).build();
-        assertRejected("start", () -> MemberSolution.builder(p2).startAtOrigin(Complex.ZERO, Complex.ONE,
+        // members n >= 2 start at x = t_n = 0 only with the lower times zero
+        MemberParameters p3 = MemberParameters.builder(3).times(Complex.ONE, Complex.ONE).s(Complex.ONE).build();
+        assertRejected("times", () -> MemberSolution.builder(p3).startAtOrigin(Complex.ZERO, Complex.ONE,
                 Complex.ONE.negate()).build());
     }
 
