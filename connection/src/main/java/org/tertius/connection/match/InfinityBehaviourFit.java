@@ -94,7 +94,7 @@ public final class InfinityBehaviourFit {
         for (int j = values.size() / 2; j < values.size(); j++) {
             worst = Math.max(worst, values.get(j).w().divide(c).log().norm());
         }
-        if (!(worst < 1)) {
+        if (!(worst < 2)) {
             throw poleLine(angle, sheet, rMax, "w does not approach any background " + backgrounds
                     + " (|log(w/c)| up to " + worst + " on the outer half of [" + rMin + ", " + rMax + "])");
         }
