@@ -51,8 +51,9 @@ public final class BesselFamily {
     /**
      * The member t of the family with signs e1, e2 and exponent sigma.
      *
-     * @throws InvalidInputException for signs other than +-1, |Re sigma| &gt;= 1, or t = 0 or -1 (t = 0 is the member
-     *     with w ~ -2 e1 nu / z at 0, t = -1 the modified-case member K_nu, whose data differ)
+     * @throws InvalidInputException for signs other than +-1, |Re sigma| &gt;= 1, t = 0 (the member with w ~ -2 e1 nu /
+     *     z at 0), or t = -1 in the Bessel-J case (allowed in the modified case: the member K_nu, see {@link
+     *     #isTronquee()})
      */
     public static BesselFamily of(int e1, int e2, Complex sigma, Complex t) {
         if (Math.abs(e1) != 1 || Math.abs(e2) != 1) {
@@ -61,8 +62,10 @@ public final class BesselFamily {
         if (!(Math.abs(sigma.getReal()) < 1)) {
             throw new InvalidInputException("sigma", "must have |Re sigma| < 1 (0 < Re nu < 1), got " + sigma);
         }
-        if (!(t.norm() > 0) || t.add(1).norm() == 0 || !Double.isFinite(t.norm())) {
-            throw new InvalidInputException("t", "must be finite and differ from 0 and -1, got " + t);
+        boolean minusOne = t.add(1).norm() == 0;
+        if (!(t.norm() > 0) || (minusOne && e1 * e2 != -1) || !Double.isFinite(t.norm())) {
+            throw new InvalidInputException("t", "must be finite and non-zero (and differ from -1 for the Bessel-J"
+                    + " case e1 e2 = 1), got " + t);
         }
         return new BesselFamily(e1, e2, sigma, t);
     }
@@ -97,9 +100,21 @@ public final class BesselFamily {
         return toComplex(b).multiply(-e1);
     }
 
+    /**
+     * True for the member t = -1 of the modified case: psi = I_nu - I_-nu = -(2/pi) sin(nu pi) K_nu, which approaches
+     * c = e1 in |ph z| &lt; 3 pi/2 (DLMF 10.40.2 holds there) with no exponential correction for |ph z| &lt; pi: a
+     * tronquee solution (its pole-free sector is three half-planes wide).
+     */
+    public boolean isTronquee() {
+        return modified() && t.add(1).norm() == 0;
+    }
+
     /** The background approached along arg z = angle (0 &lt; |angle| &lt; pi/2). */
     public Complex background(double angle) {
         requireRay(angle);
+        if (isTronquee()) {
+            return new Complex(e1);
+        }
         if (modified()) {
             return new Complex(-e1);
         }
@@ -112,6 +127,9 @@ public final class BesselFamily {
         Complex ep = new Complex(0, Math.PI).multiply(nu()).exp();
         Complex em = ep.reciprocal();
         Complex i2 = new Complex(0, 2);
+        if (isTronquee()) {
+            return new Complex[] {Complex.ZERO, Complex.ZERO};
+        }
         if (modified()) {
             Complex q = angle > 0 ? i2.negate().multiply(ep.add(t.multiply(em))).divide(t.add(1))
                     : i2.multiply(em.add(t.multiply(ep))).divide(t.add(1));

@@ -220,6 +220,43 @@ public final class InfinityBehaviour {
         return Painleve3Solution.builder(eq).start(v.z(), v.w(), v.dw()).settings(settings).build();
     }
 
+    /**
+     * The start radius on [3, 80] at which the transseries fixes the amplitudes best: the estimated error of u =
+     * log(w/c) plus double rounding of w, relative to the part of u that the amplitudes carry (u minus the
+     * background series). Near 0 the series is inaccurate, far out an exponentially small deviation drowns in
+     * rounding.
+     *
+     * @return {radius, the relative resolution of the amplitudes there}
+     */
+    public double[] bestStartRadius(Painleve3 eq) {
+        TransseriesAtInfinity t = transseries(eq, ORDERS);
+        TransseriesAtInfinity bg = TransseriesAtInfinity.create(eq, background, Complex.ZERO, Complex.ZERO, ORDERS);
+        double best = Double.POSITIVE_INFINITY;
+        double radius = 3;
+        for (int i = 0; i <= 60; i++) {
+            double r = 3 * Math.pow(80 / 3.0, i / 60.0);
+            Complex tau = new Complex(Math.log(r), angle + 2 * Math.PI * sheet);
+            LocalValue<Complex> u = t.logAt(tau);
+            LocalValue<Complex> u0 = bg.logAt(tau);
+            // without amplitudes the background alone is fixed: its absolute accuracy counts
+            double carried = p.norm() == 0 && q.norm() == 0 ? 1 : u.w().subtract(u0.w()).norm();
+            double res = (u.errW() + u0.errW() + 0x1p-52 * (1 + u.w().norm())) / carried;
+            if (res < best) {
+                best = res;
+                radius = r;
+            }
+        }
+        return new double[] {radius, best};
+    }
+
+    /**
+     * The solution with these data, started at {@link #bestStartRadius} (principal sheet only, as
+     * {@link #solution(Painleve3, double, double, SolverSettings)}).
+     */
+    public Painleve3Solution solution(Painleve3 eq, SolverSettings settings) {
+        return solution(eq, bestStartRadius(eq)[0], 1e-8, settings);
+    }
+
     @Override
     public String toString() {
         return kind + " about c = " + background + " on arg z = " + angle + (sheet == 0 ? "" : " (sheet " + sheet + ")")

@@ -91,12 +91,19 @@ public final class InfinityBehaviourFit {
         }
         Complex c = closestBackground(backgrounds, values);
         double worst = 0;
-        for (int j = values.size() / 2; j < values.size(); j++) {
-            worst = Math.max(worst, values.get(j).w().divide(c).log().norm());
+        double inner = 0;
+        for (int j = 0; j < values.size(); j++) {
+            double size = values.get(j).w().divide(c).log().norm();
+            if (j < values.size() / 2) {
+                inner = Math.max(inner, size);
+            } else {
+                worst = Math.max(worst, size);
+            }
         }
-        if (!(worst < 2)) {
+        if (!(worst < 2) || (worst >= 0.5 && worst >= 0.9 * inner)) {
             throw poleLine(angle, sheet, rMax, "w does not approach any background " + backgrounds
-                    + " (|log(w/c)| up to " + worst + " on the outer half of [" + rMin + ", " + rMax + "])");
+                    + " (|log(w/c)| up to " + worst + " on the outer half of [" + rMin + ", " + rMax + "], " + inner
+                    + " on the inner half)");
         }
         TransseriesAtInfinity probe = TransseriesAtInfinity.create(eq, c, Complex.ZERO, Complex.ZERO, 2);
         double direction = probe.mu().multiply(Complex.I.multiply(angle).exp()).getArgument();
