@@ -99,6 +99,29 @@ class ContinuedDecayingFamilyTest {
         }
     }
 
+    /**
+     * PIII(0, 0, -1, 1) on its oscillating ray (the positive axis): the members with one oscillating exponential,
+     * W(x) = w(+-i x), built from their amplitude at infinity, have the data at 0 of the continued formula rotated
+     * (ContinuedMcCoyTracyWu.rotatedMember), within 3 reported errors below 1e-8.
+     */
+    @Test
+    void oneExponentialMembersOfTheOscillatingEquation() {
+        Painleve3 eq = Painleve3.of(0, 0, -1, 1);
+        for (Complex lambda : new Complex[] {new Complex(0.2), new Complex(0.1, 0.15)}) {
+            for (int side : new int[] {1, -1}) {
+                Complex[] d = ContinuedMcCoyTracyWu.rotatedMember(lambda, side);
+                Painleve3Solution s = InfinityBehaviour.of(eq, Complex.ONE, d[2], d[3], 0, 0)
+                        .solution(eq, 30, 1e-13, SolverSettings.defaults());
+                ZeroBehaviour f = ZeroBehaviourFit.analyse(s, 0, 0);
+                assertEquals(ZeroBehaviour.Kind.POWER, f.kind(), f.toString());
+                assertTrue(f.sigmaError() < 1e-8 && f.secondParameterError() < 1e-8, f.toString());
+                assertEquals(0, f.sigma().subtract(d[0]).norm(), 3 * f.sigmaError(), lambda + ", " + side + ": " + f);
+                assertEquals(0, f.secondParameter().subtract(d[1]).norm(), 3 * f.secondParameterError(),
+                        lambda + ", " + side + ": " + f);
+            }
+        }
+    }
+
     /** 30 digits for a complex lambda in arbitrary precision (DecayingConnection.zeroData, 40 digits). */
     @Tag("slow")
     @Test

@@ -166,6 +166,24 @@ class ZeroBehaviourTest {
         }
     }
 
+    /**
+     * Near the resonance (sigma = 1 - k, k small, B ~ 1/k^2 so that the solution stays O(1)) the data are either
+     * recovered within their errors or the answer is undecided, never a wrong kind.
+     */
+    @Test
+    void nearResonanceIsRightOrUndecided() {
+        for (double k : new double[] {1e-3, 1e-5, 1e-7}) {
+            ZeroBehaviour truth = ZeroBehaviour.power(new Complex(1 - k), new Complex(-0.2 / (k * k)));
+            ZeroBehaviour f = ZeroBehaviourFit.analyse(truth.solution(EQ, 0.5, 1e-10, SolverSettings.defaults()), 0.5, 0);
+            if (f.kind() != ZeroBehaviour.Kind.UNDECIDED) {
+                assertEquals(ZeroBehaviour.Kind.POWER, f.kind(), f.toString());
+                assertEquals(0, f.sigma().subtract(truth.sigma()).norm(), 3 * f.sigmaError(), f.toString());
+                assertEquals(0, f.secondParameter().subtract(truth.secondParameter()).norm(),
+                        3 * f.secondParameterError(), f.toString());
+            }
+        }
+    }
+
     /** Bad input names what is wrong. */
     @Test
     void badInputIsRefusedWithTheReason() {

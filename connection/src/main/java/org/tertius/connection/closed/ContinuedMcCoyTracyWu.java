@@ -77,6 +77,30 @@ public final class ContinuedMcCoyTracyWu {
         return lambda.multiply(-Math.sqrt(Math.PI));
     }
 
+    /**
+     * The members of PIII(0, 0, -1, 1) with one oscillating exponential on the positive axis: W(x) = w(e^(i side pi/2)
+     * x), w the decaying member lambda of PIII(0, 0, 1, -1) (z -> i z maps one equation to the other: DLMF eq. 32.2.3
+     * with gamma, delta -> -gamma, -delta). With q = -lambda sqrt(pi) and the principal branch of the rotated
+     * argument:
+     * <pre>  side = +1:  W ~ B e^(i pi sigma/2) x^sigma at 0,  log W ~ q e^(-i pi/4) x^(-1/2) e^(-2ix) at infinity;
+     *   side = -1:  W ~ B e^(-i pi sigma/2) x^sigma,      log W ~ q e^(i pi/4) x^(-1/2) e^(2ix),</pre>
+     * i.e. amplitudes (p, q) = (0, q e^(-i pi/4)) or (q e^(i pi/4), 0) of TransseriesAtInfinity about c = 1
+     * (mu = 2i). Derived here from the continued formulas; these complex solutions are the one-exponential edge of
+     * the two-parameter oscillating family.
+     *
+     * @return {sigma, B, p, q}
+     */
+    public static Complex[] rotatedMember(Complex lambda, int side) {
+        if (side != 1 && side != -1) {
+            throw new InvalidInputException("side", "must be +1 or -1, got " + side);
+        }
+        Complex[] d = zeroData(lambda);
+        Complex amplitude = d[1].multiply(new Complex(0, side * Math.PI / 2).multiply(d[0]).exp());
+        Complex q = amplitudeAtInfinity(lambda).multiply(new Complex(0, -side * Math.PI / 4).exp());
+        return side == 1 ? new Complex[] {d[0], amplitude, Complex.ZERO, q}
+                : new Complex[] {d[0], amplitude, q, Complex.ZERO};
+    }
+
     private static Complex toComplex(Apcomplex a) {
         return new Complex(a.real().doubleValue(), a.imag().doubleValue());
     }

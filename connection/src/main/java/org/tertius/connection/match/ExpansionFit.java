@@ -20,6 +20,8 @@ import org.tertius.core.piii.Painleve3Value;
  */
 final class ExpansionFit {
     private static final ComplexArithmetic AR = ComplexArithmetic.INSTANCE;
+    /** Largest error of sigma (or relative error of t0) for which a kind is reported; beyond it: undecided. */
+    static final double RESOLVED = 1e-3;
     /** Number of smallest radii fitted. */
     private static final int RADII = 4;
     private final Painleve3 eq;
@@ -69,6 +71,10 @@ final class ExpansionFit {
         }
         Complex b = best.second.exp();
         Complex sigma = best.first;
+        if (!(best.errFirst < RESOLVED)) {
+            return ZeroBehaviour.undecided(sigma, best.errFirst, "the exponent is not resolved (error " + best.errFirst
+                    + "): the data do not tell the kind");
+        }
         if (Math.abs(sigma.getReal()) > 1 + 3 * best.errFirst) {
             // iterates stepped over the edge: the canonical description has exponent 2 - sigma (or -2 - sigma)
             return ZeroBehaviour.undecided(sigma, best.errFirst, "the fit ended beyond the edge |Re sigma| = 1 by more"
@@ -123,6 +129,10 @@ final class ExpansionFit {
         if (best == null) {
             return ZeroBehaviour.undecided(new Complex(side), Double.NaN, "the fits of t0 disagree between radii: "
                     + describe(fits));
+        }
+        if (!(best.errFirst < RESOLVED * (1 + best.first.norm()))) {
+            return ZeroBehaviour.undecided(new Complex(side), Double.NaN, "t0 is not resolved (error " + best.errFirst
+                    + ")");
         }
         return ZeroBehaviour.measuredLogarithmic(side, best.first, best.errFirst, branch,
                 "fitted at the " + fits.size() + " smallest radii");
