@@ -10,8 +10,9 @@ import org.tertius.core.piii.Painleve3Solution;
 import org.tertius.core.step.SolverSettings;
 
 /**
- * The behaviour of a D6 solution at infinity along one ray (angle, sheet), in the terms of
- * {@link TransseriesAtInfinity}: w = c e^u, u ~ x^(-1/2) (p E + q/E) + ..., E = e^(mu x) x^kappa. Kinds:
+ * The behaviour of a D6 solution (or D7 with gamma = 0) at infinity along one ray (angle, sheet), in the terms of
+ * {@link TransseriesAtInfinity}: w = c e^u, u ~ x^(-1/2) (p E + q/E) + ..., E = e^(mu x) x^kappa (for D7: w = c
+ * x^(1/3) e^u, u ~ s^(-1/2) (p E + q/E), E = e^(mu s) s^kappa, s = x^(2/3)). Kinds:
  * <ul>
  *   <li>{@link Kind#OSCILLATING}: the ray is one where mu x is imaginary; both amplitudes p, q; equivalently
  *       {@code p E + q/E = A cos(theta(x))}, {@code theta = -i (mu x + kappa log x) + phi}, A = 2 sqrt(p q),
@@ -64,7 +65,7 @@ public final class InfinityBehaviour {
     public static InfinityBehaviour of(Painleve3 eq, Complex c, Complex p, Complex q, double angle, int sheet) {
         InvalidInputException.requireFinite("angle", angle);
         TransseriesAtInfinity t = TransseriesAtInfinity.create(eq, c, p, q, 2);
-        double direction = t.mu().multiply(Complex.I.multiply(angle).exp()).getArgument();
+        double direction = t.direction(angle + 2 * Math.PI * sheet);
         Kind kind;
         if (Math.abs(Math.cos(direction)) <= 1e-9) {
             kind = Kind.OSCILLATING;
@@ -94,19 +95,20 @@ public final class InfinityBehaviour {
                 Double.NaN, reason);
     }
 
-    /** The two rays (angles in (-pi, pi]) along which mu x is imaginary for the background c. */
+    /**
+     * The rays of the principal sheet (angles in (-pi, pi]) along which mu x (D6) or mu x^(2/3) (D7) is imaginary for
+     * the background c: two for D6, one or two for D7.
+     */
     public static List<Double> oscillatingRays(Painleve3 eq, Complex c) {
-        Complex mu = TransseriesAtInfinity.create(eq, c, Complex.ZERO, Complex.ZERO, 2).mu();
+        TransseriesAtInfinity t = TransseriesAtInfinity.create(eq, c, Complex.ZERO, Complex.ZERO, 2);
+        double argMu = t.mu().getArgument();
+        double f = t.phaseFactor();
         List<Double> r = new ArrayList<>();
-        for (double target : new double[] {Math.PI / 2, -Math.PI / 2}) {
-            double a = target - mu.getArgument();
-            while (a > Math.PI) {
-                a -= 2 * Math.PI;
+        for (int j = -3; j <= 3; j++) {
+            double a = (Math.PI / 2 + j * Math.PI - argMu) / f;
+            if (a > -Math.PI && a <= Math.PI) {
+                r.add(a);
             }
-            while (a <= -Math.PI) {
-                a += 2 * Math.PI;
-            }
-            r.add(a);
         }
         return r;
     }
@@ -170,7 +172,7 @@ public final class InfinityBehaviour {
         return (errP / Math.max(p.norm(), Double.MIN_NORMAL) + errQ / Math.max(q.norm(), Double.MIN_NORMAL)) / 2;
     }
 
-    /** The logarithmic phase drift -i mu p q for the equation. */
+    /** The logarithmic phase drift -i mu p q for the equation (D6; for D7 see TransseriesAtInfinity#kappa). */
     public Complex drift(Painleve3 eq) {
         Complex mu = transseries(eq, 2).mu();
         return mu.multiply(p).multiply(q).multiply(new Complex(0, -1));

@@ -1,14 +1,17 @@
 package org.tertius.connection.infinity;
 
+import java.util.ArrayList;
 import java.util.List;
 import org.hipparchus.complex.Complex;
 import org.tertius.connection.zero.LocalValue;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.piii.Painleve3;
+import org.tertius.core.piii.Painleve3Type;
 
 /**
  * The two-parameter transseries at infinity of the solutions of a D6 equation (gamma delta != 0, DLMF eq. 32.2.3)
- * about a background c (gamma c^4 + delta = 0), double precision. Derived here.
+ * about a background c (gamma c^4 + delta = 0), and of a D7 equation with gamma = 0 (alpha delta != 0) about
+ * c x^(1/3) (alpha c^3 + delta = 0), double precision. Derived here; the recursion is {@link HarmonicTransseries}.
  *
  * <p>With w = c e^u the equation becomes
  * <pre>  u'' + u'/x = 2 m sinh 2u + (a e^u + b e^-u)/x,   m = gamma c^2, a = alpha c, b = beta/c</pre>
@@ -31,57 +34,81 @@ import org.tertius.core.piii.Painleve3;
  * valid while |Re kappa| &lt; 1/2 (so that |E^k x^(-n/2)| decays with n). For PIII(0, 0, -1, 1) and p = (A/2) e^(i phi),
  * q = conj(p) it is {@link OscillatingExpansion}; for PIII(0, 0, 1, -1), p = 0, q = -lambda sqrt(pi) it is the
  * decaying family {@link DecayingTransseries}. The series in x^(-1/2) is asymptotic; it is truncated at its smallest
- * pair of orders and the error estimate is the next pair plus rounding. Immutable and thread-safe.
+ * pair of orders and the error estimate is the next pair plus rounding.
+ *
+ * <p><b>D7</b> (gamma = 0, derived here). With w = c x^(1/3) e^u (alpha c^3 = -delta) the terms of log(c x^(1/3)) cancel
+ * in u'' + u'/x, and with s = x^(2/3) (so that u_xx + u_x/x = (4/9)(u_ss + u_s/s)/s)
+ * <pre>  u_ss + u_s/s = A (e^u - e^(-2u)) + (B/s) e^-u,   A = (9/4) alpha c,  B = (9/4) beta/c,</pre>
+ * the same structure in the variable s with mu^2 = 3A: E = e^(mu s) s^kappa, amplitudes p, q of s^(-1/2) E^(+-1).
+ * D7 with delta = 0 (beta gamma != 0) is the image under w -> 1/w of this case: pass the reciprocal solution.
+ * Immutable and thread-safe.
  */
 public final class TransseriesAtInfinity {
-    private static final double EPS = 0x1p-52;
+    private final boolean d7;
     private final Complex c;
-    private final Complex mu;
-    private final Complex kappa;
     private final Complex p;
     private final Complex q;
-    private final int orders;
-    private final int width;
-    /** u[n][k + width]. */
-    private final Complex[][] u;
-    private double driftResidual;
+    private final HarmonicTransseries core;
 
     private TransseriesAtInfinity(Painleve3 eq, Complex c, Complex p, Complex q, int orders) {
+        this.d7 = eq.type() == Painleve3Type.D7;
         this.c = c;
         this.p = p;
         this.q = q;
-        this.orders = orders;
-        Complex m0 = eq.gamma().multiply(c).multiply(c);
-        // +0.0 for a signed zero imaginary part: on the negative axis the root is +i sqrt|m| for every background
-        Complex m = new Complex(m0.getReal(), m0.getImaginary() + 0.0);
-        this.mu = m.sqrt().multiply(2);
-        Complex a = eq.alpha().multiply(c);
-        Complex b = eq.beta().divide(c);
-        this.kappa = a.subtract(b).divide(mu.multiply(2)).add(mu.multiply(p).multiply(q));
-        int n = orders + 2;
-        this.width = n + 2;
-        this.u = new Complex[n + 1][2 * width + 1];
-        build(m, a, b, n);
+        if (d7) {
+            Complex a = eq.alpha().multiply(c).multiply(2.25);
+            this.core = new HarmonicTransseries(new Complex[] {a, a.negate()}, new int[] {1, -2},
+                    new Complex[] {eq.beta().divide(c).multiply(2.25)}, new int[] {-1}, p, q, orders);
+        } else {
+            Complex m = eq.gamma().multiply(c).multiply(c);
+            this.core = new HarmonicTransseries(new Complex[] {m, m.negate()}, new int[] {2, -2},
+                    new Complex[] {eq.alpha().multiply(c), eq.beta().divide(c)}, new int[] {1, -1}, p, q, orders);
+        }
     }
 
     /**
-     * The transseries about background c with amplitudes p (of E) and q (of 1/E), orders 1..orders in x^(-1/2).
+     * The backgrounds: c with gamma c^4 + delta = 0 (D6, c_k = c_0 i^k) or alpha c^3 + delta = 0 (D7 with gamma = 0,
+     * c_k = c_0 e^(2 pi i k/3)), c_0 the principal root.
      *
-     * @throws InvalidInputException for an equation that is not D6, c not a background (1e-10 relative), non-finite
+     * @throws InvalidInputException for other types (D7 with delta = 0: use the reciprocal solution)
+     */
+    public static List<Complex> backgrounds(Painleve3 eq) {
+        Painleve3Type type = eq.type();
+        if (type == Painleve3Type.D6) {
+            return AlgebraicExpansion.backgrounds(eq.gamma(), eq.delta());
+        }
+        if (type == Painleve3Type.D7 && eq.gamma().norm() == 0 && eq.alpha().norm() > 0) {
+            Complex c0 = eq.delta().negate().divide(eq.alpha()).pow(1.0 / 3);
+            List<Complex> r = new ArrayList<>();
+            for (int k = 0; k < 3; k++) {
+                r.add(c0.multiply(new Complex(0, 2 * Math.PI * k / 3).exp()));
+            }
+            return r;
+        }
+        throw new InvalidInputException("equation", "the transseries at infinity is implemented for D6 (gamma delta"
+                + " != 0) and for D7 with gamma = 0 (alpha delta != 0), got " + eq + " (" + type + ")"
+                + (type == Painleve3Type.D7 ? "; for delta = 0 pass the reciprocal solution 1/w, a D7 solution with"
+                + " gamma = 0" : ""));
+    }
+
+    /**
+     * The transseries about background c with amplitudes p (of E) and q (of 1/E), orders 1..orders in x^(-1/2)
+     * (in s^(-1/2), s = x^(2/3), for D7).
+     *
+     * @throws InvalidInputException for an equation of another type, c not a background (1e-10 relative), non-finite
      *     amplitudes, orders outside [2, 80]
      */
     public static TransseriesAtInfinity create(Painleve3 eq, Complex c, Complex p, Complex q, int orders) {
-        List<Complex> roots = AlgebraicExpansion.backgrounds(eq.gamma(), eq.delta());
-        Complex res = eq.gamma().multiply(c.pow(4)).add(eq.delta());
-        if (!(res.norm() <= 1e-10 * eq.delta().norm())) {
-            throw new InvalidInputException("background", "must satisfy gamma c^4 + delta = 0, got c = " + c
-                    + "; the backgrounds are " + roots);
-        }
+        List<Complex> roots = backgrounds(eq);
         Complex best = roots.get(0);
         for (Complex r : roots) {
             if (r.subtract(c).norm() < best.subtract(c).norm()) {
                 best = r;
             }
+        }
+        if (!(best.subtract(c).norm() <= 1e-10 * best.norm())) {
+            throw new InvalidInputException("background", "must be one of " + roots + " (" + (eq.type()
+                    == Painleve3Type.D7 ? "alpha c^3 + delta = 0" : "gamma c^4 + delta = 0") + "), got c = " + c);
         }
         if (!Double.isFinite(p.norm()) || !Double.isFinite(q.norm())) {
             throw new InvalidInputException("amplitude", "must be finite, got p = " + p + ", q = " + q);
@@ -96,14 +123,22 @@ public final class TransseriesAtInfinity {
         return c;
     }
 
-    /** mu = 2 sqrt(gamma c^2): E = e^(mu x) x^kappa. */
-    public Complex mu() {
-        return mu;
+    /** True for D7 (variable s = x^(2/3), background c x^(1/3)). */
+    public boolean isD7() {
+        return d7;
     }
 
-    /** The exponent kappa = (alpha c - beta/c)/(2 mu) + mu p q; its second part is the phase drift. */
+    /** mu: E = e^(mu x) x^kappa (D6, mu = 2 sqrt(gamma c^2)) or e^(mu s) s^kappa (D7, mu = sqrt(27 alpha c/4)). */
+    public Complex mu() {
+        return core.mu();
+    }
+
+    /**
+     * The exponent kappa; for D6 kappa = (alpha c - beta/c)/(2 mu) + mu p q, the second part being the phase drift
+     * (for D7 it also carries the quadratic part of the nonlinearity: computed from the order-3 condition).
+     */
     public Complex kappa() {
-        return kappa;
+        return core.kappa();
     }
 
     public Complex amplitudeOfE() {
@@ -116,305 +151,62 @@ public final class TransseriesAtInfinity {
 
     /** Coefficient u_nk. */
     public Complex coefficient(int n, int k) {
-        return Math.abs(k) > width ? Complex.ZERO : u[n][k + width];
+        return core.coefficient(n, k);
     }
 
-    /** The residual of the order-3 condition met by the choice of kappa (a check of the derivation). */
+    /** The difference of kappa from the two order-3 conditions (both amplitudes non-zero; a check). */
     public double driftResidual() {
-        return driftResidual;
+        return core.driftResidual();
     }
 
-    private void build(Complex m, Complex a, Complex b, int n) {
-        int[] cs = {2, -2, 1, -1};
-        Laurent[][] f = new Laurent[4][n + 1];
-        Laurent[] uu = new Laurent[n + 1];
-        for (int j = 0; j <= n; j++) {
-            uu[j] = new Laurent(width);
-        }
-        uu[1].set(1, p);
-        uu[1].set(-1, q);
-        for (int i = 0; i < 4; i++) {
-            f[i][0] = new Laurent(width);
-            f[i][0].set(0, Complex.ONE);
-            f[i][1] = uu[1].scaled(cs[i]);
-        }
-        Complex amb = a.subtract(b);
-        for (int order = 2; order <= n; order++) {
-            for (int i = 0; i < 4; i++) {
-                f[i][order] = expOrder(f[i], uu, cs[i], order);
-            }
-            Laurent r = rhs(f, uu, m, a, b, order);
-            if (order == 3) {
-                for (int k = -1; k <= 1; k += 2) {
-                    Complex lhs = linear(k, order, amb).multiply(uu[1].get(k));
-                    driftResidual = Math.max(driftResidual, lhs.subtract(r.get(k)).norm() / (1 + r.get(k).norm()));
-                }
-            }
-            if (order >= 5 && order % 2 == 1) {
-                Complex[] d = solveFirstHarmonic(r, uu, m, amb, order);
-                uu[order - 2].set(1, d[0]);
-                uu[order - 2].set(-1, d[1]);
-                Laurent delta = new Laurent(width);
-                delta.set(1, d[0]);
-                delta.set(-1, d[1]);
-                for (int i = 0; i < 4; i++) {
-                    Laurent cd = delta.scaled(cs[i]);
-                    f[i][order - 2].addInPlace(cd, 1);
-                    f[i][order - 1].addInPlace(cd.times(f[i][1]), 1);
-                    f[i][order].addInPlace(cd.times(f[i][2]), 1);
-                }
-                r = rhs(f, uu, m, a, b, order);
-            }
-            for (int k = -order; k <= order; k += 2) {
-                if (Math.abs(k) == 1) {
-                    continue;
-                }
-                Complex value = r.get(k).subtract(linear(k, order, amb).multiply(uu[order - 2].get(k)));
-                if (order >= 4) {
-                    value = value.subtract(secondOrder(k, order).multiply(uu[order - 4].get(k)));
-                }
-                uu[order].set(k, value.divide(mu.multiply(mu).multiply(k * k - 1)));
-            }
-            for (int i = 0; i < 4; i++) {
-                f[i][order].addInPlace(uu[order], cs[i]);
-            }
-        }
-        for (int j = 0; j <= n; j++) {
-            for (int k = -width; k <= width; k++) {
-                u[j][k + width] = uu[j].get(k);
-            }
-        }
+    /** arg(mu x) (D6) or arg(mu s) (D7) along the ray with log-coordinate phase (arg x + 2 pi sheet). */
+    public double direction(double phase) {
+        return mu().getArgument() + (d7 ? 2.0 / 3 : 1) * phase;
     }
 
-    /** k mu (2 k kappa - n + 3) - (a - b). */
-    private Complex linear(int k, int n, Complex amb) {
-        return mu.multiply(k).multiply(kappa.multiply(2 * k).add(3 - n)).subtract(amb);
-    }
-
-    /** (k kappa - (n-4)/2)^2. */
-    private Complex secondOrder(int k, int n) {
-        Complex s = kappa.multiply(k).subtract((n - 4) / 2.0);
-        return s.multiply(s);
-    }
-
-    /** The order-n right side: m (F2 - F-2)_n + (a + b)[n = 2] + a (F1 - u)_(n-2) + b (F-1 + u)_(n-2). */
-    private Laurent rhs(Laurent[][] f, Laurent[] uu, Complex m, Complex a, Complex b, int n) {
-        Laurent r = new Laurent(width);
-        r.addInPlace(f[0][n], m);
-        r.addInPlace(f[1][n], m.negate());
-        if (n == 2) {
-            r.set(0, r.get(0).add(a.add(b)));
-        }
-        if (n - 2 >= 1) {
-            r.addInPlace(f[2][n - 2], a);
-            r.addInPlace(uu[n - 2], a.negate());
-            r.addInPlace(f[3][n - 2], b);
-            r.addInPlace(uu[n - 2], b);
-        }
-        return r;
-    }
-
-    /** The 2 x 2 system for u_(n-2, +-1) at order n (odd, >= 5). */
-    private Complex[] solveFirstHarmonic(Laurent r, Laurent[] uu, Complex m, Complex amb, int n) {
-        Complex rhs1 = r.get(1).subtract(secondOrder(1, n).multiply(uu[n - 4].get(1)));
-        Complex rhsm1 = r.get(-1).subtract(secondOrder(-1, n).multiply(uu[n - 4].get(-1)));
-        Complex eight = m.multiply(8);
-        Complex pq2 = p.multiply(q).multiply(2);
-        Complex a11 = linear(1, n, amb).subtract(eight.multiply(pq2));
-        Complex a12 = eight.multiply(p.multiply(p)).negate();
-        Complex a21 = eight.multiply(q.multiply(q)).negate();
-        Complex a22 = linear(-1, n, amb).subtract(eight.multiply(pq2));
-        Complex det = a11.multiply(a22).subtract(a12.multiply(a21));
-        if (!(det.norm() > 0)) {
-            throw new InvalidInputException("amplitude", "the amplitudes p = " + p + ", q = " + q + " hit a resonance of"
-                    + " the transseries at order " + n);
-        }
-        Complex d1 = rhs1.multiply(a22).subtract(a12.multiply(rhsm1)).divide(det);
-        Complex dm1 = a11.multiply(rhsm1).subtract(a21.multiply(rhs1)).divide(det);
-        return new Complex[] {d1, dm1};
-    }
-
-    /** n F_n = sum_(j=1)^(n-1) j c u_j F_(n-j) (u_n still zero). */
-    private Laurent expOrder(Laurent[] f, Laurent[] uu, int cc, int n) {
-        Laurent s = new Laurent(width);
-        for (int j = 1; j < n; j++) {
-            s.addInPlace(uu[j].times(f[n - j]), (double) j * cc / n);
-        }
-        return s;
-    }
-
-    /** A Laurent polynomial in E with harmonics -width..width, stored as real and imaginary parts. */
-    private static final class Laurent {
-        final int width;
-        final double[] re;
-        final double[] im;
-        int lo;
-        int hi;
-
-        Laurent(int width) {
-            this.width = width;
-            this.re = new double[2 * width + 1];
-            this.im = new double[2 * width + 1];
-            this.lo = 1;
-            this.hi = -1;
-        }
-
-        Complex get(int k) {
-            return Math.abs(k) > width ? Complex.ZERO : new Complex(re[k + width], im[k + width]);
-        }
-
-        void set(int k, Complex v) {
-            re[k + width] = v.getReal();
-            im[k + width] = v.getImaginary();
-            widen(k);
-        }
-
-        private void widen(int k) {
-            if (lo > hi) {
-                lo = k;
-                hi = k;
-            } else {
-                lo = Math.min(lo, k);
-                hi = Math.max(hi, k);
-            }
-        }
-
-        Laurent scaled(double s) {
-            Laurent r = new Laurent(width);
-            for (int k = lo; k <= hi; k++) {
-                r.re[k + width] = s * re[k + width];
-                r.im[k + width] = s * im[k + width];
-            }
-            r.lo = lo;
-            r.hi = hi;
-            return r;
-        }
-
-        void addInPlace(Laurent x, double s) {
-            for (int k = x.lo; k <= x.hi; k++) {
-                re[k + width] += s * x.re[k + width];
-                im[k + width] += s * x.im[k + width];
-            }
-            if (x.lo <= x.hi) {
-                widen(x.lo);
-                widen(x.hi);
-            }
-        }
-
-        void addInPlace(Laurent x, Complex s) {
-            double sr = s.getReal();
-            double si = s.getImaginary();
-            for (int k = x.lo; k <= x.hi; k++) {
-                double xr = x.re[k + width];
-                double xi = x.im[k + width];
-                re[k + width] += sr * xr - si * xi;
-                im[k + width] += sr * xi + si * xr;
-            }
-            if (x.lo <= x.hi) {
-                widen(x.lo);
-                widen(x.hi);
-            }
-        }
-
-        Laurent times(Laurent y) {
-            Laurent r = new Laurent(width);
-            for (int i = lo; i <= hi; i++) {
-                double xr = re[i + width];
-                double xi = im[i + width];
-                if (xr == 0 && xi == 0) {
-                    continue;
-                }
-                for (int j = y.lo; j <= y.hi; j++) {
-                    int k = i + j;
-                    if (Math.abs(k) > width) {
-                        continue;
-                    }
-                    double yr = y.re[j + width];
-                    double yi = y.im[j + width];
-                    r.re[k + width] += xr * yr - xi * yi;
-                    r.im[k + width] += xr * yi + xi * yr;
-                }
-            }
-            if (lo <= hi && y.lo <= y.hi) {
-                r.lo = Math.max(-width, lo + y.lo);
-                r.hi = Math.min(width, hi + y.hi);
-            }
-            return r;
-        }
+    /** The factor of the phase in {@link #direction}: 1 (D6) or 2/3 (D7). */
+    public double phaseFactor() {
+        return d7 ? 2.0 / 3 : 1;
     }
 
     /**
-     * w and w' at x (log coordinate tau = log x on the wanted sheet, used for x^kappa and x^(-1/2)), optimally
-     * truncated, with error estimates.
+     * w and w' at x (log coordinate tau = log x on the wanted sheet), optimally truncated, with error estimates.
      */
     public LocalValue<Complex> at(Complex tau) {
         LocalValue<Complex> l = logAt(tau);
-        Complex w = c.multiply(l.w().exp());
-        Complex dw = w.multiply(l.dw());
+        Complex w = reference(tau).multiply(l.w().exp());
+        Complex dw = w.multiply(l.dw().add(referenceSlope(tau)));
         double aw = w.norm();
-        return new LocalValue<>(l.z(), w, dw, aw * l.errW(), aw * (l.errDw() + l.dw().norm() * l.errW()));
+        return new LocalValue<>(l.z(), w, dw, aw * l.errW(), aw * (l.errDw() + l.dw().add(referenceSlope(tau)).norm()
+                * l.errW()));
+    }
+
+    /** The background value c (D6) or c x^(1/3) (D7) at tau. */
+    private Complex reference(Complex tau) {
+        return d7 ? c.multiply(tau.divide(3).exp()) : c;
+    }
+
+    /** d log(reference)/dx: 0 (D6) or 1/(3x) (D7). */
+    private Complex referenceSlope(Complex tau) {
+        return d7 ? tau.negate().exp().divide(3) : Complex.ZERO;
     }
 
     /**
-     * u = log(w/c) and u' at the log coordinate tau (the value's w() is u, dw() is u'), with error estimates: the
-     * form that keeps the relative accuracy of an exponentially small deviation.
+     * u = log(w/reference) and du/dx at the log coordinate tau (the value's w() is u, dw() is du/dx; z() is x), with
+     * error estimates: the form that keeps the relative accuracy of an exponentially small deviation.
      */
     public LocalValue<Complex> logAt(Complex tau) {
-        Complex x = tau.exp();
-        Complex e = mu.multiply(x).add(kappa.multiply(tau)).exp();
-        Complex einv = e.reciprocal();
-        double ae = e.norm();
-        Complex root = tau.multiply(-0.5).exp();
-        double ar = root.norm();
-        double[] size = new double[orders + 1];
-        double[] sizeD = new double[orders + 1];
-        Complex[] term = new Complex[orders + 1];
-        Complex[] dterm = new Complex[orders + 1];
-        Complex pow = Complex.ONE;
-        Complex xinv = x.reciprocal();
-        for (int n = 1; n <= orders; n++) {
-            pow = pow.multiply(root);
-            Complex s = Complex.ZERO;
-            Complex ds = Complex.ZERO;
-            for (int k = -n; k <= n; k += 2) {
-                Complex coef = u[n][k + width];
-                if (coef.getReal() == 0 && coef.getImaginary() == 0) {
-                    continue;
-                }
-                Complex ek = k >= 0 ? e.pow(k) : einv.pow(-k);
-                Complex t = coef.multiply(ek);
-                s = s.add(t);
-                Complex factor = mu.multiply(k).add(kappa.multiply(k).subtract(n / 2.0).multiply(xinv));
-                ds = ds.add(t.multiply(factor));
-                size[n] += coef.norm() * Math.pow(ae, k);
-                sizeD[n] += coef.norm() * Math.pow(ae, k) * factor.norm();
-            }
-            size[n] *= Math.pow(ar, n);
-            sizeD[n] *= Math.pow(ar, n);
-            term[n] = s.multiply(pow);
-            dterm[n] = ds.multiply(pow);
+        if (!d7) {
+            return core.at(tau);
         }
-        int stop = orders - 2;
-        double bestPair = Double.POSITIVE_INFINITY;
-        for (int n = 2; n <= orders - 2; n++) {
-            double pair = size[n + 1] + size[n + 2];
-            if (pair < bestPair) {
-                bestPair = pair;
-                stop = n;
-            }
-        }
-        Complex uu = Complex.ZERO;
-        Complex du = Complex.ZERO;
-        double abs = 0;
-        double absD = 0;
-        for (int n = 1; n <= stop; n++) {
-            uu = uu.add(term[n]);
-            du = du.add(dterm[n]);
-            abs += size[n];
-            absD += dterm[n].norm();
-        }
-        double errU = bestPair + 8 * EPS * abs * (stop + 1);
-        double errDu = sizeD[stop + 1] + sizeD[stop + 2] + 8 * EPS * absD * (stop + 1);
-        return new LocalValue<>(x, uu, du, errU, errDu);
+        LocalValue<Complex> l = core.at(tau.multiply(2.0 / 3));
+        // du/dx = du/ds ds/dx, ds/dx = (2/3) x^(-1/3)
+        Complex ds = tau.divide(-3).exp().multiply(2.0 / 3);
+        return new LocalValue<>(tau.exp(), l.w(), l.dw().multiply(ds), l.errW(), l.errDw() * ds.norm());
+    }
+
+    /** {u, du/dx} of computed values (w, w') at tau: u = log(w/reference) (principal log), du/dx = w'/w - slope. */
+    public Complex[] logOf(Complex tau, Complex w, Complex dw) {
+        return new Complex[] {w.divide(reference(tau)).log(), dw.divide(w).subtract(referenceSlope(tau))};
     }
 }

@@ -10,7 +10,8 @@ import org.tertius.core.piii.Painleve3Value;
 
 /**
  * Newton fit of the amplitudes (p, q) of {@link TransseriesAtInfinity} about a background c to one computed value
- * (w, w'), in the variables u = log(w/c), u' = w'/w (relative accuracy of an exponentially small deviation). Both
+ * (w, w'), in the variables u = log(w/c) (D7: log(w/(c x^(1/3)))) and u' (relative accuracy of an exponentially
+ * small deviation). Both
  * amplitudes ({@code free = 0}) from u and u'; one ({@code free = -1}: q with p = 0, {@code +1}: p with q = 0) from u,
  * with u' as a check. Start from the linear part: u - u_background ~ x^(-1/2) (p E + q/E). Immutable.
  */
@@ -49,17 +50,23 @@ final class AmplitudeFit {
     Result at(Complex tau, Painleve3Value v) {
         Complex w = v.w();
         double m = w.norm();
-        Complex u = w.divide(c).log();
-        Complex du = v.dw().divide(w);
+        Complex[] ud = background.logOf(tau, w, v.dw());
+        Complex u = ud[0];
+        Complex du = ud[1];
         double eu = v.errW() / m;
         double edu = v.errDw() / m + v.dw().norm() * v.errW() / (m * m);
         LocalValue<Complex> bg = background.logAt(tau);
         Complex uo = u.subtract(bg.w());
         Complex duo = du.subtract(bg.dw());
-        Complex x = tau.exp();
-        Complex e0 = background.mu().multiply(x).add(background.kappa().multiply(tau)).exp();
-        Complex root = tau.multiply(0.5).exp();
+        // in the variable y of the transseries (x for D6, s = x^(2/3) for D7); du/dy = du/dx (dx/dy)
+        Complex tauY = background.isD7() ? tau.multiply(2.0 / 3) : tau;
+        Complex y = tauY.exp();
+        Complex e0 = background.mu().multiply(y).add(background.kappa().multiply(tauY)).exp();
+        Complex root = tauY.multiply(0.5).exp();
         Complex mu = background.mu();
+        if (background.isD7()) {
+            duo = duo.multiply(tau.divide(3).exp().multiply(1.5));
+        }
         Complex p0 = Complex.ZERO;
         Complex q0 = Complex.ZERO;
         if (free == 0) {
@@ -69,8 +76,8 @@ final class AmplitudeFit {
             for (int i = 0; i < 8; i++) {
                 p0 = pe.divide(e0);
                 q0 = qe.multiply(e0);
-                Complex kappa = background.kappa().add(mu.multiply(p0).multiply(q0));
-                e0 = mu.multiply(x).add(kappa.multiply(tau)).exp();
+                Complex kappa = TransseriesAtInfinity.create(eq, c, p0, q0, 4).kappa();
+                e0 = mu.multiply(y).add(kappa.multiply(tauY)).exp();
             }
         } else if (free < 0) {
             q0 = uo.multiply(root).multiply(e0);

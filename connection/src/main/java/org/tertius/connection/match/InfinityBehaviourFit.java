@@ -3,7 +3,6 @@ package org.tertius.connection.match;
 import java.util.ArrayList;
 import java.util.List;
 import org.hipparchus.complex.Complex;
-import org.tertius.connection.infinity.AlgebraicExpansion;
 import org.tertius.connection.infinity.InfinityBehaviour;
 import org.tertius.connection.infinity.TransseriesAtInfinity;
 import org.tertius.core.InvalidInputException;
@@ -15,8 +14,8 @@ import org.tertius.core.piii.Painleve3Type;
 import org.tertius.core.piii.Painleve3Value;
 
 /**
- * Finds the behaviour at infinity along a ray ({@link InfinityBehaviour}) of a computed D6 solution (double
- * precision, core engine): samples |z| in [rMin, rMax] on the ray, picks the background c that log(w/c) approaches,
+ * Finds the behaviour at infinity along a ray ({@link InfinityBehaviour}) of a computed D6 solution, or D7 with
+ * gamma = 0 (double precision, core engine): samples |z| in [rMin, rMax] on the ray, picks the background c that log(w/c) approaches,
  * and fits the amplitudes of {@link TransseriesAtInfinity} to (w, w') by Newton's method at each radius. Both
  * amplitudes on the rays where mu z is imaginary, else the one of the decaying exponential (the other must vanish for
  * the solution to approach c). The errors of the data and of the truncated transseries are mapped through the
@@ -42,16 +41,13 @@ public final class InfinityBehaviourFit {
      * The behaviour at infinity of {@code solution} along arg z = angle on sheet {@code sheet}, from |z| in
      * [rMin, rMax].
      *
-     * @throws InvalidInputException for an equation that is not D6, a bad interval, or a ray along which the solution
+     * @throws InvalidInputException for an equation that is neither D6 nor D7 with gamma = 0, a bad interval, or a ray along which the solution
      *     has poles (a pole line: the forms at infinity do not apply; the message says where)
      */
     public static InfinityBehaviour analyse(Painleve3Solution solution, double angle, int sheet, double rMin,
                                             double rMax) {
         Painleve3 eq = solution.equation();
-        if (eq.type() != Painleve3Type.D6) {
-            throw new InvalidInputException("equation", "the behaviour at infinity is implemented for D6 (gamma delta"
-                    + " != 0), got " + eq + " (" + eq.type() + ")");
-        }
+        List<Complex> backgrounds = TransseriesAtInfinity.backgrounds(eq); // refuses the other types
         InvalidInputException.requireFinite("angle", angle);
         if (!(rMin >= 2 && rMax > 1.5 * rMin && rMax <= 1e4)) {
             throw new InvalidInputException("radius", "the sample interval must satisfy 2 <= rMin < rMax/1.5, rMax <="
@@ -60,8 +56,7 @@ public final class InfinityBehaviourFit {
         double phase = angle + 2 * Math.PI * sheet;
         List<Complex> taus = new ArrayList<>();
         List<Painleve3Value> values = new ArrayList<>();
-        List<Complex> backgrounds = AlgebraicExpansion.backgrounds(eq.gamma(), eq.delta());
-        double scale = 1 + backgrounds.get(0).norm();
+        double scale = (1 + backgrounds.get(0).norm()) * (eq.type() == Painleve3Type.D7 ? Math.cbrt(rMax) : 1);
         String failure = "";
         for (int j = 0; j < SAMPLES; j++) {
             double r = rMin * Math.pow(rMax / rMin, j / (double) (SAMPLES - 1));
@@ -89,11 +84,12 @@ public final class InfinityBehaviourFit {
                     + " for |z| in [" + rMin + ", " + rMax + "] (" + (SAMPLES - values.size()) + " of " + SAMPLES
                     + " points failed, e.g. " + failure + "); sample closer to where it was started");
         }
-        Complex c = closestBackground(backgrounds, values);
+        Complex c = closestBackground(eq, backgrounds, taus, values);
+        TransseriesAtInfinity probe = TransseriesAtInfinity.create(eq, c, Complex.ZERO, Complex.ZERO, 2);
         double worst = 0;
         double inner = 0;
         for (int j = 0; j < values.size(); j++) {
-            double size = values.get(j).w().divide(c).log().norm();
+            double size = probe.logOf(taus.get(j), values.get(j).w(), values.get(j).dw())[0].norm();
             if (j < values.size() / 2) {
                 inner = Math.max(inner, size);
             } else {
@@ -105,8 +101,7 @@ public final class InfinityBehaviourFit {
                     + " (|log(w/c)| up to " + worst + " on the outer half of [" + rMin + ", " + rMax + "], " + inner
                     + " on the inner half)");
         }
-        TransseriesAtInfinity probe = TransseriesAtInfinity.create(eq, c, Complex.ZERO, Complex.ZERO, 2);
-        double direction = probe.mu().multiply(Complex.I.multiply(angle).exp()).getArgument();
+        double direction = probe.direction(phase);
         boolean oscillating = Math.abs(Math.cos(direction)) <= 1e-9;
         int free = oscillating ? 0 : (Math.cos(direction) > 0 ? -1 : 1);
         AmplitudeFit fit = new AmplitudeFit(eq, c, free);
@@ -141,13 +136,16 @@ public final class InfinityBehaviourFit {
                 + " ray in a pole-free sector (see PoleFreeSector)");
     }
 
-    private static Complex closestBackground(List<Complex> backgrounds, List<Painleve3Value> values) {
+    private static Complex closestBackground(Painleve3 eq, List<Complex> backgrounds, List<Complex> taus,
+                                             List<Painleve3Value> values) {
         Complex best = backgrounds.get(0);
         double bestScore = Double.POSITIVE_INFINITY;
         for (Complex c : backgrounds) {
+            TransseriesAtInfinity t = TransseriesAtInfinity.create(eq, c, Complex.ZERO, Complex.ZERO, 2);
             double score = 0;
             for (int j = values.size() / 2; j < values.size(); j++) {
-                score = Math.max(score, values.get(j).w().subtract(c).norm());
+                Complex ratio = t.logOf(taus.get(j), values.get(j).w(), values.get(j).dw())[0].exp();
+                score = Math.max(score, ratio.subtract(1).norm());
             }
             if (score < bestScore) {
                 bestScore = score;

@@ -3,18 +3,17 @@ package org.tertius.connection.match;
 import java.util.ArrayList;
 import java.util.List;
 import org.hipparchus.complex.Complex;
-import org.tertius.connection.infinity.AlgebraicExpansion;
 import org.tertius.connection.infinity.TransseriesAtInfinity;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.TertiusException;
 import org.tertius.core.number.SurfacePoint;
 import org.tertius.core.piii.Painleve3;
 import org.tertius.core.piii.Painleve3Solution;
-import org.tertius.core.piii.Painleve3Type;
 import org.tertius.core.piii.Painleve3Value;
 
 /**
- * The sector of the universal cover, around a given ray, in which a D6 solution approaches one background c at
+ * The sector of the universal cover, around a given ray, in which a D6 solution (or D7 with gamma = 0, with x^(2/3)
+ * for x in the exponentials) approaches one background c at
  * infinity (pole-free for large |z|; tronquee-type when it is wider than one half-plane of the exponential). Derived
  * here from the structure of {@link TransseriesAtInfinity}: with psi = arg(mu z), the deviation from c carries
  * e^(-mu z) (decaying for cos psi &gt; 0) and e^(mu z) (decaying for cos psi &lt; 0); the coefficient of each changes only
@@ -58,15 +57,13 @@ public final class PoleFreeSector {
     public static PoleFreeSector around(Painleve3Solution solution, double angle, int sheet, double rMin,
                                         double rMax) {
         Painleve3 eq = solution.equation();
-        if (eq.type() != Painleve3Type.D6) {
-            throw new InvalidInputException("equation", "the pole-free sectors at infinity are implemented for D6, got "
-                    + eq.type());
-        }
+        List<Complex> backgrounds = TransseriesAtInfinity.backgrounds(eq); // refuses the other types
         InvalidInputException.requireFinite("angle", angle);
         double phase = angle + 2 * Math.PI * sheet;
         Complex c = null;
-        for (Complex candidate : AlgebraicExpansion.backgrounds(eq.gamma(), eq.delta())) {
-            if (approaches(solution, candidate, phase, rMin, rMax)) {
+        for (Complex candidate : backgrounds) {
+            if (approaches(solution, TransseriesAtInfinity.create(eq, candidate, Complex.ZERO, Complex.ZERO, 2), phase,
+                    rMin, rMax)) {
                 c = candidate;
             }
         }
@@ -75,17 +72,19 @@ public final class PoleFreeSector {
                     + (sheet == 0 ? "" : " on sheet " + sheet) + " (|z| up to " + rMax + "); there is no pole-free sector"
                     + " around this ray");
         }
-        double argMu = TransseriesAtInfinity.create(eq, c, Complex.ZERO, Complex.ZERO, 2).mu().getArgument();
-        // psi = argMu + phase; quarter index j: psi in [j pi/2, (j+1) pi/2)
-        double psi = argMu + phase;
+        TransseriesAtInfinity t = TransseriesAtInfinity.create(eq, c, Complex.ZERO, Complex.ZERO, 2);
+        double argMu = t.mu().getArgument();
+        double factor = t.phaseFactor();
+        // psi = argMu + factor phase; quarter index j: psi in [j pi/2, (j+1) pi/2)
+        double psi = t.direction(phase);
         int j0 = (int) Math.floor(psi / (Math.PI / 2));
         List<String> tests = new ArrayList<>();
         int hi = j0;
         boolean upperOpen = false;
         while (hi - j0 < MAX_QUARTERS) {
-            double mid = (hi + 1.5) * Math.PI / 2 - argMu;
-            boolean ok = approaches(solution, c, mid, rMin, rMax);
-            tests.add("arg z = " + mid + ": " + (ok ? "approaches" : "does not approach") + " c");
+            double mid = ((hi + 1.5) * Math.PI / 2 - argMu) / factor;
+            boolean ok = approaches(solution, t, mid, rMin, rMax);
+            tests.add("phase " + mid + ": " + (ok ? "approaches" : "does not approach") + " c");
             if (!ok) {
                 break;
             }
@@ -97,9 +96,9 @@ public final class PoleFreeSector {
         int lo = j0;
         boolean lowerOpen = false;
         while (j0 - lo < MAX_QUARTERS) {
-            double mid = (lo - 0.5) * Math.PI / 2 - argMu;
-            boolean ok = approaches(solution, c, mid, rMin, rMax);
-            tests.add("arg z = " + mid + ": " + (ok ? "approaches" : "does not approach") + " c");
+            double mid = ((lo - 0.5) * Math.PI / 2 - argMu) / factor;
+            boolean ok = approaches(solution, t, mid, rMin, rMax);
+            tests.add("phase " + mid + ": " + (ok ? "approaches" : "does not approach") + " c");
             if (!ok) {
                 break;
             }
@@ -112,7 +111,8 @@ public final class PoleFreeSector {
         double upperPsi = (hi + 1) * Math.PI / 2;
         double lowerPsi = lo * Math.PI / 2;
         boolean consistent = isAntiStokes(upperPsi) && isAntiStokes(lowerPsi);
-        return new PoleFreeSector(c, lowerPsi - argMu, upperPsi - argMu, lowerOpen, upperOpen, consistent, tests);
+        return new PoleFreeSector(c, (lowerPsi - argMu) / factor, (upperPsi - argMu) / factor, lowerOpen, upperOpen,
+                consistent, tests);
     }
 
     private static boolean isAntiStokes(double psi) {
@@ -120,14 +120,16 @@ public final class PoleFreeSector {
         return Math.abs(r) < 1e-9;
     }
 
-    private static boolean approaches(Painleve3Solution s, Complex c, double phase, double rMin, double rMax) {
+    private static boolean approaches(Painleve3Solution s, TransseriesAtInfinity t, double phase, double rMin,
+                                      double rMax) {
         double[] radii = {rMin, Math.sqrt(rMin * rMax), rMax};
         double[] size = new double[3];
         double[] err = new double[3];
         for (int i = 0; i < 3; i++) {
             try {
-                Painleve3Value v = s.evaluate(SurfacePoint.fromLog(Math.log(radii[i]), phase));
-                size[i] = v.w().divide(c).log().norm();
+                Complex tau = new Complex(Math.log(radii[i]), phase);
+                Painleve3Value v = s.evaluate(SurfacePoint.fromLog(tau.getReal(), phase));
+                size[i] = t.logOf(tau, v.w(), v.dw())[0].norm();
                 err[i] = v.errW() / v.w().norm();
                 if (!Double.isFinite(size[i]) || !(err[i] < 0.1)) {
                     return false;
