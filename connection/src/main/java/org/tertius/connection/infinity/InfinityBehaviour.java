@@ -172,16 +172,28 @@ public final class InfinityBehaviour {
         return (errP / Math.max(p.norm(), Double.MIN_NORMAL) + errQ / Math.max(q.norm(), Double.MIN_NORMAL)) / 2;
     }
 
-    /** The logarithmic phase drift -i mu p q for the equation (D6; for D7 see TransseriesAtInfinity#kappa). */
+    /**
+     * The logarithmic phase drift: -i times the part of kappa due to the amplitudes, {@code -i (kappa(p, q) - kappa(0,
+     * 0))}; for D6 it is -i mu p q.
+     */
     public Complex drift(Painleve3 eq) {
-        Complex mu = transseries(eq, 2).mu();
-        return mu.multiply(p).multiply(q).multiply(new Complex(0, -1));
+        return driftOf(eq, p, q);
     }
 
-    /** Error of {@link #drift} (first order). */
+    private Complex driftOf(Painleve3 eq, Complex a, Complex b) {
+        Complex k = TransseriesAtInfinity.create(eq, background, a, b, 4).kappa();
+        Complex k0 = TransseriesAtInfinity.create(eq, background, Complex.ZERO, Complex.ZERO, 4).kappa();
+        return k.subtract(k0).multiply(new Complex(0, -1));
+    }
+
+    /** Error of {@link #drift} (first order, slopes by differences). */
     public double driftError(Painleve3 eq) {
-        Complex mu = transseries(eq, 2).mu();
-        return mu.norm() * (errP * q.norm() + errQ * p.norm());
+        Complex d = drift(eq);
+        double hp = 1e-7 * (1 + p.norm());
+        double hq = 1e-7 * (1 + q.norm());
+        double sp = driftOf(eq, p.add(hp), q).subtract(d).norm() / hp;
+        double sq = driftOf(eq, p, q.add(hq)).subtract(d).norm() / hq;
+        return sp * errP + sq * errQ;
     }
 
     /** The transseries of these data. */
