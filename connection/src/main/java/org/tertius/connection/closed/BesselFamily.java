@@ -1,6 +1,7 @@
 package org.tertius.connection.closed;
 
 import org.apfloat.Apcomplex;
+import org.apfloat.Apfloat;
 import org.apfloat.FixedPrecisionApcomplexHelper;
 import org.hipparchus.complex.Complex;
 import org.tertius.core.InvalidInputException;
@@ -191,7 +192,7 @@ public final class BesselFamily {
     }
 
     private static Apcomplex ap(Complex c) {
-        return new Apcomplex(new org.apfloat.Apfloat(c.getReal(), 30), new org.apfloat.Apfloat(c.getImaginary(), 30));
+        return new Apcomplex(new Apfloat(c.getReal(), 30), new Apfloat(c.getImaginary(), 30));
     }
 
     private static Complex toComplex(Apcomplex a) {

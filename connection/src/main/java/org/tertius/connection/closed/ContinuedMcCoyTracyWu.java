@@ -1,5 +1,6 @@
 package org.tertius.connection.closed;
 
+import java.math.BigDecimal;
 import org.apfloat.Apcomplex;
 import org.apfloat.Apfloat;
 import org.apfloat.ApfloatMath;
@@ -67,8 +68,8 @@ public final class ContinuedMcCoyTracyWu {
     public static Complex[] zeroData(Complex lambda) {
         InvalidInputException.requireFinite("lambda", lambda.getReal());
         InvalidInputException.requireFinite("lambda", lambda.getImaginary());
-        Apcomplex[] d = zeroData(new java.math.BigDecimal(lambda.getReal()).toString(),
-                new java.math.BigDecimal(lambda.getImaginary()).toString(), 30);
+        Apcomplex[] d = zeroData(new BigDecimal(lambda.getReal()).toString(),
+                new BigDecimal(lambda.getImaginary()).toString(), 30);
         return new Complex[] {toComplex(d[0]), toComplex(d[1])};
     }
 

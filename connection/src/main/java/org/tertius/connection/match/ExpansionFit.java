@@ -22,8 +22,9 @@ final class ExpansionFit {
     private static final ComplexArithmetic AR = ComplexArithmetic.INSTANCE;
     /** Largest error of sigma (or relative error of t0) for which a kind is reported; beyond it: undecided. */
     static final double RESOLVED = 1e-3;
-    /** Number of smallest radii fitted. */
+    /** Number of smallest radii fitted, and of smallest radii tried for them. */
     private static final int RADII = 4;
+    private static final int TRIED = 6;
     private final Painleve3 eq;
     private final List<Complex> p;
 
@@ -53,7 +54,7 @@ final class ExpansionFit {
     ZeroBehaviour power(List<ZeroBehaviourFit.Sample> samples, Complex sigma0) {
         List<Fit> fits = new ArrayList<>();
         String last = "";
-        for (int i = samples.size() - 1; i >= 0 && fits.size() < RADII; i--) {
+        for (int i = samples.size() - 1; i >= Math.max(0, samples.size() - TRIED) && fits.size() < RADII; i--) {
             try {
                 fits.add(powerAt(samples.get(i), sigma0));
             } catch (RuntimeException ex) {
@@ -107,7 +108,7 @@ final class ExpansionFit {
     ZeroBehaviour logarithmic(List<ZeroBehaviourFit.Sample> samples, int side) {
         List<Fit> fits = new ArrayList<>();
         String last = "";
-        for (int i = samples.size() - 1; i >= 0 && fits.size() < RADII; i--) {
+        for (int i = samples.size() - 1; i >= Math.max(0, samples.size() - TRIED) && fits.size() < RADII; i--) {
             try {
                 fits.add(logAt(samples.get(i), side));
             } catch (RuntimeException ex) {
@@ -180,13 +181,23 @@ final class ExpansionFit {
         return b.toString();
     }
 
+    /**
+     * Rows enough for double precision at this radius: the rows decay like |z|^(1 + Re sigma') (sigma' the exponent of
+     * the side used, Re sigma' &gt;= 0) or |z|^2 on the edge; the expansion's own estimate covers a shortfall.
+     */
+    static int rowsFor(Complex tau) {
+        double digits = Math.max(1, -tau.getReal() / Math.log(10) - 0.5);
+        return Math.max(3, Math.min(ZeroBehaviour.ROWS, (int) Math.ceil(18 / digits) + 2));
+    }
+
     private Fit powerAt(ZeroBehaviourFit.Sample s, Complex sigma0) {
         Complex tau = s.tau;
+        int rows = rowsFor(tau);
         Complex z = tau.exp();
         Painleve3Value v = s.value;
         Complex[] x = {sigma0, initialAmplitude(tau, v, sigma0).log()};
         return newton(x, xs -> {
-            LocalValue<Complex> e = ZeroExpansion.powerFormal(AR, p, xs[0], xs[1].exp(), ZeroBehaviour.ROWS).at(tau);
+            LocalValue<Complex> e = ZeroExpansion.powerFormal(AR, p, xs[0], xs[1].exp(), rows).at(tau);
             return residual(e, v, z);
         }, v, z);
     }
@@ -233,11 +244,11 @@ final class ExpansionFit {
             t0 = tau.add(dg.divide(beta));
         }
         int br = branch;
-        Residual f = xs -> residual(ZeroExpansion.logarithmic(AR, p, side, xs[0], br, 16).at(tau), v, z);
+        Residual f = xs -> residual(ZeroExpansion.logarithmic(AR, p, side, xs[0], br, rowsFor(tau)).at(tau), v, z);
         double h = 1e-7;
         Complex[] r = f.of(new Complex[] {t0});
         Complex slope = Complex.NaN;
-        for (int it = 0; it < 60; it++) {
+        for (int it = 0; it < 40; it++) {
             slope = f.of(new Complex[] {t0.add(h)})[0].subtract(r[0]).divide(h);
             Complex step = r[0].divide(slope);
             if (!Double.isFinite(step.norm())) {
@@ -248,7 +259,7 @@ final class ExpansionFit {
             if (step.norm() <= 1e-15 * (1 + t0.norm())) {
                 break;
             }
-            if (it == 59) {
+            if (it == 39) {
                 throw new IllegalStateException("Newton's method for t0 did not converge");
             }
         }
@@ -285,7 +296,7 @@ final class ExpansionFit {
         double h = 1e-7;
         double last = Double.POSITIVE_INFINITY;
         Complex[][] jac = new Complex[2][2];
-        for (int it = 0; it < 60; it++) {
+        for (int it = 0; it < 40; it++) {
             Complex[] x0 = {x[0].add(h), x[1]};
             Complex[] r0 = f.of(x0);
             Complex[] x1 = {x[0], x[1].add(h)};

@@ -1,6 +1,7 @@
 package org.tertius.connection.zero;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.number.AnalyticArithmetic;
@@ -280,7 +281,7 @@ public final class LogSeriesAtZero<T> {
     @SuppressWarnings("unchecked")
     private T[] zeroPoly(int degree) {
         Object[] r = new Object[degree + 1];
-        java.util.Arrays.fill(r, ar.zero());
+        Arrays.fill(r, ar.zero());
         return (T[]) r;
     }
 

@@ -2,6 +2,7 @@ package org.tertius.connection.zero;
 
 import java.util.Arrays;
 import java.util.List;
+import java.util.function.IntUnaryOperator;
 import org.tertius.core.number.AnalyticArithmetic;
 
 /**
@@ -102,7 +103,7 @@ final class StripCoefficients<T> {
     }
 
     @SuppressWarnings("unchecked")
-    private T[][] newTable(java.util.function.IntUnaryOperator length) {
+    private T[][] newTable(IntUnaryOperator length) {
         Object[][] t = new Object[rows + 1][];
         T z = ar.zero();
         for (int a = 0; a <= rows; a++) {
