@@ -1,7 +1,6 @@
 /**
- * Closed-form connection formulas from the literature (McCoy, Tracy and Wu for the decaying family), with their
- * sources and the checks against the numerical connection in the class comments.
- *
- * <p>May depend on: core, Apfloat.
+ * Closed-form connection formulas between the behaviour at 0 and at infinity: the decaying family of
+ * PIII(0, 0, 1, -1) (McCoy, Tracy and Wu) and its continuation, and the Bessel-function family of D6. Depends on the
+ * core only (Apfloat for Gamma and Bessel functions).
  */
 package org.tertius.connection.closed;

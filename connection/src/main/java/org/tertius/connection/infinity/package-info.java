@@ -1,7 +1,7 @@
 /**
- * Expansions at infinity: the decaying transseries, algebraic expansions about a constant background and the
- * oscillating two-parameter expansion, each optimally truncated with an error estimate.
- *
- * <p>May depend on: core ({@code number} arithmetics).
+ * Expansions of Painleve III solutions at infinity along rays: the two-parameter transseries about a background of
+ * a D6 equation ({@link org.tertius.connection.infinity.TransseriesAtInfinity}) and its special cases (algebraic,
+ * oscillating, decaying), and the result type {@link org.tertius.connection.infinity.InfinityBehaviour}. Depends on
+ * the core and on {@code zero} (for {@code LocalValue}).
  */
 package org.tertius.connection.infinity;

@@ -1,7 +1,8 @@
 /**
- * The numerical connection: fits of the data at 0 to computed values and the map from the data at infinity to the
- * data at 0 for the decaying family.
- *
- * <p>May depend on: core and the other connection packages.
+ * Connects computed solutions with the expansions: the behaviour at 0 ({@link
+ * org.tertius.connection.match.ZeroBehaviourFit}) and at infinity along a ray ({@link
+ * org.tertius.connection.match.InfinityBehaviourFit}), pole-free sectors ({@link
+ * org.tertius.connection.match.PoleFreeSector}), and the decaying family's numerical connection. Depends on the core,
+ * {@code zero}, {@code infinity} and {@code path}.
  */
 package org.tertius.connection.match;

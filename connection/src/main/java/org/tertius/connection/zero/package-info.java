@@ -1,7 +1,10 @@
 /**
- * Expansions at z = 0: the convergent power series w = B z^sigma V(z^(1+sigma), z^(1-sigma)) and the logarithmic
- * member of the decaying family, as start data with error estimates.
- *
- * <p>May depend on: core ({@code number} arithmetics).
+ * Expansions of Painleve III solutions at z = 0 on the universal cover: the power solutions on the strip
+ * |Re sigma| &lt;= 1 including the edges where zeros or poles accumulate ({@link
+ * org.tertius.connection.zero.StripSeriesAtZero}, {@link org.tertius.connection.zero.PowerSeriesAtZero}), the
+ * logarithmic ones at sigma = +-1 ({@link org.tertius.connection.zero.LogSeriesAtZero}), their common front
+ * {@link org.tertius.connection.zero.ZeroExpansion}, start data, and the result type
+ * {@link org.tertius.connection.zero.ZeroBehaviour}. Depends on the core ({@code number}, {@code piii},
+ * {@code step}) and on {@code closed} for the decaying family's logarithmic constant.
  */
 package org.tertius.connection.zero;
