@@ -128,12 +128,16 @@ final class FormalSolution<T> {
         for (int j = 1; j <= terms; j++) {
             e.add(ar.divide(b.get(r + j), ar.of(-j)));
         }
+        List<T> ie = new ArrayList<>();
+        for (int i = 0; i <= terms; i++) {
+            ie.add(ar.multiply(ar.of(i), e.get(i)));
+        }
         List<T> f = new ArrayList<>();
         f.add(ar.one());
         for (int j = 1; j <= terms; j++) {
             T sum = ar.zero();
             for (int i = 1; i <= j; i++) {
-                sum = ar.add(sum, ar.multiply(ar.multiply(ar.of(i), e.get(i)), f.get(j - i)));
+                sum = ar.add(sum, ar.multiply(ie.get(i), f.get(j - i)));
             }
             f.add(ar.divide(sum, ar.of(j)));
         }

@@ -2,7 +2,9 @@ package org.tertius.hierarchy.monodromy;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.hipparchus.complex.Complex;
 import org.tertius.core.number.AnalyticArithmetic;
+import org.tertius.core.number.ComplexArithmetic;
 
 /**
  * Taylor integration of the lambda-equation Phi' = A(lambda) Phi, A = sum_{k=-2}^{n-1} a_k lambda^k, along polar
@@ -15,7 +17,7 @@ import org.tertius.core.number.AnalyticArithmetic;
  * Taylor methods).
  *
  * <p>A vector solution is carried together with the propagator of every step (the fundamental matrix equal to I at
- * the step's centre). The error estimate of the vector at the end is first-order propagation of every local error
+ * the step's centre, in double precision: it serves only the estimate). The error estimate of the vector at the end is first-order propagation of every local error
  * through the product of the step propagators from there to the end (accumulated backwards, so that no product of
  * large matrices with their inverses enters): the truncation estimate above and the rounding of the Taylor sum (the
  * working epsilon times the sum of the moduli of its terms), plus the propagated error of the start vector. (The
@@ -25,6 +27,8 @@ import org.tertius.core.number.AnalyticArithmetic;
  * @param <T> number type
  */
 final class LinearIntegrator<T> {
+    /** The step propagators are computed in double precision. */
+    private static final MatrixArithmetic<Complex> DOUBLE = new MatrixArithmetic<>(ComplexArithmetic.INSTANCE);
     /** Largest step as a fraction of the distance to lambda = 0. */
     private static final double REACH = 0.5;
     /** Most steps on one path before giving up. */
@@ -35,6 +39,9 @@ final class LinearIntegrator<T> {
     private final List<Matrix<T>> polynomial;
     private final int order;
     private final double tolerance;
+    /** j and 1/(j+1) at the working precision, j = 0 .. order. */
+    private final List<T> integers = new ArrayList<>();
+    private final List<T> reciprocals = new ArrayList<>();
 
     /** @param coefficients a_{-2} .. a_{n-1} */
     LinearIntegrator(MatrixArithmetic<T> ma, List<Matrix<T>> coefficients, int order) {
@@ -43,6 +50,10 @@ final class LinearIntegrator<T> {
         this.polynomial = List.copyOf(coefficients);
         this.order = order;
         this.tolerance = ar.epsilon();
+        for (int j = 0; j <= order; j++) {
+            integers.add(ar.of(j));
+            reciprocals.add(ar.ratio(1, j + 1));
+        }
     }
 
     /**
@@ -66,7 +77,7 @@ final class LinearIntegrator<T> {
         double logR = path.get(0)[0];
         double angle = path.get(0)[1];
         T c = point(logR, angle);
-        List<Matrix<T>> propagators = new ArrayList<>();
+        List<Matrix<Complex>> propagators = new ArrayList<>();
         List<Double> local = new ArrayList<>();
         int steps = 0;
         for (int piece = 1; piece < path.size(); piece++) {
@@ -90,23 +101,33 @@ final class LinearIntegrator<T> {
                     double turn = 2 * Math.asin(Math.min(1.0, length / (2 * radius)));
                     angle = targetAngle < angle ? Math.max(angle - turn, targetAngle) : Math.min(angle + turn, targetAngle);
                 }
-                T next = point(logR, angle);
+                double[] end = path.get(path.size() - 1);
+                T next = logR == end[0] && angle == end[1] ? point(logR, angle) : nearPoint(logR, angle);
                 T h = ar.subtract(next, c);
                 y = sumVector(st.vectorSeries, h);
-                propagators.add(sumMatrix(st.matrixSeries, h));
-                local.add(localError(st, ar.abs(h)));
+                propagators.add(sumMatrix(st.matrixSeries, ar.toComplex(h)));
+                local.add(localError(st, ma.magnitude(h)));
                 c = next;
             }
         }
         // the propagator from the end of step i to the end of the path, accumulated backwards from the step ones
-        Matrix<T> back = ma.identity();
+        Matrix<Complex> back = DOUBLE.identity();
         double error = 0;
         for (int i = propagators.size() - 1; i >= 0; i--) {
-            error += ma.norm(back) * local.get(i);
-            back = ma.multiply(back, propagators.get(i));
+            error += DOUBLE.norm(back) * local.get(i);
+            back = DOUBLE.multiply(back, propagators.get(i));
         }
-        error += ma.norm(back) * startError;
+        error += DOUBLE.norm(back) * startError;
         return new Transport<>(y, error, steps);
+    }
+
+    /**
+     * An intermediate point: exp(logRadius + i angle) rounded to double (the path between its ends need not be
+     * exact; its ends are).
+     */
+    private T nearPoint(double logRadius, double angle) {
+        double r = Math.exp(logRadius);
+        return ar.of(r * Math.cos(angle), r * Math.sin(angle));
     }
 
     /** exp(logRadius + i angle) with both doubles taken exactly. */
@@ -116,37 +137,46 @@ final class LinearIntegrator<T> {
 
     private static final class Step<T> {
         List<Matrix.Vector<T>> vectorSeries;
-        List<Matrix<T>> matrixSeries;
+        List<Matrix<Complex>> matrixSeries;
         double length;
         double[] vectorMagnitudes;
         double[] matrixMagnitudes;
     }
 
-    /** The Taylor coefficients of the vector and of the step propagator (I at the centre) at c. */
+    /**
+     * The Taylor coefficients at c of the vector (working precision) and of the step propagator (the fundamental
+     * matrix equal to I at c; double precision, it serves only the error estimate).
+     */
     private Step<T> step(T c, Matrix.Vector<T> y) {
         int degree = polynomial.size() - 1;
         List<Matrix<T>> p = shifted(c);
+        List<Matrix<Complex>> pd = new ArrayList<>();
+        for (Matrix<T> pi : p) {
+            pd.add(new Matrix<>(ar.toComplex(pi.m11()), ar.toComplex(pi.m12()), ar.toComplex(pi.m21()),
+                    ar.toComplex(pi.m22())));
+        }
         T c2inv = ar.reciprocal(ar.multiply(c, c));
         T twoC = ar.add(c, c);
+        Complex cd = ar.toComplex(c);
+        Complex c2invD = cd.multiply(cd).reciprocal();
         List<Matrix.Vector<T>> ys = new ArrayList<>();
-        List<Matrix<T>> ms = new ArrayList<>();
+        List<Matrix<Complex>> ms = new ArrayList<>();
         ys.add(y);
-        ms.add(ma.identity());
+        ms.add(DOUBLE.identity());
         for (int j = 0; j < order; j++) {
-            Matrix.Vector<T> sy = ma.scale(ar.negate(ar.multiply(twoC, ar.of(j))), ys.get(j));
-            Matrix<T> sm = ma.scale(ar.negate(ar.multiply(twoC, ar.of(j))), ms.get(j));
+            T g = ar.negate(ar.multiply(twoC, integers.get(j)));
+            Matrix.Vector<T> sy = ma.scale(g, ys.get(j));
+            Matrix<Complex> sm = DOUBLE.scale(cd.multiply(-2.0 * j), ms.get(j));
             if (j >= 1) {
-                T f = ar.of(-(j - 1));
-                sy = add(sy, ma.scale(f, ys.get(j - 1)));
-                sm = ma.add(sm, ma.scale(f, ms.get(j - 1)));
+                sy = add(sy, ma.scale(ar.negate(integers.get(j - 1)), ys.get(j - 1)));
+                sm = DOUBLE.add(sm, DOUBLE.scale(new Complex(-(j - 1)), ms.get(j - 1)));
             }
             for (int i = 0; i <= Math.min(j, degree); i++) {
                 sy = add(sy, ma.apply(p.get(i), ys.get(j - i)));
-                sm = ma.add(sm, ma.multiply(p.get(i), ms.get(j - i)));
+                sm = DOUBLE.add(sm, DOUBLE.multiply(pd.get(i), ms.get(j - i)));
             }
-            T f = ar.multiply(c2inv, ar.ratio(1, j + 1));
-            ys.add(ma.scale(f, sy));
-            ms.add(ma.scale(f, sm));
+            ys.add(ma.scale(ar.multiply(c2inv, reciprocals.get(j)), sy));
+            ms.add(DOUBLE.scale(c2invD.divide(j + 1), sm));
         }
         Step<T> st = new Step<>();
         st.vectorSeries = ys;
@@ -155,10 +185,9 @@ final class LinearIntegrator<T> {
         st.matrixMagnitudes = new double[order + 1];
         for (int j = 0; j <= order; j++) {
             st.vectorMagnitudes[j] = ma.norm(ys.get(j));
-            st.matrixMagnitudes[j] = ma.norm(ms.get(j));
+            st.matrixMagnitudes[j] = DOUBLE.norm(ms.get(j));
         }
-        double radius = ar.abs(c);
-        double length = REACH * radius;
+        double length = REACH * ma.magnitude(c);
         length = Math.min(length, admissible(st.vectorMagnitudes));
         length = Math.min(length, admissible(st.matrixMagnitudes));
         st.length = length;
@@ -211,10 +240,10 @@ final class LinearIntegrator<T> {
         return s;
     }
 
-    private Matrix<T> sumMatrix(List<Matrix<T>> series, T h) {
-        Matrix<T> s = series.get(order);
+    private Matrix<Complex> sumMatrix(List<Matrix<Complex>> series, Complex h) {
+        Matrix<Complex> s = series.get(order);
         for (int j = order - 1; j >= 0; j--) {
-            s = ma.add(ma.scale(h, s), series.get(j));
+            s = DOUBLE.add(DOUBLE.scale(h, s), series.get(j));
         }
         return s;
     }

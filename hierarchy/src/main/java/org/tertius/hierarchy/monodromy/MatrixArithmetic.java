@@ -1,6 +1,8 @@
 package org.tertius.hierarchy.monodromy;
 
+import org.hipparchus.complex.Complex;
 import org.tertius.core.number.AnalyticArithmetic;
+import org.tertius.core.number.Cx;
 
 /**
  * Operations on 2x2 {@link Matrix matrices} and their {@link Matrix.Vector vectors} in one
@@ -87,14 +89,25 @@ final class MatrixArithmetic<T> {
         return scale(ar.reciprocal(determinant(a)), adjugate(a));
     }
 
+    /**
+     * |a| as a double, through the conversion to double (an arbitrary-precision modulus needs a square root at the
+     * working precision; the estimates need only a few digits); the exact modulus where the conversion under- or
+     * overflows.
+     */
+    double magnitude(T a) {
+        Complex c = ar.toComplex(a);
+        double m = Cx.abs(c.getReal(), c.getImaginary());
+        return m > Double.MIN_NORMAL && m < Double.MAX_VALUE ? m : ar.abs(a);
+    }
+
     /** Maximum modulus of the entries of a vector. */
     double norm(Matrix.Vector<T> v) {
-        return Math.max(ar.abs(v.top()), ar.abs(v.bottom()));
+        return Math.max(magnitude(v.top()), magnitude(v.bottom()));
     }
 
     /** The row-sum norm (induced by the maximum norm of vectors). */
     double norm(Matrix<T> a) {
-        return Math.max(ar.abs(a.m11()) + ar.abs(a.m12()), ar.abs(a.m21()) + ar.abs(a.m22()));
+        return Math.max(magnitude(a.m11()) + magnitude(a.m12()), magnitude(a.m21()) + magnitude(a.m22()));
     }
 
     /** Largest modulus of the differences of the entries. */

@@ -2,12 +2,11 @@ package org.tertius.hierarchy.monodromy;
 
 import java.util.ArrayList;
 import java.util.List;
-import org.apfloat.Apcomplex;
 import org.hipparchus.complex.Complex;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.number.AnalyticArithmetic;
-import org.tertius.core.number.ApcomplexArithmetic;
 import org.tertius.core.number.ComplexArithmetic;
+import org.tertius.core.number.MpComplex;
 import org.tertius.core.number.SurfacePoint;
 import org.tertius.hierarchy.MemberSolution;
 
@@ -83,12 +82,15 @@ public final class MonodromyMap<T> {
         return new MonodromyMap<>(ComplexArithmetic.INSTANCE);
     }
 
-    /** The map in {@code digits} decimal digits (Apfloat; 16 .. 100000, useful up to a few hundred). */
-    public static MonodromyMap<Apcomplex> withDigits(long digits) {
-        return new MonodromyMap<>(new ApcomplexArithmetic(digits));
+    /**
+     * The map in {@code digits} decimal digits ({@link MpArithmetic}; 16 .. 100000, practical up to a few hundred:
+     * the work grows like the square of the digits times the number of Taylor steps).
+     */
+    public static MonodromyMap<MpComplex> withDigits(int digits) {
+        return new MonodromyMap<>(new MpArithmetic(digits));
     }
 
-    /** The map in any arithmetic. */
+    /** The map in any arithmetic (e.g. {@code new ApcomplexArithmetic(digits)}). */
     public static <T> MonodromyMap<T> of(AnalyticArithmetic<T> ar) {
         return new MonodromyMap<>(ar);
     }
