@@ -13,13 +13,21 @@ import org.tertius.core.number.AnalyticArithmetic;
 final class DataAssembly {
     /** The self-checks allow this multiple of their first-order bounds. */
     static final double CHECK_SAFETY = 2;
-    /** Relative error of E11 and E22 up to which E is normalised by E11 = E22. */
-    private static final double NORMALISABLE = 0.01;
+    /**
+     * Relative error estimate of E11 and E22 up to which E is normalised by E11 = E22 (beyond it the factor d of the
+     * normalisation would be uncertain).
+     */
+    private static final double NORMALISABLE = 0.1;
 
     private DataAssembly() {
     }
 
-    static <T> MonodromyData<T> assemble(LaxMatrix<T> lax, CanonicalSolutions<T> cs) {
+    /**
+     * @param normalization the normalisation of E to use, or null to choose it: DIAGONAL unless the relative error
+     *     estimate of E11 or E22 exceeds {@link #NORMALISABLE} (they vanish, or nearly, within their estimates)
+     */
+    static <T> MonodromyData<T> assemble(LaxMatrix<T> lax, CanonicalSolutions<T> cs,
+                                         MonodromyData.ConnectionNormalization normalization) {
         AnalyticArithmetic<T> ar = lax.arithmetic();
         MatrixArithmetic<T> ma = new MatrixArithmetic<>(ar);
         int n = lax.order();
@@ -56,8 +64,8 @@ final class DataAssembly {
         double rel22 = e.e22() / ar.abs(e.value().m22());
         double rel12 = e.e12() / ar.abs(e.value().m12());
         double rel21 = e.e21() / ar.abs(e.value().m21());
-        boolean diagonal = (rel11 < NORMALISABLE && rel22 < NORMALISABLE)
-                || !(rel12 < NORMALISABLE && rel21 < NORMALISABLE);
+        boolean diagonal = normalization != null ? normalization == MonodromyData.ConnectionNormalization.DIAGONAL
+                : (rel11 < NORMALISABLE && rel22 < NORMALISABLE) || !(rel12 < NORMALISABLE && rel21 < NORMALISABLE);
         T r;
         T delta;
         double relDelta;

@@ -8,7 +8,10 @@ import org.tertius.core.UnreachableTargetException;
 import org.tertius.core.number.AnalyticArithmetic;
 import org.tertius.core.number.ComplexArithmetic;
 import org.tertius.core.number.SurfacePoint;
+import org.tertius.core.piii.Painleve3;
+import org.tertius.core.piii.Painleve3Value;
 import org.tertius.hierarchy.HierarchyMember;
+import org.tertius.hierarchy.Member1Map;
 import org.tertius.hierarchy.MemberParameters;
 import org.tertius.hierarchy.MemberSolution;
 import org.tertius.hierarchy.MemberValue;
@@ -158,6 +161,38 @@ public final class LaxMatrix<T> {
         double argument = n == 1 ? x.logIm() : p.time(n).getArgument();
         return of(ar, n, ar.of(x.re(), x.im()), times, ar.of(p.s().getReal(), p.s().getImaginary()),
                 ar.of(p.m().getReal(), p.m().getImaginary()), state, err, argument);
+    }
+
+    /**
+     * The lambda-equation of member 1 at the image of a Painleve III value (D6: gamma delta != 0) under
+     * {@link Member1Map#forEquation}(equation, s): x = (z/c)^2 on its sheet, m and T from alpha and beta, the state
+     * in the gauge a(-1)12 = 1 at that point (Member1Map.state; needs w != 0). The errors of w and w' are carried to
+     * the state by finite differences.
+     */
+    public static LaxMatrix<Complex> ofPainleve3(Painleve3 equation, Painleve3Value value, Complex s) {
+        Member1Map map = Member1Map.forEquation(equation, s);
+        MemberParameters p = map.parameters(equation);
+        List<Complex> state = map.state(equation, value);
+        double[] err = new double[state.size()];
+        double[] sizes = {value.errW(), value.errDw()};
+        for (int k = 0; k < 2; k++) {
+            if (sizes[k] == 0) {
+                continue;
+            }
+            double h = 1e-7 * Math.max(1, (k == 0 ? value.w() : value.dw()).norm());
+            Painleve3Value moved = new Painleve3Value(value.point(), k == 0 ? value.w().add(h) : value.w(),
+                    k == 1 ? value.dw().add(h) : value.dw(), 0, 0);
+            List<Complex> other = map.state(equation, moved);
+            for (int i = 0; i < err.length; i++) {
+                err[i] += other.get(i).subtract(state.get(i)).norm() / h * sizes[k];
+            }
+        }
+        for (int i = 0; i < err.length; i++) {
+            err[i] += 4 * Math.ulp(1.0) * state.get(i).norm();
+        }
+        SurfacePoint x = map.x(value.point());
+        ComplexArithmetic ar = ComplexArithmetic.INSTANCE;
+        return of(ar, 1, x.z(), List.of(), p.s(), p.m(), state, err, x.logIm());
     }
 
     private static <T> void requireFinite(AnalyticArithmetic<T> ar, String name, T value) {

@@ -122,7 +122,7 @@ public final class MonodromyMap<T> {
                     + " (the exponents at lambda = infinity must be -i theta_inf' + m / lambda): relative deviation "
                     + cs.constraintViolation() + "; complete the diagonal with HierarchyMember.completeDiagonal");
         }
-        MonodromyData<T> data = DataAssembly.assemble(exact, cs);
+        MonodromyData<T> data = DataAssembly.assemble(exact, cs, null);
         if (!lax.hasStateErrors()) {
             return data;
         }
@@ -138,8 +138,8 @@ public final class MonodromyMap<T> {
             List<T> moved = new ArrayList<>(lax.state());
             moved.set(i, ar.add(moved.get(i), ar.of(h)));
             LaxMatrix<T> perturbed = exact.withState(moved);
-            List<Estimate<T>> q = DataAssembly.assemble(perturbed, CanonicalSolutions.compute(perturbed, taylorOrder))
-                    .quantities();
+            List<Estimate<T>> q = DataAssembly.assemble(perturbed, CanonicalSolutions.compute(perturbed, taylorOrder),
+                    data.connectionNormalization()).quantities();
             for (int j = 0; j < extra.length; j++) {
                 extra[j] += ar.abs(ar.subtract(q.get(j).value(), base.get(j).value())) / h * lax.stateError(i);
             }

@@ -1,0 +1,438 @@
+package org.tertius.hierarchy.monodromy;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.function.UnaryOperator;
+import org.hipparchus.complex.Complex;
+import org.hipparchus.linear.Array2DRowRealMatrix;
+import org.hipparchus.linear.RealMatrix;
+import org.hipparchus.linear.SingularValueDecomposition;
+import org.tertius.core.InvalidInputException;
+import org.tertius.core.TertiusException;
+import org.tertius.core.number.AnalyticArithmetic;
+import org.tertius.hierarchy.HierarchyMember;
+
+/**
+ * The inverse monodromy map: the member state at a chosen point (x, the times, s, m and the exponent m0 at 0 given)
+ * whose monodromy data satisfy prescribed {@link MonodromyCondition conditions} (all data, or a subset plus
+ * constraints such as trivial Stokes matrices at 0), optionally under the reality symmetry r = -conj(q).
+ *
+ * <p>Method: Levenberg-Marquardt iteration ({@link LeastSquares}) on the direct map ({@link MonodromyMap}) in the
+ * coordinates of {@link StateChart}, with a Jacobian by finite differences (step sqrt(epsilon) times the size of the
+ * coordinate), started from a given state or from a generated one, along a homotopy: the residuals
+ * r(z) - (1 - tau) r(z_start) are driven to zero for tau = 0 .. 1 in steps that halve when an iteration fails
+ * (common practice for continuation). The iteration stops when every residual is within twice the error estimate of
+ * its quantity. The error estimate of the state is the least-squares propagation of the final residuals plus their
+ * estimates, |J^+| (|r| + e) with the pseudo-inverse J^+ of the real Jacobian (singular values below 1e-7 of the
+ * largest count as zero: those directions, such as a gauge the conditions do not fix, are reported by
+ * {@link MonodromySolution#freeDirections()} and get no error), mapped to the entries by the derivative of the
+ * chart. Immutable; build
+ * with {@link #builder}.
+ *
+ * @param <T> number type
+ */
+public final class InverseMonodromy<T> {
+    private static final int MAX_ITERATIONS = 40;
+    private static final double SMALLEST_STAGE = 1.0 / 256;
+
+    private final MonodromyMap<T> map;
+    private final AnalyticArithmetic<T> ar;
+    private final UnaryOperator<T> conj;
+    private final int order;
+    private final T x;
+    private final List<T> times;
+    private final T s;
+    private final T m;
+    private final T m0;
+    private final double topArgument;
+    private final List<MonodromyCondition<T>> conditions;
+    private final boolean reality;
+    private final List<T> firstGuess;
+
+    private InverseMonodromy(Builder<T> b) {
+        this.map = b.map;
+        this.ar = b.map.arithmetic();
+        this.conj = Conjugation.of(ar);
+        this.order = b.order;
+        this.x = b.x;
+        this.times = List.copyOf(b.times);
+        this.s = b.s;
+        this.m = b.m;
+        this.m0 = b.m0;
+        this.topArgument = b.topArgument;
+        this.conditions = List.copyOf(b.conditions);
+        this.reality = b.reality;
+        this.firstGuess = b.firstGuess == null ? null : List.copyOf(b.firstGuess);
+    }
+
+    public static <T> Builder<T> builder(MonodromyMap<T> map, int order) {
+        return new Builder<>(map, order);
+    }
+
+    /**
+     * Solves for the state.
+     *
+     * @throws TertiusException if the iteration does not converge from the first guess (with the residual reached)
+     */
+    public MonodromySolution<T> solve() {
+        T trace = ar.multiply(ar.multiply(ar.of(0, 2), s), m0);
+        boolean pivot12 = firstGuess == null || ar.abs(firstGuess.get(1)) >= ar.abs(firstGuess.get(2));
+        StateChart<T> chart = new StateChart<>(ar, order, x, times, s, m, trace, reality, pivot12);
+        List<T> z = firstGuess == null ? chart.generatedCoordinates() : chart.coordinates(firstGuess);
+        Evaluation start = evaluate(chart, z);
+        if (start == null) {
+            throw new InvalidInputException("first guess", "its monodromy data cannot be computed");
+        }
+        List<T> r0 = start.values;
+        double tau = 0;
+        double stage = 1;
+        int iterations = 0;
+        int stages = 0;
+        Evaluation at = start;
+        while (tau < 1) {
+            double next = Math.min(1, tau + stage);
+            Attempt attempt = iterate(chart, z, r0, 1 - next, next == 1);
+            iterations += attempt.iterations;
+            if (attempt.converged) {
+                z = attempt.z;
+                at = attempt.at;
+                tau = next;
+                stage = Math.min(1, 2 * stage);
+                stages++;
+            } else {
+                stage /= 2;
+                if (stage < SMALLEST_STAGE) {
+                    throw new TertiusException("the inverse monodromy map did not converge from the first guess (homotopy"
+                            + " stalled at tau = " + tau + " of 1, residual " + attempt.norm + "); give a first guess"
+                            + " closer to the solution");
+                }
+            }
+        }
+        return result(chart, z, at, iterations, stages);
+    }
+
+    /** Residuals at z (null where the data cannot be computed). */
+    private final class Evaluation {
+        List<T> values = new ArrayList<>();
+        List<Double> errors = new ArrayList<>();
+        List<T> state;
+        MonodromyData<T> data;
+    }
+
+    private Evaluation evaluate(StateChart<T> chart, List<T> z) {
+        try {
+            Evaluation e = new Evaluation();
+            e.state = chart.state(z);
+            LaxMatrix<T> lax = LaxMatrix.of(ar, order, x, times, s, m, e.state, new double[e.state.size()], topArgument);
+            e.data = map.compute(lax);
+            for (MonodromyCondition<T> c : conditions) {
+                for (Estimate<T> r : c.residuals(e.data)) {
+                    if (reality) {
+                        T twoI = ar.of(0, 2);
+                        e.values.add(ar.divide(ar.add(r.value(), conj.apply(r.value())), ar.of(2)));
+                        e.values.add(ar.divide(ar.subtract(r.value(), conj.apply(r.value())), twoI));
+                        e.errors.add(r.error());
+                        e.errors.add(r.error());
+                    } else {
+                        e.values.add(r.value());
+                        e.errors.add(r.error());
+                    }
+                }
+            }
+            return e;
+        } catch (InvalidInputException | ArithmeticException ex) {
+            return null;
+        }
+    }
+
+    private final class Attempt {
+        boolean converged;
+        List<T> z;
+        Evaluation at;
+        int iterations;
+        double norm;
+    }
+
+    private Attempt iterate(StateChart<T> chart, List<T> z, List<T> r0, double remaining, boolean last) {
+        Attempt a = new Attempt();
+        a.z = z;
+        a.at = evaluate(chart, z);
+        double mu = 1e-6;
+        List<T> r = shifted(a.at, r0, remaining);
+        a.norm = norm(r);
+        for (int it = 0; it < MAX_ITERATIONS; it++) {
+            a.iterations++;
+            if (System.getProperty("lmdebug") != null) {
+                System.out.println("   it " + it + " remaining " + remaining + " norm " + a.norm + " mu " + mu);
+            }
+            if (done(a.at, r, last)) {
+                a.converged = true;
+                return a;
+            }
+            List<T[]> jac = jacobian(chart, a.z, r, r0, remaining);
+            boolean improved = false;
+            for (int tries = 0; tries < 12 && !improved; tries++) {
+                T[] delta = LeastSquares.step(ar, conj, jac, r, mu);
+                List<T> trial = new ArrayList<>();
+                for (int i = 0; i < a.z.size(); i++) {
+                    trial.add(ar.add(a.z.get(i), delta[i]));
+                }
+                Evaluation e = evaluate(chart, trial);
+                if (e != null) {
+                    List<T> rt = shifted(e, r0, remaining);
+                    double nt = norm(rt);
+                    if (nt < a.norm) {
+                        a.z = trial;
+                        a.at = e;
+                        r = rt;
+                        a.norm = nt;
+                        mu = Math.max(mu / 10, 1e-15);
+                        improved = true;
+                        continue;
+                    }
+                }
+                mu *= 10;
+            }
+            if (!improved) {
+                a.converged = done(a.at, r, last) || (!last && a.norm < 1e-6 * (1 + norm(r0)));
+                return a;
+            }
+        }
+        a.converged = done(a.at, r, last);
+        return a;
+    }
+
+    /** Converged: every residual within twice its error estimate (intermediate stages: 1e-6 relative). */
+    private boolean done(Evaluation e, List<T> r, boolean last) {
+        for (int i = 0; i < r.size(); i++) {
+            double allowed = last ? 2 * e.errors.get(i) + 16 * ar.epsilon()
+                    : 1e-6 * (1 + ar.abs(e.values.get(i))) + 2 * e.errors.get(i);
+            if (!(ar.abs(r.get(i)) <= allowed)) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private List<T> shifted(Evaluation e, List<T> r0, double remaining) {
+        List<T> r = new ArrayList<>();
+        T f = ar.of(remaining);
+        for (int i = 0; i < r0.size(); i++) {
+            r.add(ar.subtract(e.values.get(i), ar.multiply(f, r0.get(i))));
+        }
+        return r;
+    }
+
+    private double norm(List<T> r) {
+        double sum = 0;
+        for (T t : r) {
+            double a = ar.abs(t);
+            sum += a * a;
+        }
+        return Math.sqrt(sum);
+    }
+
+    private List<T[]> jacobian(StateChart<T> chart, List<T> z, List<T> r, List<T> r0, double remaining) {
+        int p = z.size();
+        List<T[]> rows = new ArrayList<>();
+        for (int i = 0; i < r.size(); i++) {
+            @SuppressWarnings("unchecked")
+            T[] row = (T[]) new Object[p];
+            rows.add(row);
+        }
+        double root = Math.sqrt(ar.epsilon());
+        for (int c = 0; c < p; c++) {
+            double h = root * Math.max(1, ar.abs(z.get(c)));
+            List<T> moved = new ArrayList<>(z);
+            moved.set(c, ar.add(z.get(c), ar.of(h)));
+            Evaluation e = evaluate(chart, moved);
+            if (e == null) {
+                h = -h;
+                moved.set(c, ar.add(z.get(c), ar.of(h)));
+                e = evaluate(chart, moved);
+                if (e == null) {
+                    throw new TertiusException("the monodromy data cannot be computed next to the iterate");
+                }
+            }
+            List<T> rm = shifted(e, r0, remaining);
+            T hInv = ar.of(1 / h);
+            for (int i = 0; i < r.size(); i++) {
+                rows.get(i)[c] = ar.multiply(ar.subtract(rm.get(i), r.get(i)), hInv);
+            }
+        }
+        return rows;
+    }
+
+    private MonodromySolution<T> result(StateChart<T> chart, List<T> z, Evaluation at, int iterations, int stages) {
+        List<T> r = shifted(at, at.values, 0);
+        List<T[]> jac = jacobian(chart, z, r, r, 0);
+        int p = z.size();
+        // |J^+| (|r| + e) with the pseudo-inverse from the singular values above 1e-7 of the largest (the finite
+        // differences are good to about sqrt(epsilon)): directions the conditions leave free get no error
+        boolean complex = !reality;
+        int cols = complex ? 2 * p : p;
+        int rowCount = complex ? 2 * r.size() : r.size();
+        double[][] jr = new double[rowCount][cols];
+        double[] size = new double[rowCount];
+        for (int i = 0; i < r.size(); i++) {
+            for (int c = 0; c < p; c++) {
+                Complex v = ar.toComplex(jac.get(i)[c]);
+                if (complex) {
+                    jr[2 * i][2 * c] = v.getReal();
+                    jr[2 * i][2 * c + 1] = -v.getImaginary();
+                    jr[2 * i + 1][2 * c] = v.getImaginary();
+                    jr[2 * i + 1][2 * c + 1] = v.getReal();
+                } else {
+                    jr[i][c] = v.getReal();
+                }
+            }
+            double e = ar.abs(r.get(i)) + at.errors.get(i);
+            if (complex) {
+                size[2 * i] = e;
+                size[2 * i + 1] = e;
+            } else {
+                size[i] = e;
+            }
+        }
+        SingularValueDecomposition svd = new SingularValueDecomposition(new Array2DRowRealMatrix(jr, false));
+        double[] sv = svd.getSingularValues();
+        double cut = 1e-7 * sv[0];
+        int rank = 0;
+        for (double v : sv) {
+            rank += v > cut ? 1 : 0;
+        }
+        RealMatrix u = svd.getU();
+        RealMatrix vm = svd.getV();
+        double[] dz = new double[p];
+        for (int c = 0; c < cols; c++) {
+            double sum = 0;
+            for (int i = 0; i < rowCount; i++) {
+                double k = 0;
+                for (int j = 0; j < rank; j++) {
+                    k += vm.getEntry(c, j) * u.getEntry(i, j) / sv[j];
+                }
+                sum += Math.abs(k) * size[i];
+            }
+            dz[complex ? c / 2 : c] += sum;
+        }
+        double[] err = new double[at.state.size()];
+        double root = Math.sqrt(ar.epsilon());
+        for (int c = 0; c < p; c++) {
+            double h = root * Math.max(1, ar.abs(z.get(c)));
+            List<T> moved = new ArrayList<>(z);
+            moved.set(c, ar.add(z.get(c), ar.of(h)));
+            List<T> st = chart.state(moved);
+            for (int j = 0; j < err.length; j++) {
+                err[j] += ar.abs(ar.subtract(st.get(j), at.state.get(j))) / h * dz[c];
+            }
+        }
+        for (int j = 0; j < err.length; j++) {
+            err[j] += 4 * ar.epsilon() * ar.abs(at.state.get(j));
+        }
+        List<Estimate<T>> residuals = new ArrayList<>();
+        for (int i = 0; i < r.size(); i++) {
+            residuals.add(new Estimate<>(r.get(i), at.errors.get(i)));
+        }
+        LaxMatrix<T> lax = LaxMatrix.of(ar, order, x, times, s, m, at.state, err, topArgument);
+        return new MonodromySolution<>(lax, at.data, residuals, iterations, stages, cols - rank);
+    }
+
+    /** Builder of an inverse problem. Not thread-safe. */
+    public static final class Builder<T> {
+        private final MonodromyMap<T> map;
+        private final int order;
+        private T x;
+        private List<T> times = List.of();
+        private T s;
+        private T m;
+        private T m0;
+        private double topArgument = Double.NaN;
+        private final List<MonodromyCondition<T>> conditions = new ArrayList<>();
+        private boolean reality;
+        private List<T> firstGuess;
+
+        private Builder(MonodromyMap<T> map, int order) {
+            HierarchyMember.of(order);
+            this.map = map;
+            this.order = order;
+        }
+
+        /** The point x of the result; the argument of t_n (member 1: of x) on its surface fixes the sectors. */
+        public Builder<T> point(T x, double topArgument) {
+            this.x = x;
+            this.topArgument = topArgument;
+            return this;
+        }
+
+        /** t_2 .. t_n. */
+        public Builder<T> times(List<T> times) {
+            this.times = times;
+            return this;
+        }
+
+        /** s, m (formal exponent at infinity) and m0 (formal exponent at 0; the trace form is 2 i s m0). */
+        public Builder<T> constants(T s, T m, T m0) {
+            this.s = s;
+            this.m = m;
+            this.m0 = m0;
+            return this;
+        }
+
+        public Builder<T> condition(MonodromyCondition<T> condition) {
+            conditions.add(condition);
+            return this;
+        }
+
+        /**
+         * The reality symmetry r = -conj(q) (all a_k anti-Hermitian): needs real x, times and s and imaginary m and m0.
+         */
+        public Builder<T> reality(boolean on) {
+            this.reality = on;
+            return this;
+        }
+
+        /** A member state to start from (otherwise a generated one, see {@link StateChart}). */
+        public Builder<T> firstGuess(List<T> state) {
+            this.firstGuess = state;
+            return this;
+        }
+
+        public InverseMonodromy<T> build() {
+            AnalyticArithmetic<T> ar = map.arithmetic();
+            Conjugation.of(ar);
+            if (x == null || s == null || m == null || m0 == null || Double.isNaN(topArgument)) {
+                throw new InvalidInputException("inverse problem", "needs the point (x and the argument of t_n) and"
+                        + " the constants s, m, m0");
+            }
+            if (times == null || times.size() != order - 1) {
+                throw new InvalidInputException("times", "member " + order + " takes " + (order - 1) + " times");
+            }
+            if (conditions.isEmpty()) {
+                throw new InvalidInputException("conditions", "at least one condition on the monodromy data is needed");
+            }
+            if (firstGuess != null && firstGuess.size() != 3 * (order + 1)) {
+                throw new InvalidInputException("first guess", "member " + order + " has " + 3 * (order + 1)
+                        + " unknowns");
+            }
+            if (reality) {
+                UnaryOperator<T> conj = Conjugation.of(ar);
+                List<T> real = new ArrayList<>(times);
+                real.add(x);
+                real.add(s);
+                for (T t : real) {
+                    requireSymmetric(ar, "x, times and s", ar.subtract(t, conj.apply(t)), t);
+                }
+                requireSymmetric(ar, "m", ar.add(m, conj.apply(m)), m);
+                requireSymmetric(ar, "m0", ar.add(m0, conj.apply(m0)), m0);
+            }
+            return new InverseMonodromy<>(this);
+        }
+
+        private static <T> void requireSymmetric(AnalyticArithmetic<T> ar, String name, T defect, T value) {
+            if (ar.abs(defect) > 1e-12 * (1 + ar.abs(value))) {
+                throw new InvalidInputException(name, "the reality symmetry r = -conj(q) needs real x, times and s and"
+                        + " imaginary m and m0; got " + ar.toComplex(value));
+            }
+        }
+    }
+}
