@@ -19,10 +19,12 @@ import org.tertius.hierarchy.HierarchyMember;
  *
  * <p>Method: Levenberg-Marquardt iteration ({@link LeastSquares}) on the direct map ({@link MonodromyMap}) in the
  * coordinates of {@link StateChart}, with a Jacobian by finite differences (step sqrt(epsilon) times the size of the
- * coordinate), started from a given state or from a generated one, along a homotopy: the residuals
+ * coordinate) and steps limited to half the size of the iterate (a trust region), started from a given state or
+ * from generated ones (a few fixed generic states, tried in turn), first directly, then along a homotopy: the residuals
  * r(z) - (1 - tau) r(z_start) are driven to zero for tau = 0 .. 1 in steps that halve when an iteration fails
- * (common practice for continuation). The iteration stops when every residual is within twice the error estimate of
- * its quantity. The error estimate of the state is the least-squares propagation of the final residuals plus their
+ * (common practice for continuation; an intermediate stage ends at its least-squares point, since with more
+ * conditions than unknowns its targets need not be attainable). The iteration stops when every residual is within
+ * twice the error estimate of its quantity. The error estimate of the state is the least-squares propagation of the final residuals plus their
  * estimates, |J^+| (|r| + e) with the pseudo-inverse J^+ of the real Jacobian (singular values below 1e-7 of the
  * largest count as zero: those directions, such as a gauge the conditions do not fix, are reported by
  * {@link MonodromySolution#freeDirections()} and get no error), mapped to the entries by the derivative of the
@@ -33,7 +35,11 @@ import org.tertius.hierarchy.HierarchyMember;
  */
 public final class InverseMonodromy<T> {
     private static final int MAX_ITERATIONS = 40;
-    private static final double SMALLEST_STAGE = 1.0 / 256;
+    private static final double SMALLEST_STAGE = 1.0 / 16;
+    /** First guesses generated when none is given. */
+    private static final int GENERATED_STARTS = 6;
+    /** Iterations without a tenfold decrease of the residual after which an attempt is abandoned. */
+    private static final int STAGNATION = 8;
 
     private final MonodromyMap<T> map;
     private final AnalyticArithmetic<T> ar;
@@ -78,15 +84,41 @@ public final class InverseMonodromy<T> {
         T trace = ar.multiply(ar.multiply(ar.of(0, 2), s), m0);
         boolean pivot12 = firstGuess == null || ar.abs(firstGuess.get(1)) >= ar.abs(firstGuess.get(2));
         StateChart<T> chart = new StateChart<>(ar, order, x, times, s, m, trace, reality, pivot12);
-        List<T> z = firstGuess == null ? chart.generatedCoordinates() : chart.coordinates(firstGuess);
+        List<List<T>> starts = new ArrayList<>();
+        if (firstGuess != null) {
+            starts.add(chart.coordinates(firstGuess));
+        } else {
+            for (int k = 0; k < GENERATED_STARTS; k++) {
+                starts.add(chart.generatedCoordinates(k));
+            }
+        }
+        String failure = "";
+        for (List<T> start : starts) {
+            try {
+                return solveFrom(chart, start);
+            } catch (TertiusException e) {
+                failure = e.getMessage();
+            }
+        }
+        throw new TertiusException("the inverse monodromy map did not converge from " + (firstGuess == null
+                ? GENERATED_STARTS + " generated first guesses" : "the first guess given") + " (last: " + failure
+                + "); give a first guess closer to the solution, or conditions that fix it");
+    }
+
+    /** Directly, then along the homotopy. */
+    private MonodromySolution<T> solveFrom(StateChart<T> chart, List<T> z) {
         Evaluation start = evaluate(chart, z);
         if (start == null) {
-            throw new InvalidInputException("first guess", "its monodromy data cannot be computed");
+            throw new TertiusException("the monodromy data of the first guess cannot be computed");
         }
         List<T> r0 = start.values;
+        Attempt direct = iterate(chart, z, r0, 0, true);
+        if (direct.converged) {
+            return result(chart, direct.z, direct.at, direct.iterations, 1);
+        }
         double tau = 0;
-        double stage = 1;
-        int iterations = 0;
+        double stage = 0.5;
+        int iterations = direct.iterations;
         int stages = 0;
         Evaluation at = start;
         while (tau < 1) {
@@ -102,9 +134,7 @@ public final class InverseMonodromy<T> {
             } else {
                 stage /= 2;
                 if (stage < SMALLEST_STAGE) {
-                    throw new TertiusException("the inverse monodromy map did not converge from the first guess (homotopy"
-                            + " stalled at tau = " + tau + " of 1, residual " + attempt.norm + "); give a first guess"
-                            + " closer to the solution");
+                    throw new TertiusException("homotopy stalled at tau = " + tau + " of 1, residual " + attempt.norm);
                 }
             }
         }
@@ -120,29 +150,30 @@ public final class InverseMonodromy<T> {
     }
 
     private Evaluation evaluate(StateChart<T> chart, List<T> z) {
+        Evaluation e = new Evaluation();
         try {
-            Evaluation e = new Evaluation();
             e.state = chart.state(z);
             LaxMatrix<T> lax = LaxMatrix.of(ar, order, x, times, s, m, e.state, new double[e.state.size()], topArgument);
             e.data = map.compute(lax);
-            for (MonodromyCondition<T> c : conditions) {
-                for (Estimate<T> r : c.residuals(e.data)) {
-                    if (reality) {
-                        T twoI = ar.of(0, 2);
-                        e.values.add(ar.divide(ar.add(r.value(), conj.apply(r.value())), ar.of(2)));
-                        e.values.add(ar.divide(ar.subtract(r.value(), conj.apply(r.value())), twoI));
-                        e.errors.add(r.error());
-                        e.errors.add(r.error());
-                    } else {
-                        e.values.add(r.value());
-                        e.errors.add(r.error());
-                    }
-                }
-            }
-            return e;
-        } catch (InvalidInputException | ArithmeticException ex) {
+        } catch (TertiusException | ArithmeticException ex) {
+            // an iterate outside the domain of the chart or of the map: the step is rejected
             return null;
         }
+        for (MonodromyCondition<T> c : conditions) {
+            for (Estimate<T> r : c.residuals(e.data)) {
+                if (reality) {
+                    T twoI = ar.of(0, 2);
+                    e.values.add(ar.divide(ar.add(r.value(), conj.apply(r.value())), ar.of(2)));
+                    e.values.add(ar.divide(ar.subtract(r.value(), conj.apply(r.value())), twoI));
+                    e.errors.add(r.error());
+                    e.errors.add(r.error());
+                } else {
+                    e.values.add(r.value());
+                    e.errors.add(r.error());
+                }
+            }
+        }
+        return e;
     }
 
     private final class Attempt {
@@ -160,10 +191,16 @@ public final class InverseMonodromy<T> {
         double mu = 1e-6;
         List<T> r = shifted(a.at, r0, remaining);
         a.norm = norm(r);
+        double reference = a.norm;
+        int sinceProgress = 0;
         for (int it = 0; it < MAX_ITERATIONS; it++) {
             a.iterations++;
-            if (System.getProperty("lmdebug") != null) {
-                System.out.println("   it " + it + " remaining " + remaining + " norm " + a.norm + " mu " + mu);
+            if (a.norm < 0.1 * reference) {
+                reference = a.norm;
+                sinceProgress = 0;
+            } else if (++sinceProgress > STAGNATION && !done(a.at, r, last)) {
+                a.converged = !last;
+                return a;
             }
             if (done(a.at, r, last)) {
                 a.converged = true;
@@ -173,19 +210,35 @@ public final class InverseMonodromy<T> {
             boolean improved = false;
             for (int tries = 0; tries < 12 && !improved; tries++) {
                 T[] delta = LeastSquares.step(ar, conj, jac, r, mu);
+                // a trust region: no step longer than half the size of the point (and at least 0.5)
+                double length = 0;
+                double size = 0;
+                for (int i = 0; i < a.z.size(); i++) {
+                    length = Math.max(length, ar.abs(delta[i]));
+                    size = Math.max(size, ar.abs(a.z.get(i)));
+                }
+                T shrink = ar.of(Math.min(1, 0.5 * Math.max(1, size) / length));
                 List<T> trial = new ArrayList<>();
                 for (int i = 0; i < a.z.size(); i++) {
-                    trial.add(ar.add(a.z.get(i), delta[i]));
+                    trial.add(ar.add(a.z.get(i), ar.multiply(shrink, delta[i])));
                 }
                 Evaluation e = evaluate(chart, trial);
                 if (e != null) {
                     List<T> rt = shifted(e, r0, remaining);
                     double nt = norm(rt);
                     if (nt < a.norm) {
+                        boolean slow = nt > 0.99 * a.norm;
                         a.z = trial;
                         a.at = e;
                         r = rt;
                         a.norm = nt;
+                        if (slow && !last) {
+                            // an intermediate stage of an overdetermined problem: its targets need not be reachable
+                            // (data on the segment between two data sets violate the cyclic relation); the
+                            // least-squares point is the next start
+                            a.converged = true;
+                            return a;
+                        }
                         mu = Math.max(mu / 10, 1e-15);
                         improved = true;
                         continue;
@@ -194,7 +247,7 @@ public final class InverseMonodromy<T> {
                 mu *= 10;
             }
             if (!improved) {
-                a.converged = done(a.at, r, last) || (!last && a.norm < 1e-6 * (1 + norm(r0)));
+                a.converged = done(a.at, r, last) || !last;
                 return a;
             }
         }

@@ -3,6 +3,7 @@ package org.tertius.hierarchy.monodromy;
 import java.util.ArrayList;
 import java.util.List;
 import org.hipparchus.complex.Complex;
+import org.tertius.core.UnreachableTargetException;
 import org.tertius.core.number.AnalyticArithmetic;
 import org.tertius.core.number.ComplexArithmetic;
 
@@ -32,7 +33,7 @@ final class LinearIntegrator<T> {
     /** Largest step as a fraction of the distance to lambda = 0. */
     private static final double REACH = 0.5;
     /** Most steps on one path before giving up. */
-    private static final int MAX_STEPS = 200000;
+    private static final int MAX_STEPS = 20000;
 
     private final AnalyticArithmetic<T> ar;
     private final MatrixArithmetic<T> ma;
@@ -89,7 +90,8 @@ final class LinearIntegrator<T> {
             }
             while (logR != targetLogR || angle != targetAngle) {
                 if (++steps > MAX_STEPS) {
-                    throw new IllegalStateException("the lambda-equation needs more than " + MAX_STEPS + " steps");
+                    throw new UnreachableTargetException("the lambda-equation needs more than " + MAX_STEPS + " Taylor"
+                            + " steps on one path (coefficients of A too large for its monodromy data to be computed)");
                 }
                 Step<T> st = step(c, y);
                 double radius = Math.exp(logR);

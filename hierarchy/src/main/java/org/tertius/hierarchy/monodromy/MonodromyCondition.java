@@ -56,6 +56,35 @@ public interface MonodromyCondition<T> {
         return of("E" + row + column + " = " + value, d -> List.of(minus(d, d.connection(row, column), value)));
     }
 
+    /**
+     * All monodromy data of member n = stokesAtInfinity.size() / 2: the multipliers s^inf_1 .. s^inf_2n, s^0_1,
+     * s^0_2, the connection matrix E and the exponents m, m0, in the conventions of {@link MonodromyMap}. E and the
+     * multipliers at 0 may be given in any normalisation of the canonical solutions at 0 (they are normalised here).
+     *
+     * @param tolerance the allowed violation of det E = 1 and of the cyclic relation M_inf E = E M_0, relative to
+     *     the size of the matrices
+     * @throws InvalidInputException if a count is wrong or the data violate det E = 1 or the cyclic relation
+     */
+    static <T> MonodromyCondition<T> allData(AnalyticArithmetic<T> ar, List<T> stokesAtInfinity, List<T> stokesAtZero,
+                                             Matrix<T> connection, T m, T m0, double tolerance) {
+        MonodromyData<T> target = DataCheck.validated(ar, stokesAtInfinity, stokesAtZero, connection, m, m0, tolerance);
+        int n = stokesAtInfinity.size() / 2;
+        return of("all monodromy data of member " + n, d -> {
+            if (d.order() != n) {
+                throw new InvalidInputException("monodromy data", "are for member " + n + " (" + 2 * n
+                        + " Stokes multipliers at infinity), the problem is member " + d.order());
+            }
+            List<Estimate<T>> r = new ArrayList<>();
+            List<Estimate<T>> have = d.normalized(target.connectionNormalization()).quantities();
+            List<Estimate<T>> want = target.quantities();
+            for (int i = 0; i < have.size(); i++) {
+                r.add(new Estimate<>(ar.subtract(have.get(i).value(), want.get(i).value()),
+                        have.get(i).error() + want.get(i).error()));
+            }
+            return r;
+        });
+    }
+
     /** A condition from a description and a residual function. */
     static <T> MonodromyCondition<T> of(String description, java.util.function.Function<MonodromyData<T>,
             List<Estimate<T>>> residuals) {

@@ -121,6 +121,32 @@ public final class MonodromyData<T> {
         return normalization;
     }
 
+    /**
+     * The same data under the other normalisation of the canonical solutions at 0 (the diagonal factor D acting as
+     * E -> E D; errors carried over relatively).
+     */
+    public MonodromyData<T> normalized(ConnectionNormalization kind) {
+        if (kind == normalization) {
+            return this;
+        }
+        Matrix<T> e = connection.value();
+        T delta = kind == ConnectionNormalization.DIAGONAL
+                ? ar.divide(ar.sqrt(ar.multiply(e.m11(), e.m22())), e.m11())
+                : ar.divide(e.m12(), ar.sqrt(ar.negate(ar.multiply(e.m12(), e.m21()))));
+        T inverse = ar.reciprocal(delta);
+        double d = ar.abs(delta);
+        Matrix<T> en = new Matrix<>(ar.multiply(e.m11(), delta), ar.multiply(e.m12(), inverse),
+                ar.multiply(e.m21(), delta), ar.multiply(e.m22(), inverse));
+        MatrixEstimate<T> c = new MatrixEstimate<>(en, connection.e11() * d, connection.e12() / d,
+                connection.e21() * d, connection.e22() / d);
+        T d2 = ar.multiply(delta, delta);
+        List<Estimate<T>> zero = List.of(
+                new Estimate<>(ar.divide(stokesZero.get(0).value(), d2), stokesZero.get(0).error() / (d * d)),
+                new Estimate<>(ar.multiply(stokesZero.get(1).value(), d2), stokesZero.get(1).error() * d * d));
+        return new MonodromyData<>(ar, order, stokesInfinity, zero, c, kind, exponentInfinity, exponentZero, meeting,
+                worstCheck, checks);
+    }
+
     /** E11 E22 = 1 + E12 E21: unchanged by the diagonal gauges at both points. */
     public Estimate<T> connectionProduct() {
         T p = ar.multiply(connection.value().m11(), connection.value().m22());

@@ -105,8 +105,10 @@ public final class MonodromyMap<T> {
      * @throws InvalidInputException if the state violates the constraints on its diagonal entries
      */
     public MonodromyData<T> compute(LaxMatrix<T> lax) {
-        if (lax.arithmetic() != ar) {
-            throw new IllegalArgumentException("the lambda-equation is in another arithmetic than this map");
+        AnalyticArithmetic<T> other = lax.arithmetic();
+        if (other.getClass() != ar.getClass() || other.epsilon() != ar.epsilon()) {
+            throw new InvalidInputException("lambda-equation", "is in another arithmetic (" + other.digits()
+                    + " digits) than this map (" + ar.digits() + " digits)");
         }
         LaxMatrix<T> exact = lax.withState(lax.state());
         CanonicalSolutions<T> cs = CanonicalSolutions.compute(exact, taylorOrder);

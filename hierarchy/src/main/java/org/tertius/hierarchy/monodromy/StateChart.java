@@ -182,20 +182,23 @@ final class StateChart<T> {
      * Coordinates to start from when no state is given: a generic point (no symmetry beyond the chart's, no zero
      * off-diagonal entry), with a_-2 of size |s|: complex chart a(-2)11 = 0.3 s, a(-2)P = (0.8 + 0.5 i) s,
      * a(-1)P = 0.2 + 0.1 i, then a(k)12 = 0.1, a(k)21 = -0.1; real chart u = 0.3 |s|, theta = 0.7, w = 0.2, then
-     * a(k)12 = 0.1 - 0.1 i.
+     * a(k)12 = 0.1 - 0.1 i. Variant k turns the phases of a(-2)11 and a(-1)P by k pi / 3 and alternates the sign of
+     * u (real chart).
      */
-    List<T> generatedCoordinates() {
+    List<T> generatedCoordinates(int variant) {
+        int k = variant;
         List<T> c = new ArrayList<>();
+        T turn = ar.exp(ar.multiply(ar.of(0, k), ar.divide(ar.pi(), ar.of(3))));
         if (real) {
-            c.add(ar.multiply(ar.ratio(3, 10), ar.sqrt(ar.multiply(s, s))));
-            c.add(ar.ratio(7, 10));
-            c.add(ar.ratio(2, 10));
+            c.add(ar.multiply(ar.ratio(k % 2 == 0 ? 3 : -3, 10), ar.sqrt(ar.multiply(s, s))));
+            c.add(ar.add(ar.ratio(7, 10), ar.multiply(ar.of(k), ar.ratio(1, 2))));
+            c.add(ar.multiply(ar.ratio(2, 10), ar.of(1 - k % 3)));
         } else {
-            c.add(ar.multiply(ar.ratio(3, 10), s));
+            c.add(ar.multiply(turn, ar.multiply(ar.ratio(3, 10), s)));
             c.add(ar.multiply(ar.add(ar.ratio(8, 10), ar.multiply(i(), ar.ratio(5, 10))), s));
-            c.add(ar.add(ar.ratio(2, 10), ar.multiply(i(), ar.ratio(1, 10))));
+            c.add(ar.multiply(turn, ar.add(ar.ratio(2, 10), ar.multiply(i(), ar.ratio(1, 10)))));
         }
-        for (int k = 0; k <= order - 2; k++) {
+        for (int level = 0; level <= order - 2; level++) {
             c.add(ar.ratio(1, 10));
             c.add(ar.ratio(-1, 10));
         }
