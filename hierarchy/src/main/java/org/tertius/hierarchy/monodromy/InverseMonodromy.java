@@ -3,14 +3,8 @@ package org.tertius.hierarchy.monodromy;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.function.UnaryOperator;
-import org.hipparchus.complex.Complex;
-import org.hipparchus.linear.Array2DRowRealMatrix;
-import org.hipparchus.linear.RealMatrix;
-import org.hipparchus.linear.SingularValueDecomposition;
-import org.tertius.core.InvalidInputException;
 import org.tertius.core.TertiusException;
 import org.tertius.core.number.AnalyticArithmetic;
-import org.tertius.hierarchy.HierarchyMember;
 
 /**
  * The inverse monodromy map: the member state at a chosen point (x, the times, s, m and the exponent m0 at 0 given)
@@ -24,12 +18,10 @@ import org.tertius.hierarchy.HierarchyMember;
  * r(z) - (1 - tau) r(z_start) are driven to zero for tau = 0 .. 1 in steps that halve when an iteration fails
  * (common practice for continuation; an intermediate stage ends at its least-squares point, since with more
  * conditions than unknowns its targets need not be attainable). The iteration stops when every residual is within
- * twice the error estimate of its quantity. The error estimate of the state is the least-squares propagation of the final residuals plus their
- * estimates, |J^+| (|r| + e) with the pseudo-inverse J^+ of the real Jacobian (singular values below 1e-7 of the
- * largest count as zero: those directions, such as a gauge the conditions do not fix, are reported by
- * {@link MonodromySolution#freeDirections()} and get no error), mapped to the entries by the derivative of the
- * chart. Immutable; build
- * with {@link #builder}.
+ * twice the error estimate of its quantity. The error estimate of the state is the least-squares propagation of
+ * the final residuals plus their estimates ({@link InverseEstimate}); directions the conditions leave free, such as
+ * a gauge, are reported by {@link MonodromySolution#freeDirections()}. Immutable; build with {@link #builder}
+ * ({@link InverseMonodromyBuilder}).
  *
  * @param <T> number type
  */
@@ -55,7 +47,7 @@ public final class InverseMonodromy<T> {
     private final boolean reality;
     private final List<T> firstGuess;
 
-    private InverseMonodromy(Builder<T> b) {
+    InverseMonodromy(InverseMonodromyBuilder<T> b) {
         this.map = b.map;
         this.ar = b.map.arithmetic();
         this.conj = Conjugation.of(ar);
@@ -71,8 +63,9 @@ public final class InverseMonodromy<T> {
         this.firstGuess = b.firstGuess == null ? null : List.copyOf(b.firstGuess);
     }
 
-    public static <T> Builder<T> builder(MonodromyMap<T> map, int order) {
-        return new Builder<>(map, order);
+    /** A builder of the inverse problem of member n (1 <= n <= 8) in the arithmetic of the map. */
+    public static <T> InverseMonodromyBuilder<T> builder(MonodromyMap<T> map, int order) {
+        return new InverseMonodromyBuilder<>(map, order);
     }
 
     /**
@@ -319,173 +312,13 @@ public final class InverseMonodromy<T> {
     private MonodromySolution<T> result(StateChart<T> chart, List<T> z, Evaluation at, int iterations, int stages) {
         List<T> r = shifted(at, at.values, 0);
         List<T[]> jac = jacobian(chart, z, r, r, 0);
-        int p = z.size();
-        // |J^+| (|r| + e) with the pseudo-inverse from the singular values above 1e-7 of the largest (the finite
-        // differences are good to about sqrt(epsilon)): directions the conditions leave free get no error
-        boolean complex = !reality;
-        int cols = complex ? 2 * p : p;
-        int rowCount = complex ? 2 * r.size() : r.size();
-        double[][] jr = new double[rowCount][cols];
-        double[] size = new double[rowCount];
-        for (int i = 0; i < r.size(); i++) {
-            for (int c = 0; c < p; c++) {
-                Complex v = ar.toComplex(jac.get(i)[c]);
-                if (complex) {
-                    jr[2 * i][2 * c] = v.getReal();
-                    jr[2 * i][2 * c + 1] = -v.getImaginary();
-                    jr[2 * i + 1][2 * c] = v.getImaginary();
-                    jr[2 * i + 1][2 * c + 1] = v.getReal();
-                } else {
-                    jr[i][c] = v.getReal();
-                }
-            }
-            double e = ar.abs(r.get(i)) + at.errors.get(i);
-            if (complex) {
-                size[2 * i] = e;
-                size[2 * i + 1] = e;
-            } else {
-                size[i] = e;
-            }
-        }
-        SingularValueDecomposition svd = new SingularValueDecomposition(new Array2DRowRealMatrix(jr, false));
-        double[] sv = svd.getSingularValues();
-        double cut = 1e-7 * sv[0];
-        int rank = 0;
-        for (double v : sv) {
-            rank += v > cut ? 1 : 0;
-        }
-        RealMatrix u = svd.getU();
-        RealMatrix vm = svd.getV();
-        double[] dz = new double[p];
-        for (int c = 0; c < cols; c++) {
-            double sum = 0;
-            for (int i = 0; i < rowCount; i++) {
-                double k = 0;
-                for (int j = 0; j < rank; j++) {
-                    k += vm.getEntry(c, j) * u.getEntry(i, j) / sv[j];
-                }
-                sum += Math.abs(k) * size[i];
-            }
-            dz[complex ? c / 2 : c] += sum;
-        }
-        double[] err = new double[at.state.size()];
-        double root = Math.sqrt(ar.epsilon());
-        for (int c = 0; c < p; c++) {
-            double h = root * Math.max(1, ar.abs(z.get(c)));
-            List<T> moved = new ArrayList<>(z);
-            moved.set(c, ar.add(z.get(c), ar.of(h)));
-            List<T> st = chart.state(moved);
-            for (int j = 0; j < err.length; j++) {
-                err[j] += ar.abs(ar.subtract(st.get(j), at.state.get(j))) / h * dz[c];
-            }
-        }
-        for (int j = 0; j < err.length; j++) {
-            err[j] += 4 * ar.epsilon() * ar.abs(at.state.get(j));
-        }
+        InverseEstimate<T> estimate = new InverseEstimate<>(ar, chart, !reality, jac, r, at.errors, z, at.state);
         List<Estimate<T>> residuals = new ArrayList<>();
         for (int i = 0; i < r.size(); i++) {
             residuals.add(new Estimate<>(r.get(i), at.errors.get(i)));
         }
-        LaxMatrix<T> lax = LaxMatrix.of(ar, order, x, times, s, m, at.state, err, topArgument);
-        return new MonodromySolution<>(lax, at.data, residuals, iterations, stages, cols - rank);
+        LaxMatrix<T> lax = LaxMatrix.of(ar, order, x, times, s, m, at.state, estimate.stateErrors(), topArgument);
+        return new MonodromySolution<>(lax, at.data, residuals, iterations, stages, estimate.freeDirections());
     }
 
-    /** Builder of an inverse problem. Not thread-safe. */
-    public static final class Builder<T> {
-        private final MonodromyMap<T> map;
-        private final int order;
-        private T x;
-        private List<T> times = List.of();
-        private T s;
-        private T m;
-        private T m0;
-        private double topArgument = Double.NaN;
-        private final List<MonodromyCondition<T>> conditions = new ArrayList<>();
-        private boolean reality;
-        private List<T> firstGuess;
-
-        private Builder(MonodromyMap<T> map, int order) {
-            HierarchyMember.of(order);
-            this.map = map;
-            this.order = order;
-        }
-
-        /** The point x of the result; the argument of t_n (member 1: of x) on its surface fixes the sectors. */
-        public Builder<T> point(T x, double topArgument) {
-            this.x = x;
-            this.topArgument = topArgument;
-            return this;
-        }
-
-        /** t_2 .. t_n. */
-        public Builder<T> times(List<T> times) {
-            this.times = times;
-            return this;
-        }
-
-        /** s, m (formal exponent at infinity) and m0 (formal exponent at 0; the trace form is 2 i s m0). */
-        public Builder<T> constants(T s, T m, T m0) {
-            this.s = s;
-            this.m = m;
-            this.m0 = m0;
-            return this;
-        }
-
-        public Builder<T> condition(MonodromyCondition<T> condition) {
-            conditions.add(condition);
-            return this;
-        }
-
-        /**
-         * The reality symmetry r = -conj(q) (all a_k anti-Hermitian): needs real x, times and s and imaginary m and m0.
-         */
-        public Builder<T> reality(boolean on) {
-            this.reality = on;
-            return this;
-        }
-
-        /** A member state to start from (otherwise a generated one, see {@link StateChart}). */
-        public Builder<T> firstGuess(List<T> state) {
-            this.firstGuess = state;
-            return this;
-        }
-
-        public InverseMonodromy<T> build() {
-            AnalyticArithmetic<T> ar = map.arithmetic();
-            Conjugation.of(ar);
-            if (x == null || s == null || m == null || m0 == null || Double.isNaN(topArgument)) {
-                throw new InvalidInputException("inverse problem", "needs the point (x and the argument of t_n) and"
-                        + " the constants s, m, m0");
-            }
-            if (times == null || times.size() != order - 1) {
-                throw new InvalidInputException("times", "member " + order + " takes " + (order - 1) + " times");
-            }
-            if (conditions.isEmpty()) {
-                throw new InvalidInputException("conditions", "at least one condition on the monodromy data is needed");
-            }
-            if (firstGuess != null && firstGuess.size() != 3 * (order + 1)) {
-                throw new InvalidInputException("first guess", "member " + order + " has " + 3 * (order + 1)
-                        + " unknowns");
-            }
-            if (reality) {
-                UnaryOperator<T> conj = Conjugation.of(ar);
-                List<T> real = new ArrayList<>(times);
-                real.add(x);
-                real.add(s);
-                for (T t : real) {
-                    requireSymmetric(ar, "x, times and s", ar.subtract(t, conj.apply(t)), t);
-                }
-                requireSymmetric(ar, "m", ar.add(m, conj.apply(m)), m);
-                requireSymmetric(ar, "m0", ar.add(m0, conj.apply(m0)), m0);
-            }
-            return new InverseMonodromy<>(this);
-        }
-
-        private static <T> void requireSymmetric(AnalyticArithmetic<T> ar, String name, T defect, T value) {
-            if (ar.abs(defect) > 1e-12 * (1 + ar.abs(value))) {
-                throw new InvalidInputException(name, "the reality symmetry r = -conj(q) needs real x, times and s and"
-                        + " imaginary m and m0; got " + ar.toComplex(value));
-            }
-        }
-    }
 }

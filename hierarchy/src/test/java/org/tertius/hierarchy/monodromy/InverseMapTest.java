@@ -34,7 +34,7 @@ class InverseMapTest {
         Complex s = Complex.ONE;
         Complex m = state.get(3);
         MonodromyData<Complex> d = MAP.compute(LaxMatrix.of(AR, 1, x, List.of(), s, m, state, new double[6], 0));
-        InverseMonodromy.Builder<Complex> b = InverseMonodromy.builder(MAP, 1).point(x, 0)
+        InverseMonodromyBuilder<Complex> b = InverseMonodromy.builder(MAP, 1).point(x, 0)
                 .constants(s, m, d.exponentAtZero().value()).condition(all(d));
         MonodromySolution<Complex> found = (guess == null ? b : b.firstGuess(guess)).build().solve();
         assertEquals(0, found.freeDirections(), "all data fix the state, gauge included");
