@@ -279,7 +279,7 @@ public final class MonodromyData<T> {
     /**
      * All numbers in one list: s^inf_1 .. s^inf_2n, s^0_1, s^0_2, m, m0, E11, E12, E21, E22.
      */
-    List<Estimate<T>> quantities() {
+    public List<Estimate<T>> quantities() {
         return all();
     }
 
