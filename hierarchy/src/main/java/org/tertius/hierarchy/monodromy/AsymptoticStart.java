@@ -13,7 +13,8 @@ import org.tertius.core.number.AnalyticArithmetic;
  * (not below the one where the leading exponent difference reaches log(1/epsilon)) at which two consecutive terms
  * of column b are below epsilon/2 relative to its first; the series is cut before them, and its error is taken as
  * twice the first omitted term plus the next one (the remainder of an asymptotic series cut near its smallest term
- * is of the size of that term: common practice), plus the rounding of the partial sum. Immutable.
+ * is of the size of that term: common practice), plus the rounding of the partial sum and of the exponential (the
+ * exponent is about log(1/epsilon) there). Immutable.
  *
  * @param <T> number type
  */
@@ -101,10 +102,25 @@ final class AsymptoticStart<T> {
             start = ma.apply(eigenvectors, start);
             gain = ma.norm(eigenvectors);
         }
-        double error = ar.abs(e) * gain * (omitted + 4 * epsilon * absSum) + 2 * epsilon * ma.norm(start);
+        // the exponent is large (about log(1/epsilon)) on the start ray: its rounding is a relative error of exp
+        double error = ar.abs(e) * gain * (omitted + 4 * epsilon * absSum)
+                + 2 * epsilon * (1 + exponentSize(b, v, logLambda)) * ma.norm(start);
         List<double[]> path = List.of(new double[] {logR, angle}, new double[] {Math.log(rho), angle},
                 new double[] {Math.log(rho), meet});
         return integrator.carry(start, error, path);
+    }
+
+    /** The sum of the moduli of the terms of the exponent (the scale of its rounding error). */
+    private double exponentSize(int b, T v, T logLambda) {
+        double sum = 0;
+        T power = v;
+        for (int k = 0; k < rank; k++) {
+            T bk = b == 1 ? formal.exponent11(k) : formal.exponent22(k);
+            sum += ar.abs(bk) * ar.abs(power) / (k + 1);
+            power = ar.multiply(power, v);
+        }
+        T b1 = b == 1 ? formal.exponent11(-1) : formal.exponent22(-1);
+        return sum + ar.abs(b1) * ar.abs(logLambda);
     }
 
     private T exponent(int b, T v, T logLambda) {

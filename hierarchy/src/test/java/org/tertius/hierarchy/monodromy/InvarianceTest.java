@@ -8,6 +8,8 @@ import org.hipparchus.complex.Complex;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.tertius.core.number.SurfacePoint;
+import org.tertius.hierarchy.HierarchyMember;
+import org.tertius.hierarchy.MemberParameters;
 import org.tertius.hierarchy.MemberSolution;
 
 /**
@@ -106,6 +108,24 @@ class InvarianceTest {
                 SurfacePoint.of(1, 0.5, 0)));
         all.addAll(dataAt(sol.withTopTime(new Complex(0.3, -0.2)), SurfacePoint.of(0.4, 0, 0)));
         assertAgree("member 3 at more points", all, all);
+    }
+
+    @Test
+    @Tag("slow")
+    void member4DataAgreeAlongX() {
+        MemberParameters p = MemberParameters.builder(4).times(new Complex(0.1), new Complex(0.2, 0.1),
+                new Complex(0.3)).s(new Complex(0.7)).m(new Complex(0.2, 0.1)).build();
+        List<Complex> partial = new ArrayList<>();
+        for (int i = 0; i < 15; i++) {
+            partial.add(new Complex(0.1 * Math.sin(i + 1), 0.1 * Math.cos(2 * i)));
+        }
+        Complex s = p.s();
+        partial.set(0, s.multiply(s).negate().subtract(partial.get(1).multiply(partial.get(2))).sqrt());
+        Complex x0 = new Complex(0.2);
+        MemberSolution sol = MemberSolution.builder(p).start(x0, HierarchyMember.of(4).completeDiagonal(p, x0,
+                partial)).build();
+        List<MonodromyData<Complex>> all = dataAt(sol, SurfacePoint.of(0.2, 0, 0), SurfacePoint.of(0.8, 0.4, 0));
+        assertAgree("member 4 along x", all, all);
     }
 
     @Test
