@@ -7,6 +7,7 @@ import org.tertius.core.InvalidInputException;
 import org.tertius.core.number.AnalyticArithmetic;
 import org.tertius.core.number.ApcomplexArithmetic;
 import org.tertius.core.number.ComplexArithmetic;
+import org.tertius.core.number.MpArithmetic;
 import org.tertius.core.number.MpComplex;
 
 /**

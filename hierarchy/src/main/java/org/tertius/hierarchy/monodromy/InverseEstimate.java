@@ -1,5 +1,6 @@
 package org.tertius.hierarchy.monodromy;
 
+import java.util.ArrayList;
 import java.util.List;
 import org.hipparchus.complex.Complex;
 import org.hipparchus.linear.Array2DRowRealMatrix;
@@ -80,7 +81,7 @@ final class InverseEstimate<T> {
         double root = Math.sqrt(ar.epsilon());
         for (int c = 0; c < p; c++) {
             double h = root * Math.max(1, ar.abs(z.get(c)));
-            List<T> moved = new java.util.ArrayList<>(z);
+            List<T> moved = new ArrayList<>(z);
             moved.set(c, ar.add(z.get(c), ar.of(h)));
             List<T> st = chart.state(moved);
             for (int j = 0; j < err.length; j++) {

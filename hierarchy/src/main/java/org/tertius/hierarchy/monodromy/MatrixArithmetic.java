@@ -2,7 +2,7 @@ package org.tertius.hierarchy.monodromy;
 
 import org.hipparchus.complex.Complex;
 import org.tertius.core.number.AnalyticArithmetic;
-import org.tertius.core.number.Cx;
+import org.tertius.core.number.ComplexPairs;
 
 /**
  * Operations on 2x2 {@link Matrix matrices} and their {@link Matrix.Vector vectors} in one
@@ -96,7 +96,7 @@ final class MatrixArithmetic<T> {
      */
     double magnitude(T a) {
         Complex c = ar.toComplex(a);
-        double m = Cx.abs(c.getReal(), c.getImaginary());
+        double m = ComplexPairs.abs(c.getReal(), c.getImaginary());
         return m > Double.MIN_NORMAL && m < Double.MAX_VALUE ? m : ar.abs(a);
     }
 

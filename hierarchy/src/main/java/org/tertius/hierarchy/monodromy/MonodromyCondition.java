@@ -2,6 +2,7 @@ package org.tertius.hierarchy.monodromy;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.function.Function;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.number.AnalyticArithmetic;
 
@@ -86,7 +87,7 @@ public interface MonodromyCondition<T> {
     }
 
     /** A condition from a description and a residual function. */
-    static <T> MonodromyCondition<T> of(String description, java.util.function.Function<MonodromyData<T>,
+    static <T> MonodromyCondition<T> of(String description, Function<MonodromyData<T>,
             List<Estimate<T>>> residuals) {
         if (description == null || residuals == null) {
             throw new InvalidInputException("condition", "needs a description and a residual function");

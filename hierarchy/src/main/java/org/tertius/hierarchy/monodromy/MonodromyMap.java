@@ -6,6 +6,7 @@ import org.hipparchus.complex.Complex;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.number.AnalyticArithmetic;
 import org.tertius.core.number.ComplexArithmetic;
+import org.tertius.core.number.MpArithmetic;
 import org.tertius.core.number.MpComplex;
 import org.tertius.core.number.SurfacePoint;
 import org.tertius.hierarchy.MemberSolution;

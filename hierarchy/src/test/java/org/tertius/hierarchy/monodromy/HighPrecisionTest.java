@@ -11,6 +11,7 @@ import org.junit.jupiter.api.Test;
 import org.tertius.core.number.AnalyticArithmetic;
 import org.tertius.core.number.ApcomplexArithmetic;
 import org.tertius.core.number.ComplexArithmetic;
+import org.tertius.core.number.MpArithmetic;
 import org.tertius.core.number.MpComplex;
 
 /**

@@ -5,11 +5,13 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.quicktheories.QuickTheory.qt;
 import static org.quicktheories.generators.SourceDSL.doubles;
 
+import java.util.ArrayList;
 import java.util.List;
 import org.hipparchus.complex.Complex;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.tertius.core.number.ComplexArithmetic;
+import org.tertius.core.number.SurfacePoint;
 import org.tertius.core.step.SolverSettings;
 import org.tertius.hierarchy.MemberSolution;
 import org.tertius.hierarchy.MemberValue;
@@ -51,7 +53,7 @@ class InverseMapTest {
         roundTrip(Samples.member1State(), new Complex(0.5), null);
         // the state found starts the same solution
         Complex x = new Complex(0.5);
-        MonodromyData<Complex> d = MAP.compute(Samples.member1(), org.tertius.core.number.SurfacePoint.of(x, 0));
+        MonodromyData<Complex> d = MAP.compute(Samples.member1(), SurfacePoint.of(x, 0));
         MonodromySolution<Complex> found = InverseMonodromy.builder(MAP, 1).point(x, 0)
                 .constants(Complex.ONE, Samples.MEMBER1.m(), d.exponentAtZero().value()).condition(all(d)).build()
                 .solve();
@@ -76,7 +78,7 @@ class InverseMapTest {
                     Complex a12 = new Complex(w, v);
                     Complex a21 = Complex.ONE.add(a11.multiply(a11)).negate().divide(a12);
                     List<Complex> state = List.of(a11, a12, a21, m, new Complex(t, u), new Complex(v, w));
-                    List<Complex> guess = new java.util.ArrayList<>();
+                    List<Complex> guess = new ArrayList<>();
                     for (Complex c : state) {
                         guess.add(c.multiply(new Complex(1.04, 0.03)));
                     }
