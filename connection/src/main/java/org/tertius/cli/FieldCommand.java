@@ -19,15 +19,19 @@ import org.tertius.core.region.RegionSettings;
 import org.tertius.core.region.RegionSolver;
 import org.tertius.core.region.RegionTree;
 import org.tertius.core.region.Singularity;
+import org.tertius.hierarchy.OriginSolution;
+import org.tertius.hierarchy.PlaneGrid;
 
 /** A PNG picture of a solution's first value over a region, or a line plot of it along a segment. */
 public final class FieldCommand implements Command {
     final SolutionOptions solution = new SolutionOptions();
     final RegionOptions region = new RegionOptions("the region (one sheet)");
+    final PlaneOptions plane = new PlaneOptions();
     String line;
     Path out;
     String size;
     boolean noMarks;
+    boolean phase;
 
     @Override
     public String name() {
@@ -44,7 +48,7 @@ public final class FieldCommand implements Command {
 
     @Override
     public List<OptionGroup> groups() {
-        return List.of(solution, region);
+        return List.of(solution, region, plane);
     }
 
     @Override
@@ -53,6 +57,7 @@ public final class FieldCommand implements Command {
         o.addOption(OptionKinds.required("--out", "FILE.png", "the PNG file"));
         o.addOption(OptionKinds.value("--size", "WxH", "picture size in pixels (default 900x720)"));
         o.addOption(OptionKinds.flag("--no-marks", "do not locate and mark poles and zeros"));
+        o.addOption(OptionKinds.flag("--phase", "with --plane: draw the phase of q instead of its modulus"));
     }
 
     @Override
@@ -61,11 +66,21 @@ public final class FieldCommand implements Command {
         out = a.path("--out");
         size = a.has("--size") ? a.text("--size") : "900x720";
         noMarks = a.has("--no-marks");
+        phase = a.has("--phase");
     }
 
     @Override
     public int run(PrintWriter stdout, PrintWriter err) {
         ProblemFile f = solution.file();
+        if (plane.given()) {
+            if (line != null || region.given()) {
+                throw new InvalidInputException("--plane", "give one of --line, --grid, --log-strip and --plane");
+            }
+            return planePicture(err);
+        }
+        if (phase) {
+            throw new InvalidInputException("--phase", "applies to --plane pictures only");
+        }
         String lineSpec = line != null ? line : (region.given() ? null : f.get("line"));
         String gridSpec = region.gridSpec(f, line != null);
         if ((gridSpec == null && region.logStrip == null) == (lineSpec == null)) {
@@ -98,6 +113,39 @@ public final class FieldCommand implements Command {
         err.println(String.format(Locale.ROOT, "tertius: wrote %s (%dx%d); %s; largest error estimate %.1e relative to"
                 + " 1+|%s|", out, wh[0], wh[1], r.statistics(), r.maxRelativeError(), value));
         return r.statistics().failed() == 0 ? 0 : Main.EXIT_UNREACHED;
+    }
+
+    /** |q| (or its phase) over the physical plane of a member started at x = t_n = 0, as a figure. */
+    private int planePicture(PrintWriter err) {
+        int[] wh = parseSize(size);
+        OutputFile.checkWritable("--out", out);
+        Grid g = plane.grid();
+        OriginSolution o = PlaneOptions.solution(solution);
+        PlaneGrid.Result r;
+        try (Progress progress = new Progress("field")) {
+            r = PlaneOptions.compute(o, g, 0, progress, err);
+        }
+        double[] v = new double[g.size()];
+        for (int j = 0; j < g.ny(); j++) {
+            for (int i = 0; i < g.nx(); i++) {
+                Complex q = r.q(j, i);
+                v[j * g.nx() + i] = Double.isFinite(r.error(j, i)) ? (phase ? q.getArgument() : q.norm()) : Double.NaN;
+            }
+        }
+        String t = "t_" + o.member().order();
+        boolean profile = solution.member.profile != null;
+        String name = profile ? "Psi" : "q";
+        String x = profile ? "X" : "x";
+        String y = profile ? "T" : t;
+        String title = (profile ? "near-field profile of focusing NLS (member 2, s = " + o.s().getReal() + "): "
+                : "member " + o.member().order() + ", s = " + o.s() + ", m = " + o.m() + ": ")
+                + (phase ? "arg " : "|") + name + "(" + x + ", " + y + ")" + (phase ? "" : "|");
+        BufferedImage img = PlanePainter.paint(v, g.nx(), g.ny(), g.re0(), g.re1(), g.im0(), g.im1(),
+                phase ? PlanePainter.Scale.PHASE : PlanePainter.Scale.MODULUS, title, x, y,
+                phase ? "arg " + name : "|" + name + "|", wh[0], wh[1]);
+        OutputFile.writeWhole("--out", out, p -> ImageIO.write(img, "png", p.toFile()));
+        err.println("tertius: wrote " + out);
+        return 0;
     }
 
     /** The picture's title: the equation, and for anything but w which value is drawn. */

@@ -3,17 +3,21 @@ package org.tertius.cli;
 import java.util.ArrayList;
 import java.util.List;
 import org.apache.commons.cli.Options;
+import org.hipparchus.complex.Complex;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.number.ExactNumber;
 import org.tertius.core.step.SolverSettings;
 import org.tertius.hierarchy.HierarchyMember;
 import org.tertius.hierarchy.MemberParameters;
 import org.tertius.hierarchy.MemberSolution;
+import org.tertius.hierarchy.OriginSolution;
+import org.tertius.hierarchy.nls.NearFieldProfile;
 
 /** A member of the Painleve III hierarchy and its start data (see hierarchy/README.md for the convention). */
 public final class MemberOptions implements OptionGroup {
     /** The options of this group (for the refusal of options that do not apply). */
-    static final List<String> OPTIONS = List.of("--times", "--s", "--m", "--x0", "--state", "--origin");
+    static final List<String> OPTIONS = List.of("--times", "--s", "--m", "--x0", "--state", "--origin", "--profile",
+            "--profile-phase");
 
     Integer member;
     String times;
@@ -22,6 +26,8 @@ public final class MemberOptions implements OptionGroup {
     String x0;
     String state;
     String origin;
+    String profile;
+    String profilePhase;
 
     @Override
     public void declare(Options o) {
@@ -33,7 +39,12 @@ public final class MemberOptions implements OptionGroup {
         o.addOption(OptionKinds.value("--state", "V,..", "start state: the unknowns in the order of"
                 + " 'tertius describe --member N'"));
         o.addOption(OptionKinds.value("--origin", "A11,A12,A21",
-                "member 1 only: start at x = 0 on the solution analytic there, with a_{-2} = this"));
+                "start at x = 0 on the solution analytic there, with a_{-2}(0) = this (member 1; members N >= 2 at"
+                        + " x = t_N = 0 with t_2..t_{N-1} = 0, carried to the given t_N)"));
+        o.addOption(OptionKinds.value("--profile", "NAME", "a named solution: 'nearfield', the near-field profile of"
+                + " focusing NLS (member 2, s = 2, m = 0, a_{-2}(0) = (0, 2i, 2i), Psi(0,0) = 4; --s S and"
+                + " --profile-phase P give its relatives); --times T sets t_2 = T (default 0)"));
+        o.addOption(OptionKinds.value("--profile-phase", "P", "the phase of a relative of the profile (real)"));
     }
 
     @Override
@@ -45,16 +56,18 @@ public final class MemberOptions implements OptionGroup {
         x0 = a.text("--x0");
         state = a.text("--state");
         origin = a.text("--origin");
+        profile = a.text("--profile");
+        profilePhase = a.text("--profile-phase");
     }
 
     boolean given() {
-        return member != null;
+        return member != null || profile != null;
     }
 
     /** The options of this group that were given (without --member). */
     List<String> optionsGiven() {
         List<String> out = new ArrayList<>();
-        String[] values = {times, s, m, x0, state, origin};
+        String[] values = {times, s, m, x0, state, origin, profile, profilePhase};
         for (int i = 0; i < values.length; i++) {
             if (values[i] != null) {
                 out.add(OPTIONS.get(i));
@@ -73,6 +86,7 @@ public final class MemberOptions implements OptionGroup {
         x0 = f.fill(x0, "x0");
         state = f.fill(state, "state");
         origin = f.fill(origin, "origin");
+        profile = f.fill(profile, "profile");
     }
 
     MemberParameters parameters() {
@@ -90,13 +104,87 @@ public final class MemberOptions implements OptionGroup {
         return b.build();
     }
 
+    /**
+     * The solution started at x = 0 of a member n >= 2 (from --origin with the lower times zero, or --profile), over
+     * the whole plane of (x, t_n); null for any other start.
+     */
+    OriginSolution originSolution(SolverSettings settings) {
+        if (profile != null) {
+            return profile(settings).solution();
+        }
+        if (origin == null || member == null || member < 2) {
+            return null;
+        }
+        List<ExactNumber> a = originData();
+        List<ExactNumber> t = ExactText.list("--times", times);
+        for (int j = 0; j < t.size() - 1; j++) {
+            if (!t.get(j).isZero()) {
+                return null;
+            }
+        }
+        return OriginSolution.create(member, parseS(), m == null ? Complex.ZERO : ExactText.parse("--m", m).toComplex(),
+                a.get(0).toComplex(), a.get(1).toComplex(), a.get(2).toComplex(), settings);
+    }
+
+    private NearFieldProfile profile(SolverSettings settings) {
+        if (!NearFieldProfile.NAME.equals(profile)) {
+            throw new InvalidInputException("--profile", "unknown profile '" + profile + "'; known: "
+                    + NearFieldProfile.NAME);
+        }
+        for (String[] given : new String[][] {{"--origin", origin}, {"--state", state}, {"--x0", x0}, {"--m", m}}) {
+            if (given[1] != null) {
+                throw new InvalidInputException(given[0], "does not apply with --profile (the profile fixes its start"
+                        + " data)");
+            }
+        }
+        if (member != null && member != 2) {
+            throw new InvalidInputException("--member", "the near-field profile is a solution of member 2, got "
+                    + member);
+        }
+        double scale = s == null ? 2 : real("--s", s);
+        double phase = profilePhase == null ? 0 : real("--profile-phase", profilePhase);
+        return NearFieldProfile.of(scale, phase, settings);
+    }
+
+    private static double real(String option, String text) {
+        Complex c = ExactText.parse(option, text).toComplex();
+        if (c.getImaginary() != 0) {
+            throw new InvalidInputException(option, "must be real, got " + text);
+        }
+        return c.getReal();
+    }
+
+    private Complex parseS() {
+        if (s == null) {
+            throw new InvalidInputException("--s", "is required (det a_{-2} = s^2)");
+        }
+        return ExactText.parse("--s", s).toComplex();
+    }
+
+    private List<ExactNumber> originData() {
+        List<ExactNumber> a = ExactText.list("--origin", origin);
+        if (a.size() != 3) {
+            throw new InvalidInputException("--origin", "expected three complex numbers A11,A12,A21");
+        }
+        return a;
+    }
+
+    /** The top time t_n given (0 when --times is absent for a profile). */
+    private Complex topTime() {
+        List<ExactNumber> t = ExactText.list("--times", times);
+        return t.isEmpty() ? Complex.ZERO : t.get(t.size() - 1).toComplex();
+    }
+
     MemberSolution solution(SolverSettings settings) {
+        OriginSolution plane = originSolution(settings);
+        if (plane != null) {
+            Complex tn = topTime();
+            // at t_n = 0 the member degenerates: there its solution is member 1's (same q, r)
+            return tn.norm() == 0 ? plane.memberOne() : plane.atTime(tn);
+        }
         MemberSolution.Builder b = MemberSolution.builder(parameters()).settings(settings);
         if (origin != null) {
-            List<ExactNumber> a = ExactText.list("--origin", origin);
-            if (a.size() != 3) {
-                throw new InvalidInputException("--origin", "expected three complex numbers A11,A12,A21");
-            }
+            List<ExactNumber> a = originData();
             b.startAtOrigin(a.get(0), a.get(1), a.get(2));
         } else {
             if (x0 == null || state == null) {
@@ -111,6 +199,6 @@ public final class MemberOptions implements OptionGroup {
     /** The member problem in one line (for table signatures). */
     String describe() {
         return "member=" + member + " times=" + times + " s=" + s + " m=" + m + " x0=" + x0 + " state=" + state
-                + " origin=" + origin;
+                + " origin=" + origin + (profile == null ? "" : " profile=" + profile + " phase=" + profilePhase);
     }
 }

@@ -9,6 +9,8 @@ import org.tertius.core.face.ComputedSolution;
 import org.tertius.core.number.ExactNumber;
 import org.tertius.core.piii.Painleve3;
 import org.tertius.core.piii.Painleve3Solution;
+import org.tertius.hierarchy.MemberSolution;
+import org.tertius.hierarchy.OriginSolution;
 
 /**
  * Everything that fixes one solution: a Painleve III equation with start data or a family, or a member of the
@@ -65,12 +67,35 @@ public final class SolutionOptions implements OptionGroup {
     ComputedSolution solution() {
         file();
         if (member.given()) {
-            refuse("with --member (a hierarchy member is fixed by --times --s --m and --x0 --state or --origin)",
-                    painleveOptionsGiven());
-            return member.solution(solver.settings());
+            return memberSolution();
         }
         refuse("without --member (they set a hierarchy member)", member.optionsGiven());
         return painleve3();
+    }
+
+    /** The hierarchy member the options describe (refused for a Painleve III solution). */
+    MemberSolution memberSolution() {
+        file();
+        if (!member.given()) {
+            throw new InvalidInputException("--member", "a hierarchy member is required here");
+        }
+        refuseForMember();
+        return member.solution(solver.settings());
+    }
+
+    private void refuseForMember() {
+        refuse("with --member (a hierarchy member is fixed by --times --s --m and --x0 --state or --origin)",
+                painleveOptionsGiven());
+    }
+
+    /** The member's solution over the plane of (x, t_n) when it was started at x = t_n = 0, else null. */
+    OriginSolution memberPlane() {
+        file();
+        if (!member.given()) {
+            return null;
+        }
+        refuseForMember();
+        return member.originSolution(solver.settings());
     }
 
     /** The Painleve III solution the options describe (refused for a hierarchy member). */

@@ -5,6 +5,7 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
 import org.apache.commons.cli.Options;
+import org.hipparchus.complex.Complex;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.TertiusException;
 import org.tertius.core.face.ComputedSolution;
@@ -18,6 +19,8 @@ import org.tertius.core.region.RegionSettings;
 import org.tertius.core.region.RegionSolver;
 import org.tertius.core.region.RegionTree;
 import org.tertius.core.region.Singularity;
+import org.tertius.hierarchy.OriginSolution;
+import org.tertius.hierarchy.PlaneGrid;
 
 /** Values of any solution on a line or a grid, streamed to CSV, resumable. */
 public final class TableCommand implements Command {
@@ -28,6 +31,7 @@ public final class TableCommand implements Command {
     final DigitsOption precision = new DigitsOption("line only: D significant digits in arbitrary precision (exact"
             + " start data, parameters and abscissae)");
     final RegionOptions region = new RegionOptions();
+    final PlaneOptions plane = new PlaneOptions();
     String line;
     Path out;
     boolean resume;
@@ -48,7 +52,7 @@ public final class TableCommand implements Command {
 
     @Override
     public List<OptionGroup> groups() {
-        return List.of(solution, precision, region);
+        return List.of(solution, precision, region, plane);
     }
 
     @Override
@@ -70,6 +74,12 @@ public final class TableCommand implements Command {
         this.stdout = stdout;
         this.console = console;
         ProblemFile f = solution.file();
+        if (plane.given()) {
+            if (line != null || region.given()) {
+                throw new InvalidInputException("--plane", "give one of --line, --grid, --log-strip and --plane");
+            }
+            return planeTable();
+        }
         String lineSpec = line != null ? line : (region.given() ? null : f.get("line"));
         String gridSpec = region.gridSpec(f, lineSpec != null);
         if ((lineSpec == null) == (gridSpec == null && region.logStrip == null)) {
@@ -126,6 +136,43 @@ public final class TableCommand implements Command {
             console.println("tertius: wrote " + out);
         }
         return status;
+    }
+
+    /** The physical plane of a member started at x = t_n = 0: rows x, t_n, q, err (by rows of t_n), resumable. */
+    private int planeTable() {
+        Grid g = plane.grid();
+        if (out != null) {
+            OutputFile.checkWritable("--out", out);
+        }
+        OriginSolution o = PlaneOptions.solution(solution);
+        String t = "t_" + o.member().order();
+        String signature = "tertius table " + solution.describe() + " plane=" + plane.plane;
+        List<String> comments = List.of("member " + o.member().order() + " of the Painleve III hierarchy started at x = "
+                + t + " = 0, s = " + o.s() + ", m = " + o.m() + ", a_-2(0) = " + o.originData(),
+                "q over the plane of real x and real " + t + "; err: its estimated absolute error");
+        try (TableWriter w = TableWriter.open(stdout, out, resume, signature, comments, "x," + t + ",q_re,q_im,err");
+             Progress progress = new Progress("table")) {
+            long skip = w.existingRows();
+            int j0 = (int) (skip / g.nx());
+            if (j0 < g.ny()) {
+                PlaneGrid.Result r = PlaneOptions.compute(o, g, j0, progress, console);
+                for (int j = 0; j < g.ny() - j0; j++) {
+                    for (int i = 0; i < g.nx(); i++) {
+                        if ((long) (j0 + j) * g.nx() + i < skip) {
+                            continue;
+                        }
+                        Complex q = r.q(j, i);
+                        w.row(String.format(Locale.ROOT, "%.17g,%.17g,%.17g,%.17g,%.3e", g.re(i), g.im(j0 + j),
+                                q.getReal(), q.getImaginary(), r.error(j, i)));
+                    }
+                    w.flush();
+                }
+            }
+        }
+        if (out != null) {
+            console.println("tertius: wrote " + out);
+        }
+        return 0;
     }
 
     private int preciseLine(ComputedSolution s, ValueRows rows, List<ExactPoint> points, String lineSpec, int k) {
