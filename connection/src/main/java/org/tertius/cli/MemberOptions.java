@@ -10,6 +10,7 @@ import org.tertius.core.step.SolverSettings;
 import org.tertius.hierarchy.HierarchyMember;
 import org.tertius.hierarchy.MemberParameters;
 import org.tertius.hierarchy.MemberSolution;
+import org.tertius.hierarchy.MemberSolutionBuilder;
 import org.tertius.hierarchy.OriginSolution;
 import org.tertius.hierarchy.nls.NearFieldProfile;
 
@@ -182,7 +183,7 @@ public final class MemberOptions implements OptionGroup {
             // at t_n = 0 the member degenerates: there its solution is member 1's (same q, r)
             return tn.norm() == 0 ? plane.memberOne() : plane.atTime(tn);
         }
-        MemberSolution.Builder b = MemberSolution.builder(parameters()).settings(settings);
+        MemberSolutionBuilder b = MemberSolution.builder(parameters()).settings(settings);
         if (origin != null) {
             List<ExactNumber> a = originData();
             b.startAtOrigin(a.get(0), a.get(1), a.get(2));
