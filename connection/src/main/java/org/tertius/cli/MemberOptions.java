@@ -106,7 +106,7 @@ public final class MemberOptions implements OptionGroup {
     }
 
     /**
-     * The solution started at x = 0 of a member n >= 2 (from --origin with the lower times zero, or --profile), over
+     * The solution started at x = 0 of a member n &gt;= 2 (from --origin with the lower times zero, or --profile), over
      * the whole plane of (x, t_n); null for any other start.
      */
     OriginSolution originSolution(SolverSettings settings) {

@@ -9,7 +9,7 @@ import org.tertius.hierarchy.OriginSolution;
 import org.tertius.hierarchy.PlaneGrid;
 
 /**
- * {@code --plane X0:X1:NX,T0:T1:NT}: a grid over the physical plane of real x and real t_n of a member n >= 2
+ * {@code --plane X0:X1:NX,T0:T1:NT}: a grid over the physical plane of real x and real t_n of a member n &gt;= 2
  * started at x = t_n = 0 (for member 2 the (X, T) plane of focusing NLS), computed row by row in parallel, with
  * the symmetries the data allow. The coordinates are the doubles nearest to their exact values, as in a grid.
  */

@@ -48,7 +48,7 @@ final class Targets {
         return text.split(",");
     }
 
-    /** "A:B:N" with complex A, B and N >= 2 points (N = 1 gives A). */
+    /** "A:B:N" with complex A, B and N &gt;= 2 points (N = 1 gives A). */
     static List<SurfacePoint> line(String option, String text, int sheet, Coordinate coordinate) {
         String[] p = lineParts(option, text);
         Complex a = ComplexText.parse(option + " (start)", p[0]);

@@ -27,7 +27,7 @@ public final class FrobeniusSeries<T> {
 
         /**
          * @param coefficient the constant factor
-         * @param basePower the power of b (>= 0)
+         * @param basePower the power of b (&gt;= 0)
          * @param factors the unknowns multiplied, with repetition (empty for a term free of unknowns)
          */
         public Term(T coefficient, int basePower, int[] factors) {

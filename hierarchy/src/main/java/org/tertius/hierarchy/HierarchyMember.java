@@ -21,7 +21,7 @@ import org.tertius.hierarchy.algebra.Polynomial;
  * {@code q = a(n-2)12 / (n t_n)} and {@code r = a(n-2)21 / (n t_n)} (t_1 = x).
  *
  * <p>Member 1 is integrated in the log variable (x = 0 is a fixed singular point, and its solutions are
- * multivalued around it); members n >= 2 are integrated in x itself. Immutable.
+ * multivalued around it); members n &gt;= 2 are integrated in x itself. Immutable.
  */
 public final class HierarchyMember {
     /** Largest member generated. */
@@ -75,7 +75,7 @@ public final class HierarchyMember {
                 p.ringValues(Complex.ZERO));
     }
 
-    /** The flow d/dt_n at fixed x as a core system in the variable t_n (members n >= 2). */
+    /** The flow d/dt_n at fixed x as a core system in the variable t_n (members n &gt;= 2). */
     public PolynomialSystem timeFlow(MemberParameters p, Complex x) {
         requireSame(p);
         if (order() < 2) {
@@ -89,7 +89,7 @@ public final class HierarchyMember {
      * Completes a start state: the diagonal entries a(k)11, k = -1 .. n-2, are fixed by x, the times and m
      * through the top coefficients of det A (see {@link MemberEquations#constraints()}); they are computed
      * here from the other entries, whose given values are kept. The entries a(k)11 of the input are ignored
-     * for k >= -1.
+     * for k &gt;= -1.
      *
      * @param state all 3(n+1) unknowns in the order of {@link #unknowns()}
      */

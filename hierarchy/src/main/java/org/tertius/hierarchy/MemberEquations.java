@@ -134,7 +134,7 @@ final class MemberEquations {
         return Collections.unmodifiableList(rhs);
     }
 
-    /** -mu^2 at lambda^p for p >= n-2, mu_k = -i (k+1) t_{k+1} (k = 0 .. n-1), mu_{-1} = m. */
+    /** -mu^2 at lambda^p for p &gt;= n-2, mu_k = -i (k+1) t_{k+1} (k = 0 .. n-1), mu_{-1} = m. */
     private Map<Integer, Polynomial> targets() {
         Map<Integer, Polynomial> mu = new TreeMap<>();
         for (int k = 0; k <= n - 1; k++) {

@@ -10,8 +10,8 @@ import org.tertius.core.equation.PolynomialSystem;
 
 /**
  * A member-1 solution started at x = 0 along the real axis, both sides, by {@link TaylorLine} in the variable
- * log x (from the point x_s where the series at 0 was summed; for x < 0 on the sheet arg x = pi, reached by the
- * core engine), all unknowns kept. Points with 0 < |x| <= x_s are answered by the core engine, once, when the
+ * log x (from the point x_s where the series at 0 was summed; for x &lt; 0 on the sheet arg x = pi, reached by the
+ * core engine), all unknowns kept. Points with 0 &lt; |x| &lt;= x_s are answered by the core engine, once, when the
  * line is built (so that later answers do not depend on the order of calls); x = 0 by the series. Immutable.
  */
 final class MemberLine {

@@ -76,7 +76,7 @@ public final class MemberParameters {
         return out;
     }
 
-    /** The same parameters with t_n replaced (n >= 2). */
+    /** The same parameters with t_n replaced (n &gt;= 2). */
     public MemberParameters withTopTime(Complex tn) {
         if (order < 2) {
             throw new InvalidInputException("t_n", "member 1 has no time besides x");

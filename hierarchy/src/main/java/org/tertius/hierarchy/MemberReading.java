@@ -10,7 +10,7 @@ import org.tertius.core.solution.StateEstimate;
 
 /**
  * How a member solution is read off its path tree: the engine variable is log x for member 1 and x itself for
- * members n >= 2; q = a(n-2)12 / (n t_n) (member 1: a(-1)12 / x) is carried by the state component a(n-2)12, so the
+ * members n &gt;= 2; q = a(n-2)12 / (n t_n) (member 1: a(-1)12 / x) is carried by the state component a(n-2)12, so the
  * poles and zeros of q are those of that component.
  */
 final class MemberReading implements EngineReading {

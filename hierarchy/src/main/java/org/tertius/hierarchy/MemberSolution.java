@@ -28,7 +28,7 @@ import org.tertius.hierarchy.algebra.Polynomial;
  * Immutable; build with {@link #builder(MemberParameters)}.
  *
  * <p>Member 1 lives on the Riemann surface of log x: its points are given with a sheet number, counted from
- * the principal sheet of x0. Members n >= 2 are single-valued in x.
+ * the principal sheet of x0. Members n &gt;= 2 are single-valued in x.
  */
 public final class MemberSolution implements ComputedSolution {
     /** The values of a member solution on the face: q, r, dq/dx, dr/dx. */
@@ -193,7 +193,7 @@ public final class MemberSolution implements ComputedSolution {
         return evaluate(x, 0);
     }
 
-    /** The value at a point of the surface of log x (member 1; for n >= 2 the sheet must be 0). */
+    /** The value at a point of the surface of log x (member 1; for n &gt;= 2 the sheet must be 0). */
     public MemberValue evaluate(SurfacePoint x) {
         return evaluate(x.z(), x.sheet());
     }
@@ -216,7 +216,7 @@ public final class MemberSolution implements ComputedSolution {
         return valueFrom(x, sheet, engine.evaluate(tau[0], tau[1]));
     }
 
-    /** A member n >= 2 solution started at x0 with a state whose uncertainty is carried by the flow. */
+    /** A member n &gt;= 2 solution started at x0 with a state whose uncertainty is carried by the flow. */
     static MemberSolution started(HierarchyMember member, MemberParameters parameters, SolverSettings settings,
                                   Complex x0, List<Complex> state, double[] error) {
         member.checkState(state);

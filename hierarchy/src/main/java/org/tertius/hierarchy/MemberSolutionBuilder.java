@@ -42,7 +42,7 @@ public final class MemberSolutionBuilder {
         return start(x0, 0, state);
     }
 
-    /** As {@link #start(Complex, List)} with x0 on the given sheet of log x (member 1; 0 for n >= 2). */
+    /** As {@link #start(Complex, List)} with x0 on the given sheet of log x (member 1; 0 for n &gt;= 2). */
     public MemberSolutionBuilder start(Complex x0, int sheet, List<Complex> state) {
         this.x0 = x0;
         this.x0Sheet = sheet;
@@ -54,7 +54,7 @@ public final class MemberSolutionBuilder {
 
     /**
      * As {@link #start(Complex, List)} with the data given exactly (decimals, rationals), so that the solution
-     * can also be computed to many digits ({@link #highPrecisionForm()}).
+     * can also be computed to many digits ({@link MemberSolution#highPrecisionForm()}).
      */
     public MemberSolutionBuilder start(ExactNumber x0, List<ExactNumber> state) {
         if (x0 == null || state == null) {
@@ -68,7 +68,7 @@ public final class MemberSolutionBuilder {
     /**
      * The solution analytic at x = 0 with a_-2(0) = [[a11, a12], [a21, -a11]] (det = s^2); needs 2m not a
      * non-zero integer. Member 1: there a_-1(0) = diag(m, -m), and the trace form equals 2 m a11. Members
-     * n >= 2 (with t_2 .. t_{n-1} = 0): the solution analytic at x = t_n = 0 whose slice t_n = 0 is that
+     * n &gt;= 2 (with t_2 .. t_{n-1} = 0): the solution analytic at x = t_n = 0 whose slice t_n = 0 is that
      * member-1 solution, carried on x = 0 to the parameters' t_n (see {@link OriginSolution}).
      */
     public MemberSolutionBuilder startAtOrigin(Complex a11, Complex a12, Complex a21) {

@@ -34,7 +34,7 @@ public final class MemberValue {
         return x;
     }
 
-    /** The sheet of x around x = 0 (member 1; always 0 for n >= 2). */
+    /** The sheet of x around x = 0 (member 1; always 0 for n &gt;= 2). */
     public int sheet() {
         return sheet;
     }

@@ -16,13 +16,13 @@ import org.tertius.core.solution.StateEstimate;
 import org.tertius.core.step.SolverSettings;
 
 /**
- * The solution of member n >= 2 analytic at x = t_n = 0 (with t_2 = ... = t_{n-1} = 0), fixed by its data
+ * The solution of member n &gt;= 2 analytic at x = t_n = 0 (with t_2 = ... = t_{n-1} = 0), fixed by its data
  * there: a_{-2}(0) = [[a11, a12], [a21, -a11]] with det = s^2, and m. It lives on the whole (x, t_n) plane: at
  * t_n = 0 it is the member-1 solution analytic at x = 0 with the same a_{-2}(0) (member n degenerates there and
  * its q, r are member 1's); for t_n != 0 it is reached by the t_n-flow on the line x = 0, started by its Taylor
  * series at the regular singular point t_n = 0 ({@link OriginTimeSeries}, derivation there), summed where its
  * last terms fall below 1e-17 of the data, carried to t_n by the core engine along the ray from 0 (one path tree
- * per ray), and then along x by the x-flow (x = 0 is a regular point of members n >= 2). Thread-safe; the state
+ * per ray), and then along x by the x-flow (x = 0 is a regular point of members n &gt;= 2). Thread-safe; the state
  * reached on a ray may depend on which targets were asked before, within the error estimates.
  */
 public final class OriginSolution {

@@ -16,7 +16,7 @@ import org.tertius.hierarchy.algebra.Monomial;
 import org.tertius.hierarchy.algebra.Polynomial;
 
 /**
- * The t_n-flow of member n (n >= 2) on the line x = 0 with t_2 = ... = t_{n-1} = 0, as a system
+ * The t_n-flow of member n (n &gt;= 2) on the line x = 0 with t_2 = ... = t_{n-1} = 0, as a system
  * {@code t_n dy/dt_n = F(y, t_n)} for {@link FrobeniusSeries}, and its rest point at t_n = 0.
  *
  * <p>Derivation (this project; the flow is {@code A_t = B_lambda + [B, A]}, {@code B = sum_{k=0}^n w_k
@@ -87,7 +87,7 @@ final class OriginTimeSeries {
         return into;
     }
 
-    /** The terms of a core system whose base powers are all >= 0 (a LOG system such as member 1's x-flow). */
+    /** The terms of a core system whose base powers are all &gt;= 0 (a LOG system such as member 1's x-flow). */
     static List<List<FrobeniusSeries.Term<Complex>>> fromSystem(PolynomialSystem system) {
         return fromSystem(system, system.coefficientValues());
     }

@@ -110,7 +110,7 @@ public final class PlaneGrid {
     /**
      * Computes the grid.
      *
-     * @param threads worker threads (>= 1); the values do not depend on it
+     * @param threads worker threads (&gt;= 1); the values do not depend on it
      * @param progress called after each row, or null
      * @param cancelled polled between and within rows, or null; when it turns true (or the calling thread is
      *     interrupted) the computation stops with a {@link CancellationException}

@@ -9,7 +9,7 @@ import org.tertius.core.InvalidInputException;
 import org.tertius.core.equation.PolynomialSystem;
 
 /**
- * q of an {@link OriginSolution} (member n >= 2) at one t_n != 0 along the real x-axis on [-left, right]: the
+ * q of an {@link OriginSolution} (member n &gt;= 2) at one t_n != 0 along the real x-axis on [-left, right]: the
  * x-flow from the state on x = 0 by {@link TaylorLine} both ways. Immutable and thread-safe.
  */
 public final class RealRow {
@@ -38,8 +38,8 @@ public final class RealRow {
     /**
      * @param solution the solution
      * @param tn the time t_n != 0
-     * @param left how far to the left of x = 0 (>= 0)
-     * @param right how far to the right (>= 0)
+     * @param left how far to the left of x = 0 (&gt;= 0)
+     * @param right how far to the right (&gt;= 0)
      * @param tolerance accepted truncation error per Taylor step (relative)
      * @param halt polled once per step (cancellation), or null
      * @throws org.tertius.core.UnreachableTargetException when the steps collapse (a singularity close to the axis)

@@ -67,7 +67,7 @@ public final class TaylorLine {
      * @param tolerance accepted truncation error per step, relative to 1 + |y_i|
      * @param tau0 the start point
      * @param direction the direction d (normalised here)
-     * @param length how far to go (>= 0)
+     * @param length how far to go (&gt;= 0)
      * @param y0 the start state
      * @param e0 the absolute errors of the start state (carried as a real vector)
      * @param components the unknowns kept for dense output
@@ -228,7 +228,7 @@ public final class TaylorLine {
             this.pIm = new double[n][order + 1];
         }
 
-        /** Expands at tau and fixes the step h <= remaining; the coefficients are left scaled to h along d. */
+        /** Expands at tau and fixes the step h &lt;= remaining; the coefficients are left scaled to h along d. */
         double step(Complex tau, Complex d, double[] yRe, double[] yIm, double[] eRe, double[] eIm, double guess,
                     double remaining) {
             double r = Math.max(guess, 1e-300);

@@ -3,7 +3,7 @@
  * systems for the core engine: {@link org.tertius.hierarchy.HierarchyMember} (equations),
  * {@link org.tertius.hierarchy.MemberSolution} (integration, first integrals, the t_n-flow; it presents the core's
  * equation-neutral face, so members get regions, pole lists and high precision like Painleve III),
- * {@link org.tertius.hierarchy.OriginSolution} (members n >= 2 started at x = t_n = 0 by
+ * {@link org.tertius.hierarchy.OriginSolution} (members n &gt;= 2 started at x = t_n = 0 by
  * {@link org.tertius.hierarchy.FrobeniusSeries}, over the (x, t_n) plane), {@link org.tertius.hierarchy.TaylorLine},
  * {@link org.tertius.hierarchy.RealRow} and {@link org.tertius.hierarchy.PlaneGrid} (the real plane),
  * {@link org.tertius.hierarchy.NlsTimeSeries} (member 2 for small t_2 from member 1),

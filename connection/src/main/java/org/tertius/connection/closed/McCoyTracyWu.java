@@ -33,7 +33,7 @@ public final class McCoyTracyWu {
      * sigma and B in {@code digits} decimal digits (lambda given as text, e.g. "0.2", exact decimal).
      *
      * @return {sigma, B}
-     * @throws InvalidInputException if |lambda| >= 1/pi (see {@link #requirePowerRange})
+     * @throws InvalidInputException if |lambda| &gt;= 1/pi (see {@link #requirePowerRange})
      */
     public static Apcomplex[] zeroData(String lambda, long digits) {
         ApcomplexArithmetic ar = new ApcomplexArithmetic(digits + 5);

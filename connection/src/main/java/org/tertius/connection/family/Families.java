@@ -32,7 +32,7 @@ import org.tertius.core.step.SolverSettings;
  *       sigma = 0);</li>
  *   <li>{@code algebraic} (background: {@code c} a value with gamma c^4 + delta = 0, or {@code root} 0..3 the index
  *       in {@link AlgebraicExpansion#backgrounds}; optional {@code x0} the start abscissa, default the smallest
- *       x >= 4 where the expansion's estimate is below 1e-15 relative): w ~ c + sum a_k x^-k at +infinity, any
+ *       x &gt;= 4 where the expansion's estimate is below 1e-15 relative): w ~ c + sum a_k x^-k at +infinity, any
  *       equation with gamma delta != 0 ({@link AlgebraicExpansion}). The expansion fixes the solution only up
  *       to exponentially small terms O(e^(-|mu| x0)), mu = 2 sqrt(gamma) c: the member given here is the one
  *       whose data at x0 are the optimally truncated series; integrating away from x0 can amplify that

@@ -9,7 +9,7 @@ import org.tertius.core.InvalidInputException;
 /**
  * The algebraic expansion at +infinity about a constant background for PIII with gamma delta != 0
  * (DLMF eq. 32.2.3, {@code w'' = w'^2/w - w'/x + (alpha w^2 + beta)/x + gamma w^3 + delta/w}):
- * <pre>  w ~ c + sum_{k >= 1} a_k x^-k,   gamma c^4 + delta = 0 (four backgrounds c).</pre>
+ * <pre>  w ~ c + sum_{k &gt;= 1} a_k x^-k,   gamma c^4 + delta = 0 (four backgrounds c).</pre>
  *
  * <p><b>Recurrence</b> (derived here). The equation times w is
  * {@code F = w w'' - w'^2 + w w'/x - (alpha w^3 + beta w)/x - gamma w^4 - delta = 0}. In the variable t = 1/x,
@@ -27,7 +27,7 @@ import org.tertius.core.InvalidInputException;
  * {@code (k-1)! / mu^k}. The series is divergent; truncated at its smallest term (optimal truncation) its error
  * is of order {@code e^(-|mu| x)}, which is what {@link #at} reports. The algebraic expansion alone therefore
  * fixes a particular solution only up to exponentially small terms: where Re mu != 0 every solution
- * {@code c + (expansion) + A e^(-mu' x) x^rho (1 + ...)} (Re mu' > 0) has the same expansion, a one-parameter
+ * {@code c + (expansion) + A e^(-mu' x) x^rho (1 + ...)} (Re mu' &gt; 0) has the same expansion, a one-parameter
  * family; the start data of {@link #at} pick the member with "A = 0", which is defined only up to the
  * truncation ambiguity {@code O(e^(-|mu| x))} (on a Stokes line, mu real, the two lateral sums differ by such a
  * term). Different start abscissae therefore give solutions that agree to the error estimates where the
@@ -157,7 +157,7 @@ public final class AlgebraicExpansion {
     }
 
     /**
-     * w and w' at x (Re x > 0), each series truncated before its smallest term (the smallest of consecutive
+     * w and w' at x (Re x &gt; 0), each series truncated before its smallest term (the smallest of consecutive
      * pairs, so that isolated zero coefficients do not stop the sum early). Error estimate: that smallest term
      * plus a rounding bound eps sum (4k + 4)|term_k| (the recurrence's relative error grows about linearly in k).
      */

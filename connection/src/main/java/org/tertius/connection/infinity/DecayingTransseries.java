@@ -144,7 +144,7 @@ public final class DecayingTransseries<T> {
     }
 
     /**
-     * w = e^u and w' at x (Re x > 0), each sector truncated at its smallest term.
+     * w = e^u and w' at x (Re x &gt; 0), each sector truncated at its smallest term.
      *
      * @throws InvalidInputException if Re x &lt;= 0
      */

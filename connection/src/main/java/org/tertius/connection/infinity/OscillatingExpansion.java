@@ -11,7 +11,7 @@ import org.tertius.core.InvalidInputException;
  * <pre>  u'' + u'/x = gamma e^(2u) + delta e^(-2u) = -2 sinh 2u,</pre>
  * whose linearisation u'' + u'/x + 4u = 0 has the decaying oscillating solutions x^(-1/2) cos 2x. The ansatz
  * (derived here)
- * <pre>  u = sum_{j >= 0} x^(-1/2-j) sum_{k odd} a_jk e^(ik theta),
+ * <pre>  u = sum_{j &gt;= 0} x^(-1/2-j) sum_{k odd} a_jk e^(ik theta),
  *   theta = 2x + c log x + phi,  a_j,-k = conj(a_jk),</pre>
  * with a_01 = A/2 (so u ~ A x^(-1/2) cos theta), uses the operator identity (derived here, m = 1/2 + j)
  * <pre>  L[x^-m e^(ik theta)] = x^-m e^(ik theta) [(4 - 4k^2) - 4k(ij + kc)/x + (m - ikc)^2/x^2],
@@ -20,9 +20,9 @@ import org.tertius.core.InvalidInputException;
  * <pre>  (4 - 4k^2) a_nk - 4k(i(n-1) + kc) a_(n-1)k + (n - 3/2 - ikc)^2 a_(n-2)k = N_nk,</pre>
  * N_n the x^(-1/2-n) coefficient of -(2 sinh 2u - 4u) (it involves U_0 .. U_(n-1) only, computed from the
  * power series of e^(+-2u) in x^(-1/2)). For |k| != 1 this gives a_nk. For k = 1 it is a condition: at n = 1 it
- * fixes the phase drift c = A^2/2 (-4c A/2 = N_11 = -A^3), at n >= 2 it fixes a_(n-1)1, which enters N_n
+ * fixes the phase drift c = A^2/2 (-4c A/2 = N_11 = -A^3), at n &gt;= 2 it fixes a_(n-1)1, which enters N_n
  * through -8 U_0^2 U_(n-1): with R = N_n1(a_(n-1)1 = 0) - (n - 3/2 - ic)^2 a_(n-2)1 the condition is
- * -4i(n-1) a + 2A^2 (a + conj a) = R, a 2 x 2 real system, solvable for n >= 2. So
+ * -4i(n-1) a + 2A^2 (a + conj a) = R, a 2 x 2 real system, solvable for n &gt;= 2. So
  * <pre>  u = A x^(-1/2) cos theta + x^(-3/2) [(A^3/48) cos 3theta + ...] + ...,
  *   theta = 2x + (A^2/2) log x + phi.</pre>
  * The series in x^-1 is asymptotic (the linear part is the Hankel expansion of J0/Y0); it is truncated before
@@ -55,7 +55,7 @@ public final class OscillatingExpansion {
     /**
      * The expansion with amplitude A and phase constant phi, coefficients up to x^(-1/2-orders).
      *
-     * @throws InvalidInputException for A or phi not finite, |A| > {@link #MAX_AMPLITUDE}, orders outside [2, 60]
+     * @throws InvalidInputException for A or phi not finite, |A| &gt; {@link #MAX_AMPLITUDE}, orders outside [2, 60]
      */
     public static OscillatingExpansion create(double amplitude, double phase, int orders) {
         if (!Double.isFinite(amplitude) || Math.abs(amplitude) > MAX_AMPLITUDE) {
@@ -163,7 +163,7 @@ public final class OscillatingExpansion {
         return new double[] {all[0][1 + width], all[1][1 + width]};
     }
 
-    /** N_n = -(P'_(2n+1) - Q'_(2n+1)), P' without the u_(2n+1) term; recomputes P_m, Q_m for 2n-1 <= m <= 2n. */
+    /** N_n = -(P'_(2n+1) - Q'_(2n+1)), P' without the u_(2n+1) term; recomputes P_m, Q_m for 2n-1 &lt;= m &lt;= 2n. */
     private double[][] nonlinearAll(int n, double[][][] p, double[][][] q) {
         for (int m = Math.max(1, 2 * n - 1); m <= 2 * n; m++) {
             p[m] = expStep(m, p, 2, m);
@@ -179,7 +179,7 @@ public final class OscillatingExpansion {
         return r;
     }
 
-    /** m E_m = sum_{l odd <= lmax} s l u_l E_(m-l), u_l = U_((l-1)/2), for E = e^(s u). */
+    /** m E_m = sum_{l odd &lt;= lmax} s l u_l E_(m-l), u_l = U_((l-1)/2), for E = e^(s u). */
     private double[][] expStep(int m, double[][][] e, double s, int lmax) {
         double[][] r = new double[2][2 * width + 1];
         for (int l = 1; l <= Math.min(m, lmax); l += 2) {
@@ -267,7 +267,7 @@ public final class OscillatingExpansion {
         return new double[] {su, sd, eu, ed, last};
     }
 
-    /** w = e^u and w' = u' e^u at x > 0, with error estimates (first omitted order plus rounding). */
+    /** w = e^u and w' = u' e^u at x &gt; 0, with error estimates (first omitted order plus rounding). */
     public LocalValue<Complex> at(double x) {
         double[] v = logValue(x);
         double w = Math.exp(v[0]);

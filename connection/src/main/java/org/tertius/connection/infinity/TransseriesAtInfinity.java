@@ -24,7 +24,7 @@ import org.tertius.core.piii.Painleve3Type;
  * <pre>  (k^2-1) mu^2 u_nk + [k mu (2k kappa - n + 3) - (a-b)] u_(n-2)k + (k kappa - (n-4)/2)^2 u_(n-4)k
  *       = [N1]_nk + (a+b) [n = 2, k = 0] + [N2]_(n-2)k.</pre>
  * For k != +-1 this gives u_nk. For k = +-1 it is a condition: at n = 3 it is met by the choice of kappa (the phase
- * drift mu p q comes from [N1]_(3,+-1) = 8 m u_(1,+-1)^2 u_(1,-+1)); at odd n >= 5 it fixes u_(n-2,+-1), which enters
+ * drift mu p q comes from [N1]_(3,+-1) = 8 m u_(1,+-1)^2 u_(1,-+1)); at odd n &gt;= 5 it fixes u_(n-2,+-1), which enters
  * [N1]_n through 8 m (u_1)^2 u_(n-2): a 2 x 2 linear system. The coefficients of e^(cu) are built by the
  * recurrence {@code n F_n = sum_j j c u_j F_(n-j)} (harmonics multiplied as Laurent polynomials in E).
  *

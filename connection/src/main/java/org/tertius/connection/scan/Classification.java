@@ -13,7 +13,7 @@ import org.tertius.core.InvalidInputException;
  *   <li>{@code atZero}: "power" (w ~ B x^sigma, {@code sigma} its exponent, |sigma| &lt; 1), "logarithmic"
  *       (sigma = +-1 within the error of the invariant), "accumulating" (zeros or poles of w accumulate at 0), or
  *       "undecided" (sigma NaN) when the cross-checks fail: the invariant is not conserved between the points
- *       where it is read, or it would give a power law with |sigma| >= 1.</li>
+ *       where it is read, or it would give a power law with |sigma| &gt;= 1.</li>
  *   <li>{@code invariant}: the quantity E of the autonomous limit near 0 whose sign decides the behaviour there,
  *       in the form of w or of 1/w (see {@link DecayingClassifier}).</li>
  * </ul>

@@ -17,7 +17,7 @@ import org.tertius.core.step.SolverSettings;
  * <p>Below X_MIN the behaviour follows from an invariant (derived here): with u = log w, t = log x and
  * u = t + L, the equation is L'' = delta e^(-2L) + x^4 e^(2L) (alpha = beta = 0, gamma = 1, delta = -1), and
  * without the x^4 term E = (L')^2/2 + delta e^(-2L)/2 = ((q - 1)^2 - x^2/w^2)/2, q = x w'/w, is conserved.
- * E > 0: w ~ B x^sigma with sigma = 1 - sqrt(2E); E = 0: logarithmic; E &lt; 0: e^L oscillates, zeros of w
+ * E &gt; 0: w ~ B x^sigma with sigma = 1 - sqrt(2E); E = 0: logarithmic; E &lt; 0: e^L oscillates, zeros of w
  * accumulate at 0. 1/w solves the same equation, so the same holds for 1/w with E = ((q + 1)^2 - x^2 w^2)/2
  * (poles accumulate). Each form neglects a term, x^2 w^2 for w and x^2 / w^2 for 1/w; the one used is the one
  * whose neglected term is the smaller at the point (|w| &lt;= 1: w), see {@link Invariant}. (The sign of q chose
@@ -49,7 +49,7 @@ public final class DecayingClassifier {
      * The classification of the member lambda. The behaviour at 0 is read from the invariant at X_MIN, in the
      * form (w or 1/w) whose neglected term is the smaller there, and cross-checked: the invariant must be
      * conserved at {@link #CHECK_POINTS} further points within their error estimates, and a power law must have
-     * |sigma| < 1 (necessary: w ~ B x^sigma with |sigma| >= 1 is not a solution of this equation at 0). A member
+     * |sigma| &lt; 1 (necessary: w ~ B x^sigma with |sigma| &gt;= 1 is not a solution of this equation at 0). A member
      * that fails a check is "undecided" (sigma NaN) rather than given a label it cannot have.
      */
     public Classification classify(int index, double lambda) {
@@ -97,8 +97,8 @@ public final class DecayingClassifier {
         }
 
         /**
-         * From the invariant: E > 0 a power law, sigma = 1 - sqrt(2E) (form w) or sqrt(2E) - 1 (form 1/w), kept
-         * only if |sigma| < 1; |E| <= {@link #DECISION_FLOOR} logarithmic (sigma = +-1); E &lt; 0 accumulating
+         * From the invariant: E &gt; 0 a power law, sigma = 1 - sqrt(2E) (form w) or sqrt(2E) - 1 (form 1/w), kept
+         * only if |sigma| &lt; 1; |E| &lt;= {@link #DECISION_FLOOR} logarithmic (sigma = +-1); E &lt; 0 accumulating
          * zeros (form w) or poles (form 1/w); not conserved: undecided.
          */
         static Behaviour of(Invariant e, boolean conserved) {

@@ -20,7 +20,7 @@ final class Invariant {
         this.error = error;
     }
 
-    /** Whether the form of 1/w neglects less than the form of w at this value (|w| > 1). */
+    /** Whether the form of 1/w neglects less than the form of w at this value (|w| &gt; 1). */
     static boolean reciprocalFormAt(Painleve3Value v) {
         return Math.abs(v.w().getReal()) > 1;
     }

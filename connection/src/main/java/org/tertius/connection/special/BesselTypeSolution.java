@@ -51,7 +51,7 @@ public final class BesselTypeSolution extends ClosedFormSolution {
 
     /**
      * The families of Bessel-type solutions of the equation: the sign choices of a, c with
-     * alpha/a + beta/c = 4n + 2, n >= 0. Empty unless the type is D6 and the condition holds.
+     * alpha/a + beta/c = 4n + 2, n &gt;= 0. Empty unless the type is D6 and the condition holds.
      */
     public static List<RootChoice> families(ExactParameters p) {
         if (p.type() != Painleve3Type.D6) {

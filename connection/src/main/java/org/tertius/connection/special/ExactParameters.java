@@ -147,7 +147,7 @@ public final class ExactParameters {
         return new BigFraction(n, d);
     }
 
-    /** Principal square root in double (Hipparchus convention: real part >= 0). */
+    /** Principal square root in double (Hipparchus convention: real part &gt;= 0). */
     static Complex sqrt(Complex c) {
         return c.sqrt();
     }

@@ -4,7 +4,7 @@ import java.math.BigInteger;
 
 /**
  * Products and exact quotients of integer polynomials by Kronecker substitution (common practice, e.g. von zur
- * Gathen and Gerhard, Modern Computer Algebra, §8.4): a polynomial with coefficients |c_i| < 2^(k-1) is packed
+ * Gathen and Gerhard, Modern Computer Algebra, §8.4): a polynomial with coefficients |c_i| &lt; 2^(k-1) is packed
  * into the integer sum c_i 2^(k i), the integers are multiplied (or divided) by BigInteger's subquadratic
  * algorithms, and the result is unpacked with signed digits. A product is exact when k exceeds the bit size of
  * every product coefficient; a quotient is unpacked with a guessed k and verified by multiplying back, k

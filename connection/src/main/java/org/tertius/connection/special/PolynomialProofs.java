@@ -120,7 +120,7 @@ public final class PolynomialProofs {
     }
 
     /**
-     * The discriminant prod_{i<j} (x_i - x_j)^2 of a monic polynomial, exactly, as {re, im}: (-1)^(d(d-1)/2)
+     * The discriminant prod_{i&lt;j} (x_i - x_j)^2 of a monic polynomial, exactly, as {re, im}: (-1)^(d(d-1)/2)
      * times the resultant of P and P', the determinant of their Sylvester matrix, by fraction-free (Bareiss)
      * elimination over Z[i] (common practice). Cost grows like d^3 big-integer operations: meant for small degrees.
      */

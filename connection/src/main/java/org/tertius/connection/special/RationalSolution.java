@@ -22,7 +22,7 @@ import org.tertius.hierarchy.algebra.GaussianRational;
  * A rational solution of Painleve III (type D6), built from the special polynomials S_n(z; mu):
  * <pre>  W(z) = S_n(z; mu-1) S_{n-1}(z; mu) / (S_n(z; mu) S_{n-1}(z; mu-1))   solves PIII(2n+2mu-1, 2n-2mu+1, 1, -1) </pre>
  * (P. A. Clarkson, J. Phys. A 36 (2003) 9507, Theorem 2.1; NIST DLMF §32.8(iii); checked here by substitution,
- * see the tests). For general gamma delta != 0 with alpha/a + beta/c = 4n, n >= 1 ({@link RootChoice}),
+ * see the tests). For general gamma delta != 0 with alpha/a + beta/c = 4n, n &gt;= 1 ({@link RootChoice}),
  * mu = (x - y + 2)/4 and w(t) = W(t/lambda)/kappa, lambda = sigma/sqrt(a c), kappa = a lambda, sigma = +-1: the
  * two signs give the solutions W(z) and -W(-z) of the normalised equation (w -> -w(-z) is a symmetry of every
  * PIII). Then w'(t) = c W'(t/lambda). Single-valued: the sheet of the point is irrelevant.
@@ -56,7 +56,7 @@ public final class RationalSolution extends ClosedFormSolution {
 
     /**
      * The rational solutions of the equation that this package builds: for each sign choice with
-     * alpha/a + beta/c = 4n, n >= 1, the two members sigma = +1, -1. Empty if there are none (D7, D8 and the
+     * alpha/a + beta/c = 4n, n &gt;= 1, the two members sigma = +1, -1. Empty if there are none (D7, D8 and the
      * quadrature cases have none of this form).
      */
     public static List<RationalSolution> all(ExactParameters p) {
@@ -100,7 +100,7 @@ public final class RationalSolution extends ClosedFormSolution {
     }
 
     /**
-     * The member {@code sigma} (+1 or -1) of the rational solution of PIII(2n+2mu-1, 2n-2mu+1, 1, -1), n >= 1.
+     * The member {@code sigma} (+1 or -1) of the rational solution of PIII(2n+2mu-1, 2n-2mu+1, 1, -1), n &gt;= 1.
      *
      * @throws InvalidInputException for n outside [1, {@link SpecialPolynomials#MAX_INDEX}] or sigma not +-1
      */

@@ -15,11 +15,11 @@ import org.tertius.hierarchy.algebra.GaussianRational;
  *   <li>nu not an integer: U1 = z^(2nu) 0F1(; 1+nu; -q z^2/4), U2 = 0F1(; 1-nu; -q z^2/4) (DLMF 16.2.1; the
  *       coefficients a_k = -q a_{k-1} / (4 k (k + nu)) and d_k = -q d_{k-1} / (4 k (k - nu)) follow from the
  *       equation).</li>
- *   <li>nu = m >= 0 an integer: U1 = z^(2m) 0F1(; 1+m; -q z^2/4) and the Frobenius logarithmic solution
- *       U2 = sum_j d_j z^(2j) + C ln z U1 with d_0 = 1, d_j = -q d_{j-1} / (4 j (j - m)) for j < m,
- *       C = -q d_{m-1} / (2m), d_m = 0 and d_j = -(q d_{j-1} + C (4j - 2m) a_{j-m}) / (4 j (j - m)) for j > m
+ *   <li>nu = m &gt;= 0 an integer: U1 = z^(2m) 0F1(; 1+m; -q z^2/4) and the Frobenius logarithmic solution
+ *       U2 = sum_j d_j z^(2j) + C ln z U1 with d_0 = 1, d_j = -q d_{j-1} / (4 j (j - m)) for j &lt; m,
+ *       C = -q d_{m-1} / (2m), d_m = 0 and d_j = -(q d_{j-1} + C (4j - 2m) a_{j-m}) / (4 j (j - m)) for j &gt; m
  *       (for m = 0: d_0 = 0, C = 1); derived for this project by substituting the ansatz into the equation.</li>
- *   <li>nu = -m < 0 an integer: u = z^(2 nu) v with v a solution for nu' = m (same substitution), so
+ *   <li>nu = -m &lt; 0 an integer: u = z^(2 nu) v with v a solution for nu' = m (same substitution), so
  *       U1 = 0F1(; 1+m; -q z^2/4) and U2 = z^(-2m) times the logarithmic solution for m.</li>
  * </ul>
  * Errors: rounding of each term bounded by (4k + 8) u |t_k| (k products and sums deep), the tail after the
@@ -154,7 +154,7 @@ final class RiccatiSeries {
     }
 
     /**
-     * The logarithmic solution for nu = m >= 0: sum_j d_j z^(2j) + C tau z^(2m) sum_k a_k z^(2k), with its
+     * The logarithmic solution for nu = m &gt;= 0: sum_j d_j z^(2j) + C tau z^(2m) sum_k a_k z^(2k), with its
      * derivative (the a_k given).
      */
     private static <T> Tracked<T> logCompanion(AnalyticArithmetic<T> ar, Tracked.Ops<T> ops, T q, int m, List<T> a,

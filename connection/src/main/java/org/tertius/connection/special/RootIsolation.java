@@ -21,7 +21,7 @@ import org.tertius.core.number.MpComplex;
  * working precision). Certification: with W_i = P(z_i) / (lc prod_{j != i} (z_i - z_j)) (Weierstrass
  * corrections), Lagrange interpolation at the z_i gives P(x) = lc [prod_j (x - z_j)] [1 + sum_i W_i/(x - z_i)],
  * so the roots of P are the eigenvalues of diag(z_i) - W 1^T; Gerschgorin's theorem (rows) puts them in the
- * disks |x - z_i + W_i| <= (d-1)|W_i|, hence in the disks |x - z_i| <= d |W_i|, and a connected union of m of
+ * disks |x - z_i + W_i| &lt;= (d-1)|W_i|, hence in the disks |x - z_i| &lt;= d |W_i|, and a connected union of m of
  * these disks contains exactly m roots counted with multiplicity (Gerschgorin's continuity argument; the
  * inclusion is that of D. Braess and K. P. Hadeler, Numer. Math. 21 (1973) 161). |P(z_i)| is bounded above by
  * the computed value plus the Horner rounding bound of {@link NumericPolynomial}; the product and the radius get

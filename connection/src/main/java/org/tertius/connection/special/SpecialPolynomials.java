@@ -14,7 +14,7 @@ import org.tertius.hierarchy.algebra.GaussianRational;
  * <pre>  S_{n+1} S_{n-1} = -z [S_n S_n'' - (S_n')^2] - S_n S_n' + (z + mu) S_n^2,   S_{-1} = S_0 = 1, </pre>
  * whose every quotient is a polynomial (of degree n(n+1)/2, monic). mu is any Gaussian rational.
  *
- * <p>Exact arithmetic without fractions: with mu = m/q (m a Gaussian integer, q > 0 an integer) the
+ * <p>Exact arithmetic without fractions: with mu = m/q (m a Gaussian integer, q &gt; 0 an integer) the
  * polynomials T_n(x) = q^(d_n) S_n(x/q), d_n = n(n+1)/2, are monic with Gaussian-integer coefficients and obey
  * (substitute z = x/q, d/dz = q d/dx, and use d_{n+1} + d_{n-1} = 2 d_n + 1)
  * <pre>  T_{n+1} T_{n-1} = q^2 [-x (T_n T_n'' - (T_n')^2) - T_n T_n'] + (x + m) T_n^2, </pre>

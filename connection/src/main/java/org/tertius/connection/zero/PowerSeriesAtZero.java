@@ -55,7 +55,7 @@ public final class PowerSeriesAtZero<T> {
      * The expansion of the solution with w ~ B z^sigma of PIII(alpha, beta, gamma, delta), coefficients up to
      * total degree {@code degree} in (X, Y) (in (X^2, Y^2) when alpha = beta = 0).
      *
-     * @throws InvalidInputException if |Re sigma| >= 1 (resonant: logarithmic terms, see {@link LogarithmicAtZero}),
+     * @throws InvalidInputException if |Re sigma| &gt;= 1 (resonant: logarithmic terms, see {@link LogarithmicAtZero}),
      *     B = 0, or degree outside [2, 400]
      */
     public static <T> PowerSeriesAtZero<T> create(AnalyticArithmetic<T> ar, List<T> parameters, T sigma, T b,

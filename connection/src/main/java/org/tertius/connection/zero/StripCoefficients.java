@@ -38,7 +38,7 @@ final class StripCoefficients<T> {
     /** 2 when alpha = beta = 0 (series in X^2, Y^2), else 1. */
     final int step;
     final int rows;
-    /** v[a][b] for b <= band(a) + 1. */
+    /** v[a][b] for b &lt;= band(a) + 1. */
     final T[][] v;
     final double[][] err;
     private final T[][] v2;

@@ -104,7 +104,7 @@ public final class ZeroExpansion<T> {
     }
 
     /**
-     * Checks power data: |Re sigma| <= 1, sigma != +-1, B != 0.
+     * Checks power data: |Re sigma| &lt;= 1, sigma != +-1, B != 0.
      *
      * @throws InvalidInputException naming what is wrong
      */

@@ -110,7 +110,7 @@ public final class HighPrecisionSolution {
     }
 
     /**
-     * n >= 2 values at equally spaced points of the straight segment from a to b in the engine variable (tau = log
+     * n &gt;= 2 values at equally spaced points of the straight segment from a to b in the engine variable (tau = log
      * u on a logarithmic surface: a segment of the Riemann surface), from one pass of steps along it: the path is
      * not integrated again per point. The {@link HighPrecisionValue#point()} of an interior point is that point
      * rounded to double precision.

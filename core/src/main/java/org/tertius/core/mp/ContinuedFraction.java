@@ -177,7 +177,7 @@ final class ContinuedFraction {
      * <pre>  R_n = 1 + s g_n / R_{n-1},   T_n = T_{n-1} s g_n / (R_n R_{n-1}),   R_0 = T_0 = 1,  </pre>
      * and the convergents differ by c_{n+1} - c_n = e_1 (-1)^n T_n (the determinant formula of continued
      * fractions: P_n Q_{n-1} - P_{n-1} Q_n = (-1)^{n+1} a_1 ... a_n; W.B. Jones and W.J. Thron, "Continued
-     * Fractions", Addison-Wesley 1980, section 2.1), so c_{n+1} = e_1 (1 + sum_{j <= n} (-1)^j T_j). All the
+     * Fractions", Addison-Wesley 1980, section 2.1), so c_{n+1} = e_1 (1 + sum_{j &lt;= n} (-1)^j T_j). All the
      * factors are of moderate size; the products are tracked with a separate exponent.
      */
     double screenLog2Error(MpComplex s) {

@@ -334,7 +334,7 @@ final class FixedPointKernel {
     }
 
     /**
-     * For order k >= 1, in two threads: known[p] = sum_{i=1..k-1} of the products of product p, and
+     * For order k &gt;= 1, in two threads: known[p] = sum_{i=1..k-1} of the products of product p, and
      * known[np + g] = sum_{i=0..k-1} base_{k-i} g_i for the groups with a base convolution (all factors of
      * order below k). Every sum is split by the parity of i between this thread and the lockstep partner (whose
      * partial sums go to the second half of {@code known} and are added in at the end): the terms of a sum cost

@@ -5,7 +5,7 @@ import java.math.BigInteger;
 /**
  * A binary fixed-point format on preallocated arrays of limbs: a value is X 2^-F with F = {@link #fractionBits()},
  * and the integer X = sum_i x_i 2^(BITS i) is held in {@link #limbs()} consecutive longs, limbs 0..L-2 in
- * [0, 2^BITS) and the top limb signed with |x_{L-1}| < 2^(BITS-2). The top {@code headroom} limbs hold the
+ * [0, 2^BITS) and the top limb signed with |x_{L-1}| &lt; 2^(BITS-2). The top {@code headroom} limbs hold the
  * integer part. Products are accumulated exactly in columns of longs (see {@link LimbAccumulator}), without an
  * allocation per operation. Immutable.
  */
@@ -130,7 +130,7 @@ final class LimbFormat {
     }
 
     /**
-     * Spreads the integer x into columns: col[c] = the BITS-bit limb c of x for c < length - 1, and the last
+     * Spreads the integer x into columns: col[c] = the BITS-bit limb c of x for c &lt; length - 1, and the last
      * column the (signed) rest; when the rest does not fit a column it is replaced by a value that makes
      * {@link #round} report an overflow.
      */
@@ -168,7 +168,7 @@ final class LimbFormat {
         return BigInteger.valueOf(src[off + limbs - 1]).shiftLeft(lowBits).add(low);
     }
 
-    /** Divides the value in a[off ..] by d (0 < d < 2^(63 - BITS)) in place, rounding toward minus infinity. */
+    /** Divides the value in a[off ..] by d (0 &lt; d &lt; 2^(63 - BITS)) in place, rounding toward minus infinity. */
     void divide(long[] a, int off, long d) {
         int top = off + limbs - 1;
         long q = Math.floorDiv(a[top], d);

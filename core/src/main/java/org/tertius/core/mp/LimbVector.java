@@ -113,7 +113,7 @@ final class LimbVector {
         return format.read(im, i * limbs);
     }
 
-    /** Divides value i by d (0 < d < 2^(63 - BITS)), rounding each part toward minus infinity. */
+    /** Divides value i by d (0 &lt; d &lt; 2^(63 - BITS)), rounding each part toward minus infinity. */
     void divide(int i, long d) {
         format.divide(re, i * limbs, d);
         format.divide(im, i * limbs, d);

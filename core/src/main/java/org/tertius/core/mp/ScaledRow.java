@@ -74,7 +74,7 @@ final class ScaledRow {
     }
 
     /**
-     * Sets this row to (prev_{j+1} - cur_{j+1}) times the first entry of factor, j < len. Each difference is
+     * Sets this row to (prev_{j+1} - cur_{j+1}) times the first entry of factor, j &lt; len. Each difference is
      * formed limb by limb at the larger exponent of its two entries (the lower limbs of the other, shifted below
      * the last limb, are dropped: at most one unit of that limb, below the entries' own rounding) and multiplied
      * as it is, neither carried nor rounded; the product is rounded once.

@@ -6,7 +6,7 @@ import org.tertius.core.number.MpContext;
 /**
  * The Taylor coefficients of every unknown of a system at one point, in the scaled variable s with
  * {@code tau = center + scale * s}, held as fixed-point integers with {@link #fractionBits()} fractional bits
- * (absolute precision, which is what a sum over |s| <= 1 needs). Immutable.
+ * (absolute precision, which is what a sum over |s| &lt;= 1 needs). Immutable.
  */
 final class TaylorSeries {
     private final MpComplex center;

@@ -88,7 +88,7 @@ final class TaylorStepper {
     }
 
     /**
-     * The Taylor step in units of the scale: the largest |s| with |c_k| |s|^k <= tol (1 + |y|) for the last four
+     * The Taylor step in units of the scale: the largest |s| with |c_k| |s|^k &lt;= tol (1 + |y|) for the last four
      * orders k of every component, times a safety factor.
      */
     double taylorStep(TaylorSeries series, MpComplex[] y) {

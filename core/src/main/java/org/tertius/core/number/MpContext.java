@@ -66,7 +66,7 @@ public final class MpContext {
         return new MpComplex(shiftRound(x.re, excess), shiftRound(x.im, excess), x.exp + excess);
     }
 
-    /** Rounds x / 2^s to the nearest integer (s >= 0). */
+    /** Rounds x / 2^s to the nearest integer (s &gt;= 0). */
     public static BigInteger shiftRound(BigInteger x, int s) {
         if (s <= 0) {
             return x.shiftLeft(-s);
@@ -190,7 +190,7 @@ public final class MpContext {
         return add(re, new MpComplex(im.im.negate(), im.re, im.exp));
     }
 
-    /** p / q (q > 0) as a real value, rounded once. */
+    /** p / q (q &gt; 0) as a real value, rounded once. */
     public MpComplex fromRational(BigInteger p, BigInteger q) {
         if (p.signum() == 0) {
             return MpComplex.ZERO;

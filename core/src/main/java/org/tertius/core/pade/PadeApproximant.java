@@ -19,7 +19,7 @@ public final class PadeApproximant {
     /** Moduli of the coefficients (for the rounding bound). */
     private final double[] pAbs;
     private final double[] qAbs;
-    /** Sum of |d_k| below dStart (bounds their contribution for |s| <= 1). */
+    /** Sum of |d_k| below dStart (bounds their contribution for |s| &lt;= 1). */
     private final double dHead;
 
     PadeApproximant(double[] pRe, double[] pIm, double[] qRe, double[] qIm, double[] dRe, double[] dIm) {

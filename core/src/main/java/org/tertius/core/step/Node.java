@@ -295,8 +295,8 @@ public final class Node {
      * reciprocal u = 1/w of a component with a pole is analytic there, so its difference stays linear in delta;
      * with eps = difference / (|a| |b|) the error of u, the error of w = 1/u is at most
      * eps |a|^2 / (1 - eps |a|) = difference |a| / (|b| - difference), and no digit is left once
-     * {@code difference >= |b|} (then infinity). Used where |a| > 1 (the value dominates the 1 of the relative
-     * error measure 1 + |y|); it is never smaller than {@code difference} (|b| <= |a| + difference), and equals it
+     * {@code difference >= |b|} (then infinity). Used where |a| &gt; 1 (the value dominates the 1 of the relative
+     * error measure 1 + |y|); it is never smaller than {@code difference} (|b| &lt;= |a| + difference), and equals it
      * to first order away from poles. Below, the plain difference (w itself is analytic next to its zeros).
      */
     static double reciprocalModel(double aAbs, double bAbs, double difference) {

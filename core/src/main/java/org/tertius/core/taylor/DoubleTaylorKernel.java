@@ -63,7 +63,7 @@ public final class DoubleTaylorKernel {
      * @param tau0Im imaginary part of the expansion point
      * @param y0Re real parts of the state
      * @param y0Im imaginary parts of the state
-     * @param scale the step scale r (> 0)
+     * @param scale the step scale r (&gt; 0)
      * @param outRe out: real parts, {@code outRe[i][k]}
      * @param outIm out: imaginary parts
      */

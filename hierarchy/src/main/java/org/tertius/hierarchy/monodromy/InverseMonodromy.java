@@ -63,7 +63,7 @@ public final class InverseMonodromy<T> {
         this.firstGuess = b.firstGuess == null ? null : List.copyOf(b.firstGuess);
     }
 
-    /** A builder of the inverse problem of member n (1 <= n <= 8) in the arithmetic of the map. */
+    /** A builder of the inverse problem of member n (1 &lt;= n &lt;= 8) in the arithmetic of the map. */
     public static <T> InverseMonodromyBuilder<T> builder(MonodromyMap<T> map, int order) {
         return new InverseMonodromyBuilder<>(map, order);
     }

@@ -218,7 +218,7 @@ public final class LaxMatrix<T> {
         return times;
     }
 
-    /** t_j for 1 <= j <= n (t_1 = x). */
+    /** t_j for 1 &lt;= j &lt;= n (t_1 = x). */
     public T time(int j) {
         return j == 1 ? x : times.get(j - 2);
     }
@@ -251,7 +251,7 @@ public final class LaxMatrix<T> {
         return topArgument;
     }
 
-    /** a_k, -2 <= k <= n-1. */
+    /** a_k, -2 &lt;= k &lt;= n-1. */
     public Matrix<T> coefficient(int k) {
         return coefficients.get(k + 2);
     }

@@ -7,7 +7,7 @@ import org.tertius.core.number.AnalyticArithmetic;
 /**
  * The damped least-squares step of the Levenberg-Marquardt method (common practice): (J^H J + mu D) delta =
  * -J^H r with D the diagonal of J^H J, solved by Gaussian elimination with partial pivoting in the working
- * arithmetic; with mu > 0 a null direction of J (a gauge the conditions do not fix) gets no step. Stateless.
+ * arithmetic; with mu &gt; 0 a null direction of J (a gauge the conditions do not fix) gets no step. Stateless.
  */
 final class LeastSquares {
     private LeastSquares() {

@@ -196,7 +196,7 @@ final class LinearIntegrator<T> {
         return st;
     }
 
-    /** The largest h with |phi_N| h^N + |phi_{N-1}| h^(N-1) <= tolerance |phi_0| (each term half of it). */
+    /** The largest h with |phi_N| h^N + |phi_{N-1}| h^(N-1) &lt;= tolerance |phi_0| (each term half of it). */
     private double admissible(double[] mag) {
         double scale = 0.5 * tolerance * mag[0];
         double h = Double.POSITIVE_INFINITY;

@@ -21,7 +21,7 @@ public interface MonodromyCondition<T> {
     /** The residuals at the given data (value minus target, with the error estimate of the value). */
     List<Estimate<T>> residuals(MonodromyData<T> data);
 
-    /** s^inf_k = value (1 <= k <= 2n). */
+    /** s^inf_k = value (1 &lt;= k &lt;= 2n). */
     static <T> MonodromyCondition<T> stokesAtInfinity(int k, T value) {
         return of("s^inf_" + k + " = " + value, d -> List.of(minus(d, d.stokesAtInfinity(k), value)));
     }

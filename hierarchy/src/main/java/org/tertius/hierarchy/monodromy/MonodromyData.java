@@ -16,9 +16,9 @@ import org.tertius.core.number.AnalyticArithmetic;
 public final class MonodromyData<T> {
     /** How the free diagonal factor of the canonical solutions at lambda = 0 is fixed. */
     public enum ConnectionNormalization {
-        /** E11 = E22, with Re E11 > 0 (or Re E11 = 0 and Im E11 > 0): the rule whenever E11 E22 != 0. */
+        /** E11 = E22, with Re E11 &gt; 0 (or Re E11 = 0 and Im E11 &gt; 0): the rule whenever E11 E22 != 0. */
         DIAGONAL,
-        /** E12 = -E21 with Re E12 > 0: the rule when E11 or E22 vanishes (within its error estimate). */
+        /** E12 = -E21 with Re E12 &gt; 0: the rule when E11 or E22 vanishes (within its error estimate). */
         ANTI_DIAGONAL
     }
 
@@ -74,7 +74,7 @@ public final class MonodromyData<T> {
         return order;
     }
 
-    /** The Stokes multiplier of S^inf_k, 1 <= k <= 2n (upper triangular for even k, lower for odd k). */
+    /** The Stokes multiplier of S^inf_k, 1 &lt;= k &lt;= 2n (upper triangular for even k, lower for odd k). */
     public Estimate<T> stokesAtInfinity(int k) {
         if (k < 1 || k > 2 * order) {
             throw new InvalidInputException("k", "Stokes matrices at infinity are numbered 1 .. " + 2 * order

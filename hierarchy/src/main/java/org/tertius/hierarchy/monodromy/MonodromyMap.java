@@ -25,17 +25,17 @@ import org.tertius.hierarchy.MemberSolution;
  *       {@code Y^0 ~ G0 (I + O(lambda)) lambda^(m0 sigma3) exp(-i s sigma3 / lambda)} with G0^-1 a_-2 G0 = i s sigma3
  *       (det a_-2 = s^2), det G0 = 1 and m0 = T / (2 i s), T = tr(a_-2 a_-1). m and m0 are the formal
  *       monodromy exponents; both are reported as computed from the equation.</li>
- *   <li>Rays. Let psi = arg t_n (member 1: arg x, continued over the sheets of x; members n >= 2: the principal
+ *   <li>Rays. Let psi = arg t_n (member 1: arg x, continued over the sheets of x; members n &gt;= 2: the principal
  *       argument of t_n). At infinity the rays phi_j = (-pi/2 - psi + j pi) / n, j in Z, are those where
  *       exp(Lambda_1 - Lambda_2) (the ratio of the column exponentials) decays fastest for even j and grows fastest
  *       for odd j: column 1 is most recessive on even rays, column 2 on odd rays. At 0 the rays are
  *       phi0_j = arg s - pi/2 + j pi (principal arg s): column 2 is most recessive on even rays, column 1 on odd
  *       rays.</li>
  *   <li>Canonical solutions. Y^inf_k (k in Z) is the solution with the asymptotics above in the sector
- *       phi_{k-1} - pi/(2n) < arg lambda < phi_k + pi/(2n); its columns are the solutions recessive on the rays
- *       phi_{k-1} and phi_k. Likewise Y^0_k in phi0_{k-1} - pi/2 < arg lambda < phi0_k + pi/2. All have
- *       determinant 1. For x > 0 (member 1), t_n > 0 and s > 0 the first sectors are -pi/n < arg lambda < pi/n
- *       and -pi < arg lambda < pi.</li>
+ *       phi_{k-1} - pi/(2n) &lt; arg lambda &lt; phi_k + pi/(2n); its columns are the solutions recessive on the rays
+ *       phi_{k-1} and phi_k. Likewise Y^0_k in phi0_{k-1} - pi/2 &lt; arg lambda &lt; phi0_k + pi/2. All have
+ *       determinant 1. For x &gt; 0 (member 1), t_n &gt; 0 and s &gt; 0 the first sectors are -pi/n &lt; arg lambda &lt; pi/n
+ *       and -pi &lt; arg lambda &lt; pi.</li>
  *   <li>Stokes matrices. S^inf_k = (Y^inf_k)^-1 Y^inf_{k+1}, k = 1 .. 2n: unit upper triangular for even k, unit
  *       lower triangular for odd k; the multiplier is its off-diagonal entry. S^0_k = (Y^0_k)^-1 Y^0_{k+1}, k = 1
  *       (upper), 2 (lower). Beyond one turn: Y^inf_{k+2n}(lambda e^(2 pi i)) = Y^inf_k(lambda) e^(2 pi i m sigma3)
@@ -46,8 +46,8 @@ import org.tertius.hierarchy.MemberSolution;
  *       and the cyclic relation M_inf E = E M_0.</li>
  *   <li>Normalisation of E. The state fixes G0 only up to a right diagonal factor D = diag(d, 1/d) (its isomonodromic
  *       choice would need an integral along the solution), which acts as E -> E D, s^0_1 -> s^0_1 d^-2,
- *       s^0_2 -> s^0_2 d^2. The data are reported with D chosen so that E11 = E22 with Re E11 > 0 (Re = 0:
- *       Im > 0); when E11 or E22 vanishes within its estimate, so that E12 = -E21 with Re E12 > 0
+ *       s^0_2 -> s^0_2 d^2. The data are reported with D chosen so that E11 = E22 with Re E11 &gt; 0 (Re = 0:
+ *       Im &gt; 0); when E11 or E22 vanishes within its estimate, so that E12 = -E21 with Re E12 &gt; 0
  *       ({@link MonodromyData.ConnectionNormalization}). The gauge (q, r) -> (e^g q, e^-g r) of the member
  *       solution multiplies the upper multipliers at infinity and E12 by e^g and the lower ones and E21 by e^-g
  *       (after renormalisation): data of a solution are taken in the gauge of its state.</li>
@@ -150,7 +150,7 @@ public final class MonodromyMap<T> {
         return data.plusErrors(extra);
     }
 
-    /** The monodromy data of a member solution at x (member 1: x on its sheet; n >= 2: sheet 0). */
+    /** The monodromy data of a member solution at x (member 1: x on its sheet; n &gt;= 2: sheet 0). */
     public MonodromyData<T> compute(MemberSolution solution, SurfacePoint x) {
         return compute(LaxMatrix.of(ar, solution, x));
     }

@@ -8,7 +8,7 @@ import org.tertius.core.number.AnalyticArithmetic;
 
 /**
  * Coordinates on the member states of fixed x, times, s, m and trace form T = 2 i s m0: the 2n + 1 entries left
- * free by det a_-2 = s^2, the trace form and the diagonal constraints (the diagonal entries a(k)11, k >= -1, follow
+ * free by det a_-2 = s^2, the trace form and the diagonal constraints (the diagonal entries a(k)11, k &gt;= -1, follow
  * from the exponents at infinity, computed by {@link FormalSolution}).
  * <ul>
  *   <li>Complex chart: a(-2)11, a(-2)P, a(-1)P, then a(k)12, a(k)21 for k = 0 .. n-2, with P = 12 (then

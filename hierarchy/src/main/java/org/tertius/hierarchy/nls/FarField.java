@@ -72,7 +72,7 @@ public final class FarField {
         return constants;
     }
 
-    /** Psi(X, 0) by the asymptotic form at X > 0. */
+    /** Psi(X, 0) by the asymptotic form at X &gt; 0. */
     public Complex psi(double x) {
         double zeta = 4 * Math.sqrt(s * x);
         double[] th = SineGordonTail.theta(constants.amplitude(), constants.phase(), zeta);
@@ -100,7 +100,7 @@ public final class FarField {
      * error plus the drift over the window and the values' own errors.
      *
      * @param profile the profile
-     * @param x sample abscissae, X > 0, at least 4 (large enough for the form: zeta = 4 sqrt(s X) >= 10)
+     * @param x sample abscissae, X &gt; 0, at least 4 (large enough for the form: zeta = 4 sqrt(s X) &gt;= 10)
      */
     public static Constants fit(NearFieldProfile profile, double[] x) {
         if (x.length < 4) {
@@ -165,7 +165,7 @@ public final class FarField {
         return new double[] {c0, 3 * standard + 0.5 * drift + own};
     }
 
-    /** The integrated and asymptotic values side by side at the given X > 0. */
+    /** The integrated and asymptotic values side by side at the given X &gt; 0. */
     public List<Comparison> compare(NearFieldProfile profile, double[] x) {
         List<Comparison> out = new ArrayList<>();
         for (double v : x) {

@@ -3,9 +3,9 @@ package org.tertius.hierarchy.nls;
 import org.hipparchus.complex.Complex;
 
 /**
- * The logarithm of the Gamma function at complex z (Re z > -10, not a pole): Stirling's series at z + 10 with
+ * The logarithm of the Gamma function at complex z (Re z &gt; -10, not a pole): Stirling's series at z + 10 with
  * terms up to B_14 (NIST DLMF 5.11.1) and the recurrence Gamma(z + 1) = z Gamma(z) (DLMF 5.5.1); absolute error
- * near 1e-15 for |z| <= 10. Stateless.
+ * near 1e-15 for |z| &lt;= 10. Stateless.
  */
 final class LogGamma {
     /** B_2k / (2k (2k - 1)), k = 1 .. 7 (DLMF 24.2; B_2 = 1/6, B_4 = -1/30, ..., B_14 = 7/6). */

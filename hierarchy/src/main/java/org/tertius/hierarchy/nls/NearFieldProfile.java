@@ -26,12 +26,12 @@ import org.tertius.hierarchy.RealRow;
  * a_-2(0) = (0, 2i, 2i), so Psi(0, 0) = -2i a12 = 4, X = x, T = t_2, Psi = q; at T = 0 it is member 1
  * (Painleve III). What singles it out among the solutions analytic at the origin with s = 2, m = 0 (hierarchy/
  * README.md): the reality reduction r = -conj(q) (a_-2(0) anti-Hermitian: a11 imaginary, a12 = -conj a21),
- * evenness in X (a11 = 0; then the trace integral tr(a_-2 a_-1) = 2 m a11 = 0), and Psi(0, 0) = 4 > 0.
+ * evenness in X (a11 = 0; then the trace integral tr(a_-2 a_-1) = 2 m a11 = 0), and Psi(0, 0) = 4 &gt; 0.
  *
  * <p>Relatives: phase and scale, {@code Psi_{s,phi}(X, T) = e^(i phi) (s/2) Psi((s/2) X, (s/2)^2 T)}, the
  * solution with a_-2(0) = (0, i s e^(i phi), i s e^(-i phi)); Psi_{s,phi}(0, 0) = 2 s e^(i phi).
  *
- * <p>Routes for real (X, T): T = 0 member 1; X = 0 the t_2-series and t_2-flow; 0 < |T| <= 0.05 first the
+ * <p>Routes for real (X, T): T = 0 member 1; X = 0 the t_2-series and t_2-flow; 0 &lt; |T| &lt;= 0.05 first the
  * small-time series from member 1 ({@link NlsTimeSeries}), kept when its error estimate is below 1e-10 (1 + |Psi|)
  * (the x-flow needs about X^2 / (20 |T|) Taylor steps there); otherwise the x-flow from X = 0 along the real axis
  * ({@link RealRow}, kept for the last 32 times asked).
@@ -75,7 +75,7 @@ public final class NearFieldProfile {
     /**
      * A relative: e^(i phase) (s/2) Psi((s/2) X, (s/2)^2 T).
      *
-     * @param s the scale, 0 < s <= 1e3
+     * @param s the scale, 0 &lt; s &lt;= 1e3
      * @param phase the phase, finite
      */
     public static NearFieldProfile of(double s, double phase, SolverSettings settings) {
@@ -213,7 +213,7 @@ public final class NearFieldProfile {
         return Member1Map.canonical(new Complex(s)).equation(Complex.ZERO, solution.memberOne().traceIntegral());
     }
 
-    /** w(z) and w'(z) at z = 4 sqrt(s X), the image of the slice T = 0 at X > 0 under the canonical map. */
+    /** w(z) and w'(z) at z = 4 sqrt(s X), the image of the slice T = 0 at X &gt; 0 under the canonical map. */
     public Painleve3Value painleve3(double x) {
         if (!(x > 0) || !Double.isFinite(x)) {
             throw new InvalidInputException("X", "the map to Painleve III takes X > 0 (z = 4 sqrt(s X)), got " + x);

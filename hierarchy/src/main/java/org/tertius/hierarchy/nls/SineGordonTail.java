@@ -32,7 +32,7 @@ final class SineGordonTail {
                 {-3 * a5 / 4096, 3 * a3 * (a2 * a2 - 128) / 65536}, {a5 / 20480, 0}}};
     }
 
-    /** {theta, theta'} at zeta > 0 for the constants (A, phi). */
+    /** {theta, theta'} at zeta &gt; 0 for the constants (A, phi). */
     static double[] theta(double a, double phi, double zeta) {
         double nu = a * a / 16;
         double psi = zeta - nu * Math.log(zeta) + phi;
