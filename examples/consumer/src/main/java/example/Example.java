@@ -13,6 +13,7 @@ import org.tertius.core.piii.Painleve3;
 import org.tertius.core.piii.Painleve3Solution;
 import org.tertius.core.piii.Painleve3Value;
 import org.tertius.core.region.Grid;
+import org.tertius.core.region.GridResult;
 import org.tertius.core.region.PoleFinder;
 import org.tertius.core.region.RegionSettings;
 import org.tertius.core.region.RegionSolver;
@@ -50,8 +51,8 @@ public final class Example {
         SolutionValue q = m.valueAt(SurfacePoint.of(1, 0));
         System.out.println("q(1) = " + ComplexText.format(q.value(0)) + " +- " + q.error(0));
         Grid square = Grid.of(-3, 3, 61, -3, 3, 61, 0);
-        RegionSolver.solve(m, square, RegionSettings.defaults());
-        System.out.println("poles and zeros of q in [-3,3]^2: " + PoleFinder.find(m, square).size());
+        GridResult field = RegionSolver.solve(m, square, RegionSettings.defaults());
+        System.out.println("poles and zeros of q in [-3,3]^2: " + PoleFinder.find(field).size());
 
         // the double value lies within its error estimate of the 40-digit one
         double gap = ComplexText.parse("w", x.text(0)).subtract(v.w()).norm();
