@@ -160,13 +160,13 @@ final class FieldPainter {
         for (double t : ticks(g.re0(), g.re1())) {
             int x = px(g, t, width);
             gr.drawLine(x, TOP + ph, x, TOP + ph + 5);
-            String s = label(t);
+            String s = tickLabel(t);
             gr.drawString(s, x - fm.stringWidth(s) / 2, TOP + ph + 18);
         }
         for (double t : ticks(g.im0(), g.im1())) {
             int y = py(g, t, height);
             gr.drawLine(LEFT - 6, y, LEFT - 1, y);
-            String s = label(t);
+            String s = tickLabel(t);
             gr.drawString(s, LEFT - 9 - fm.stringWidth(s), y + 4);
         }
         gr.drawString(g.logarithmic() ? "log |" + z + "|" : "Re " + z, LEFT + pw / 2 - 12, height - 14);
@@ -191,7 +191,8 @@ final class FieldPainter {
         return t;
     }
 
-    private static String label(double t) {
+    /** A tick label: 0 for |t| below 1e-12, else four significant digits without trailing zeros. */
+    static String tickLabel(double t) {
         if (Math.abs(t) < 1e-12) {
             return "0";
         }

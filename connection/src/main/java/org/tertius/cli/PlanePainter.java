@@ -75,13 +75,13 @@ final class PlanePainter {
         for (double t : FieldPainter.ticks(x0, x1)) {
             int x = LEFT + (int) Math.round((t - x0) / (x1 - x0) * (pw - 1));
             g.drawLine(x, TOP + ph, x, TOP + ph + 5);
-            String s = label(t);
+            String s = FieldPainter.tickLabel(t);
             g.drawString(s, x - fm.stringWidth(s) / 2, TOP + ph + 18);
         }
         for (double t : FieldPainter.ticks(y0, y1)) {
             int y = TOP + (ph - 1) - (int) Math.round((t - y0) / (y1 - y0) * (ph - 1));
             g.drawLine(LEFT - 6, y, LEFT - 1, y);
-            String s = label(t);
+            String s = FieldPainter.tickLabel(t);
             g.drawString(s, LEFT - 9 - fm.stringWidth(s), y + 4);
         }
         g.setFont(new Font(Font.SANS_SERIF, Font.PLAIN, 13));
@@ -110,7 +110,7 @@ final class PlanePainter {
         for (double t : FieldPainter.ticks(lo, max)) {
             int y = TOP + (int) Math.round((max - t) / (max - lo) * (ph - 1));
             g.drawLine(x0 + 18, y, x0 + 22, y);
-            g.drawString(label(t), x0 + 25, y + 4);
+            g.drawString(FieldPainter.tickLabel(t), x0 + 25, y + 4);
         }
     }
 
@@ -127,16 +127,5 @@ final class PlanePainter {
         int gr = (int) Math.round(RAMP[k][1] + f * (RAMP[k + 1][1] - RAMP[k][1]));
         int b = (int) Math.round(RAMP[k][2] + f * (RAMP[k + 1][2] - RAMP[k][2]));
         return (r << 16) | (gr << 8) | b;
-    }
-
-    private static String label(double t) {
-        if (Math.abs(t) < 1e-12) {
-            return "0";
-        }
-        String s = String.format(Locale.ROOT, "%.4g", t);
-        if (s.contains(".") && !s.contains("e")) {
-            s = s.replaceAll("0+$", "").replaceAll("\\.$", "");
-        }
-        return s;
     }
 }

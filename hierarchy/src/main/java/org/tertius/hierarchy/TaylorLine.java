@@ -155,14 +155,7 @@ public final class TaylorLine {
      * {re, im, estimated absolute error}.
      */
     public double[] value(int k, double u) {
-        if (!(u >= 0 && u <= reached)) {
-            throw new InvalidInputException("u", "must lie in [0, " + reached + "], got " + u);
-        }
-        int j = Arrays.binarySearch(begin, u);
-        if (j < 0) {
-            j = -j - 2;
-        }
-        j = Math.max(0, Math.min(j, begin.length - 1));
+        int j = piece(u);
         double sigma = Math.min(1, (u - begin[j]) / width[j]);
         double[][] c = coefficients.get(j);
         int base = 4 * k;
@@ -183,14 +176,7 @@ public final class TaylorLine {
 
     /** d/du of the stored component k at u (d/dtau = conj(d) d/du for |d| = 1): {re, im}. */
     public double[] derivative(int k, double u) {
-        if (!(u >= 0 && u <= reached)) {
-            throw new InvalidInputException("u", "must lie in [0, " + reached + "], got " + u);
-        }
-        int j = Arrays.binarySearch(begin, u);
-        if (j < 0) {
-            j = -j - 2;
-        }
-        j = Math.max(0, Math.min(j, begin.length - 1));
+        int j = piece(u);
         double sigma = Math.min(1, (u - begin[j]) / width[j]);
         double[][] c = coefficients.get(j);
         double vr = 0;
@@ -392,5 +378,17 @@ public final class TaylorLine {
             }
             return true;
         }
+    }
+
+    /** The index of the stored piece that covers u in [0, length]. */
+    private int piece(double u) {
+        if (!(u >= 0 && u <= reached)) {
+            throw new InvalidInputException("u", "must lie in [0, " + reached + "], got " + u);
+        }
+        int j = Arrays.binarySearch(begin, u);
+        if (j < 0) {
+            j = -j - 2;
+        }
+        return Math.max(0, Math.min(j, begin.length - 1));
     }
 }

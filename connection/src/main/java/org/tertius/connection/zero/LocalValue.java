@@ -1,5 +1,7 @@
 package org.tertius.connection.zero;
 
+import java.util.Optional;
+import java.util.function.Function;
 import org.hipparchus.complex.Complex;
 import org.tertius.core.number.AnalyticArithmetic;
 
@@ -57,5 +59,24 @@ public final class LocalValue<T> {
     @Override
     public String toString() {
         return "z = " + z + ": w = " + w + " +- " + errW + ", w' = " + dw + " +- " + errDw;
+    }
+
+    /**
+     * The first value within {@code tolerance} (error relative to 1 + |value|) along the ray of {@code tauMax},
+     * tau = log z, at |z| = |zMax| 2^-k for k = 0, 1, ... while |z| stays above 1e-250; empty if there is none.
+     * The start-data search of the expansions at 0.
+     */
+    static <T> Optional<LocalValue<T>> firstWithin(AnalyticArithmetic<T> ar, T tauMax, double tolerance,
+            Function<T, LocalValue<T>> at) {
+        T tau = tauMax;
+        T halving = ar.negate(ar.log(ar.of(2)));
+        while (ar.toComplex(tau).getReal() > -575) {
+            LocalValue<T> val = at.apply(tau);
+            if (val.relativeError(ar) <= tolerance) {
+                return Optional.of(val);
+            }
+            tau = ar.add(tau, halving);
+        }
+        return Optional.empty();
     }
 }

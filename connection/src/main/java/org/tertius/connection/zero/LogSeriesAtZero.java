@@ -258,17 +258,10 @@ public final class LogSeriesAtZero<T> {
      * @throws InvalidInputException if no such point exists above |z| = 1e-250
      */
     public LocalValue<T> startData(T tauMax, double tolerance) {
-        T tau = tauMax;
-        T halving = ar.negate(ar.log(ar.of(2)));
-        while (ar.toComplex(tau).getReal() > -575) {
-            LocalValue<T> val = at(tau);
-            if (val.relativeError(ar) <= tolerance) {
-                return val;
-            }
-            tau = ar.add(tau, halving);
-        }
-        throw new InvalidInputException("tolerance", "the logarithmic series at 0 does not reach relative error "
-                + tolerance + " for |z| >= 1e-250; raise the tolerance");
+        return LocalValue.firstWithin(ar, tauMax, tolerance, this::at)
+                .orElseThrow(() -> new InvalidInputException("tolerance",
+                        "the logarithmic series at 0 does not reach relative error " + tolerance
+                                + " for |z| >= 1e-250; raise the tolerance"));
     }
 
     // --- polynomials in t as coefficient arrays (index = power) ---

@@ -174,17 +174,10 @@ public final class ZeroExpansion<T> {
      * @throws InvalidInputException if there is none above |z| = 1e-250
      */
     public LocalValue<T> startData(T tauMax, double tolerance) {
-        T tau = tauMax;
-        T halving = ar.negate(ar.log(ar.of(2)));
-        while (ar.toComplex(tau).getReal() > -575) {
-            LocalValue<T> val = at(tau);
-            if (val.relativeError(ar) <= tolerance) {
-                return val;
-            }
-            tau = ar.add(tau, halving);
-        }
-        throw new InvalidInputException("tolerance", "the expansion at 0 does not reach relative error "
-                + tolerance + " for |z| >= 1e-250; raise the rows or the tolerance");
+        return LocalValue.firstWithin(ar, tauMax, tolerance, this::at)
+                .orElseThrow(() -> new InvalidInputException("tolerance",
+                        "the expansion at 0 does not reach relative error " + tolerance
+                                + " for |z| >= 1e-250; raise the rows or the tolerance"));
     }
 
     /** 1/W with first-order error propagation. */
