@@ -123,8 +123,8 @@ public final class MemberOptions implements OptionGroup {
                 return null;
             }
         }
-        return OriginSolution.create(member, parseS(), m == null ? Complex.ZERO : ExactText.parse("--m", m).toComplex(),
-                a.get(0).toComplex(), a.get(1).toComplex(), a.get(2).toComplex(), settings);
+        return OriginSolution.create(member, parseS(), m == null ? ExactNumber.ofInteger(0) : ExactText.parse("--m", m),
+                a.get(0), a.get(1), a.get(2), settings);
     }
 
     private NearFieldProfile profile(SolverSettings settings) {
@@ -142,15 +142,17 @@ public final class MemberOptions implements OptionGroup {
             throw new InvalidInputException("--member", "the near-field profile is a solution of member 2, got "
                     + member);
         }
-        double scale = s == null ? 2 : real("--s", s);
-        double phase = profilePhase == null ? 0 : real("--profile-phase", profilePhase);
+        ExactNumber scale = s == null ? ExactNumber.ofInteger(2) : ExactText.parse("--s", s);
+        real("--s", scale);
+        double phase = profilePhase == null ? 0 : real("--profile-phase", ExactText.parse("--profile-phase",
+                profilePhase));
         return NearFieldProfile.of(scale, phase, settings);
     }
 
-    private static double real(String option, String text) {
-        Complex c = ExactText.parse(option, text).toComplex();
+    private static double real(String option, ExactNumber x) {
+        Complex c = x.toComplex();
         if (c.getImaginary() != 0) {
-            throw new InvalidInputException(option, "must be real, got " + text);
+            throw new InvalidInputException(option, "must be real, got " + x);
         }
         return c.getReal();
     }
@@ -170,18 +172,18 @@ public final class MemberOptions implements OptionGroup {
         return a;
     }
 
-    /** The top time t_n given (0 when --times is absent for a profile). */
-    private Complex topTime() {
+    /** The top time t_n given, exactly (0 when --times is absent for a profile). */
+    private ExactNumber topTime() {
         List<ExactNumber> t = ExactText.list("--times", times);
-        return t.isEmpty() ? Complex.ZERO : t.get(t.size() - 1).toComplex();
+        return t.isEmpty() ? ExactNumber.ofInteger(0) : t.get(t.size() - 1);
     }
 
     MemberSolution solution(SolverSettings settings) {
         OriginSolution plane = originSolution(settings);
         if (plane != null) {
-            Complex tn = topTime();
+            ExactNumber tn = topTime();
             // at t_n = 0 the member degenerates: there its solution is member 1's (same q, r)
-            return tn.norm() == 0 ? plane.memberOne() : plane.atTime(tn);
+            return tn.isZero() ? plane.memberOne() : plane.atTime(tn);
         }
         MemberSolutionBuilder b = MemberSolution.builder(parameters()).settings(settings);
         if (origin != null) {

@@ -5,6 +5,8 @@ import java.util.List;
 import org.hipparchus.complex.Complex;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.number.ExactNumber;
+import org.tertius.core.number.MpComplex;
+import org.tertius.core.number.MpContext;
 
 /**
  * The start data of a member solution as exact numbers, for the high-precision replay: the start point x0 and every
@@ -16,21 +18,40 @@ final class ExactStart {
     private final ExactNumber x0;
     private final List<ExactNumber> state;
     private final List<ExactNumber> origin;
+    private final CarriedStart carried;
 
-    private ExactStart(ExactNumber x0, List<ExactNumber> state, List<ExactNumber> origin) {
+    private ExactStart(ExactNumber x0, List<ExactNumber> state, List<ExactNumber> origin, CarriedStart carried) {
         this.x0 = x0;
         this.state = state == null ? null : List.copyOf(state);
         this.origin = origin == null ? null : List.copyOf(origin);
+        this.carried = carried;
+    }
+
+    /**
+     * A start state that is not given but computed from exact data by another flow, at any working precision (the
+     * state of a member n &gt;= 2 on x = 0 carried from x = t_n = 0 along the t_n-flow).
+     */
+    interface CarriedStart {
+        /** Refuses data known to fewer digits than requested. */
+        void requireDigits(int digits);
+
+        /** The start state at the context's precision. */
+        MpComplex[] state(MpContext ctx);
     }
 
     /** A start at x0 with every unknown given. */
     static ExactStart atPoint(ExactNumber x0, List<ExactNumber> state) {
-        return new ExactStart(x0, state, null);
+        return new ExactStart(x0, state, null, null);
     }
 
     /** The solution analytic at x = 0 with a_{-2}(0) = [[a11, a12], [a21, -a11]]. */
     static ExactStart atOrigin(List<ExactNumber> a) {
-        return new ExactStart(null, null, a);
+        return new ExactStart(null, null, a, null);
+    }
+
+    /** A start at x0 whose state is carried there from exact data by another flow. */
+    static ExactStart carried(ExactNumber x0, CarriedStart source) {
+        return new ExactStart(x0, null, null, source);
     }
 
     /** The binary values of doubles. */
@@ -59,6 +80,11 @@ final class ExactStart {
         return out;
     }
 
+    /** The source of a carried start state (null otherwise). */
+    CarriedStart carried() {
+        return carried;
+    }
+
     boolean atOrigin() {
         return origin != null;
     }
@@ -79,6 +105,11 @@ final class ExactStart {
 
     /** Refuses data known to fewer digits than requested. */
     void requireDigits(int digits) {
+        if (carried != null) {
+            require("x0", x0, digits);
+            carried.requireDigits(digits);
+            return;
+        }
         if (origin != null) {
             String[] names = {"a(-2)11(0)", "a(-2)12(0)", "a(-2)21(0)"};
             for (int i = 0; i < 3; i++) {

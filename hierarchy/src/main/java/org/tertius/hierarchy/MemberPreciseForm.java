@@ -23,9 +23,6 @@ import org.tertius.hierarchy.algebra.Polynomial;
  * and q, r, dq/dx, dr/dx from a state.
  */
 final class MemberPreciseForm implements HighPrecisionForm {
-    /** Orders of the series at x = 0 tried at most (the start point lies well inside its disk). */
-    private static final int MAX_SERIES_ORDER = 20000;
-
     private final MemberSolution solution;
     private final ExactStart start;
     private final MemberEquations equations;
@@ -96,6 +93,9 @@ final class MemberPreciseForm implements HighPrecisionForm {
 
     @Override
     public MpComplex[] startState(MpContext ctx) {
+        if (start.carried() != null) {
+            return start.carried().state(ctx);
+        }
         if (!start.atOrigin()) {
             MpComplex[] y = new MpComplex[start.state().size()];
             for (int i = 0; i < y.length; i++) {
@@ -125,21 +125,11 @@ final class MemberPreciseForm implements HighPrecisionForm {
         }
         double radius = FrobeniusSeries.compute(ComplexArithmetic.INSTANCE, OriginTimeSeries.fromSystem(flow), y0d, 60,
                 "start state at x = 0").radius();
-        double x = x0.abs();
-        double wanted = Math.log(scale) - ctx.bits() * Math.log(2) - 10;
-        int order = (int) Math.ceil(wanted / Math.log(x / radius)) + 8;
         List<List<FrobeniusSeries.Term<MpComplex>>> terms = OriginTimeSeries.fromSystem(flow,
                 List.of(coefficients(ctx)));
         MpArithmetic ar = new MpArithmetic(ctx);
-        while (order <= MAX_SERIES_ORDER) {
-            FrobeniusSeries<MpComplex> series = FrobeniusSeries.compute(ar, terms, y0, order, "start state at x = 0");
-            if (Math.log(series.lastTerm(x)) <= wanted) {
-                return series.value(x0);
-            }
-            order *= 2;
-        }
-        throw new TertiusException("the series at x = 0 does not reach the working precision at x0 = " + x
-                + " within " + MAX_SERIES_ORDER + " orders");
+        return PreciseSeries.sum(ctx, order -> FrobeniusSeries.compute(ar, terms, y0, order, "start state at x = 0"),
+                x0, radius, scale, "start state at x = 0");
     }
 
     @Override

@@ -167,9 +167,9 @@ public final class MemberSolution implements ComputedSolution {
     @Override
     public HighPrecisionForm highPrecisionForm() {
         if (exactStart == null) {
-            throw new InvalidInputException("digits", "this solution was not started from exact data on the principal"
-                    + " sheet (a start moved along the t_n-flow or on another sheet); start it from exact data to"
-                    + " compute it to many digits");
+            throw new InvalidInputException("digits", "this solution's start is not known exactly (a start moved"
+                    + " along the t_n-flow from x != 0, a start on another sheet, or origin data with a phase"
+                    + " e^(i phase) != 1); start it from exact data (decimals, rationals) to compute it to many digits");
         }
         return new MemberPreciseForm(this, exactStart);
     }
@@ -218,9 +218,9 @@ public final class MemberSolution implements ComputedSolution {
 
     /** A member n &gt;= 2 solution started at x0 with a state whose uncertainty is carried by the flow. */
     static MemberSolution started(HierarchyMember member, MemberParameters parameters, SolverSettings settings,
-                                  Complex x0, List<Complex> state, double[] error) {
+                                  Complex x0, List<Complex> state, double[] error, ExactStart precise) {
         member.checkState(state);
-        return new MemberSolution(member, parameters, settings, x0, 0, state, error, null, null);
+        return new MemberSolution(member, parameters, settings, x0, 0, state, error, precise, null);
     }
 
     /**

@@ -95,7 +95,8 @@ public final class MemberSolutionBuilder {
         }
         int n = member.order();
         if (origin != null) {
-            return n == 1 ? fromOrigin() : OriginSolution.startFor(parameters, origin, settings);
+            return n == 1 ? fromOrigin() : OriginSolution.startFor(parameters, exact != null ? exact.origin()
+                    : ExactStart.ofDoubles("origin", Arrays.asList(origin)), settings);
         }
         if (x0 == null) {
             throw new InvalidInputException("x0", "start data are missing: give x0 and the start state");

@@ -11,6 +11,7 @@ import org.tertius.core.InvalidInputException;
 import org.tertius.core.equation.StateProjection;
 import org.tertius.core.number.AnalyticArithmetic;
 import org.tertius.core.number.ComplexArithmetic;
+import org.tertius.core.number.ExactNumber;
 import org.tertius.core.solution.Solution;
 import org.tertius.core.solution.StateEstimate;
 import org.tertius.core.step.SolverSettings;
@@ -41,10 +42,16 @@ public final class OriginSolution {
     private final FrobeniusSeries<Complex> series;
     private final double handover;
     private final double handoverError;
+    /** a11, a12, a21 and m as given exactly, or null (given as doubles: no high-precision runs). */
+    private final List<ExactNumber> exactOrigin;
+    private final ExactNumber exactM;
     private final Map<List<Double>, Solution> rays = new ConcurrentHashMap<>();
     private volatile MemberSolution memberOne;
 
-    private OriginSolution(HierarchyMember member, Complex s, Complex m, Complex[] origin, SolverSettings settings) {
+    private OriginSolution(HierarchyMember member, Complex s, Complex m, Complex[] origin, SolverSettings settings,
+                           List<ExactNumber> exactOrigin, ExactNumber exactM) {
+        this.exactOrigin = exactOrigin;
+        this.exactM = exactM;
         this.member = member;
         this.s = s;
         this.m = m;
@@ -102,14 +109,28 @@ public final class OriginSolution {
                     + " det = -a11^2 - a12 a21 = " + det + ", but it must equal s^2 = " + s.multiply(s)
                     + " (to a relative 1e-10)");
         }
-        return new OriginSolution(HierarchyMember.of(n), s, m, a, settings);
+        return new OriginSolution(HierarchyMember.of(n), s, m, a, settings, null, null);
+    }
+
+    /**
+     * As {@link #create(int, Complex, Complex, Complex, Complex, Complex, SolverSettings)} with m and a_-2(0) given
+     * exactly (decimals, rationals), so that the solution can also be computed to many digits at exact t_n
+     * ({@link #atTime(ExactNumber)}).
+     */
+    public static OriginSolution create(int n, Complex s, ExactNumber m, ExactNumber a11, ExactNumber a12,
+                                        ExactNumber a21, SolverSettings settings) {
+        if (m == null || a11 == null || a12 == null || a21 == null) {
+            throw new InvalidInputException(m == null ? "m" : "origin", "is required");
+        }
+        OriginSolution d = create(n, s, m.toComplex(), a11.toComplex(), a12.toComplex(), a21.toComplex(), settings);
+        return new OriginSolution(d.member, s, d.m, d.origin, settings, List.of(a11, a12, a21), m);
     }
 
     /**
      * The member-n solution at the parameters' t_n started from a_-2(0) = origin (a11, a12, a21) at x = t_n = 0;
      * the lower times must be zero (only there is t_n = 0 a regular singular point of the t_n-flow).
      */
-    static MemberSolution startFor(MemberParameters p, Complex[] origin, SolverSettings settings) {
+    static MemberSolution startFor(MemberParameters p, List<ExactNumber> exactOrigin, SolverSettings settings) {
         int n = p.order();
         for (int j = 2; j < n; j++) {
             if (p.time(j).norm() != 0) {
@@ -118,7 +139,10 @@ public final class OriginSolution {
                         + j + " = " + p.time(j));
             }
         }
-        return create(n, p.s(), p.m(), origin[0], origin[1], origin[2], settings).atTime(p.time(n));
+        OriginSolution o = create(n, p.s(), p.exactTimesAndM().get(n - 1), exactOrigin.get(0), exactOrigin.get(1),
+                exactOrigin.get(2), settings);
+        o.requireNonZero(p.time(n));
+        return o.started(p);
     }
 
     /**
@@ -201,15 +225,43 @@ public final class OriginSolution {
      *     {@link #evaluate(Complex, Complex)})
      */
     public MemberSolution atTime(Complex tn) {
+        requireNonZero(tn);
+        return started(parameters(tn));
+    }
+
+    /**
+     * As {@link #atTime(Complex)} at an exact t_n; if the data were given exactly, the solution can also be computed
+     * to many digits (its state on x = 0 is then carried in arbitrary precision too, {@link OriginPreciseStart}).
+     */
+    public MemberSolution atTime(ExactNumber tn) {
+        requireNonZero(tn.toComplex());
+        ExactNumber[] times = new ExactNumber[member.order() - 1];
+        Arrays.fill(times, ExactNumber.ofInteger(0));
+        times[times.length - 1] = tn;
+        MemberParameters.Builder b = MemberParameters.builder(member.order()).times(times).s(s);
+        return started(exactM != null ? b.m(exactM).build() : b.m(m).build());
+    }
+
+    private void requireNonZero(Complex tn) {
         requireFinite("t_" + member.order(), tn);
         if (tn.norm() == 0) {
             throw new InvalidInputException("t_" + member.order(), "member " + member.order() + " degenerates at t_"
                     + member.order() + " = 0; there the solution is member 1's: use memberOne() or evaluate(x, 0)");
         }
-        MemberParameters p = parameters(tn);
+    }
+
+    /** Member n at the parameters' t_n, started on x = 0; to many digits too if the origin data are given exactly. */
+    private MemberSolution started(MemberParameters p) {
+        Complex tn = p.time(member.order());
         List<Complex> state = new ArrayList<>();
         double[] err = stateOnTheAxis(tn, state);
-        return MemberSolution.started(member, p, settings, Complex.ZERO, state, err);
+        ExactStart precise = null;
+        if (exactOrigin != null) {
+            List<ExactNumber> timesAndM = p.exactTimesAndM();
+            precise = ExactStart.carried(ExactNumber.ofInteger(0), new OriginPreciseStart(this, exactOrigin,
+                    timesAndM.get(timesAndM.size() - 1), timesAndM.get(timesAndM.size() - 2)));
+        }
+        return MemberSolution.started(member, p, settings, Complex.ZERO, state, err, precise);
     }
 
     /** The state on x = 0 at t_n = tn != 0 into {@code state}; returns its error estimates. */
@@ -223,10 +275,7 @@ public final class OriginSolution {
             Arrays.fill(err, e);
             return err;
         }
-        Complex direction = tn.divide(tn.norm());
-        Solution ray = rays.computeIfAbsent(List.of(direction.getReal() + 0.0, direction.getImaginary() + 0.0),
-                k -> startRay(direction));
-        StateEstimate e = ray.evaluate(tn.getReal(), tn.getImaginary());
+        StateEstimate e = ray(tn).evaluate(tn.getReal(), tn.getImaginary());
         for (int i = 0; i < d; i++) {
             state.add(new Complex(e.re(i), e.im(i)));
             err[i] = e.error(i);
@@ -265,6 +314,22 @@ public final class OriginSolution {
         return new PotentialValue(Complex.ZERO, q, err[k] / (n * tn.norm()) + 4 * Math.ulp(1.0) * q.norm());
     }
 
+    /** The double-precision ray of the t_n-flow through tn (|tn| &gt; the handover), grown on demand. */
+    Solution ray(Complex tn) {
+        Complex direction = direction(tn);
+        return rays.computeIfAbsent(List.of(direction.getReal() + 0.0, direction.getImaginary() + 0.0),
+                k -> startRay(direction));
+    }
+
+    /** Where the ray through tn starts: at the handover radius in the direction of tn. */
+    Complex rayStart(Complex tn) {
+        return direction(tn).multiply(handover);
+    }
+
+    private static Complex direction(Complex tn) {
+        return tn.divide(tn.norm());
+    }
+
     private Solution startRay(Complex direction) {
         Complex t0 = direction.multiply(handover);
         Complex[] v = series.value(t0);
@@ -287,8 +352,11 @@ public final class OriginSolution {
         if (one == null) {
             synchronized (this) {
                 if (memberOne == null) {
-                    memberOne = MemberSolution.builder(MemberParameters.builder(1).s(s).m(m).build())
-                            .settings(settings).startAtOrigin(origin[0], origin[1], origin[2]).build();
+                    MemberParameters.Builder p = MemberParameters.builder(1).s(s);
+                    MemberSolutionBuilder b = MemberSolution.builder(exactM != null ? p.m(exactM).build()
+                            : p.m(m).build()).settings(settings);
+                    memberOne = (exactOrigin != null ? b.startAtOrigin(exactOrigin.get(0), exactOrigin.get(1),
+                            exactOrigin.get(2)) : b.startAtOrigin(origin[0], origin[1], origin[2])).build();
                 }
                 one = memberOne;
             }

@@ -92,7 +92,7 @@ class OriginSolutionTest {
             err[i] = mid.error(i);
         }
         MemberSolution moved = MemberSolution.started(o.member(), o.parameters(new Complex(0.8)),
-                SolverSettings.defaults(), new Complex(x), mid.state(), err).withTopTime(t);
+                SolverSettings.defaults(), new Complex(x), mid.state(), err, null).withTopTime(t);
         MemberValue two = moved.evaluate(new Complex(x));
         // route 3: Taylor lines along the real axis
         PotentialValue three = RealRow.of(o, t, 0, x, 1e-14, null).potential(x);

@@ -76,6 +76,19 @@ public final class HighPrecisionSolution {
         return new HighPrecisionSolution(form, digits, progress);
     }
 
+    /**
+     * The solution given by its high-precision form alone, to {@code digits} significant digits: for a stage of a
+     * larger computation that is not itself a {@link ComputedSolution} (for example a flow in another variable that
+     * carries a start state to where a solution begins).
+     *
+     * @throws InvalidInputException as {@link #of(ComputedSolution, int)}
+     */
+    public static HighPrecisionSolution ofForm(HighPrecisionForm form, int digits) {
+        checkDigits(digits);
+        form.requireDigits(digits);
+        return new HighPrecisionSolution(form, digits, null);
+    }
+
     /** Checks a number of digits against [{@value #MIN_DIGITS}, {@value #MAX_DIGITS}]. */
     public static void checkDigits(int digits) {
         if (digits < MIN_DIGITS || digits > MAX_DIGITS) {

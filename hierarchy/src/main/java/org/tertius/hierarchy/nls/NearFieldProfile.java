@@ -6,6 +6,7 @@ import java.util.Map;
 import org.hipparchus.complex.Complex;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.face.InvariantCheck;
+import org.tertius.core.number.ExactNumber;
 import org.tertius.core.number.SurfacePoint;
 import org.tertius.core.piii.Painleve3;
 import org.tertius.core.piii.Painleve3Value;
@@ -57,19 +58,26 @@ public final class NearFieldProfile {
         }
     };
 
-    private NearFieldProfile(double s, double phase, SolverSettings settings) {
+    private NearFieldProfile(double s, ExactNumber exactScale, double phase, SolverSettings settings) {
         this.s = s;
         this.phase = phase;
-        Complex rotation = new Complex(Math.cos(phase), Math.sin(phase));
-        Complex a12 = new Complex(0, s).multiply(rotation);
-        Complex a21 = new Complex(0, s).multiply(rotation.conjugate());
-        this.solution = OriginSolution.create(2, new Complex(s), Complex.ZERO, Complex.ZERO, a12, a21, settings);
+        if (exactScale != null && phase == 0) {
+            // a_-2(0) = (0, i s, i s) exactly: the profile can be computed to many digits
+            ExactNumber is = exactScale.multiply(ExactNumber.parse("s", "i"));
+            ExactNumber zero = ExactNumber.ofInteger(0);
+            this.solution = OriginSolution.create(2, new Complex(s), zero, zero, is, is, settings);
+        } else {
+            Complex rotation = new Complex(Math.cos(phase), Math.sin(phase));
+            Complex a12 = new Complex(0, s).multiply(rotation);
+            Complex a21 = new Complex(0, s).multiply(rotation.conjugate());
+            this.solution = OriginSolution.create(2, new Complex(s), Complex.ZERO, Complex.ZERO, a12, a21, settings);
+        }
         this.smallTime = new NlsTimeSeries(solution.memberOne().parameters());
     }
 
     /** The profile itself: s = 2, phase 0, default solver settings. */
     public static NearFieldProfile standard() {
-        return of(2, 0, SolverSettings.defaults());
+        return of(ExactNumber.ofInteger(2), 0, SolverSettings.defaults());
     }
 
     /**
@@ -79,6 +87,21 @@ public final class NearFieldProfile {
      * @param phase the phase, finite
      */
     public static NearFieldProfile of(double s, double phase, SolverSettings settings) {
+        return of(s, null, phase, settings);
+    }
+
+    /**
+     * As {@link #of(double, double, SolverSettings)} with the scale given exactly (a real decimal or rational): at
+     * phase 0 the origin data (0, i s, i s) are then exact and the profile can be computed to many digits.
+     */
+    public static NearFieldProfile of(ExactNumber s, double phase, SolverSettings settings) {
+        if (s == null || s.toComplex().getImaginary() != 0) {
+            throw new InvalidInputException("s", "the scale of the profile must be a real number, got " + s);
+        }
+        return of(s.toComplex().getReal(), s, phase, settings);
+    }
+
+    private static NearFieldProfile of(double s, ExactNumber exactScale, double phase, SolverSettings settings) {
         if (!(s > 0 && s <= 1e3)) {
             throw new InvalidInputException("s", "the scale of the profile must lie in (0, 1000], got " + s);
         }
@@ -88,7 +111,7 @@ public final class NearFieldProfile {
         if (settings == null) {
             throw new InvalidInputException("settings", "are required");
         }
-        return new NearFieldProfile(s, phase, settings);
+        return new NearFieldProfile(s, exactScale, phase, settings);
     }
 
     public double s() {
