@@ -78,6 +78,10 @@ public final class TableCommand implements Command {
             if (line != null || region.given()) {
                 throw new InvalidInputException("--plane", "give one of --line, --grid, --log-strip and --plane");
             }
+            if (precision.given(f)) {
+                throw new InvalidInputException("--digits", "the (x, t_n) plane is tabulated in double precision; for"
+                        + " many digits take table --line (or eval) at one --times");
+            }
             return planeTable();
         }
         String lineSpec = line != null ? line : (region.given() ? null : f.get("line"));

@@ -51,5 +51,11 @@ class NearFieldDigitsCommandLineTest {
         assertEquals(2, r.status);
         assertTrue(r.err.startsWith("tertius: --digits: this solution's start is not known exactly"), r.err);
         assertEquals("", r.out);
+        CommandLineToolTest.Run plane = CommandLineToolTest.run("table", "--profile", "nearfield", "--plane",
+                "-1:1:3,-1:1:3", "--digits", "20");
+        assertEquals(2, plane.status);
+        assertTrue(plane.err.startsWith("tertius: --digits: the (x, t_n) plane is tabulated in double precision"),
+                plane.err);
+        assertEquals("", plane.out);
     }
 }
