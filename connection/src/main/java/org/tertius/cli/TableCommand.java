@@ -5,7 +5,6 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
 import org.apache.commons.cli.Options;
-import org.hipparchus.complex.Complex;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.TertiusException;
 import org.tertius.core.face.ComputedSolution;
@@ -153,8 +152,8 @@ public final class TableCommand implements Command {
         String signature = "tertius table " + solution.describe() + " plane=" + plane.plane;
         List<String> comments = List.of("member " + o.member().order() + " of the Painleve III hierarchy started at x = "
                 + t + " = 0, s = " + o.s() + ", m = " + o.m() + ", a_-2(0) = " + o.originData(),
-                "q over the plane of real x and real " + t + "; err: its estimated absolute error");
-        try (TableWriter w = TableWriter.open(stdout, out, resume, signature, comments, "x," + t + ",q_re,q_im,err");
+                "q over the plane of real x and real " + t + "; err and q_err: its estimated absolute error");
+        try (TableWriter w = TableWriter.open(stdout, out, resume, signature, comments, ValueRows.planeColumns(t));
              Progress progress = new Progress("table")) {
             long skip = w.existingRows();
             int j0 = (int) (skip / g.nx());
@@ -165,9 +164,7 @@ public final class TableCommand implements Command {
                         if ((long) (j0 + j) * g.nx() + i < skip) {
                             continue;
                         }
-                        Complex q = r.q(j, i);
-                        w.row(String.format(Locale.ROOT, "%.17g,%.17g,%.17g,%.17g,%.3e", g.re(i), g.im(j0 + j),
-                                q.getReal(), q.getImaginary(), r.error(j, i)));
+                        w.row(ValueRows.planeRow(g.re(i), g.im(j0 + j), r.q(j, i), r.error(j, i)));
                     }
                     w.flush();
                 }

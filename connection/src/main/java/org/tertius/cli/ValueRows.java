@@ -2,6 +2,7 @@ package org.tertius.cli;
 
 import java.util.List;
 import java.util.Locale;
+import org.hipparchus.complex.Complex;
 import org.tertius.core.face.ComputedSolution;
 import org.tertius.core.face.SolutionValue;
 import org.tertius.core.highprecision.HighPrecisionValue;
@@ -9,10 +10,11 @@ import org.tertius.core.number.SurfacePoint;
 
 /**
  * The one place that writes value rows, for any solution, keyed by its variable and value names: in double
- * precision {@code z_re,z_im,sheet,w_re,w_im,dw_re,dw_im,err} for Painleve III and
- * {@code x_re,x_im,sheet,q_re,q_im,r_re,r_im,dq_re,dq_im,dr_re,dr_im,err,integrals} for a hierarchy member (err the
- * largest estimated absolute error of the values; integrals ok or drift when the solution keeps invariants); with
- * {@code --digits} the values as decimal strings and the estimated number of correct digits in place of err.
+ * precision {@code z_re,z_im,sheet,w_re,w_im,dw_re,dw_im,err,w_err,dw_err} for Painleve III and
+ * {@code x_re,x_im,sheet,q_re,q_im,r_re,r_im,dq_re,dq_im,dr_re,dr_im,err,q_err,r_err,dq_err,dr_err,integrals} for a
+ * hierarchy member (err the largest estimated absolute error of the values, NAME_err that of value NAME; integrals
+ * ok or drift when the solution keeps invariants); with {@code --digits} the values as decimal strings and the
+ * estimated numbers of correct digits in place of the errors ({@code digits}, the smallest, and NAME_digits).
  */
 final class ValueRows {
     private final ComputedSolution solution;
@@ -30,6 +32,9 @@ final class ValueRows {
             b.append(',').append(v).append("_re,").append(v).append("_im");
         }
         b.append(",err");
+        for (String v : solution.valueNames()) {
+            b.append(',').append(v).append("_err");
+        }
         if (invariants) {
             b.append(",integrals");
         }
@@ -42,7 +47,11 @@ final class ValueRows {
         for (String v : solution.valueNames()) {
             b.append(',').append(v).append("_re,").append(v).append("_im");
         }
-        return b.append(",digits").toString();
+        b.append(",digits");
+        for (String v : solution.valueNames()) {
+            b.append(',').append(v).append("_digits");
+        }
+        return b.toString();
     }
 
     private String coordinateColumns() {
@@ -53,13 +62,13 @@ final class ValueRows {
     /** The comment lines above the rows: the equation, the method, what err means. */
     List<String> comments() {
         return List.of(solution.equationDescription(), solution.methodDescription(), "err: " + errMeaning()
-                + (invariants ? "; integrals: first integrals within their estimates (ok) or drifting" : ""));
+                + "; NAME_err: the estimated absolute error of value NAME alone" + (invariants ? "; integrals: first integrals within their estimates (ok) or drifting" : ""));
     }
 
     /** The comment lines above high-precision rows. */
     List<String> preciseComments(int digits) {
-        return List.of(solution.equationDescription() + ", " + digits + " digits; digits: estimated correct"
-                + " significant digits of " + labels());
+        return List.of(solution.equationDescription() + ", " + digits + " digits; digits: the smallest estimated"
+                + " number of correct significant digits of " + labels() + "; NAME_digits: that of value NAME alone");
     }
 
     private String errMeaning() {
@@ -93,6 +102,9 @@ final class ValueRows {
             b.append(String.format(Locale.ROOT, ",%.17g,%.17g", v.value(i).getReal(), v.value(i).getImaginary()));
         }
         b.append(String.format(Locale.ROOT, ",%.3e", v.maxError()));
+        for (int i = 0; i < v.size(); i++) {
+            b.append(String.format(Locale.ROOT, ",%.3e", v.error(i)));
+        }
         if (invariants) {
             b.append(v.checksWithinEstimate() ? ",ok" : ",drift");
         }
@@ -111,10 +123,24 @@ final class ValueRows {
             b.append(",nan,nan");
         }
         b.append(",inf");
+        for (int i = 0; i < solution.valueNames().size(); i++) {
+            b.append(",inf");
+        }
         if (invariants) {
             b.append(',');
         }
         return b.toString();
+    }
+
+    /** The column line of a table over the plane of real x and real time t (one value, q). */
+    static String planeColumns(String time) {
+        return "x," + time + ",q_re,q_im,err,q_err";
+    }
+
+    /** One row over the plane of real x and real time t: q and its error (err and q_err alike). */
+    static String planeRow(double x, double t, Complex q, double error) {
+        return String.format(Locale.ROOT, "%.17g,%.17g,%.17g,%.17g,%.3e,%.3e", x, t, q.getReal(), q.getImaginary(),
+                error, error);
     }
 
     /** One high-precision row. */
@@ -126,6 +152,10 @@ final class ValueRows {
             String[] parts = v.parts(i);
             b.append(',').append(parts[0]).append(',').append(parts[1]);
         }
-        return b.append(',').append(v.correctDigits()).toString();
+        b.append(',').append(v.correctDigits());
+        for (int i = 0; i < v.size(); i++) {
+            b.append(',').append(v.correctDigits(i));
+        }
+        return b.toString();
     }
 }

@@ -61,25 +61,28 @@ class MemberCommandLineTest {
         CommandLineToolTest.Run r = run(with(with(new String[] {"table"}, MEMBER1), "--grid", "0.5:1.5:5,-0.5:0.5:3"));
         assertEquals(0, r.status, r.err);
         List<String> rows = rows(r.out);
-        assertEquals("x_re,x_im,sheet,q_re,q_im,r_re,r_im,dq_re,dq_im,dr_re,dr_im,err,integrals", rows.get(0));
+        assertEquals("x_re,x_im,sheet,q_re,q_im,r_re,r_im,dq_re,dq_im,dr_re,dr_im,err,q_err,r_err,dq_err,dr_err,"
+                + "integrals", rows.get(0));
         assertEquals(1 + 15, rows.size());
     }
 
     @Test
     void memberDigitsAgreeWithALongerRunToTheClaimedDigits() {
         // the 60-digit run serves as the reference for the 50-digit one (internal consistency, common practice)
-        String[] a = rows(run(with(with(new String[] {"eval"}, MEMBER1), "--at", "1.5+0.5i", "--digits", "50")).out)
-                .get(1).split(",");
-        String[] b = rows(run(with(with(new String[] {"eval"}, MEMBER1), "--at", "1.5+0.5i", "--digits", "60")).out)
-                .get(1).split(",");
-        int claimed = Integer.parseInt(a[a.length - 1]);
-        assertEquals(50, claimed);
-        for (int k = 3; k < a.length - 1; k++) {
-            BigDecimal x = new BigDecimal(a[k]);
-            BigDecimal y = new BigDecimal(b[k]);
-            double scale = Math.max(1e-300, y.abs().doubleValue());
-            double rel = x.subtract(y).abs().doubleValue() / Math.max(scale, 1e-3);
-            assertTrue(rel <= 1e-49, "column " + k + ": " + a[k] + " vs " + b[k]);
+        CsvRows a = CsvRows.of(run(with(with(new String[] {"eval"}, MEMBER1), "--at", "1.5+0.5i", "--digits", "50"))
+                .out);
+        CsvRows b = CsvRows.of(run(with(with(new String[] {"eval"}, MEMBER1), "--at", "1.5+0.5i", "--digits", "60"))
+                .out);
+        assertEquals(50, (int) a.number(0, "digits"));
+        for (String name : List.of("q", "r", "dq", "dr")) {
+            assertEquals(50, (int) a.number(0, name + "_digits"), name);
+            for (String part : List.of("_re", "_im")) {
+                BigDecimal x = new BigDecimal(a.text(0, name + part));
+                BigDecimal y = new BigDecimal(b.text(0, name + part));
+                double scale = Math.max(1e-300, y.abs().doubleValue());
+                double rel = x.subtract(y).abs().doubleValue() / Math.max(scale, 1e-3);
+                assertTrue(rel <= 1e-49, name + part + ": " + x + " vs " + y);
+            }
         }
     }
 

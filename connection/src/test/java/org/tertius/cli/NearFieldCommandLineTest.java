@@ -28,20 +28,18 @@ class NearFieldCommandLineTest {
                 "-2:2:5,-1:1:5");
         assertEquals(0, r.status, r.err);
         List<String> rows = rows(r.out);
-        assertEquals("x,t_2,q_re,q_im,err", rows.get(0));
+        assertEquals("x,t_2,q_re,q_im,err,q_err", rows.get(0));
         assertEquals(1 + 25, rows.size());
         // Psi(0, 0) = 4 (Bilman, Ling and Miller, Duke Math. J. 169 (2020), from memory)
-        String[] centre = rows.get(1 + 2 * 5 + 2).split(",");
-        assertEquals(4.0, Double.parseDouble(centre[2]), 1e-12);
+        CsvRows table = CsvRows.of(r.out);
+        assertEquals(4.0, table.number(2 * 5 + 2, "q_re"), 1e-12);
         // Psi(-X, T) = Psi(X, T) and Psi(X, -T) = conj Psi(X, T) (derived in hierarchy/README.md): exact in the
         // table, since the rows and columns are copied by these symmetries
         for (int j = 0; j < 5; j++) {
             for (int i = 0; i < 5; i++) {
-                String[] a = rows.get(1 + j * 5 + i).split(",");
-                String[] mirror = rows.get(1 + j * 5 + (4 - i)).split(",");
-                String[] conjugate = rows.get(1 + (4 - j) * 5 + i).split(",");
-                assertEquals(a[2], mirror[2]);
-                assertEquals(Double.parseDouble(a[3]), -Double.parseDouble(conjugate[3]), 0.0);
+                int a = j * 5 + i;
+                assertEquals(table.text(a, "q_re"), table.text(j * 5 + (4 - i), "q_re"));
+                assertEquals(table.number(a, "q_im"), -table.number((4 - j) * 5 + i, "q_im"), 0.0);
             }
         }
     }
@@ -51,16 +49,14 @@ class NearFieldCommandLineTest {
         CommandLineToolTest.Run r = CommandLineToolTest.run("eval", "--profile", "nearfield", "--times", "0.5", "--at",
                 "0,1.5", "--integrals", "--nls-residual", "0.01");
         assertEquals(0, r.status, r.err);
-        List<String> rows = rows(r.out);
-        assertEquals(3, rows.size());
-        for (String row : rows.subList(1, 3)) {
-            String[] f = row.split(",");
+        CsvRows rows = CsvRows.of(r.out);
+        assertEquals(2, rows.size());
+        for (int i = 0; i < rows.size(); i++) {
+            String row = String.join(",", rows.row(i));
             // det a_-2 = s^2 = 4 within 1e-12 (first integral, hierarchy/README.md)
-            assertEquals(4.0, Double.parseDouble(f[13]), 1e-12, row);
+            assertEquals(4.0, rows.number(i, "integral1_re"), 1e-12, row);
             // i q_t + q_xx/2 + |q|^2 q = 0 up to the O(h^2) error of the differences (h = 0.01, terms of size ~10)
-            double residual = Double.parseDouble(f[f.length - 2]);
-            double scale = Double.parseDouble(f[f.length - 1]);
-            assertTrue(residual < 1e-3 * scale, row);
+            assertTrue(rows.number(i, "nls_residual") < 1e-3 * rows.number(i, "nls_scale"), row);
         }
     }
 
@@ -80,9 +76,8 @@ class NearFieldCommandLineTest {
         CommandLineToolTest.Run r = CommandLineToolTest.run("eval", "--member", "1", "--s", "2", "--m", "0",
                 "--origin", "0,2i,2i", "--at", "1", "--painleve3");
         assertEquals(0, r.status, r.err);
-        String[] f = rows(r.out).get(1).split(",");
         // z = 4 sqrt(s x) = 4 sqrt(2) at x = 1 (the map of hierarchy/README.md)
-        assertEquals(4 * Math.sqrt(2), Double.parseDouble(f[13]), 1e-14);
+        assertEquals(4 * Math.sqrt(2), CsvRows.of(r.out).number(0, "z_re"), 1e-14);
     }
 
     @ParameterizedTest

@@ -9,11 +9,10 @@ import static org.quicktheories.generators.SourceDSL.integers;
 
 import java.io.PrintWriter;
 import java.io.StringWriter;
-import java.util.List;
 import java.util.Map;
-import java.util.stream.Collectors;
 import org.hipparchus.complex.Complex;
 import org.junit.jupiter.api.Test;
+import org.tertius.cli.CsvRows;
 import org.tertius.cli.Main;
 import org.tertius.connection.family.Families;
 import org.tertius.connection.infinity.AlgebraicExpansion;
@@ -146,25 +145,24 @@ class AlgebraicExpansionTest {
     void commandLineEvaluatesTheAlgebraicFamily() {
         String[] exact = {"eval", "--alpha", "0", "--beta", "0", "--gamma", "1", "--delta", "-1", "--family",
             "algebraic", "--background", "root0", "--at", "3"};
-        String[] f = row(exact);
-        assertEquals(1, Double.parseDouble(f[3]), 1e-13);
-        assertEquals(0, Double.parseDouble(f[5]), 1e-13);
+        CsvRows f = rows(exact);
+        assertEquals(1, f.number(0, "w_re"), 1e-13);
+        assertEquals(0, f.number(0, "dw_re"), 1e-13);
         String[] gen = {"eval", "--alpha", "1", "--beta", "-1/2", "--gamma", "1", "--delta", "-1", "--family",
             "algebraic", "--background", "-1", "--at", "20"};
-        String[] g = row(gen);
+        CsvRows g = rows(gen);
         Painleve3 eq = Painleve3.of(1, -0.5, 1, -1);
         Painleve3Value ref = Families.create(eq, "algebraic", Map.of("c", "-1"), SolverSettings.defaults())
                 .evaluate(SurfacePoint.of(new Complex(20), 0));
-        assertEquals(ref.w().getReal(), Double.parseDouble(g[3]), 1e-14);
-        assertEquals(-1 - 0.5 / 4 / 20, Double.parseDouble(g[3]), 1e-3, "w ~ c + a_1/x");
+        assertEquals(ref.w().getReal(), g.number(0, "w_re"), 1e-14);
+        assertEquals(-1 - 0.5 / 4 / 20, g.number(0, "w_re"), 1e-3, "w ~ c + a_1/x");
     }
 
-    private static String[] row(String[] args) {
+    private static CsvRows rows(String[] args) {
         StringWriter out = new StringWriter();
         StringWriter err = new StringWriter();
         int status = Main.execute(args, new PrintWriter(out, true), new PrintWriter(err, true));
         assertEquals(0, status, err.toString());
-        List<String> rows = out.toString().lines().filter(l -> !l.startsWith("#")).collect(Collectors.toList());
-        return rows.get(1).split(",");
+        return CsvRows.of(out.toString());
     }
 }

@@ -9,6 +9,7 @@ import java.io.StringWriter;
 import java.util.Map;
 import org.hipparchus.complex.Complex;
 import org.junit.jupiter.api.Test;
+import org.tertius.cli.CsvRows;
 import org.tertius.cli.Main;
 import org.tertius.connection.family.Families;
 import org.tertius.connection.infinity.OscillatingExpansion;
@@ -135,12 +136,14 @@ class OscillatingFamilyTest {
             "--family", "oscillating", "--amplitude-infinity", "0.8", "--phase", "-0.3", "--at", "33"},
                 new PrintWriter(out, true), new PrintWriter(err, true));
         assertEquals(0, status, err.toString());
-        // the row z_re,z_im,sheet,w_re,w_im,...: 17 significant digits give the double back exactly
-        String[] row = out.toString().lines().filter(l -> l.startsWith("33")).findFirst().orElseThrow().split(",");
+        // the printed decimals give the double back exactly
+        CsvRows rows = CsvRows.of(out.toString());
         Painleve3Value b = Families.create(EQ, "oscillating", Map.of("A", "0.8", "phi", "-0.3"), SETTINGS)
                 .evaluate(SurfacePoint.of(33, 0));
-        assertEquals(b.w().getReal(), Double.parseDouble(row[3]), 0);
-        assertEquals(b.w().getImaginary(), Double.parseDouble(row[4]), 0);
+        assertEquals(33, rows.number(0, "z_re"), 0);
+        assertEquals(b.w().getReal(), rows.number(0, "w_re"), 0);
+        assertEquals(b.w().getImaginary(), rows.number(0, "w_im"), 0);
+        assertEquals(b.errW(), rows.number(0, "w_err"), 1e-3 * b.errW());
     }
 
     /** Bad input: amplitude beyond the range, another equation, start abscissa too small, complex or missing data. */

@@ -15,17 +15,18 @@ final class DigitEstimate {
     }
 
     /**
-     * Estimated correct significant digits of every value of {@code accurate} (relative to each value's modulus), at
-     * most {@code digits}.
+     * Estimated correct significant digits of each value of {@code accurate} (relative to its modulus), at most
+     * {@code digits}: the rule of the class comment with the difference of that value alone.
      */
-    static int correctDigits(Outcome accurate, int accurateDigits, Outcome cheap, int cheapDigits, int digits) {
-        double log10Diff = Double.NEGATIVE_INFINITY;
-        for (int k = 0; k < accurate.values.length; k++) {
-            log10Diff = Math.max(log10Diff, relativeDifference(accurate.ctx, accurate.values[k], cheap.values[k]));
+    static int[] correctDigitsEach(Outcome accurate, int accurateDigits, Outcome cheap, int cheapDigits, int digits) {
+        int[] out = new int[accurate.values.length];
+        for (int k = 0; k < out.length; k++) {
+            double log10Diff = relativeDifference(accurate.ctx, accurate.values[k], cheap.values[k]);
+            double log10Amp = Math.max(0, log10Diff + cheapDigits - Math.log10(cheap.steps + 1.0));
+            double log10Err = 1 + Math.log10(accurate.steps + 1.0) - accurateDigits + log10Amp;
+            out[k] = (int) Math.max(0, Math.min(digits, Math.floor(-log10Err)));
         }
-        double log10Amp = Math.max(0, log10Diff + cheapDigits - Math.log10(cheap.steps + 1.0));
-        double log10Err = 1 + Math.log10(accurate.steps + 1.0) - accurateDigits + log10Amp;
-        return (int) Math.max(0, Math.min(digits, Math.floor(-log10Err)));
+        return out;
     }
 
     /** log10 of |a - b| / |a| (or of |a - b| when a = 0), a at the precision of c. */

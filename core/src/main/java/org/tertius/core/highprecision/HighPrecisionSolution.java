@@ -226,9 +226,10 @@ public final class HighPrecisionSolution {
             result = new ArrayList<>();
             for (int i = 0; i < accurate.size(); i++) {
                 Outcome a = accurate.get(i);
-                int correct = DigitEstimate.correctDigits(a, accurateDigits, cheap.get(i), cheapDigits, digits);
-                worst = Math.min(worst, correct);
-                result.add(new HighPrecisionValue(points.get(i), names, a.ctx, a.values, digits, correct));
+                int[] each = DigitEstimate.correctDigitsEach(a, accurateDigits, cheap.get(i), cheapDigits, digits);
+                HighPrecisionValue v = new HighPrecisionValue(points.get(i), names, a.ctx, a.values, digits, each);
+                worst = Math.min(worst, v.correctDigits());
+                result.add(v);
             }
             if (worst >= digits) {
                 break;

@@ -20,16 +20,22 @@ public final class HighPrecisionValue {
     private final MpContext ctx;
     private final MpComplex[] values;
     private final int requestedDigits;
+    private final int[] correctDigitsEach;
     private final int correctDigits;
 
     HighPrecisionValue(ExactPoint point, List<String> names, MpContext ctx, MpComplex[] values, int requestedDigits,
-                       int correctDigits) {
+                       int[] correctDigitsEach) {
         this.point = point;
         this.names = names;
         this.ctx = ctx;
         this.values = values.clone();
         this.requestedDigits = requestedDigits;
-        this.correctDigits = correctDigits;
+        this.correctDigitsEach = correctDigitsEach.clone();
+        int least = requestedDigits;
+        for (int d : correctDigitsEach) {
+            least = Math.min(least, d);
+        }
+        this.correctDigits = least;
     }
 
     /** The point, exactly as given. */
@@ -73,6 +79,14 @@ public final class HighPrecisionValue {
      */
     public int correctDigits() {
         return correctDigits;
+    }
+
+    /**
+     * The estimated number of correct significant digits of value i (relative to its modulus), at most the requested
+     * number; the smallest of them is {@link #correctDigits()}.
+     */
+    public int correctDigits(int i) {
+        return correctDigitsEach[i];
     }
 
     /**
