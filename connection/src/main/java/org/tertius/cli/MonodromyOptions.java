@@ -88,6 +88,14 @@ final class MonodromyOptions implements OptionGroup {
         return out;
     }
 
+    /** Refuses --digits for a selection by monodromy data (its start data are found in double precision). */
+    void refuseDigits(boolean digits) {
+        if (digits && given()) {
+            throw new InvalidInputException("--digits", "does not apply to a solution selected by monodromy data: the"
+                    + " inverse monodromy map finds its start data in double precision");
+        }
+    }
+
     /** The selection in one line (for table signatures; empty without one). */
     String describe() {
         if (!given()) {
@@ -184,7 +192,7 @@ final class MonodromyOptions implements OptionGroup {
         double worstRelative = 0;
         for (int i = 0; i < found.state().size(); i++) {
             Complex v = found.state().get(i);
-            state.append(String.format(Locale.ROOT, " %s%.17g%+.17gi +- %.2e", i == 0 ? "" : ", ", v.getReal(),
+            state.append(String.format(Locale.ROOT, "%s%.17g%+.17gi +- %.2e", i == 0 ? " " : ", ", v.getReal(),
                     v.getImaginary(), found.stateError(i)));
             worstRelative = Math.max(worstRelative, found.stateError(i) / Math.max(1, v.norm()));
         }

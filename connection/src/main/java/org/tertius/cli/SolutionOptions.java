@@ -164,6 +164,13 @@ public final class SolutionOptions implements OptionGroup {
         return monodromy.notes();
     }
 
+    /** The comment lines followed by the notes. */
+    List<String> withNotes(List<String> comments) {
+        List<String> all = new ArrayList<>(comments);
+        all.addAll(notes());
+        return all;
+    }
+
     /** A canonical one-line description of the problem (for table signatures). */
     String describe() {
         file();
