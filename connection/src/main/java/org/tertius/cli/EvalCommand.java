@@ -53,6 +53,7 @@ public final class EvalCommand implements Command {
     @Override
     public int run(PrintWriter out, PrintWriter err) {
         ProblemFile f = solution.file();
+        solution.monodromy.refuseDigits(precision.given(f));
         String targets = at != null ? at : f.get("at");
         int k = solution.sheet(sheet);
         checks.check(solution);
@@ -68,7 +69,7 @@ public final class EvalCommand implements Command {
             WorkLimits.checkPrecise("--at", points, precision.digits);
             try (Progress progress = new Progress("eval")) {
                 HighPrecisionSolution hp = precision.solution(s, progress);
-                for (String c : rows.preciseComments(hp.digits())) {
+                for (String c : solution.withNotes(rows.preciseComments(hp.digits()))) {
                     out.println("# " + c);
                 }
                 out.println(rows.preciseColumns());
@@ -81,7 +82,7 @@ public final class EvalCommand implements Command {
         }
         List<SurfacePoint> points = Targets.list("--at", targets, k, s.coordinate());
         OriginSolution plane = member == null ? null : solution.memberPlane();
-        for (String c : rows.comments()) {
+        for (String c : solution.withNotes(rows.comments())) {
             out.println("# " + c);
         }
         if (member != null) {

@@ -91,6 +91,7 @@ public final class FieldCommand implements Command {
         OutputFile.checkWritable("--out", out);
         int k = solution.sheet(region.sheet);
         ComputedSolution s = solution.solution();
+        solution.notes().forEach(n -> err.println("tertius: " + n));
         if (lineSpec != null) {
             return linePlot(s, Targets.line("--line", lineSpec, k, s.coordinate()), wh, err);
         }

@@ -29,7 +29,7 @@ public final class Main {
             + " fields, connection problems and solution scans, with error estimates.";
 
     /** The commands in the order of the help text. */
-    static final List<String> COMMANDS = List.of("eval", "table", "field", "poles", "describe", "connect", "scan",
+    static final List<String> COMMANDS = List.of("eval", "table", "field", "poles", "monodromy", "describe", "connect", "scan",
             "merge", "demo");
 
     private Main() {
@@ -46,6 +46,8 @@ public final class Main {
                 return new FieldCommand();
             case "poles":
                 return new PolesCommand();
+            case "monodromy":
+                return new MonodromyCommand();
             case "describe":
                 return new DescribeCommand();
             case "connect":

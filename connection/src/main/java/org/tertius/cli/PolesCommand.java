@@ -62,6 +62,7 @@ public final class PolesCommand implements Command {
             OutputFile.checkWritable("--out", out);
         }
         ComputedSolution s = solution.solution();
+        solution.notes().forEach(n -> err.println("tertius: " + n));
         Grid g = region.grid(gridSpec, solution.sheet(region.sheet), s.coordinate());
         String note = RegionOptions.branchPointNote(g, s.coordinate());
         if (note != null) {

@@ -24,7 +24,8 @@ public final class SolutionOptions implements OptionGroup {
     final SolverOptions solver = new SolverOptions();
     final FamilyOptions family = new FamilyOptions();
     final MemberOptions member = new MemberOptions();
-    private final List<OptionGroup> parts = List.of(equation, start, solver, family, member);
+    final MonodromyOptions monodromy = new MonodromyOptions();
+    private final List<OptionGroup> parts = List.of(equation, start, solver, family, member, monodromy);
 
     private ProblemFile file;
 
@@ -70,6 +71,7 @@ public final class SolutionOptions implements OptionGroup {
             return memberSolution();
         }
         refuse("without --member (they set a hierarchy member)", member.optionsGiven());
+        refuse("without --member (monodromy data select a hierarchy member)", monodromy.optionsGiven());
         return painleve3();
     }
 
@@ -80,7 +82,7 @@ public final class SolutionOptions implements OptionGroup {
             throw new InvalidInputException("--member", "a hierarchy member is required here");
         }
         refuseForMember();
-        return member.solution(solver.settings());
+        return monodromy.given() ? monodromy.solution(member, solver.settings()) : member.solution(solver.settings());
     }
 
     private void refuseForMember() {
@@ -157,11 +159,24 @@ public final class SolutionOptions implements OptionGroup {
         }
     }
 
+    /** What building the solution found out (a selection by monodromy data), one line each. */
+    List<String> notes() {
+        return monodromy.notes();
+    }
+
+    /** The comment lines followed by the notes. */
+    List<String> withNotes(List<String> comments) {
+        List<String> all = new ArrayList<>(comments);
+        all.addAll(notes());
+        return all;
+    }
+
     /** A canonical one-line description of the problem (for table signatures). */
     String describe() {
         file();
         if (member.given()) {
-            return member.describe() + " tol=" + solver.settings().tolerance() + " order=" + solver.settings().order();
+            return member.describe() + monodromy.describe() + " tol=" + solver.settings().tolerance() + " order="
+                    + solver.settings().order();
         }
         String[] eq = equation.texts();
         return "alpha=" + eq[0] + " beta=" + eq[1] + " gamma=" + eq[2] + " delta=" + eq[3]

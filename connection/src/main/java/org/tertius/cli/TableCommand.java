@@ -73,6 +73,7 @@ public final class TableCommand implements Command {
         this.stdout = stdout;
         this.console = console;
         ProblemFile f = solution.file();
+        solution.monodromy.refuseDigits(precision.given(f));
         if (plane.given()) {
             if (line != null || region.given()) {
                 throw new InvalidInputException("--plane", "give one of --line, --grid, --log-strip and --plane");
@@ -116,7 +117,8 @@ public final class TableCommand implements Command {
         String signature = "tertius table " + solution.describe() + (lineSpec != null ? " line=" + lineSpec
                 : " grid=" + gridSpec + " log-strip=" + region.logStrip) + " sheet=" + k;
         int status;
-        try (TableWriter w = TableWriter.open(stdout, out, resume, signature, rows.comments(), rows.columns());
+        try (TableWriter w = TableWriter.open(stdout, out, resume, signature, solution.withNotes(rows.comments()),
+                rows.columns());
              Progress progress = new Progress("table")) {
             // on Ctrl-C the rows computed so far reach the file
             Thread hook = new Thread(w::flushQuietly);
@@ -180,8 +182,8 @@ public final class TableCommand implements Command {
         String signature = "tertius table " + solution.describe() + " line=" + lineSpec + " sheet=" + k
                 + " digits=" + precision.digits;
         try (Progress progress = new Progress("table");
-             TableWriter w = TableWriter.open(stdout, out, resume, signature, rows.preciseComments(precision.digits),
-                     rows.preciseColumns())) {
+             TableWriter w = TableWriter.open(stdout, out, resume, signature,
+                     solution.withNotes(rows.preciseComments(precision.digits)), rows.preciseColumns())) {
             HighPrecisionSolution hp = precision.solution(s, progress);
             for (int i = (int) w.existingRows(); i < points.size(); i++) {
                 w.row(rows.row(hp.evaluate(points.get(i))));
