@@ -8,6 +8,7 @@ import org.hipparchus.complex.Complex;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.number.AnalyticArithmetic;
 import org.tertius.core.number.ComplexArithmetic;
+import org.tertius.core.number.ExactNumber;
 import org.tertius.core.number.MpArithmetic;
 import org.tertius.core.number.MpComplex;
 import org.tertius.core.piii.Painleve3Value;
@@ -164,6 +165,16 @@ public final class BacklundChain {
      * @throws InvalidInputException where a step is singular or does not apply
      */
     public PreciseValue apply(ParameterSet p, PreciseValue v) {
+        return apply(p, v, null);
+    }
+
+    /**
+     * As {@link #apply(ParameterSet, PreciseValue)} at the point z given exactly (null: the double point of the
+     * value).
+     *
+     * @throws InvalidInputException where a step is singular or does not apply
+     */
+    public PreciseValue apply(ParameterSet p, PreciseValue v, ExactNumber exactZ) {
         trail(p);
         long digits = Math.max(20, Math.min(100000, Math.max(v.w().precision(), v.dw().precision()) + 10));
         MpArithmetic ar = new MpArithmetic(Math.min(digits, 100000));
@@ -171,7 +182,8 @@ public final class BacklundChain {
         double ln10 = Math.log(10);
         Tracked<MpComplex> w = new Tracked<>(ar.context().fromApcomplex(v.w()), ar.context().fromApcomplex(v.dw()),
                 v.log10ErrorW() * ln10, v.log10ErrorDw() * ln10);
-        MpComplex z = ar.of(v.point().re(), v.point().im());
+        MpComplex z = exactZ == null ? ar.of(v.point().re(), v.point().im())
+                : Conversions.of(ar, Conversions.exact(exactZ));
         Tracked<MpComplex> r = map(ops, p, z, w);
         Apcomplex wi = ar.context().toApcomplex(r.value);
         Apcomplex dwi = ar.context().toApcomplex(r.derivative);

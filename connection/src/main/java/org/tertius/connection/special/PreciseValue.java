@@ -87,10 +87,31 @@ public record PreciseValue(SurfacePoint point, Apcomplex w, Apcomplex dw, double
         if (lg == Double.NEGATIVE_INFINITY) {
             return "0";
         }
+        String[] p = parts(x, digits);
+        return p[0] + (p[1].startsWith("-") ? p[1] : "+" + p[1]) + "i";
+    }
+
+    /**
+     * The real and imaginary parts of x with {@code digits} significant digits relative to its modulus (both to
+     * the same absolute resolution), as plain decimals or in scientific notation as Apfloat writes them.
+     */
+    public static String[] parts(Apcomplex x, long digits) {
+        double lg = log10Abs(x);
+        if (lg == Double.NEGATIVE_INFINITY) {
+            return new String[] {"0", "0"};
+        }
         long exponent = (long) Math.floor(lg);
-        String re = part(x.real(), digits, exponent);
-        String im = part(x.imag(), digits, exponent);
-        return re + (im.startsWith("-") ? im : "+" + im) + "i";
+        return new String[] {part(x.real(), digits, exponent), part(x.imag(), digits, exponent)};
+    }
+
+    /**
+     * The estimated correct significant digits of the pair (the smaller of w's and w''s; an exactly known zero
+     * w', as for a constant solution, does not count).
+     */
+    public long correctDigits() {
+        boolean exactZero = dw.real().signum() == 0 && dw.imag().signum() == 0
+                && log10ErrorDw == Double.NEGATIVE_INFINITY;
+        return exactZero ? correctDigitsW() : Math.min(correctDigitsW(), correctDigitsDw());
     }
 
     /** A part rounded to the absolute position 10^(exponent - digits + 1). */
