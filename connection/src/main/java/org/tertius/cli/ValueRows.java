@@ -2,6 +2,8 @@ package org.tertius.cli;
 
 import java.util.List;
 import java.util.Locale;
+import org.apfloat.Apcomplex;
+import org.tertius.connection.special.PreciseValue;
 import org.tertius.core.face.ComputedSolution;
 import org.tertius.core.face.SolutionValue;
 import org.tertius.core.highprecision.HighPrecisionValue;
@@ -115,6 +117,18 @@ final class ValueRows {
             b.append(',');
         }
         return b.toString();
+    }
+
+    /** One row of a value computed directly to {@code digits} digits (a closed form, a Backlund image). */
+    String row(PreciseValue v, int digits) {
+        SurfacePoint p = v.point();
+        StringBuilder b = new StringBuilder();
+        b.append(p.re()).append(',').append(p.im()).append(',').append(p.sheet());
+        for (Apcomplex x : new Apcomplex[] {v.w(), v.dw()}) {
+            String[] parts = PreciseValue.parts(x, digits);
+            b.append(',').append(parts[0]).append(',').append(parts[1]);
+        }
+        return b.append(',').append(Math.min(digits, v.correctDigits())).toString();
     }
 
     /** One high-precision row. */

@@ -135,6 +135,20 @@ public final class BacklundChain {
         return b.toString();
     }
 
+    /**
+     * The parameter bookkeeping on one line: {@code (alpha = 1, beta = ..) -T1-> (alpha = 3, ..) -S2-> (..)}.
+     *
+     * @throws InvalidInputException if a step does not apply to the parameters it meets
+     */
+    public String trailText(ParameterSet p) {
+        List<ParameterSet> trail = trail(p);
+        StringBuilder b = new StringBuilder("(" + p.text() + ")");
+        for (int k = 0; k < steps.size(); k++) {
+            b.append(" -").append(steps.get(k).name()).append("-> (").append(trail.get(k + 1).text()).append(')');
+        }
+        return b.toString();
+    }
+
     /** The chain on tracked data of a solution of the equation p, in any arithmetic. */
     <T> Tracked<T> map(Tracked.Ops<T> ops, ParameterSet p, T z, Tracked<T> w) {
         for (BacklundTransformation s : steps) {

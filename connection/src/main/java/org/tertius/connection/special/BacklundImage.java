@@ -71,8 +71,8 @@ public final class BacklundImage implements PointwiseSolution {
 
     @Override
     public String methodDescription() {
-        return "Backlund image " + chain + " (DLMF 32.7) of: " + base.equationDescription() + ", "
-                + base.methodDescription() + "; errors of w, w' propagated through the map";
+        return "Backlund image " + chain + " (DLMF 32.7), parameters " + chain.trailText(parameters) + ", of the"
+                + " solution " + base.methodDescription() + "; errors of w, w' propagated through the map";
     }
 
     @Override

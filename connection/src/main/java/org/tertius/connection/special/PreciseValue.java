@@ -1,5 +1,7 @@
 package org.tertius.connection.special;
 
+import java.math.BigDecimal;
+import java.math.MathContext;
 import java.math.RoundingMode;
 import org.apfloat.Apcomplex;
 import org.apfloat.Apfloat;
@@ -87,8 +89,10 @@ public record PreciseValue(SurfacePoint point, Apcomplex w, Apcomplex dw, double
         if (lg == Double.NEGATIVE_INFINITY) {
             return "0";
         }
-        String[] p = parts(x, digits);
-        return p[0] + (p[1].startsWith("-") ? p[1] : "+" + p[1]) + "i";
+        long exponent = (long) Math.floor(lg);
+        String re = part(x.real(), digits, exponent);
+        String im = part(x.imag(), digits, exponent);
+        return re + (im.startsWith("-") ? im : "+" + im) + "i";
     }
 
     /**
@@ -101,7 +105,24 @@ public record PreciseValue(SurfacePoint point, Apcomplex w, Apcomplex dw, double
             return new String[] {"0", "0"};
         }
         long exponent = (long) Math.floor(lg);
-        return new String[] {part(x.real(), digits, exponent), part(x.imag(), digits, exponent)};
+        return new String[] {decimal(x.real(), digits, exponent), decimal(x.imag(), digits, exponent)};
+    }
+
+    /** A part rounded to the absolute position 10^(exponent - digits + 1), trailing zeros kept (BigDecimal text). */
+    private static String decimal(Apfloat v, long digits, long exponent) {
+        if (v.signum() == 0) {
+            return "0";
+        }
+        long keep = digits - (exponent - (v.scale() - 1));
+        if (keep < 1) {
+            return "0";
+        }
+        int n = (int) Math.min(keep, 1000000);
+        BigDecimal r = new BigDecimal(v.toString(true)).round(new MathContext(n, RoundingMode.HALF_EVEN));
+        if (r.precision() < n) {
+            r = r.setScale(r.scale() + n - r.precision());
+        }
+        return r.toString().replace("E+", "e").replace("E", "e");
     }
 
     /**

@@ -55,7 +55,8 @@ public final class SpecialFace implements PointwiseSolution {
 
     @Override
     public String methodDescription() {
-        String what = chain == null ? source.description() : "Backlund image " + chain + " of: " + source.description();
+        String what = chain == null ? source.description() : "Backlund image " + chain + ", parameters "
+                + chain.trailText(source.parameters()) + ", of: " + source.description();
         return "closed form, evaluated at each point: " + what.replace('\n', ' ');
     }
 
