@@ -29,8 +29,8 @@ public final class Main {
             + " fields, connection problems and solution scans, with error estimates.";
 
     /** The commands in the order of the help text. */
-    static final List<String> COMMANDS = List.of("eval", "table", "field", "poles", "describe", "connect", "scan",
-            "merge", "demo");
+    static final List<String> COMMANDS = List.of("eval", "table", "field", "poles", "special", "roots", "describe",
+            "connect", "scan", "merge", "demo");
 
     private Main() {
     }
@@ -46,6 +46,10 @@ public final class Main {
                 return new FieldCommand();
             case "poles":
                 return new PolesCommand();
+            case "special":
+                return new SpecialCommand();
+            case "roots":
+                return new RootsCommand();
             case "describe":
                 return new DescribeCommand();
             case "connect":
