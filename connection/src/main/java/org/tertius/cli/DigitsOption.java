@@ -1,8 +1,13 @@
 package org.tertius.cli;
 
+import java.util.function.Function;
 import org.apache.commons.cli.Options;
+import org.tertius.connection.special.PointwiseSolution;
+import org.tertius.core.InvalidInputException;
+import org.tertius.core.UnreachableTargetException;
 import org.tertius.core.face.ComputedSolution;
 import org.tertius.core.highprecision.HighPrecisionSolution;
+import org.tertius.core.number.ExactPoint;
 
 /** {@code --digits D}: values to D significant digits in arbitrary precision, for any solution that allows it. */
 final class DigitsOption implements OptionGroup {
@@ -33,6 +38,27 @@ final class DigitsOption implements OptionGroup {
             digits = f.intValue("digits");
         }
         return digits != null;
+    }
+
+    /**
+     * The D-digit row writer of a solution: a pointwise one (a closed form, a Backlund image; {@code direct}, null
+     * otherwise) evaluated at each point directly, any other by the high-precision replay.
+     */
+    Function<ExactPoint, String> rows(ComputedSolution solution, PointwiseSolution direct, ValueRows rows,
+                                      Progress progress) {
+        if (direct == null) {
+            HighPrecisionSolution hp = solution(solution, progress);
+            return p -> rows.row(hp.evaluate(p));
+        }
+        HighPrecisionSolution.checkDigits(digits);
+        int d = digits;
+        return p -> {
+            try {
+                return rows.row(p, direct.evaluate(p, d), d);
+            } catch (InvalidInputException e) {
+                throw new UnreachableTargetException("target " + p + " not reached: " + e.getMessage());
+            }
+        };
     }
 
     /** The solution to D digits, reporting progress. */

@@ -2,12 +2,12 @@ package org.tertius.cli;
 
 import java.io.PrintWriter;
 import java.util.List;
+import java.util.function.Function;
 import org.apache.commons.cli.Options;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.TertiusException;
 import org.tertius.core.face.ComputedSolution;
 import org.tertius.core.face.SolutionValue;
-import org.tertius.core.highprecision.HighPrecisionSolution;
 import org.tertius.core.number.ExactPoint;
 import org.tertius.core.number.SurfacePoint;
 import org.tertius.hierarchy.MemberSolution;
@@ -68,13 +68,13 @@ public final class EvalCommand implements Command {
             List<ExactPoint> points = Targets.exactList("--at", targets, k, s.coordinate());
             WorkLimits.checkPrecise("--at", points, precision.digits);
             try (Progress progress = new Progress("eval")) {
-                HighPrecisionSolution hp = precision.solution(s, progress);
-                for (String c : solution.withNotes(rows.preciseComments(hp.digits()))) {
+                Function<ExactPoint, String> row = precision.rows(s, solution.special.built(), rows, progress);
+                for (String c : solution.withNotes(rows.preciseComments(precision.digits))) {
                     out.println("# " + c);
                 }
                 out.println(rows.preciseColumns());
                 for (ExactPoint p : points) {
-                    out.println(rows.row(hp.evaluate(p)));
+                    out.println(row.apply(p));
                 }
             }
             out.flush();

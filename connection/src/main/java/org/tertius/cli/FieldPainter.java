@@ -149,6 +149,46 @@ final class FieldPainter {
         return img;
     }
 
+    /**
+     * A pattern of points in the plane of one sheet (the roots of a polynomial; the zeros and poles of a closed
+     * form): {@code filled} points as black dots, {@code ringed} ones as red rings, over the axes of {@code g}.
+     */
+    static BufferedImage points(Grid g, List<Complex> filled, String filledName, List<Complex> ringed,
+                                String ringedName, String title, String subtitle, int width, int height) {
+        BufferedImage img = new BufferedImage(width, height, BufferedImage.TYPE_INT_RGB);
+        Graphics2D gr = img.createGraphics();
+        gr.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
+        gr.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
+        gr.setColor(Color.WHITE);
+        gr.fillRect(0, 0, width, height);
+        gr.setStroke(new BasicStroke(1.5f));
+        gr.setColor(Color.BLACK);
+        for (Complex c : filled) {
+            gr.fillOval(px(g, c.getReal(), width) - 3, py(g, c.getImaginary(), height) - 3, 7, 7);
+        }
+        gr.setColor(Color.RED);
+        for (Complex c : ringed) {
+            gr.drawOval(px(g, c.getReal(), width) - 5, py(g, c.getImaginary(), height) - 5, 10, 10);
+        }
+        axes(gr, g, "z", width, height);
+        gr.setColor(Color.BLACK);
+        gr.setFont(new Font(Font.SANS_SERIF, Font.BOLD, 14));
+        gr.drawString(title, LEFT, 22);
+        gr.setFont(new Font(Font.SANS_SERIF, Font.PLAIN, 12));
+        gr.drawString(subtitle, LEFT, 40);
+        int x0 = width - RIGHT + 24;
+        gr.fillOval(x0 + 7, TOP + 4, 7, 7);
+        gr.drawString(filled.size() + " " + filledName, x0 + 24, TOP + 12);
+        if (!ringed.isEmpty()) {
+            gr.setColor(Color.RED);
+            gr.drawOval(x0 + 5, TOP + 22, 10, 10);
+            gr.setColor(Color.BLACK);
+            gr.drawString(ringed.size() + " " + ringedName, x0 + 24, TOP + 32);
+        }
+        gr.dispose();
+        return img;
+    }
+
     private static void axes(Graphics2D gr, Grid g, String z, int width, int height) {
         gr.setColor(Color.BLACK);
         gr.setStroke(new BasicStroke(1f));

@@ -29,8 +29,8 @@ public final class Main {
             + " fields, connection problems and solution scans, with error estimates.";
 
     /** The commands in the order of the help text. */
-    static final List<String> COMMANDS = List.of("eval", "table", "field", "poles", "monodromy", "describe", "connect", "scan",
-            "merge", "demo");
+    static final List<String> COMMANDS = List.of("eval", "table", "field", "poles", "monodromy", "special", "roots",
+            "describe", "connect", "scan", "merge", "demo");
 
     private Main() {
     }
@@ -48,6 +48,10 @@ public final class Main {
                 return new PolesCommand();
             case "monodromy":
                 return new MonodromyCommand();
+            case "special":
+                return new SpecialCommand();
+            case "roots":
+                return new RootsCommand();
             case "describe":
                 return new DescribeCommand();
             case "connect":

@@ -29,7 +29,9 @@ final class OptionKinds {
 
     /** Adds -h/--help and -V/--version. */
     static void standard(Options options) {
-        options.addOption(Option.builder("h").longOpt("help").desc("Show this help message and exit.").build());
-        options.addOption(Option.builder("V").longOpt("version").desc("Print version information and exit.").build());
+        options.addOption(Option.builder("h").longOpt("help").desc("describe this command and its options, then stop")
+                .build());
+        options.addOption(Option.builder("V").longOpt("version").desc("name the version of tertius, then stop")
+                .build());
     }
 }

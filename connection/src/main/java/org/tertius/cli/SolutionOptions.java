@@ -25,7 +25,8 @@ public final class SolutionOptions implements OptionGroup {
     final FamilyOptions family = new FamilyOptions();
     final MemberOptions member = new MemberOptions();
     final MonodromyOptions monodromy = new MonodromyOptions();
-    private final List<OptionGroup> parts = List.of(equation, start, solver, family, member, monodromy);
+    final SpecialOptions special = new SpecialOptions();
+    private final List<OptionGroup> parts = List.of(equation, start, solver, family, member, monodromy, special);
 
     private ProblemFile file;
 
@@ -72,7 +73,14 @@ public final class SolutionOptions implements OptionGroup {
         }
         refuse("without --member (they set a hierarchy member)", member.optionsGiven());
         refuse("without --member (monodromy data select a hierarchy member)", monodromy.optionsGiven());
-        return painleve3();
+        if (special.given()) {
+            List<String> given = painleveOptionsGiven();
+            given.removeAll(List.of("--alpha", "--beta", "--gamma", "--delta"));
+            refuse("with --special (the special solution is fixed by it and the equation)", given);
+            return special.solution(equation.texts());
+        }
+        refuse("without --special (they choose a special solution)", special.parametersGiven());
+        return special.transform(painleve3(), equation.texts());
     }
 
     /** The hierarchy member the options describe (refused for a Painleve III solution). */
@@ -88,6 +96,7 @@ public final class SolutionOptions implements OptionGroup {
     private void refuseForMember() {
         refuse("with --member (a hierarchy member is fixed by --times --s --m and --x0 --state or --origin)",
                 painleveOptionsGiven());
+        refuse("with --member (special solutions and Backlund maps are Painleve III's)", special.optionsGiven());
     }
 
     /** The member's solution over the plane of (x, t_n) when it was started at x = t_n = 0, else null. */
@@ -182,7 +191,7 @@ public final class SolutionOptions implements OptionGroup {
         return "alpha=" + eq[0] + " beta=" + eq[1] + " gamma=" + eq[2] + " delta=" + eq[3]
                 + (family.given() ? " family=" + family.describe() : "") + " z0=" + start.z0
                 + " w0=" + start.w0 + " dw0=" + start.dw0 + (start.d3w0 == null ? "" : " d3w0=" + start.d3w0)
-                + " tol=" + solver.settings().tolerance() + " order=" + solver.settings().order();
+                + special.describe() + " tol=" + solver.settings().tolerance() + " order=" + solver.settings().order();
     }
 
     /** --sheet from the option or the problem file (default 0). */

@@ -4,11 +4,11 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
+import java.util.function.Function;
 import org.apache.commons.cli.Options;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.TertiusException;
 import org.tertius.core.face.ComputedSolution;
-import org.tertius.core.highprecision.HighPrecisionSolution;
 import org.tertius.core.number.ExactPoint;
 import org.tertius.core.number.SurfacePoint;
 import org.tertius.core.region.Grid;
@@ -184,9 +184,9 @@ public final class TableCommand implements Command {
         try (Progress progress = new Progress("table");
              TableWriter w = TableWriter.open(stdout, out, resume, signature,
                      solution.withNotes(rows.preciseComments(precision.digits)), rows.preciseColumns())) {
-            HighPrecisionSolution hp = precision.solution(s, progress);
+            Function<ExactPoint, String> row = precision.rows(s, solution.special.built(), rows, progress);
             for (int i = (int) w.existingRows(); i < points.size(); i++) {
-                w.row(rows.row(hp.evaluate(points.get(i))));
+                w.row(row.apply(points.get(i)));
                 w.flush();
             }
         }

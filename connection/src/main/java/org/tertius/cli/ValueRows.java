@@ -1,11 +1,17 @@
 package org.tertius.cli;
 
+import java.math.BigDecimal;
+import java.math.MathContext;
+import java.math.RoundingMode;
 import java.util.List;
 import java.util.Locale;
+import org.apfloat.Apcomplex;
 import org.hipparchus.complex.Complex;
+import org.tertius.connection.special.PreciseValue;
 import org.tertius.core.face.ComputedSolution;
 import org.tertius.core.face.SolutionValue;
 import org.tertius.core.highprecision.HighPrecisionValue;
+import org.tertius.core.number.ExactPoint;
 import org.tertius.core.number.SurfacePoint;
 
 /**
@@ -143,11 +149,21 @@ final class ValueRows {
                 error, error);
     }
 
+    /** One row of a value computed directly to {@code digits} digits (a closed form, a Backlund image). */
+    String row(ExactPoint point, PreciseValue v, int digits) {
+        StringBuilder b = new StringBuilder(exactCoordinates(point, digits));
+        for (Apcomplex x : new Apcomplex[] {v.w(), v.dw()}) {
+            String[] parts = PreciseValue.parts(x, digits);
+            b.append(',').append(parts[0]).append(',').append(parts[1]);
+        }
+        b.append(',').append(Math.min(digits, v.correctDigits()));
+        b.append(',').append(Math.min(digits, v.correctDigitsW()));
+        return b.append(',').append(Math.min(digits, v.correctDigitsDw())).toString();
+    }
+
     /** One high-precision row. */
     String row(HighPrecisionValue v) {
-        SurfacePoint p = v.point().toSurfacePoint();
-        StringBuilder b = new StringBuilder();
-        b.append(p.re()).append(',').append(p.im()).append(',').append(p.sheet());
+        StringBuilder b = new StringBuilder(exactCoordinates(v.point(), v.requestedDigits()));
         for (int i = 0; i < v.size(); i++) {
             String[] parts = v.parts(i);
             b.append(',').append(parts[0]).append(',').append(parts[1]);
@@ -157,5 +173,22 @@ final class ValueRows {
             b.append(',').append(v.correctDigits(i));
         }
         return b.toString();
+    }
+
+    /**
+     * The coordinates of an exactly given point as decimal text: exact when the decimal expansion ends within
+     * {@code digits} significant digits (0.5, -2.25, a grid point from its index), else rounded to that many (1/3).
+     */
+    static String exactCoordinates(ExactPoint point, int digits) {
+        MathContext mc = new MathContext(Math.max(digits, 17), RoundingMode.HALF_EVEN);
+        return decimal(point.z().realPart(mc)) + ',' + decimal(point.z().imaginaryPart(mc)) + ',' + point.sheet();
+    }
+
+    private static String decimal(BigDecimal d) {
+        if (d.signum() == 0) {
+            return "0";
+        }
+        BigDecimal s = d.stripTrailingZeros();
+        return Math.abs(s.scale()) > 40 ? s.toString() : s.toPlainString();
     }
 }

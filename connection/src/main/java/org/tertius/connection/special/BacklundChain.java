@@ -8,6 +8,7 @@ import org.hipparchus.complex.Complex;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.number.AnalyticArithmetic;
 import org.tertius.core.number.ComplexArithmetic;
+import org.tertius.core.number.ExactNumber;
 import org.tertius.core.number.MpArithmetic;
 import org.tertius.core.number.MpComplex;
 import org.tertius.core.piii.Painleve3Value;
@@ -134,6 +135,20 @@ public final class BacklundChain {
         return b.toString();
     }
 
+    /**
+     * The parameter bookkeeping on one line: {@code (alpha = 1, beta = ..) -T1-> (alpha = 3, ..) -S2-> (..)}.
+     *
+     * @throws InvalidInputException if a step does not apply to the parameters it meets
+     */
+    public String trailText(ParameterSet p) {
+        List<ParameterSet> trail = trail(p);
+        StringBuilder b = new StringBuilder("(" + p.text() + ")");
+        for (int k = 0; k < steps.size(); k++) {
+            b.append(" -").append(steps.get(k).name()).append("-> (").append(trail.get(k + 1).text()).append(')');
+        }
+        return b.toString();
+    }
+
     /** The chain on tracked data of a solution of the equation p, in any arithmetic. */
     <T> Tracked<T> map(Tracked.Ops<T> ops, ParameterSet p, T z, Tracked<T> w) {
         for (BacklundTransformation s : steps) {
@@ -164,6 +179,16 @@ public final class BacklundChain {
      * @throws InvalidInputException where a step is singular or does not apply
      */
     public PreciseValue apply(ParameterSet p, PreciseValue v) {
+        return apply(p, v, null);
+    }
+
+    /**
+     * As {@link #apply(ParameterSet, PreciseValue)} at the point z given exactly (null: the double point of the
+     * value).
+     *
+     * @throws InvalidInputException where a step is singular or does not apply
+     */
+    public PreciseValue apply(ParameterSet p, PreciseValue v, ExactNumber exactZ) {
         trail(p);
         long digits = Math.max(20, Math.min(100000, Math.max(v.w().precision(), v.dw().precision()) + 10));
         MpArithmetic ar = new MpArithmetic(Math.min(digits, 100000));
@@ -171,7 +196,8 @@ public final class BacklundChain {
         double ln10 = Math.log(10);
         Tracked<MpComplex> w = new Tracked<>(ar.context().fromApcomplex(v.w()), ar.context().fromApcomplex(v.dw()),
                 v.log10ErrorW() * ln10, v.log10ErrorDw() * ln10);
-        MpComplex z = ar.of(v.point().re(), v.point().im());
+        MpComplex z = exactZ == null ? ar.of(v.point().re(), v.point().im())
+                : Conversions.of(ar, Conversions.exact(exactZ));
         Tracked<MpComplex> r = map(ops, p, z, w);
         Apcomplex wi = ar.context().toApcomplex(r.value);
         Apcomplex dwi = ar.context().toApcomplex(r.derivative);

@@ -4,10 +4,12 @@ import org.hipparchus.complex.Complex;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.number.AnalyticArithmetic;
 import org.tertius.core.number.ComplexArithmetic;
+import org.tertius.core.number.ExactPoint;
 import org.tertius.core.number.MpArithmetic;
 import org.tertius.core.number.MpComplex;
 import org.tertius.core.number.SurfacePoint;
 import org.tertius.core.piii.Painleve3Value;
+import org.tertius.hierarchy.algebra.GaussianRational;
 
 /**
  * The evaluation plan shared by the special solutions: each kind computes w, w' and bounds of their errors once,
@@ -63,6 +65,16 @@ abstract class ClosedFormSolution implements SpecialSolution {
 
     @Override
     public PreciseValue evaluate(SurfacePoint point, int digits) {
+        return precise(point, null, digits);
+    }
+
+    @Override
+    public PreciseValue evaluate(ExactPoint point, int digits) {
+        return precise(point.toSurfacePoint(), Conversions.exact(point.z()), digits);
+    }
+
+    /** N digits at a point, z taken exactly from {@code exactZ} when it is given, else from the double point. */
+    private PreciseValue precise(SurfacePoint point, GaussianRational exactZ, int digits) {
         if (digits < 1 || digits > MAX_DIGITS) {
             throw new InvalidInputException("digits", "must be in [1, " + MAX_DIGITS + "], got " + digits);
         }
@@ -70,7 +82,8 @@ abstract class ClosedFormSolution implements SpecialSolution {
         PreciseValue best = null;
         for (int attempt = 0; attempt < TRIES; attempt++) {
             MpArithmetic mp = new MpArithmetic(Math.min(100000, Math.max(20, precision)));
-            Estimate<MpComplex> e = compute(mp, point);
+            Estimate<MpComplex> e = exactZ == null ? compute(mp, point)
+                    : compute(mp, Conversions.of(mp, exactZ), point.sheet());
             PreciseValue v = new PreciseValue(point, mp.context().toApcomplex(e.w()), mp.context().toApcomplex(e.dw()),
                     e.logErrorW() / LN10, e.logErrorDw() / LN10);
             best = v;

@@ -1,5 +1,7 @@
 package org.tertius.connection.special;
 
+import java.math.BigDecimal;
+import java.math.MathContext;
 import java.math.RoundingMode;
 import org.apfloat.Apcomplex;
 import org.apfloat.Apfloat;
@@ -91,6 +93,46 @@ public record PreciseValue(SurfacePoint point, Apcomplex w, Apcomplex dw, double
         String re = part(x.real(), digits, exponent);
         String im = part(x.imag(), digits, exponent);
         return re + (im.startsWith("-") ? im : "+" + im) + "i";
+    }
+
+    /**
+     * The real and imaginary parts of x with {@code digits} significant digits relative to its modulus (both to
+     * the same absolute resolution), as plain decimals or in scientific notation as Apfloat writes them.
+     */
+    public static String[] parts(Apcomplex x, long digits) {
+        double lg = log10Abs(x);
+        if (lg == Double.NEGATIVE_INFINITY) {
+            return new String[] {"0", "0"};
+        }
+        long exponent = (long) Math.floor(lg);
+        return new String[] {decimal(x.real(), digits, exponent), decimal(x.imag(), digits, exponent)};
+    }
+
+    /** A part rounded to the absolute position 10^(exponent - digits + 1), trailing zeros kept (BigDecimal text). */
+    private static String decimal(Apfloat v, long digits, long exponent) {
+        if (v.signum() == 0) {
+            return "0";
+        }
+        long keep = digits - (exponent - (v.scale() - 1));
+        if (keep < 1) {
+            return "0";
+        }
+        int n = (int) Math.min(keep, 1000000);
+        BigDecimal r = new BigDecimal(v.toString(true)).round(new MathContext(n, RoundingMode.HALF_EVEN));
+        if (r.precision() < n) {
+            r = r.setScale(r.scale() + n - r.precision());
+        }
+        return r.toString().replace("E+", "e").replace("E", "e");
+    }
+
+    /**
+     * The estimated correct significant digits of the pair (the smaller of w's and w''s; an exactly known zero
+     * w', as for a constant solution, does not count).
+     */
+    public long correctDigits() {
+        boolean exactZero = dw.real().signum() == 0 && dw.imag().signum() == 0
+                && log10ErrorDw == Double.NEGATIVE_INFINITY;
+        return exactZero ? correctDigitsW() : Math.min(correctDigitsW(), correctDigitsDw());
     }
 
     /** A part rounded to the absolute position 10^(exponent - digits + 1). */

@@ -1,5 +1,6 @@
 package org.tertius.connection.special;
 
+import org.tertius.core.number.ExactPoint;
 import org.tertius.core.number.SurfacePoint;
 import org.tertius.core.piii.Painleve3;
 import org.tertius.core.piii.Painleve3Value;
@@ -43,4 +44,10 @@ public interface SpecialSolution {
      *     [1, {@link #MAX_DIGITS}]
      */
     PreciseValue evaluate(SurfacePoint point, int digits);
+
+    /**
+     * As {@link #evaluate(SurfacePoint, int)} at a point given exactly (decimals and rationals as typed: z = 1/3 is
+     * one third, not its double); the sheet is that of the point.
+     */
+    PreciseValue evaluate(ExactPoint point, int digits);
 }
