@@ -2,6 +2,8 @@ package org.tertius.cli;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 import org.apache.commons.cli.Options;
 import org.tertius.core.InvalidInputException;
 
@@ -13,6 +15,8 @@ import org.tertius.core.InvalidInputException;
  */
 final class ConnectionOptions implements OptionGroup {
     /** The directions, in the order of {@link #direction()}. */
+    private static final Pattern PI_MULTIPLE = Pattern.compile("([+-]?)([0-9]*)pi(?:/([0-9]+))?");
+
     static final String[] DIRECTIONS = {"--at-zero", "--at-infinity", "--from-zero", "--from-infinity"};
 
     boolean atZero;
@@ -21,7 +25,7 @@ final class ConnectionOptions implements OptionGroup {
     String fromInfinity;
     boolean logarithmic;
     Integer branch;
-    Double ray;
+    String ray;
     Integer sheet;
     String radii;
     String startAt;
@@ -46,7 +50,7 @@ final class ConnectionOptions implements OptionGroup {
         o.addOption(OptionKinds.value("--from-infinity", "C,P,Q", "start data from the data along the ray --ray at"
                 + " infinity: background c (a value, or root0..root3 in the order of the library), amplitudes p of"
                 + " E and q of 1/E"));
-        o.addOption(OptionKinds.value("--ray", "ARG", "the argument of the ray, in (-pi, pi] (default 0)"));
+        o.addOption(OptionKinds.value("--ray", "ARG", "the argument of the ray, in (-pi, pi]: a number or a multiple of pi such as pi/2, -3pi/4, pi (default 0)"));
         o.addOption(OptionKinds.value("--sheet", "K", "the sheet of the ray (--at-zero, --at-infinity) or of"
                 + " --start-at (default 0)"));
         o.addOption(OptionKinds.value("--radii", "R0:R1", "--at-infinity: the interval of |z| sampled (default"
@@ -69,7 +73,7 @@ final class ConnectionOptions implements OptionGroup {
         fromInfinity = a.text("--from-infinity");
         logarithmic = a.has("--logarithmic");
         branch = a.integer("--branch", "+1 or -1");
-        ray = a.number("--ray", "an angle in (-pi, pi]");
+        ray = a.text("--ray");
         sheet = a.integer("--sheet", "an integer");
         radii = a.text("--radii");
         startAt = a.text("--start-at");
@@ -119,12 +123,32 @@ final class ConnectionOptions implements OptionGroup {
 
     /** The ray's argument, checked to lie in (-pi, pi]. */
     double rayAngle() {
-        double r = ray == null ? 0 : ray;
+        double r = ray == null ? 0 : angle(ray);
         if (!(r > -Math.PI && r <= Math.PI)) {
             throw new InvalidInputException("--ray", "must be an angle in (-pi, pi] (use --sheet for other sheets),"
                     + " got " + r);
         }
         return r;
+    }
+
+    /** A number, or [-][P]pi[/Q] with integers P, Q &gt; 0. */
+    static double angle(String text) {
+        String t = text.trim().replace(" ", "").replace("*", "");
+        Matcher m = PI_MULTIPLE.matcher(t);
+        try {
+            if (m.matches()) {
+                double p = m.group(2).isEmpty() ? 1 : Integer.parseInt(m.group(2));
+                double q = m.group(3) == null ? 1 : Integer.parseInt(m.group(3));
+                if (q == 0) {
+                    throw new NumberFormatException();
+                }
+                return ("-".equals(m.group(1)) ? -1 : 1) * p * Math.PI / q;
+            }
+            return Double.parseDouble(t);
+        } catch (NumberFormatException e) {
+            throw new InvalidInputException("--ray", "must be an angle in (-pi, pi]: a number or a multiple of pi"
+                    + " such as pi/2 or -3pi/4, got '" + text + "'");
+        }
     }
 
     int sheetIndex() {
