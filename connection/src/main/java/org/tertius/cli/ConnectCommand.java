@@ -6,21 +6,30 @@ import java.util.List;
 import java.util.Locale;
 import org.apache.commons.cli.Options;
 import org.apfloat.Apcomplex;
+import org.apfloat.Apfloat;
 import org.hipparchus.complex.Complex;
 import org.tertius.connection.closed.McCoyTracyWu;
+import org.tertius.connection.infinity.InfinityBehaviour;
+import org.tertius.connection.infinity.TransseriesAtInfinity;
 import org.tertius.connection.match.DecayingConnection;
+import org.tertius.connection.match.InfinityBehaviourFit;
 import org.tertius.connection.match.ZeroFit;
+import org.tertius.connection.zero.ZeroBehaviour;
 import org.tertius.core.InvalidInputException;
+import org.tertius.core.highprecision.HighPrecisionSolution;
 import org.tertius.core.number.ApcomplexArithmetic;
+import org.tertius.core.number.ComplexText;
+import org.tertius.core.piii.Painleve3;
+import org.tertius.core.piii.Painleve3Solution;
 
-/** Connection data of the decaying family of PIII(0, 0, 1, -1) between +infinity and 0. */
+/**
+ * The connection problem: the behaviour at 0 or along a ray at infinity of any Painleve III solution (start data or
+ * a family), start data from the data at 0 or at infinity, and the decaying family of PIII(0, 0, 1, -1) between
+ * +infinity and 0 with its closed form (--lambda or --sigma alone).
+ */
 public final class ConnectCommand implements Command {
-    final SolverOptions solver = new SolverOptions();
-    String lambda;
-    Double sigma;
-    double x0;
-    Integer digits;
-    String format;
+    final SolutionOptions solution = new SolutionOptions();
+    final ConnectionOptions connection = new ConnectionOptions();
 
     @Override
     public String name() {
@@ -29,109 +38,204 @@ public final class ConnectCommand implements Command {
 
     @Override
     public String description() {
-        return "Decaying family w ~ 1 - 2 lambda K0(2x) of PIII(0,0,1,-1): from lambda (at infinity) to sigma and B"
-                + " of w ~ B x^sigma at 0, or from sigma back to lambda; numerically and from the closed form, each"
-                + " with an error estimate.";
+        return "The connection problem of a Painleve III solution: its behaviour at 0 (--at-zero) or along a ray at"
+                + " infinity (--at-infinity --ray ARG), or start data from the data at 0 (--from-zero) or at infinity"
+                + " (--from-infinity), each with an error estimate and the closed form beside it where one is known;"
+                + " with --lambda or --sigma alone, the decaying family w ~ 1 - 2 lambda K0(2x) of PIII(0,0,1,-1)"
+                + " between lambda and (sigma, B) of w ~ B x^sigma at 0.";
     }
 
     @Override
     public List<OptionGroup> groups() {
-        return List.of(solver);
+        return List.of(solution, connection);
     }
 
     @Override
     public void declare(Options o) {
-        o.addOption(OptionKinds.value("--lambda", "L", "parameter at infinity, |lambda| < 1/pi"));
-        o.addOption(OptionKinds.value("--sigma", "S", "exponent at 0, |sigma| < 1 (the other direction)"));
-        o.addOption(OptionKinds.value("--x0", "X", "where (sigma, B) are fitted (default 1e-3)"));
-        o.addOption(OptionKinds.value("--digits", "D",
-                "also match in arbitrary precision with this many digits (slow: tens of seconds)"));
-        o.addOption(OptionKinds.value("--format", "FMT", "csv (default) or text"));
     }
 
     @Override
     public void read(Arguments a) {
-        lambda = a.text("--lambda");
-        sigma = a.number("--sigma", "a number in (-1, 1)");
-        x0 = a.has("--x0") ? a.number("--x0", null) : 1e-3;
-        digits = a.integer("--digits", "an integer in [16, 100000]");
-        format = a.choice("--format", "csv", "text");
     }
 
     @Override
     public int run(PrintWriter out, PrintWriter err) {
-        if ((lambda == null) == (sigma == null)) {
-            throw new InvalidInputException("--lambda", "give exactly one of --lambda (data at infinity) or --sigma"
-                    + " (data at 0)");
+        solution.file();
+        int direction = connection.direction();
+        ConnectionRows rows = new ConnectionRows();
+        boolean decided = true;
+        switch (direction) {
+            case 0:
+                decided = atZero(rows);
+                break;
+            case 1:
+                refuseDigits("--at-infinity", "the transseries at infinity and its fits are computed in double"
+                        + " precision only");
+                decided = ConnectionReport.atInfinity(solution.painleve3(), connection.rayAngle(),
+                        connection.sheetIndex(), connection.sampleRadii(InfinityBehaviourFit.R_MIN,
+                                InfinityBehaviourFit.R_MAX), rows);
+                break;
+            case 2:
+                fromZero(rows);
+                break;
+            case 3:
+                refuseDigits("--from-infinity", "the transseries at infinity is summed in double precision only");
+                fromInfinity(rows);
+                break;
+            default:
+                decaying(rows);
         }
-        List<String[]> rows = new ArrayList<>();
-        if (lambda != null) {
-            fromInfinity(rows);
-        } else {
-            double[] l = DecayingConnection.lambdaForSigma(sigma, x0, solver.settings());
-            double closed = Math.sin(Math.PI * sigma / 2) / Math.PI;
-            rows.add(row("lambda", "double", l[0], l[1], closed, 1e-16));
+        rows.write(out, connection.format);
+        if (!decided) {
+            err.println("tertius: the behaviour is undecided (see the comment lines for the reason)");
+            return Main.EXIT_UNREACHED;
         }
-        print(out, rows);
         return 0;
     }
 
-    private void fromInfinity(List<String[]> rows) {
-        double lam = EquationOptions.value("--lambda", lambda).getReal();
+    private void refuseDigits(String direction, String why) {
+        if (connection.digits != null) {
+            throw new InvalidInputException("--digits", "not available with " + direction + ": " + why);
+        }
+    }
+
+    private boolean atZero(ConnectionRows rows) {
+        Painleve3Solution s = solution.painleve3();
+        Double lambda = decayingLambda();
+        refuseDigits("--at-zero", "the behaviour at 0 is fitted in double precision only");
+        return ConnectionReport.atZero(s, connection.rayAngle(), connection.sheetIndex(), lambda, rows);
+    }
+
+    /** lambda when the solution is the decaying family with real lambda, else null. */
+    private Double decayingLambda() {
+        FamilyOptions f = solution.family;
+        if (!f.given() || !"decaying".equals(f.family.trim().toLowerCase(Locale.ROOT)) || f.lambda == null) {
+            return null;
+        }
+        Complex l = ComplexText.parse("--lambda", f.lambda);
+        return l.getImaginary() == 0 ? l.getReal() : null;
+    }
+
+    /** The equation alone: the reverse directions take no solution, only its data. */
+    private Painleve3 equationOnly(String direction) {
+        List<String> other = new ArrayList<>(solution.optionsGiven());
+        other.removeAll(List.of("--alpha", "--beta", "--gamma", "--delta"));
+        if (!other.isEmpty()) {
+            throw new InvalidInputException(other.get(0), "does not apply with " + direction + " (it gives the"
+                    + " solution by its data; only the equation --alpha --beta --gamma --delta is needed); remove "
+                    + String.join(", ", other));
+        }
+        return solution.equationValue();
+    }
+
+    private void fromZero(ConnectionRows rows) {
+        Painleve3 eq = equationOnly("--from-zero");
+        List<String> p = ConnectionOptions.parts("--from-zero", connection.fromZero, 2, connection.logarithmic
+                ? "SIDE,T0 with SIDE = 1 or -1" : "SIGMA,B");
+        ZeroBehaviour data;
+        if (connection.logarithmic) {
+            int side;
+            try {
+                side = Integer.parseInt(p.get(0).replace("+", ""));
+            } catch (NumberFormatException e) {
+                side = 0;
+            }
+            if (side != 1 && side != -1) {
+                throw new InvalidInputException("--from-zero", "with --logarithmic the first value is the side, 1 or"
+                        + " -1, got " + p.get(0));
+            }
+            int branch = connection.branch == null ? 0 : connection.branch;
+            data = ZeroBehaviour.logarithmic(side, ComplexText.parse("--from-zero", p.get(1)), branch);
+        } else {
+            data = ZeroBehaviour.power(ComplexText.parse("--from-zero", p.get(0)),
+                    ComplexText.parse("--from-zero", p.get(1)));
+        }
+        refuseDigits("--from-zero", "the series at 0 is summed in double precision here");
+        ConnectionReport.fromZero(eq, data, connection.startAt, connection.rayAngle(), connection.sheetIndex(), rows);
+    }
+
+    private void fromInfinity(ConnectionRows rows) {
+        Painleve3 eq = equationOnly("--from-infinity");
+        List<String> p = ConnectionOptions.parts("--from-infinity", connection.fromInfinity, 3, "C,P,Q");
+        List<Complex> roots = TransseriesAtInfinity.backgrounds(eq);
+        Complex c;
+        String ct = p.get(0).toLowerCase(Locale.ROOT);
+        if (ct.matches("root[0-9]+")) {
+            int k = Integer.parseInt(ct.substring(4));
+            if (k >= roots.size()) {
+                throw new InvalidInputException("--from-infinity", "the background index must be root0..root"
+                        + (roots.size() - 1) + " for this equation, got " + p.get(0));
+            }
+            c = roots.get(k);
+        } else {
+            c = ComplexText.parse("--from-infinity", p.get(0));
+        }
+        InfinityBehaviour data = InfinityBehaviour.of(eq, c, ComplexText.parse("--from-infinity", p.get(1)),
+                ComplexText.parse("--from-infinity", p.get(2)), connection.rayAngle(), connection.sheetIndex());
+        Double radius = null;
+        if (connection.startAt != null) {
+            Complex r = ComplexText.parse("--start-at", connection.startAt);
+            if (r.getImaginary() != 0) {
+                throw new InvalidInputException("--start-at", "for --from-infinity it is the radius |z| on the ray"
+                        + " --ray (a real number in [1, 1e4]), got " + connection.startAt);
+            }
+            radius = r.getReal();
+        }
+        ConnectionReport.fromInfinity(eq, data, radius, rows);
+    }
+
+    /** The decaying family's own mode: --lambda or --sigma alone. */
+    private void decaying(ConnectionRows rows) {
+        FamilyOptions f = solution.family;
+        List<String> other = new ArrayList<>(solution.optionsGiven());
+        other.removeAll(List.of("--lambda", "--sigma"));
+        if ((f.lambda == null) == (f.sigma == null) || !other.isEmpty()) {
+            throw new InvalidInputException(other.isEmpty() ? "--lambda" : other.get(0), "give one of --at-zero,"
+                    + " --at-infinity, --from-zero or --from-infinity with a solution or an equation, or, for the"
+                    + " decaying family of PIII(0,0,1,-1), exactly one of --lambda (data at infinity) or --sigma"
+                    + " (data at 0) alone");
+        }
+        double x0 = connection.fitAt == null ? 1e-3 : connection.fitAt;
+        if (!(x0 > 0 && x0 <= 0.1)) {
+            throw new InvalidInputException("--fit-at", "must be in (0, 0.1], got " + x0);
+        }
+        rows.comment("decaying family of PIII(0,0,1,-1): w ~ 1 - 2 lambda K0(2x) at infinity, w ~ B x^sigma at 0;"
+                + " closed form of McCoy, Tracy and Wu (1977)");
+        if (f.sigma != null) {
+            if (connection.digits != null) {
+                throw new InvalidInputException("--digits", "not available with --sigma (lambda is found by a"
+                        + " shooting in double precision); give --lambda for digits");
+            }
+            double sigma = ComplexText.parse("--sigma", f.sigma).getReal();
+            double[] l = DecayingConnection.lambdaForSigma(sigma, x0, solution.solver.settings());
+            double closed = Math.sin(Math.PI * sigma / 2) / Math.PI;
+            rows.add("lambda", "double", ConnectionRows.real(l[0]), ConnectionRows.error(l[1]),
+                    ConnectionRows.real(closed), ConnectionRows.error(1e-16));
+            return;
+        }
+        double lam = EquationOptions.value("--lambda", f.lambda).getReal();
         McCoyTracyWu.requirePowerRange(lam, !(Math.abs(lam) < McCoyTracyWu.EDGE));
-        ZeroFit.Result<Complex> r = DecayingConnection.zeroDataByEngine(lam, x0, solver.settings());
+        ZeroFit.Result<Complex> r = DecayingConnection.zeroDataByEngine(lam, x0, solution.solver.settings());
         double cs = McCoyTracyWu.sigma(lam);
         double cb = McCoyTracyWu.amplitude(lam);
-        rows.add(row("sigma", "double", r.sigma().getReal(), r.errSigma(), cs, 2e-16 * Math.abs(cs)));
-        rows.add(row("B", "double", r.amplitude().getReal(), r.errAmplitude(), cb, 2e-16 * Math.abs(cb)));
+        rows.add("sigma", "double", ConnectionRows.real(r.sigma().getReal()), ConnectionRows.error(r.errSigma()),
+                ConnectionRows.real(cs), ConnectionRows.error(2e-16 * Math.abs(cs)));
+        rows.add("B", "double", ConnectionRows.real(r.amplitude().getReal()), ConnectionRows.error(r.errAmplitude()),
+                ConnectionRows.real(cb), ConnectionRows.error(2e-16 * Math.abs(cb)));
+        Integer digits = connection.digits;
         if (digits != null) {
-            if (digits < 16 || digits > 100000) {
-                throw new InvalidInputException("digits", "must be in [16, 100000], got " + digits);
-            }
+            HighPrecisionSolution.checkDigits(digits);
             ApcomplexArithmetic ar = new ApcomplexArithmetic(digits + 6);
-            ZeroFit.Result<Apcomplex> hp = DecayingConnection.zeroData(ar, ar.parse(lambda), Math.min(x0, 1e-4), 14);
-            Apcomplex[] c = McCoyTracyWu.zeroData(lambda, digits);
-            rows.add(new String[] {"sigma", digits + " digits", text(hp.sigma().real().precision(digits)),
-                    String.format(Locale.ROOT, "%.2e", hp.errSigma()), text(c[0].real()), "1e-" + digits});
-            rows.add(new String[] {"B", digits + " digits", text(hp.amplitude().real().precision(digits)),
-                    String.format(Locale.ROOT, "%.2e", hp.errAmplitude()), text(c[1].real()), "1e-" + digits});
+            ZeroFit.Result<Apcomplex> hp = DecayingConnection.zeroData(ar, ar.parse(f.lambda), Math.min(x0, 1e-4), 14);
+            Apcomplex[] c = McCoyTracyWu.zeroData(f.lambda, digits);
+            rows.add("sigma", digits + " digits", text(hp.sigma().real().precision(digits)),
+                    ConnectionRows.error(hp.errSigma()), text(c[0].real()), "1e-" + digits);
+            rows.add("B", digits + " digits", text(hp.amplitude().real().precision(digits)),
+                    ConnectionRows.error(hp.errAmplitude()), text(c[1].real()), "1e-" + digits);
         }
     }
 
-    private static String text(org.apfloat.Apfloat a) {
+    private static String text(Apfloat a) {
         return a.toString(true);
-    }
-
-    private static String[] row(String q, String prec, double num, double numErr, double closed, double closedErr) {
-        return new String[] {q, prec, String.format(Locale.ROOT, "%.17g", num),
-                String.format(Locale.ROOT, "%.2e", numErr), String.format(Locale.ROOT, "%.17g", closed),
-                String.format(Locale.ROOT, "%.2e", closedErr)};
-    }
-
-    private void print(PrintWriter out, List<String[]> rows) {
-        String[] head = {"quantity", "precision", "numerical", "numerical_err", "closed_form", "closed_form_err"};
-        rows.add(0, head);
-        if ("csv".equals(format)) {
-            out.println("# decaying family of PIII(0,0,1,-1): w ~ 1 - 2 lambda K0(2x) at infinity, w ~ B x^sigma at 0;"
-                    + " closed form of McCoy, Tracy and Wu (1977)");
-            for (String[] r : rows) {
-                out.println(String.join(",", r));
-            }
-        } else {
-            int[] width = new int[head.length];
-            for (String[] r : rows) {
-                for (int i = 0; i < r.length; i++) {
-                    width[i] = Math.max(width[i], r[i].length());
-                }
-            }
-            for (String[] r : rows) {
-                StringBuilder sb = new StringBuilder();
-                for (int i = 0; i < r.length; i++) {
-                    sb.append(String.format(Locale.ROOT, "%-" + (width[i] + 2) + "s", r[i]));
-                }
-                out.println(sb.toString().stripTrailing());
-            }
-        }
-        out.flush();
     }
 }

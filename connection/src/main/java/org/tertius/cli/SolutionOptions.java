@@ -146,6 +146,14 @@ public final class SolutionOptions implements OptionGroup {
         return Painleve3.of(p[0], p[1], p[2], p[3]);
     }
 
+    /** Every option of the solution given (equation, start data, family, member), for commands that need fewer. */
+    List<String> optionsGiven() {
+        List<String> out = painleveOptionsGiven();
+        out.addAll(member.given() ? List.of("--member") : List.of());
+        out.addAll(member.optionsGiven());
+        return out;
+    }
+
     private List<String> painleveOptionsGiven() {
         List<String> out = new ArrayList<>();
         String[] names = {"--alpha", "--beta", "--gamma", "--delta", "--z0", "--w0", "--dw0", "--d3w0", "--family"};
