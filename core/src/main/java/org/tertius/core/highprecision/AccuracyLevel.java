@@ -30,6 +30,12 @@ final class AccuracyLevel {
     private final Solution planner;
     private final PathState root;
     private final Map<Integer, PathState> reached = new ConcurrentHashMap<>();
+    /**
+     * The first series at the reached nodes that runs started from, expanded once and shared by every later run
+     * from the same node (with the continued fractions built from it): points beyond one node cost only their own
+     * last steps. The series is the one a fresh run would expand there, so sharing it changes no value.
+     */
+    private final Map<Integer, SegmentIntegrator.Start> nodeStarts = new ConcurrentHashMap<>();
     /** The first series at the root per level (shared with the owner, which may expand it ahead). */
     private final Map<Integer, Future<SegmentIntegrator.Start>> rootStarts;
     private final ThreadLocal<ReplayProgress> meter = new ThreadLocal<>();
@@ -161,11 +167,22 @@ final class AccuracyLevel {
                 reached.putIfAbsent(nodeOf[j], new PathState(waypoints.get(j), y, scale, start.steps + steps));
             }
         };
-        SegmentIntegrator.Start firstSeries = s == root ? rootStart() : null;
+        SegmentIntegrator.Start firstSeries = s == root ? rootStart() : nodeStart(ids[from], s);
         SegmentIntegrator.Result r = firstSeries != null
                 ? integrator.run(firstSeries, waypoints, false, advance(), landing)
                 : integrator.run(s.tau, s.y, waypoints, s.scale, false, advance(), landing);
         return new PathState(target, r.state(), r.scale(), s.steps + r.steps());
+    }
+
+    /** The first series at a reached node, expanded on first use and kept. */
+    private SegmentIntegrator.Start nodeStart(int node, PathState s) {
+        SegmentIntegrator.Start start = nodeStarts.get(node);
+        if (start == null) {
+            start = integrator.start(s.tau, s.y, s.scale);
+            SegmentIntegrator.Start other = nodeStarts.putIfAbsent(node, start);
+            start = other != null ? other : start;
+        }
+        return start;
     }
 
     /**

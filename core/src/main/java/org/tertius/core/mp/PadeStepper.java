@@ -74,7 +74,7 @@ final class PadeStepper {
         if (dist <= PADE_TRIGGER * hT) {
             return null;
         }
-        ContinuedFraction[] fractions = fractions(series);
+        ContinuedFraction[] fractions = series.fractions(() -> fractions(series));
         if (fractions == null) {
             return null;
         }

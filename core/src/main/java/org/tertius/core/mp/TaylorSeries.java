@@ -1,12 +1,15 @@
 package org.tertius.core.mp;
 import java.math.BigInteger;
+import java.util.function.Supplier;
 import org.tertius.core.number.MpComplex;
 import org.tertius.core.number.MpContext;
 
 /**
  * The Taylor coefficients of every unknown of a system at one point, in the scaled variable s with
  * {@code tau = center + scale * s}, held as fixed-point integers with {@link #fractionBits()} fractional bits
- * (absolute precision, which is what a sum over |s| &lt;= 1 needs). Immutable.
+ * (absolute precision, which is what a sum over |s| &lt;= 1 needs). Immutable; the continued fractions built from
+ * it are kept with it once built ({@link #fractions}), so that a series which serves several runs (the first series
+ * at a node of the path tree, shared by every target beyond that node) builds them once. Thread-safe.
  */
 final class TaylorSeries {
     private final MpComplex center;
@@ -14,6 +17,9 @@ final class TaylorSeries {
     private final int fractionBits;
     private final BigInteger[][] re;
     private final BigInteger[][] im;
+    /** The continued fractions once built; NO_FRACTIONS when they stopped too early. */
+    private volatile ContinuedFraction[] fractions;
+    private static final ContinuedFraction[] NO_FRACTIONS = new ContinuedFraction[0];
 
     TaylorSeries(MpComplex center, double scale, int fractionBits, BigInteger[][] re, BigInteger[][] im) {
         this.center = center;
@@ -82,5 +88,24 @@ final class TaylorSeries {
             out[i] = ctx.fromFixed(ar, ai, f);
         }
         return out;
+    }
+
+    /**
+     * The continued fractions of the components, built by {@code build} on first use and kept (null: they stopped
+     * too early, also kept). The same series gives the same fractions, so keeping them changes no value.
+     */
+    ContinuedFraction[] fractions(Supplier<ContinuedFraction[]> build) {
+        ContinuedFraction[] f = fractions;
+        if (f == null) {
+            synchronized (this) {
+                f = fractions;
+                if (f == null) {
+                    ContinuedFraction[] built = build.get();
+                    f = built == null ? NO_FRACTIONS : built;
+                    fractions = f;
+                }
+            }
+        }
+        return f == NO_FRACTIONS ? null : f;
     }
 }
