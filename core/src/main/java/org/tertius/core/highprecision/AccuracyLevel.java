@@ -116,11 +116,16 @@ final class AccuracyLevel {
         return new Outcome(ctx, form.values(ctx, u, s.y), s.steps);
     }
 
+    /**
+     * The state at the point: first at the last node of its planned chain (the node nearest the point), from the
+     * deepest node of the chain reached before, then from that node to the point. Every point whose chain ends at
+     * the same node starts from the same kept series there ({@link #nodeStart}), so the points of a line or of a
+     * cluster cost one Pade evaluation each once their node is reached.
+     */
     private PathState stateAt(SurfacePoint point, MpComplex target) {
         double targetRe = form.coordinate().tauRe(point);
         double targetIm = form.coordinate().tauIm(point);
         int[] ids = PlannedPath.chain(planner, targetRe, targetIm);
-        List<Node> nodes = planner.nodes();
         int from = 0;
         for (int i = ids.length - 1; i > 0; i--) {
             if (reached.containsKey(ids[i])) {
@@ -129,11 +134,12 @@ final class AccuracyLevel {
             }
         }
         PathState s = from == 0 ? root : reached.get(ids[from]);
+        List<Node> nodes = planner.nodes();
+        int last = ids.length - 1;
         ReplayProgress p = meter.get();
-        double[] first = {s.tau.toComplex().getReal(), s.tau.toComplex().getImaginary()};
         if (p != null) {
             double len = 0;
-            double[] prev = first;
+            double[] prev = {s.tau.toComplex().getReal(), s.tau.toComplex().getImaginary()};
             for (int i = from + 1; i < ids.length; i++) {
                 Node n = nodes.get(ids[i]);
                 len += Math.hypot(n.tauRe() - prev[0], n.tauIm() - prev[1]);
@@ -142,28 +148,43 @@ final class AccuracyLevel {
             len += Math.hypot(targetRe - prev[0], targetIm - prev[1]);
             p.expect(len);
         }
-        // the nodes after the start, then the point; nodes that lie on the straight line between their
-        // neighbours are dropped (a step need not stop there); states reached at kept nodes are kept for
-        // later calls
+        if (from < last) {
+            Node end = nodes.get(ids[last]);
+            s = run(s, ids, from, last, ctx.fromDouble(end.tauRe(), end.tauIm()), ids[last]);
+            reached.putIfAbsent(ids[last], s);
+            s = reached.get(ids[last]);
+            from = last;
+        }
+        return run(s, ids, from, last, target, -1);
+    }
+
+    /**
+     * Integrates from the state at node {@code ids[from]} (the root when from is 0) through the nodes after it up
+     * to {@code ids[upTo - 1]}, then to the end point ({@code endNode} its node id, or -1 for a point). Nodes that lie
+     * on the straight line between their neighbours are dropped (a step need not stop there); states reached at
+     * kept nodes are kept for later calls.
+     */
+    private PathState run(PathState s, int[] ids, int from, int upTo, MpComplex end, int endNode) {
+        List<Node> nodes = planner.nodes();
         List<double[]> planned = new ArrayList<>();
-        planned.add(first);
-        for (int i = from + 1; i < ids.length; i++) {
+        planned.add(new double[] {s.tau.toComplex().getReal(), s.tau.toComplex().getImaginary()});
+        for (int i = from + 1; i < upTo; i++) {
             Node n = nodes.get(ids[i]);
             planned.add(new double[] {n.tauRe(), n.tauIm()});
         }
-        planned.add(new double[] {targetRe, targetIm});
+        planned.add(new double[] {end.toComplex().getReal(), end.toComplex().getImaginary()});
         int[] kept = PlannedPath.straightened(planned);
         List<MpComplex> waypoints = new ArrayList<>();
         int[] nodeOf = new int[kept.length];
         for (int k = 0; k < kept.length; k++) {
             int i = kept[k];
-            boolean isTarget = i == planned.size() - 1;
-            waypoints.add(isTarget ? target : ctx.fromDouble(planned.get(i)[0], planned.get(i)[1]));
-            nodeOf[k] = isTarget ? -1 : ids[from + i];
+            boolean isEnd = i == planned.size() - 1;
+            waypoints.add(isEnd ? end : ctx.fromDouble(planned.get(i)[0], planned.get(i)[1]));
+            nodeOf[k] = isEnd ? endNode : ids[from + i];
         }
         PathState start = s;
         SegmentIntegrator.Landing landing = (j, y, scale, steps) -> {
-            if (nodeOf[j] >= 0) {
+            if (nodeOf[j] >= 0 && j < kept.length - 1) {
                 reached.putIfAbsent(nodeOf[j], new PathState(waypoints.get(j), y, scale, start.steps + steps));
             }
         };
@@ -171,7 +192,7 @@ final class AccuracyLevel {
         SegmentIntegrator.Result r = firstSeries != null
                 ? integrator.run(firstSeries, waypoints, false, advance(), landing)
                 : integrator.run(s.tau, s.y, waypoints, s.scale, false, advance(), landing);
-        return new PathState(target, r.state(), r.scale(), s.steps + r.steps());
+        return new PathState(end, r.state(), r.scale(), s.steps + r.steps());
     }
 
     /** The first series at a reached node, expanded on first use and kept. */
