@@ -102,8 +102,15 @@ public final class ConnectCommand implements Command {
     private boolean atZero(ConnectionRows rows) {
         Painleve3Solution s = solution.painleve3();
         Double lambda = decayingLambda();
-        refuseDigits("--at-zero", "the behaviour at 0 is fitted in double precision only");
-        return ConnectionReport.atZero(s, connection.rayAngle(), connection.sheetIndex(), lambda, rows);
+        if (connection.digits != null) {
+            HighPrecisionSolution.checkDigits(connection.digits);
+            s.highPrecisionForm().requireDigits(connection.digits);
+        }
+        boolean decided = ConnectionReport.atZero(s, connection.rayAngle(), connection.sheetIndex(), lambda, rows);
+        if (connection.digits != null && decided) {
+            PreciseConnection.atZero(s, connection.rayAngle(), connection.sheetIndex(), connection.digits, rows);
+        }
+        return decided;
     }
 
     /** lambda when the solution is the decaying family with real lambda, else null. */
@@ -145,12 +152,27 @@ public final class ConnectCommand implements Command {
                         + " -1, got " + p.get(0));
             }
             int branch = connection.branch == null ? 0 : connection.branch;
-            data = ZeroBehaviour.logarithmic(side, ComplexText.parse("--from-zero", p.get(1)), branch);
+            data = ZeroBehaviour.logarithmic(side, ExactText.parse("--from-zero", p.get(1)).toComplex(), branch);
         } else {
-            data = ZeroBehaviour.power(ComplexText.parse("--from-zero", p.get(0)),
-                    ComplexText.parse("--from-zero", p.get(1)));
+            try {
+                data = ZeroBehaviour.power(ExactText.parse("--from-zero", p.get(0)).toComplex(),
+                        ExactText.parse("--from-zero", p.get(1)).toComplex());
+            } catch (InvalidInputException e) {
+                String m = e.getMessage().substring(e.argument().length() + 2);
+                throw new InvalidInputException("--from-zero", m + (m.contains("resonance")
+                        ? "; on the command line: --from-zero SIDE,T0 --logarithmic [--branch K]" : ""));
+            }
         }
-        refuseDigits("--from-zero", "the series at 0 is summed in double precision here");
+        if (connection.digits != null) {
+            HighPrecisionSolution.checkDigits(connection.digits);
+            if (connection.logarithmic) {
+                throw new InvalidInputException("--digits", "not available with --logarithmic (the logarithmic series"
+                        + " is summed in double precision only)");
+            }
+            PreciseConnection.fromZero(eq, p, connection.startAt, connection.rayAngle(), connection.sheetIndex(),
+                    connection.digits, rows);
+            return;
+        }
         ConnectionReport.fromZero(eq, data, connection.startAt, connection.rayAngle(), connection.sheetIndex(), rows);
     }
 
