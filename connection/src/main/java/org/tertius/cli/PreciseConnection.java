@@ -58,6 +58,11 @@ final class PreciseConnection {
             }
             Apcomplex tau = ar.add(ar.log(PreciseZeroFit.exact(ar, z, digits)), turn);
             v = PreciseZeroFit.expansion(ar, p, sigma, b, ROWS).at(tau);
+            double target = Math.pow(10, -digits);
+            if (!(v.errW() <= target * (1 + ar.abs(v.w())) && v.errDw() <= target * (1 + ar.abs(v.dw())))) {
+                // once more with twice the rows (several times the cost); the errors say what was reached
+                v = PreciseZeroFit.expansion(ar, p, sigma, b, 2 * ROWS).at(tau);
+            }
         } else {
             Apcomplex phase = ar.add(new Apcomplex(Apfloat.ZERO, new Apfloat(Double.toString(angle), digits + 10)),
                     turn);

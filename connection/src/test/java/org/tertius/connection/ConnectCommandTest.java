@@ -222,10 +222,11 @@ class ConnectCommandTest {
     @Test
     void highPrecisionRoundTripAtZero() {
         String[] exactEq = {"--alpha", "7/10", "--beta", "-2/5", "--gamma", "1", "--delta", "-1"};
-        Map<String, String[]> s = rows(0, args(exactEq, "--from-zero", "3/10+1/5i,4/5-1/10i", "--start-at", "1/4",
-                "--digits", "40"));
+        Map<String, String[]> s = rows(0, args(exactEq, "--from-zero", "3/10+1/5i,4/5-1/10i", "--digits", "40"));
         assertTrue(error(s, "w") < 1e-40, s.get("w")[3]);
-        Map<String, String[]> back = rows(0, args(concat(exactEq, "--z0", "1/4", "--w0", s.get("w")[2], "--dw0",
+        String z0 = s.get("z")[2].replace("+0i", "");
+        assertEquals("0.0078125", z0); // the default point 2^-7 on the positive axis, exact
+        Map<String, String[]> back = rows(0, args(concat(exactEq, "--z0", z0, "--w0", s.get("w")[2], "--dw0",
                 s.get("dw")[2]), "--at-zero", "--digits", "30"));
         Apcomplex sigma = new Apcomplex(new Apfloat("0.3", 50), new Apfloat("0.2", 50));
         String[] parts = back.get("sigma")[2].replace("i", "").split("(?<=[0-9])(?=[+-])");
