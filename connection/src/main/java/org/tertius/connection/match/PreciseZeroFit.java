@@ -67,7 +67,7 @@ public final class PreciseZeroFit {
      * error estimates say how far it reaches.
      *
      * @throws InvalidInputException for data that are not of the power kind with |Re sigma| &lt; 1, rows outside
-     *     [4, {@value #MAX_ROWS}]
+     *     [4, 64]
      */
     public static ZeroExpansion<Apcomplex> expansion(ApcomplexArithmetic ar, List<Apcomplex> parameters,
                                                      Apcomplex sigma, Apcomplex b, int rows) {
