@@ -156,6 +156,19 @@ class ConnectCommandTest {
         assertEquals(0, value(back, "t0").subtract(new Complex(0.3, -0.8)).norm(), 3 * error(back, "t0"));
     }
 
+    /**
+     * The edge Re sigma = 1 (zeros accumulate at 0) both ways: start data from (sigma, B), and the data read back on
+     * another sheet within their errors (the library returns the description with Im sigma &gt; 0, as given here).
+     */
+    @Test
+    void edgeDataRoundTripOnAnotherSheet() {
+        Map<String, String[]> s = rows(0, args(EQ, "--from-zero", "1+0.7i,0.8+0.3i", "--ray", "0.5"));
+        Map<String, String[]> back = rows(0, args(concat(EQ, start(s)), "--at-zero", "--ray", "2", "--sheet", "1"));
+        assertEquals("zeros_accumulate", back.get("kind")[2]);
+        assertEquals(0, value(back, "sigma").subtract(new Complex(1, 0.7)).norm(), 3 * error(back, "sigma"));
+        assertEquals(0, value(back, "B").subtract(new Complex(0.8, 0.3)).norm(), 3 * error(back, "B"));
+    }
+
     /** JSON carries the same rows as CSV. */
     @Test
     void jsonHasTheSameRows() throws Exception {
