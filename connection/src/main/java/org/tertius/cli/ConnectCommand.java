@@ -21,6 +21,9 @@ import org.tertius.core.number.ApcomplexArithmetic;
 import org.tertius.core.number.ComplexText;
 import org.tertius.core.piii.Painleve3;
 import org.tertius.core.piii.Painleve3Solution;
+import org.tertius.core.piii.Painleve3Value;
+import org.tertius.hierarchy.Member1Map;
+import org.tertius.hierarchy.MemberSolution;
 
 /**
  * The connection problem: the behaviour at 0 or along a ray at infinity of any Painleve III solution (start data or
@@ -71,7 +74,7 @@ public final class ConnectCommand implements Command {
             case 1:
                 refuseDigits("--at-infinity", "the transseries at infinity and its fits are computed in double"
                         + " precision only");
-                decided = ConnectionReport.atInfinity(solution.painleve3(), connection.rayAngle(),
+                decided = ConnectionReport.atInfinity(painleve3(rows), connection.rayAngle(),
                         connection.sheetIndex(), connection.sampleRadii(InfinityBehaviourFit.R_MIN,
                                 InfinityBehaviourFit.R_MAX), rows);
                 break;
@@ -100,7 +103,7 @@ public final class ConnectCommand implements Command {
     }
 
     private boolean atZero(ConnectionRows rows) {
-        Painleve3Solution s = solution.painleve3();
+        Painleve3Solution s = painleve3(rows);
         Double lambda = decayingLambda();
         if (connection.digits != null) {
             HighPrecisionSolution.checkDigits(connection.digits);
@@ -111,6 +114,32 @@ public final class ConnectCommand implements Command {
             PreciseConnection.atZero(s, connection.rayAngle(), connection.sheetIndex(), connection.digits, rows);
         }
         return decided;
+    }
+
+    /**
+     * The Painleve III solution the options give; for member 1 of the hierarchy its image w(z) under the map z = c
+     * sqrt(x) (Member1Map, canonical: gamma = 1, delta = -1), started from the image of the member's value at its
+     * start point (at x = 1 when it was started at x = 0), with a comment saying so.
+     */
+    private Painleve3Solution painleve3(ConnectionRows rows) {
+        if (!solution.isMember()) {
+            return solution.painleve3();
+        }
+        MemberSolution member = solution.memberSolution();
+        if (member.member().order() != 1) {
+            throw new InvalidInputException("--member", "connect maps member 1 to Painleve III; member "
+                    + member.member().order() + " has no such map");
+        }
+        Member1Map map = Member1Map.canonical(member.parameters().s());
+        Painleve3 eq = map.equation(member.parameters().m(), member.traceIntegral());
+        Complex x0 = member.startPoint().norm() > 0 ? member.startPoint() : Complex.ONE;
+        Painleve3Value v = map.toPainleve3(member.evaluate(x0));
+        rows.comment("member 1 as Painleve III: w(z) of " + eq + " under z = c sqrt(x), c^2 = 16 s, started at z0 = "
+                + ComplexText.format(v.point().z()) + " (the image of x = " + ComplexText.format(x0) + ") from w, w'"
+                + " with errors " + ConnectionRows.error(v.errW()) + ", " + ConnectionRows.error(v.errDw())
+                + " (not propagated into the fits); sheets and rays below are those of z");
+        return Painleve3Solution.builder(eq).settings(solution.solver.settings()).start(v.point().z(), v.w(), v.dw())
+                .build();
     }
 
     /** lambda when the solution is the decaying family with real lambda, else null. */

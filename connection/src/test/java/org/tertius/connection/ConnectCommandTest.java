@@ -22,9 +22,12 @@ import org.tertius.connection.match.InfinityBehaviourFit;
 import org.tertius.connection.match.ZeroBehaviourFit;
 import org.tertius.connection.zero.ZeroBehaviour;
 import org.tertius.core.number.ComplexText;
+import org.tertius.core.number.SurfacePoint;
 import org.tertius.core.piii.Painleve3;
 import org.tertius.core.piii.Painleve3Solution;
+import org.tertius.core.piii.Painleve3Value;
 import org.tertius.core.step.SolverSettings;
+import org.tertius.hierarchy.Member1Map;
 
 /**
  * The connection problem from the command line ({@code connect --at-zero / --at-infinity / --from-zero /
@@ -167,6 +170,30 @@ class ConnectCommandTest {
         assertEquals("zeros_accumulate", back.get("kind")[2]);
         assertEquals(0, value(back, "sigma").subtract(new Complex(1, 0.7)).norm(), 3 * error(back, "sigma"));
         assertEquals(0, value(back, "B").subtract(new Complex(0.8, 0.3)).norm(), 3 * error(back, "B"));
+    }
+
+    /**
+     * A hierarchy member: member 1 whose Painleve III image (Member1Map, canonical s = 1: gamma = 1, delta = -1) is
+     * a solution with known data at 0; connect reads the member's image and recovers those data within the errors.
+     */
+    @Test
+    void memberOneIsConnectedThroughItsPainleveImage() {
+        Member1Map map = Member1Map.canonical(Complex.ONE);
+        ZeroBehaviour truth = ZeroBehaviour.power(new Complex(0.3, 0.2), new Complex(0.8, -0.1));
+        Painleve3Solution w = truth.solution(EQUATION, 0, 1e-13, SolverSettings.defaults());
+        Painleve3Value v = w.evaluate(SurfacePoint.of(new Complex(0.25), 0));
+        Complex x0 = map.x(v.point()).z();
+        StringBuilder state = new StringBuilder();
+        for (Complex c : map.state(EQUATION, v)) {
+            state.append(state.length() == 0 ? "" : ",").append(ComplexText.format(c));
+        }
+        Map<String, String[]> r = rows(0, "connect", "--member", "1", "--s", "1", "--m",
+                ComplexText.format(map.m(EQUATION)), "--x0", ComplexText.format(x0), "--state", state.toString(),
+                "--at-zero");
+        assertEquals("power", r.get("kind")[2]);
+        // the member's data carry the rounding of the map (about 1e-15 relative), far below the fit's errors
+        assertEquals(0, value(r, "sigma").subtract(truth.sigma()).norm(), 3 * error(r, "sigma"));
+        assertEquals(0, value(r, "B").subtract(truth.secondParameter()).norm(), 3 * error(r, "B"));
     }
 
     /** JSON carries the same rows as CSV. */
