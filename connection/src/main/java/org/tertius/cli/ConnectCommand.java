@@ -240,6 +240,10 @@ public final class ConnectCommand implements Command {
         FamilyOptions f = solution.family;
         List<String> other = new ArrayList<>(solution.optionsGiven());
         other.removeAll(List.of("--lambda", "--sigma"));
+        if (other.equals(List.of("--x0")) && f.lambda != null != (f.sigma != null)) {
+            throw new InvalidInputException("--x0", "the decaying family's fit point is given by --fit-at X (--x0 is the"
+                    + " start point of a hierarchy member)");
+        }
         if ((f.lambda == null) == (f.sigma == null) || !other.isEmpty()) {
             throw new InvalidInputException(other.isEmpty() ? "--lambda" : other.get(0), "give one of --at-zero,"
                     + " --at-infinity, --from-zero or --from-infinity with a solution or an equation, or, for the"
