@@ -21,6 +21,9 @@ import org.tertius.core.number.ApcomplexArithmetic;
 import org.tertius.core.number.ComplexText;
 import org.tertius.core.piii.Painleve3;
 import org.tertius.core.piii.Painleve3Solution;
+import org.tertius.core.piii.Painleve3Value;
+import org.tertius.hierarchy.Member1Map;
+import org.tertius.hierarchy.MemberSolution;
 
 /**
  * The connection problem: the behaviour at 0 or along a ray at infinity of any Painleve III solution (start data or
@@ -71,7 +74,7 @@ public final class ConnectCommand implements Command {
             case 1:
                 refuseDigits("--at-infinity", "the transseries at infinity and its fits are computed in double"
                         + " precision only");
-                decided = ConnectionReport.atInfinity(solution.painleve3(), connection.rayAngle(),
+                decided = ConnectionReport.atInfinity(painleve3(rows), connection.rayAngle(),
                         connection.sheetIndex(), connection.sampleRadii(InfinityBehaviourFit.R_MIN,
                                 InfinityBehaviourFit.R_MAX), rows);
                 break;
@@ -100,10 +103,43 @@ public final class ConnectCommand implements Command {
     }
 
     private boolean atZero(ConnectionRows rows) {
-        Painleve3Solution s = solution.painleve3();
+        Painleve3Solution s = painleve3(rows);
         Double lambda = decayingLambda();
-        refuseDigits("--at-zero", "the behaviour at 0 is fitted in double precision only");
-        return ConnectionReport.atZero(s, connection.rayAngle(), connection.sheetIndex(), lambda, rows);
+        if (connection.digits != null) {
+            HighPrecisionSolution.checkDigits(connection.digits);
+            s.highPrecisionForm().requireDigits(connection.digits);
+        }
+        boolean decided = ConnectionReport.atZero(s, connection.rayAngle(), connection.sheetIndex(), lambda, rows);
+        if (connection.digits != null && decided) {
+            PreciseConnection.atZero(s, connection.rayAngle(), connection.sheetIndex(), connection.digits, rows);
+        }
+        return decided;
+    }
+
+    /**
+     * The Painleve III solution the options give; for member 1 of the hierarchy its image w(z) under the map z = c
+     * sqrt(x) (Member1Map, canonical: gamma = 1, delta = -1), started from the image of the member's value at its
+     * start point (at x = 1 when it was started at x = 0), with a comment saying so.
+     */
+    private Painleve3Solution painleve3(ConnectionRows rows) {
+        if (!solution.isMember()) {
+            return solution.painleve3();
+        }
+        MemberSolution member = solution.memberSolution();
+        if (member.member().order() != 1) {
+            throw new InvalidInputException("--member", "connect maps member 1 to Painleve III; member "
+                    + member.member().order() + " has no such map");
+        }
+        Member1Map map = Member1Map.canonical(member.parameters().s());
+        Painleve3 eq = map.equation(member.parameters().m(), member.traceIntegral());
+        Complex x0 = member.startPoint().norm() > 0 ? member.startPoint() : Complex.ONE;
+        Painleve3Value v = map.toPainleve3(member.evaluate(x0));
+        rows.comment("member 1 as Painleve III: w(z) of " + eq + " under z = c sqrt(x), c^2 = 16 s, started at z0 = "
+                + ComplexText.format(v.point().z()) + " (the image of x = " + ComplexText.format(x0) + ") from w, w'"
+                + " with errors " + ConnectionRows.error(v.errW()) + ", " + ConnectionRows.error(v.errDw())
+                + " (not propagated into the fits); sheets and rays below are those of z");
+        return Painleve3Solution.builder(eq).settings(solution.solver.settings()).start(v.point().z(), v.w(), v.dw())
+                .build();
     }
 
     /** lambda when the solution is the decaying family with real lambda, else null. */
@@ -145,12 +181,27 @@ public final class ConnectCommand implements Command {
                         + " -1, got " + p.get(0));
             }
             int branch = connection.branch == null ? 0 : connection.branch;
-            data = ZeroBehaviour.logarithmic(side, ComplexText.parse("--from-zero", p.get(1)), branch);
+            data = ZeroBehaviour.logarithmic(side, ExactText.parse("--from-zero", p.get(1)).toComplex(), branch);
         } else {
-            data = ZeroBehaviour.power(ComplexText.parse("--from-zero", p.get(0)),
-                    ComplexText.parse("--from-zero", p.get(1)));
+            try {
+                data = ZeroBehaviour.power(ExactText.parse("--from-zero", p.get(0)).toComplex(),
+                        ExactText.parse("--from-zero", p.get(1)).toComplex());
+            } catch (InvalidInputException e) {
+                String m = e.getMessage().substring(e.argument().length() + 2);
+                throw new InvalidInputException("--from-zero", m + (m.contains("resonance")
+                        ? "; on the command line: --from-zero SIDE,T0 --logarithmic [--branch K]" : ""));
+            }
         }
-        refuseDigits("--from-zero", "the series at 0 is summed in double precision here");
+        if (connection.digits != null) {
+            HighPrecisionSolution.checkDigits(connection.digits);
+            if (connection.logarithmic) {
+                throw new InvalidInputException("--digits", "not available with --logarithmic (the logarithmic series"
+                        + " is summed in double precision only)");
+            }
+            PreciseConnection.fromZero(eq, p, connection.startAt, connection.rayAngle(), connection.sheetIndex(),
+                    connection.digits, rows);
+            return;
+        }
         ConnectionReport.fromZero(eq, data, connection.startAt, connection.rayAngle(), connection.sheetIndex(), rows);
     }
 
@@ -189,6 +240,10 @@ public final class ConnectCommand implements Command {
         FamilyOptions f = solution.family;
         List<String> other = new ArrayList<>(solution.optionsGiven());
         other.removeAll(List.of("--lambda", "--sigma"));
+        if (other.equals(List.of("--x0")) && f.lambda != null != (f.sigma != null)) {
+            throw new InvalidInputException("--x0", "the decaying family's fit point is given by --fit-at X (--x0 is the"
+                    + " start point of a hierarchy member)");
+        }
         if ((f.lambda == null) == (f.sigma == null) || !other.isEmpty()) {
             throw new InvalidInputException(other.isEmpty() ? "--lambda" : other.get(0), "give one of --at-zero,"
                     + " --at-infinity, --from-zero or --from-infinity with a solution or an equation, or, for the"

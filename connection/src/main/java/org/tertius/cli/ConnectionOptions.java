@@ -55,9 +55,9 @@ final class ConnectionOptions implements OptionGroup {
                 + " --start-at (default 0)"));
         o.addOption(OptionKinds.value("--radii", "R0:R1", "--at-infinity: the interval of |z| sampled (default"
                 + " 10:40)"));
-        o.addOption(OptionKinds.value("--start-at", "Z", "--from-zero, --from-infinity: the point of the start data"
-                + " (default: the largest |z| <= 0.25 on the ray where the series at 0 is accurate, or the radius on"
-                + " the ray where the transseries fixes the amplitudes best)"));
+        o.addOption(OptionKinds.value("--start-at", "Z", "--from-zero: the point z of the start data on sheet --sheet"
+                + " (default: the largest |z| = 2^-k/4 on the ray where the series at 0 is accurate); --from-infinity:"
+                + " the radius |z| on the ray (default: where the transseries fixes the amplitudes best)"));
         o.addOption(OptionKinds.value("--fit-at", "X", "decaying family (--lambda or --sigma alone): where sigma and"
                 + " B are fitted (default 1e-3)"));
         o.addOption(OptionKinds.value("--digits", "D", "decaying family and --from-zero, --at-zero: also in"

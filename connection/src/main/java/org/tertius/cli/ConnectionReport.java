@@ -60,7 +60,9 @@ final class ConnectionReport {
             rows.add("B", b.secondParameter(), b.secondParameterError(), new Complex(cb), 2e-16 * Math.abs(cb));
             return true;
         }
-        rows.add("sigma", b.sigma(), b.sigmaError());
+        if (Double.isFinite(b.sigma().norm())) {
+            rows.add("sigma", b.sigma(), b.sigmaError());
+        }
         switch (b.kind()) {
             case LOGARITHMIC:
                 rows.add("t0", b.secondParameter(), b.secondParameterError());
