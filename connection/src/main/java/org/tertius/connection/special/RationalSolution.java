@@ -209,7 +209,7 @@ public final class RationalSolution extends ClosedFormSolution {
         ComplexArithmetic ar = ComplexArithmetic.INSTANCE;
         Complex a = choice.a(ar, parameters);
         Complex c = choice.c(ar, parameters);
-        Complex lambda = a.multiply(c).sqrt().reciprocal().multiply(sigma);
+        Complex lambda = a.multiply(c).add(Complex.ZERO).sqrt().reciprocal().multiply(sigma);
         return new Complex[] {lambda, a.multiply(lambda), c};
     }
 
@@ -235,7 +235,9 @@ public final class RationalSolution extends ClosedFormSolution {
         double u = ar.epsilon();
         T a = choice.a(ar, parameters);
         T c = choice.c(ar, parameters);
-        T lambda = ar.reciprocal(ar.sqrt(ar.multiply(a, c)));
+        // a c + 0: a negative zero part in double would take the square root to the other side of its cut, away
+        // from the multiprecision value (where zeros have no sign)
+        T lambda = ar.reciprocal(ar.sqrt(ar.add(ar.multiply(a, c), ar.zero())));
         if (sigma < 0) {
             lambda = ar.negate(lambda);
         }
