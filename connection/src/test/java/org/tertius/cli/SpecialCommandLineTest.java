@@ -266,6 +266,44 @@ class SpecialCommandLineTest {
         assertTrue(r.out.contains("algebraic: no"), r.out);
     }
 
+    @Test
+    void hostileValuesOfTheNewOptionsEndCleanly(@TempDir Path dir) {
+        // every value of a small hostile set in every new option: status 0, 2 or 3, one line when refused, never an
+        // internal error (the contract of Main; common practice for command-line tools)
+        String[] hostile = {"", " ", "x", "-1", "0", "1e400", "nan", "1/0", "99999999999", "3+2i", "1,", ",", "T1;;T1",
+            "T(+a,+x)", "--", "rational"};
+        String[][] lines = {
+            {"eval", "--alpha", "3", "--beta", "1", "--gamma", "1", "--delta", "-1", "--special", null, "--at", "2"},
+            {"eval", "--alpha", "3", "--beta", "1", "--gamma", "1", "--delta", "-1", "--special", "rational",
+                "--special-index", null, "--at", "2"},
+            {"eval", "--alpha", "1", "--beta", "1", "--gamma", "1", "--delta", "-1", "--special", "bessel",
+                "--bessel-coefficients", null, "--at", "2"},
+            {"eval", "--alpha", "1", "--beta", "1", "--gamma", "1", "--delta", "-1", "--z0", "1", "--w0", "1", "--dw0",
+                "0", "--backlund", null, "--at", "2"},
+            {"roots", "--n", null, "--mu", "0"},
+            {"roots", "--n", "2", "--mu", null},
+            {"roots", "--n", "2", "--mu", "1/2", "--digits", null},
+            {"roots", "--alpha", "3", "--beta", "1", "--gamma", "1", "--delta", null},
+            {"special", "--alpha", "3", "--beta", "1", "--gamma", null, "--delta", "-1"}};
+        for (String[] line : lines) {
+            for (String h : hostile) {
+                String[] args = line.clone();
+                for (int k = 0; k < args.length; k++) {
+                    if (args[k] == null) {
+                        args[k] = h;
+                    }
+                }
+                CommandLineToolTest.Run r = run(args);
+                String shown = String.join(" ", args);
+                assertTrue(r.status == 0 || r.status == 2 || r.status == 3, r.status + " for " + shown + ": " + r.err);
+                assertTrue(!r.err.contains("internal error") && !r.err.contains("\tat "), shown + ": " + r.err);
+                if (r.status == 2) {
+                    assertEquals(1, r.err.lines().count(), shown + ": " + r.err);
+                }
+            }
+        }
+    }
+
     @ParameterizedTest
     @CsvSource(delimiter = '|', value = {
         "eval --alpha 1 --beta 1/2 --gamma 1 --delta -1 --special rational --at 1|--special: no rational solution",
