@@ -183,8 +183,8 @@ public final class TableCommand implements Command {
         String signature = "tertius table " + solution.describe() + " line=" + lineSpec + " sheet=" + k
                 + " digits=" + precision.digits;
         try (Progress progress = new Progress("table");
-             TableWriter w = TableWriter.open(stdout, out, resume, signature, rows.preciseComments(precision.digits),
-                     rows.preciseColumns())) {
+             TableWriter w = TableWriter.open(stdout, out, resume, signature,
+                     precision.comments(rows, solution.special.built()), rows.preciseColumns())) {
             Function<ExactPoint, String> row = precision.rows(s, solution.special.built(), rows, progress);
             for (int i = (int) w.existingRows(); i < points.size(); i++) {
                 w.row(row.apply(points.get(i)));

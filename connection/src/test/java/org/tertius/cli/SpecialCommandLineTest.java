@@ -182,6 +182,18 @@ class SpecialCommandLineTest {
     }
 
     @Test
+    void aManyDigitTableOfAnImageIsItsEvaluationRowByRowWithTheBookkeepingInTheHeader() {
+        // internal consistency (common practice): table --line --digits and eval --digits give the same rows
+        String[] image = CommandLineToolTest.with(RATIONAL, "--special", "rational", "--backlund", "T2 S1");
+        CommandLineToolTest.Run t = run(args("table", image, "--line", "1:2:3", "--digits", "25"));
+        CommandLineToolTest.Run e = run(args("eval", image, "--at", "1,1.5,2", "--digits", "25"));
+        assertEquals(0, t.status, t.err);
+        assertEquals(rows(e.out), rows(t.out));
+        assertTrue(t.out.contains("-T(-a,+c)-> (alpha = 9, beta = 1, gamma = 1, delta = -1) --w-> (alpha = -9, beta = -1"),
+                t.out);
+    }
+
+    @Test
     void aBesselTypeSolutionAgreesWithApfloat0F1() {
         // DLMF 32.10(iv): PIII(5/3, 1/3, 1, -1), a = c = 1, b = 2/3, nu = 5/6; u = z^(2nu) 0F1(;1+nu;-z^2/4) (A = 1,
         // B = 0), w = -u'/u; 0F1 and its derivative 0F1(;b+1;x)/b (DLMF 16.3.1) from Apfloat at 60 digits
