@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.awt.image.BufferedImage;
 import java.math.BigDecimal;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -191,6 +192,18 @@ class SpecialCommandLineTest {
         assertEquals(rows(e.out), rows(t.out));
         assertTrue(t.out.contains("-T(-a,+c)-> (alpha = 9, beta = 1, gamma = 1, delta = -1) --w-> (alpha = -9, beta = -1"),
                 t.out);
+    }
+
+    @Test
+    void aProblemFileGivesTheSameRowsAsTheCommandLine(@TempDir Path dir) throws Exception {
+        Path file = dir.resolve("special.txt");
+        Files.writeString(file, "alpha = 11\nbeta = -1\ngamma = 1\ndelta = -1\nspecial = rational\nspecial-index = 1\n"
+                + "backlund = T1\nat = 2+i\n");
+        CommandLineToolTest.Run p = run("eval", "--problem", file.toString());
+        CommandLineToolTest.Run c = run(args("eval", RATIONAL, "--special", "rational", "--special-index", "1",
+                "--backlund", "T1", "--at", "2+i"));
+        assertEquals(0, p.status, p.err);
+        assertEquals(c.out, p.out);
     }
 
     @Test
