@@ -1,7 +1,6 @@
 package org.tertius.cli;
 
 import java.awt.image.BufferedImage;
-import java.io.IOException;
 import java.io.PrintWriter;
 import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
@@ -54,8 +53,9 @@ public final class RootsCommand implements Command {
                 + " the recurrence of Clarkson, J. Phys. A 36 (2003) 9507, DLMF 32.8(iii)), or with --alpha .. --delta the"
                 + " zeros and poles of a rational solution (--special-index K), to D digits: each root in a disk"
                 + " proved to hold exactly the number of roots given as its multiplicity, the multiplicities adding up"
-                + " to the degree. CSV columns kind,re,im,radius,multiplicity,digits (digits: correct significant"
-                + " digits the disk vouches for); --plot draws the pattern.";
+                + " to the degree. CSV columns kind,re,im,radius,multiplicity,digits,simple (digits: correct"
+                + " significant digits the disk vouches for; simple: yes when the polynomial is proved square-free);"
+                + " --plot draws the pattern.";
     }
 
     @Override
@@ -87,7 +87,7 @@ public final class RootsCommand implements Command {
     }
 
     @Override
-    public int run(PrintWriter stdout, PrintWriter err) throws IOException {
+    public int run(PrintWriter stdout, PrintWriter err) {
         int d = digits == null ? DEFAULT_DIGITS : digits;
         if (d < 1 || d > RootIsolation.MAX_DIGITS) {
             throw new InvalidInputException("--digits", "must be in [1, " + RootIsolation.MAX_DIGITS + "], got " + d);
