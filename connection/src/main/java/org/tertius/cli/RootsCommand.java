@@ -190,12 +190,24 @@ public final class RootsCommand implements Command {
         if (m != degree) {
             throw new IllegalStateException("the certified multiplicities add up to " + m + ", not the degree " + degree);
         }
-        long simple = roots.stream().filter(r -> r.multiplicity() == 1).count();
+        List<CertifiedRoot> disks = new ArrayList<>();
+        int exact = 0;
+        for (CertifiedRoot r : roots) {
+            if (r.log10Radius() == Double.NEGATIVE_INFINITY) {
+                exact += r.multiplicity();
+            } else {
+                disks.add(r);
+            }
+        }
+        long simple = disks.stream().filter(r -> r.multiplicity() == 1).count();
         boolean proved = !roots.isEmpty() && roots.stream().allMatch(CertifiedRoot::simpleProved);
-        String disks = simple == roots.size() ? roots.size() + " inclusion disks of one root each"
-                : roots.size() + " inclusion disks (" + simple + " of one root, the others clusters; multiplicities add"
-                + " up to " + degree + ")";
-        return degree + " " + what + " certified: " + disks + (proved ? ", all simple (proved)" : "");
+        String text = simple == disks.size() ? disks.size() + " inclusion disks of one root each"
+                : disks.size() + " inclusion disks (" + simple + " of one root, the others clusters)";
+        if (exact > 0) {
+            text = "z = 0 of multiplicity " + exact + " exactly, " + text;
+        }
+        return degree + " " + what + " certified: " + text + (proved ? ", all simple (proved)" : "")
+                + (exact > 0 || simple < disks.size() ? "; multiplicities add up to " + degree : "");
     }
 
     private static String row(String kind, CertifiedRoot r, int digits) {
