@@ -1,5 +1,7 @@
 package org.tertius.cli;
 
+import java.util.ArrayList;
+import java.util.List;
 import java.util.function.Function;
 import org.apache.commons.cli.Options;
 import org.tertius.connection.special.PointwiseSolution;
@@ -59,6 +61,18 @@ final class DigitsOption implements OptionGroup {
                 throw new UnreachableTargetException("target " + p + " not reached: " + e.getMessage());
             }
         };
+    }
+
+    /**
+     * The comment lines above D-digit rows; for a pointwise solution also the line saying what it is (the closed
+     * form, or the Backlund chain with the parameters it reaches), as above double-precision rows.
+     */
+    List<String> comments(ValueRows rows, PointwiseSolution direct) {
+        List<String> out = new ArrayList<>(rows.preciseComments(digits));
+        if (direct != null) {
+            out.add(direct.methodDescription());
+        }
+        return out;
     }
 
     /** The solution to D digits, reporting progress. */

@@ -69,7 +69,7 @@ public final class EvalCommand implements Command {
             WorkLimits.checkPrecise("--at", points, precision.digits);
             try (Progress progress = new Progress("eval")) {
                 Function<ExactPoint, String> row = precision.rows(s, solution.special.built(), rows, progress);
-                for (String c : solution.withNotes(rows.preciseComments(precision.digits))) {
+                for (String c : solution.withNotes(precision.comments(rows, solution.special.built()))) {
                     out.println("# " + c);
                 }
                 out.println(rows.preciseColumns());

@@ -108,6 +108,11 @@ public final class FieldCommand implements Command {
             r = RegionSolver.solve(s, g, RegionSettings.builder().progress(progress::update).build());
         }
         List<Singularity> marks = noMarks || s.engineReading().isEmpty() ? List.of() : PoleFinder.find(r);
+        if (!noMarks && solution.special.built() != null) {
+            // a closed form or a Backlund image: its poles and zeros from the engine started from its values
+            marks = PoleFinder.find(RegionTree.grow(solution.special.built().integrated(solution.solver.settings()), g,
+                    RegionSettings.defaults()), g);
+        }
         String value = s.valueNames().get(0);
         BufferedImage img = FieldPainter.paint(r, marks, title(s), value, s.coordinate().name(), wh[0], wh[1]);
         OutputFile.writeWhole("--out", out, p -> ImageIO.write(img, "png", p.toFile()));

@@ -20,7 +20,8 @@ import org.tertius.core.region.Singularity;
  * white at a pole: L = 2 atan(|w|)/pi), with faint bands at every doubling of |w| that fade out towards
  * the two extremes. Located poles are ringed in
  * black and zeros in white; axes with tick labels, a title and a legend. Points that could not be computed are
- * grey.
+ * grey. Also draws point patterns in the plane on the same axes ({@link #points}: the roots of a polynomial, the
+ * zeros and poles of a closed form).
  */
 final class FieldPainter {
     static final int LEFT = 80;

@@ -63,6 +63,11 @@ public final class PolesCommand implements Command {
         }
         ComputedSolution s = solution.solution();
         solution.notes().forEach(n -> err.println("tertius: " + n));
+        if (solution.special.built() != null) {
+            // a closed form or a Backlund image has no path tree: the engine started from its values has one
+            s = solution.special.built().integrated(solution.solver.settings());
+            err.println("tertius: poles and zeros read off the engine " + s.methodDescription());
+        }
         Grid g = region.grid(gridSpec, solution.sheet(region.sheet), s.coordinate());
         String note = RegionOptions.branchPointNote(g, s.coordinate());
         if (note != null) {

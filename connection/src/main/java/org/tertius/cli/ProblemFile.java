@@ -13,12 +13,14 @@ import org.tertius.core.InvalidInputException;
 /**
  * A problem file: "key = value" lines ('#' starts a comment), so that a run can be repeated. Keys: alpha, beta,
  * gamma, delta, z0, w0, dw0, d3w0, sheet, at, line, grid, tolerance, order, digits, family and the family
- * parameters (e.g. lambda), member, times, s, m, x0, state, origin. Options given on the command line win over the file.
+ * parameters (e.g. lambda), member, times, s, m, x0, state, origin, special, special-index, bessel-coefficients,
+ * backlund. Options given on the command line win over the file.
  */
 final class ProblemFile {
     static final Set<String> KEYS = Set.of("alpha", "beta", "gamma", "delta", "z0", "w0", "dw0", "d3w0", "sheet",
             "at", "line", "grid", "tolerance", "order", "digits", "family", "lambda", "sigma", "b", "w00",
-            "member", "times", "s", "m", "x0", "state", "origin", "title", "background", "amplitude-infinity", "phase", "family-x0");
+            "member", "times", "s", "m", "x0", "state", "origin", "title", "background", "amplitude-infinity", "phase", "family-x0",
+            "special", "special-index", "bessel-coefficients", "backlund");
     private final Properties props;
     private final String name;
 

@@ -1,7 +1,6 @@
 package org.tertius.cli;
 
 import java.awt.image.BufferedImage;
-import java.io.IOException;
 import java.io.PrintWriter;
 import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
@@ -54,8 +53,9 @@ public final class RootsCommand implements Command {
                 + " the recurrence of Clarkson, J. Phys. A 36 (2003) 9507, DLMF 32.8(iii)), or with --alpha .. --delta the"
                 + " zeros and poles of a rational solution (--special-index K), to D digits: each root in a disk"
                 + " proved to hold exactly the number of roots given as its multiplicity, the multiplicities adding up"
-                + " to the degree. CSV columns kind,re,im,radius,multiplicity,digits (digits: correct significant"
-                + " digits the disk vouches for); --plot draws the pattern.";
+                + " to the degree. CSV columns kind,re,im,radius,multiplicity,digits,simple (digits: correct"
+                + " significant digits the disk vouches for; simple: yes when the polynomial is proved square-free);"
+                + " --plot draws the pattern.";
     }
 
     @Override
@@ -87,7 +87,7 @@ public final class RootsCommand implements Command {
     }
 
     @Override
-    public int run(PrintWriter stdout, PrintWriter err) throws IOException {
+    public int run(PrintWriter stdout, PrintWriter err) {
         int d = digits == null ? DEFAULT_DIGITS : digits;
         if (d < 1 || d > RootIsolation.MAX_DIGITS) {
             throw new InvalidInputException("--digits", "must be in [1, " + RootIsolation.MAX_DIGITS + "], got " + d);
@@ -190,12 +190,24 @@ public final class RootsCommand implements Command {
         if (m != degree) {
             throw new IllegalStateException("the certified multiplicities add up to " + m + ", not the degree " + degree);
         }
-        long simple = roots.stream().filter(r -> r.multiplicity() == 1).count();
+        List<CertifiedRoot> disks = new ArrayList<>();
+        int exact = 0;
+        for (CertifiedRoot r : roots) {
+            if (r.log10Radius() == Double.NEGATIVE_INFINITY) {
+                exact += r.multiplicity();
+            } else {
+                disks.add(r);
+            }
+        }
+        long simple = disks.stream().filter(r -> r.multiplicity() == 1).count();
         boolean proved = !roots.isEmpty() && roots.stream().allMatch(CertifiedRoot::simpleProved);
-        String disks = simple == roots.size() ? roots.size() + " inclusion disks of one root each"
-                : roots.size() + " inclusion disks (" + simple + " of one root, the others clusters; multiplicities add"
-                + " up to " + degree + ")";
-        return degree + " " + what + " certified: " + disks + (proved ? ", all simple (proved)" : "");
+        String text = simple == disks.size() ? disks.size() + " inclusion disks of one root each"
+                : disks.size() + " inclusion disks (" + simple + " of one root, the others clusters)";
+        if (exact > 0) {
+            text = "z = 0 of multiplicity " + exact + " exactly, " + text;
+        }
+        return degree + " " + what + " certified: " + text + (proved ? ", all simple (proved)" : "")
+                + (exact > 0 || simple < disks.size() ? "; multiplicities add up to " + degree : "");
     }
 
     private static String row(String kind, CertifiedRoot r, int digits) {

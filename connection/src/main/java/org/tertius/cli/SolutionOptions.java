@@ -55,6 +55,7 @@ public final class SolutionOptions implements OptionGroup {
             solver.defaults(file);
             family.defaults(file);
             member.defaults(file);
+            special.defaults(file);
         }
         return file;
     }

@@ -59,6 +59,23 @@ public final class SpecialOptions implements OptionGroup {
         backlund = a.text("--backlund");
     }
 
+    /** Fills unset options from a problem file (keys special, special-index, bessel-coefficients, backlund). */
+    void defaults(ProblemFile f) {
+        if (kind == null && f.has("special")) {
+            String k = f.get("special");
+            if (!List.of(KINDS).contains(k)) {
+                throw new InvalidInputException("--problem", "special = " + k + ": must be " + String.join(" or ",
+                        KINDS));
+            }
+            kind = k;
+        }
+        if (index == null && f.has("special-index")) {
+            index = f.intValue("special-index");
+        }
+        besselCoefficients = f.fill(besselCoefficients, "bessel-coefficients");
+        backlund = f.fill(backlund, "backlund");
+    }
+
     /** Whether a special solution was asked for. */
     boolean given() {
         return kind != null;

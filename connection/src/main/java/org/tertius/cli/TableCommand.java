@@ -183,7 +183,7 @@ public final class TableCommand implements Command {
                 + " digits=" + precision.digits;
         try (Progress progress = new Progress("table");
              TableWriter w = TableWriter.open(stdout, out, resume, signature,
-                     solution.withNotes(rows.preciseComments(precision.digits)), rows.preciseColumns())) {
+                     solution.withNotes(precision.comments(rows, solution.special.built())), rows.preciseColumns())) {
             Function<ExactPoint, String> row = precision.rows(s, solution.special.built(), rows, progress);
             for (int i = (int) w.existingRows(); i < points.size(); i++) {
                 w.row(row.apply(points.get(i)));

@@ -1,11 +1,11 @@
 /**
  * The command-line tool: one class per command, shared option groups (the solution of any kind, regions, digits,
- * solver settings), one place that writes value rows ({@link org.tertius.cli.ValueRows}) and pole lists ({@link
- * org.tertius.cli.SingularityRows}), one place that draws fields ({@link org.tertius.cli.FieldPainter}) and line
- * plots ({@link org.tertius.cli.LinePlot}), and one that writes the answers of {@code connect} ({@link
- * org.tertius.cli.ConnectionRows}; its options in {@link org.tertius.cli.ConnectionOptions}, its directions in {@link
- * org.tertius.cli.ConnectionReport} and {@link org.tertius.cli.PreciseConnection}). Commands work on the
- * equation-neutral face of a solution.
+ * solver settings, special solutions and Backlund chains), one place that writes value rows ({@link
+ * org.tertius.cli.ValueRows}) and pole lists ({@link org.tertius.cli.SingularityRows}), one place that draws fields
+ * and point patterns ({@link org.tertius.cli.FieldPainter}) and line plots ({@link org.tertius.cli.LinePlot}), and
+ * one that writes the answers of {@code connect} ({@link org.tertius.cli.ConnectionRows}; its options in {@link
+ * org.tertius.cli.ConnectionOptions}, its directions in {@link org.tertius.cli.ConnectionReport} and {@link
+ * org.tertius.cli.PreciseConnection}). Commands work on the equation-neutral face of a solution.
  *
  * <p>May depend on every module. Commands do not call each other.
  */

@@ -15,6 +15,7 @@ import org.tertius.core.highprecision.HighPrecisionSolution;
 import org.tertius.core.highprecision.HighPrecisionValue;
 import org.tertius.core.number.ExactPoint;
 import org.tertius.core.number.SurfacePoint;
+import org.tertius.core.piii.Painleve3;
 import org.tertius.core.piii.Painleve3Solution;
 import org.tertius.core.piii.Painleve3Value;
 
@@ -73,6 +74,11 @@ public final class BacklundImage implements PointwiseSolution {
     public String methodDescription() {
         return "Backlund image " + chain + " (DLMF 32.7), parameters " + chain.trailText(parameters) + ", of the"
                 + " solution " + base.methodDescription() + "; errors of w, w' propagated through the map";
+    }
+
+    @Override
+    public Painleve3 equation() {
+        return image.equation();
     }
 
     @Override

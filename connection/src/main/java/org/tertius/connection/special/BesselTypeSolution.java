@@ -136,7 +136,7 @@ public final class BesselTypeSolution extends ClosedFormSolution {
         T tau = ar.add(ar.log(z), ar.multiply(ar.of(0, sheet), twoPi));
         T a = choice.a(ar, parameters);
         T c = choice.c(ar, parameters);
-        List<Tracked<T>> basis = RiccatiSeries.basis(ar, ar.multiply(a, c), nu, z, tau);
+        List<Tracked<T>> basis = RiccatiSeries.basis(ar, ar.add(ar.multiply(a, c), ar.zero()), nu, z, tau);
         Tracked<T> u = ops.add(ops.multiply(ops.constant(Conversions.of(ar, coefficientA)), basis.get(0)),
                 ops.multiply(ops.constant(Conversions.of(ar, coefficientB)), basis.get(1)));
         // scalars: u and u' with their errors

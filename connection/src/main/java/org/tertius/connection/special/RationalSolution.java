@@ -209,7 +209,7 @@ public final class RationalSolution extends ClosedFormSolution {
         ComplexArithmetic ar = ComplexArithmetic.INSTANCE;
         Complex a = choice.a(ar, parameters);
         Complex c = choice.c(ar, parameters);
-        Complex lambda = a.multiply(c).sqrt().reciprocal().multiply(sigma);
+        Complex lambda = a.multiply(c).add(Complex.ZERO).sqrt().reciprocal().multiply(sigma);
         return new Complex[] {lambda, a.multiply(lambda), c};
     }
 
@@ -230,12 +230,32 @@ public final class RationalSolution extends ClosedFormSolution {
         return (NumericPolynomial<T>[]) cached;
     }
 
+    /** a, c, x, y in double precision, converted once (the exact conversion costs more than an evaluation). */
+    private volatile List<Complex> doubleScalars;
+
+    /** a, c and the normalised parameters x, y of the choice in the arithmetic (cached for double). */
+    @SuppressWarnings("unchecked")
+    private <T> List<T> scalars(AnalyticArithmetic<T> ar) {
+        if (ar == ComplexArithmetic.INSTANCE && doubleScalars != null) {
+            return (List<T>) doubleScalars;
+        }
+        List<T> v = List.of(choice.a(ar, parameters), choice.c(ar, parameters), Conversions.of(ar, choice.x()),
+                Conversions.of(ar, choice.y()));
+        if (ar == ComplexArithmetic.INSTANCE) {
+            doubleScalars = (List<Complex>) v;
+        }
+        return v;
+    }
+
     @Override
     <T> Estimate<T> compute(AnalyticArithmetic<T> ar, T t, int sheet) {
         double u = ar.epsilon();
-        T a = choice.a(ar, parameters);
-        T c = choice.c(ar, parameters);
-        T lambda = ar.reciprocal(ar.sqrt(ar.multiply(a, c)));
+        List<T> scalars = scalars(ar);
+        T a = scalars.get(0);
+        T c = scalars.get(1);
+        // a c + 0: a negative zero part in double would take the square root to the other side of its cut, away
+        // from the multiprecision value (where zeros have no sign)
+        T lambda = ar.reciprocal(ar.sqrt(ar.add(ar.multiply(a, c), ar.zero())));
         if (sigma < 0) {
             lambda = ar.negate(lambda);
         }
@@ -268,8 +288,8 @@ public final class RationalSolution extends ClosedFormSolution {
         // the argument z = t/lambda carries about 8 units of rounding from lambda
         double logShift = Math.log(8 * u) + ar.logAbs(z);
         logErrW0 = Conversions.logAdd(logErrW0, ar.logAbs(dw0) + logShift);
-        T d2w0 = EquationValues.secondDerivative(ar, Conversions.of(ar, choice.x()), Conversions.of(ar, choice.y()),
-                ar.one(), ar.negate(ar.one()), z, w0, dw0);
+        T d2w0 = EquationValues.secondDerivative(ar, scalars.get(2), scalars.get(3), ar.one(), ar.negate(ar.one()), z,
+                w0, dw0);
         if (d2w0 != null) {
             logErrDw0 = Conversions.logAdd(logErrDw0, ar.logAbs(d2w0) + logShift);
         }

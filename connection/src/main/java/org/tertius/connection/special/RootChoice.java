@@ -71,13 +71,14 @@ public record RootChoice(int signA, int signC, long sum, GaussianRational x, Gau
     /** a = signA sqrt(gamma) in an arithmetic. */
     <T> T a(AnalyticArithmetic<T> ar, ExactParameters p) {
         T r = ar.sqrt(Conversions.of(ar, p.gamma()));
-        return signA > 0 ? r : ar.negate(r);
+        // 0 - r, not -r: no negative zero parts in double (they would move later square roots across their cut)
+        return signA > 0 ? r : ar.subtract(ar.zero(), r);
     }
 
     /** c = signC sqrt(-delta) in an arithmetic. */
     <T> T c(AnalyticArithmetic<T> ar, ExactParameters p) {
         T r = ar.sqrt(Conversions.of(ar, p.delta().negate()));
-        return signC > 0 ? r : ar.negate(r);
+        return signC > 0 ? r : ar.subtract(ar.zero(), r);
     }
 
     /** "a = sqrt(gamma)" or "a = -sqrt(gamma)" and the same for c, for descriptions. */

@@ -10,6 +10,7 @@ import org.tertius.core.face.HighPrecisionForm;
 import org.tertius.core.face.SolutionValue;
 import org.tertius.core.number.ExactPoint;
 import org.tertius.core.number.SurfacePoint;
+import org.tertius.core.piii.Painleve3;
 import org.tertius.core.piii.Painleve3Solution;
 
 /**
@@ -58,6 +59,11 @@ public final class SpecialFace implements PointwiseSolution {
         String what = chain == null ? source.description() : "Backlund image " + chain + ", parameters "
                 + chain.trailText(source.parameters()) + ", of: " + source.description();
         return "closed form, evaluated at each point: " + what.replace('\n', ' ');
+    }
+
+    @Override
+    public Painleve3 equation() {
+        return solution.equation();
     }
 
     @Override
