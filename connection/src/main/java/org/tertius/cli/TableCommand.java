@@ -36,6 +36,7 @@ public final class TableCommand implements Command {
     Path out;
     boolean resume;
     String shard;
+    String format;
     private PrintWriter stdout;
     private PrintWriter console;
 
@@ -65,6 +66,8 @@ public final class TableCommand implements Command {
         o.addOption(OptionKinds.flag("--resume", "continue an interrupted run in --out FILE"));
         o.addOption(OptionKinds.value("--shard", "I/N", "compute shard I of N only: the grid rows (line points) k with"
                 + " k mod N = I - 1; join the N files with 'tertius merge'"));
+        o.addOption(OptionKinds.value("--format", "csv|npy", "csv (default) or npy: a NumPy file of records, one per"
+                + " point in the shape of the grid, values as complex fields (needs --out; not resumable)"));
     }
 
     @Override
@@ -73,6 +76,7 @@ public final class TableCommand implements Command {
         out = a.path("--out");
         resume = a.has("--resume");
         shard = a.text("--shard");
+        format = a.choice("--format", "csv", "npy");
     }
 
     @Override
@@ -81,6 +85,10 @@ public final class TableCommand implements Command {
         this.console = console;
         ProblemFile f = solution.file();
         Shard part = shard == null ? Shard.WHOLE : Shard.parse("--shard", shard);
+        boolean npy = format.equals("npy");
+        if (npy) {
+            checkNpy(precision.given(f));
+        }
         if (plane.given()) {
             if (shard != null) {
                 throw new InvalidInputException("--shard", "applies to --line, --grid and --log-strip tables; the"
@@ -130,18 +138,22 @@ public final class TableCommand implements Command {
         int status;
         TableShard share = linePoints != null ? TableShard.of(part, linePoints.size(), 1)
                 : TableShard.of(part, grid.ny(), grid.nx());
-        try (TableWriter w = TableWriter.open(stdout, out, resume, signature, share.line(), rows.comments(),
-                rows.columns());
+        TableSink sink = npy ? NpyTable.create(out, rows, linePoints != null ? new int[] {linePoints.size()}
+                : new int[] {grid.ny(), grid.nx()})
+                : new CsvTable(TableWriter.open(stdout, out, resume, signature, share.line(), rows.comments(),
+                        rows.columns()), rows);
+        try (TableSink w = sink;
              Progress progress = new Progress("table")) {
-            // on Ctrl-C the rows computed so far reach the file
+            // on Ctrl-C the rows computed so far reach a CSV file
             Thread hook = new Thread(w::flushQuietly);
             Runtime.getRuntime().addShutdownHook(hook);
             try {
                 if (linePoints != null) {
-                    status = line(s, rows, linePoints, share, w, progress);
+                    status = line(s, linePoints, share, w, progress);
                 } else {
-                    status = grid(s, rows, grid, share, w, progress);
+                    status = grid(s, grid, share, w, progress);
                 }
+                w.finish();
             } finally {
                 try {
                     Runtime.getRuntime().removeShutdownHook(hook);
@@ -154,6 +166,28 @@ public final class TableCommand implements Command {
             console.println("tertius: wrote " + out);
         }
         return status;
+    }
+
+    /** Refuses the options that a NumPy file cannot serve, with the reason, before anything is written. */
+    private void checkNpy(boolean digits) {
+        if (out == null) {
+            throw new InvalidInputException("--format", "npy is binary: give --out FILE.npy");
+        }
+        if (resume) {
+            throw new InvalidInputException("--resume", "npy files are written whole (a temporary file moved into"
+                    + " place at the end) and cannot be resumed; write CSV for a resumable run");
+        }
+        if (shard != null) {
+            throw new InvalidInputException("--shard", "shards are CSV files (merge joins CSV); drop --format npy");
+        }
+        if (plane.given()) {
+            throw new InvalidInputException("--format", "npy applies to --line, --grid and --log-strip tables; the"
+                    + " (x, t_n) plane is written as CSV");
+        }
+        if (digits) {
+            throw new InvalidInputException("--format", "npy holds doubles; --digits tables are CSV (decimal"
+                    + " strings)");
+        }
     }
 
     /** The physical plane of a member started at x = t_n = 0: rows x, t_n, q, err (by rows of t_n), resumable. */
@@ -208,7 +242,7 @@ public final class TableCommand implements Command {
         return 0;
     }
 
-    private int line(ComputedSolution s, ValueRows rows, List<SurfacePoint> points, TableShard share, TableWriter w,
+    private int line(ComputedSolution s, List<SurfacePoint> points, TableShard share, TableSink w,
                      Progress progress) {
         int unreached = 0;
         long skip = w.existingRows();
@@ -219,10 +253,10 @@ public final class TableCommand implements Command {
         for (int i = (int) skip; i < own.length; i++) {
             SurfacePoint p = points.get(own[i]);
             try {
-                w.row(rows.row(tree.value(p)));
+                w.value(tree.value(p));
             } catch (TertiusException e) {
                 unreached++;
-                w.row(rows.unreachedRow(p));
+                w.unreached(p.re(), p.im(), p.sheet());
                 console.println("tertius: point " + p + " not reached: " + e.getMessage());
             }
             if (i % 16 == 15) {
@@ -242,8 +276,7 @@ public final class TableCommand implements Command {
         return unreached == 0 ? 0 : Main.EXIT_UNREACHED;
     }
 
-    private int grid(ComputedSolution s, ValueRows rows, Grid g, TableShard share, TableWriter w,
-                     Progress progress) {
+    private int grid(ComputedSolution s, Grid g, TableShard share, TableSink w, Progress progress) {
         long skip = w.existingRows();
         int nx = g.nx();
         int failed = 0;
@@ -265,8 +298,11 @@ public final class TableCommand implements Command {
                     if ((long) (k + j) * nx + i < skip) {
                         continue;
                     }
-                    w.row(r.computed(i, j) ? rows.row(r.value(i, j))
-                            : rows.unreachedRow(band.re(i), band.im(j), band.sheet()));
+                    if (r.computed(i, j)) {
+                        w.value(r.value(i, j));
+                    } else {
+                        w.unreached(band.re(i), band.im(j), band.sheet());
+                    }
                 }
             }
             w.flush();
