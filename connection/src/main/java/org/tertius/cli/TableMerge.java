@@ -11,8 +11,8 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.StringJoiner;
 import java.util.TreeMap;
+import org.tertius.connection.scan.Shard;
 import org.tertius.core.InvalidInputException;
 
 /**
@@ -96,15 +96,7 @@ final class TableMerge {
         }
         int n = first.shard.shard().count();
         if (byIndex.size() != n) {
-            StringJoiner missing = new StringJoiner(", ");
-            for (int i = 1; i <= n; i++) {
-                if (!byIndex.containsKey(i)) {
-                    missing.add(i + "/" + n);
-                }
-            }
-            boolean one = n - byIndex.size() == 1;
-            throw new InvalidInputException(argument, "shard" + (one ? " " : "s ") + missing + (one ? " is" : " are")
-                    + " missing (" + byIndex.size() + " of " + n + " shard files given)");
+            throw new InvalidInputException(argument, Shard.missing(byIndex.keySet(), n));
         }
         for (ShardFile f : byIndex.values()) {
             if (f.rows != f.shard.rows()) {
