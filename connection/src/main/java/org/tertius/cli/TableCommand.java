@@ -229,14 +229,16 @@ public final class TableCommand implements Command {
                             TableShard share) {
         String signature = "tertius table " + solution.describe() + " line=" + lineSpec + " sheet=" + k
                 + " digits=" + precision.digits;
-        try (Progress progress = new Progress("table");
-             TableWriter w = TableWriter.open(stdout, out, resume, signature, share.line(),
-                     rows.preciseComments(precision.digits), rows.preciseColumns())) {
+        try (Progress progress = new Progress("table")) {
+            // the digits and the exactness of the data are checked here, before the file is opened
             HighPrecisionSolution hp = precision.solution(s, progress);
-            int[] own = share.ownBlocks();
-            for (int i = (int) w.existingRows(); i < own.length; i++) {
-                w.row(rows.row(hp.evaluate(points.get(own[i]))));
-                w.flush();
+            try (TableWriter w = TableWriter.open(stdout, out, resume, signature, share.line(),
+                    rows.preciseComments(precision.digits), rows.preciseColumns())) {
+                int[] own = share.ownBlocks();
+                for (int i = (int) w.existingRows(); i < own.length; i++) {
+                    w.row(rows.row(hp.evaluate(points.get(own[i]))));
+                    w.flush();
+                }
             }
         }
         return 0;
