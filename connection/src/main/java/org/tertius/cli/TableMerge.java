@@ -83,6 +83,10 @@ final class TableMerge {
             if (!f.header.equals(first.header)) {
                 throw new InvalidInputException(argument, f.path + " has other comments or columns than " + first.path);
             }
+            if (!f.shard.version().equals(first.shard.version())) {
+                throw new InvalidInputException(argument, f.path + " was written by version " + f.shard.version()
+                        + " of the tool, " + first.path + " by version " + first.shard.version());
+            }
             if (!f.shard.sameSplit(first.shard)) {
                 throw new InvalidInputException(argument, f.path + " is shard " + f.shard.shard() + " of "
                         + f.shard.blocks() + " blocks but " + first.path + " is shard " + first.shard.shard() + " of "

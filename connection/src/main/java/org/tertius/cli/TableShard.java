@@ -3,6 +3,7 @@ package org.tertius.cli;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.tertius.connection.scan.Shard;
+import org.tertius.connection.scan.SweepSignature;
 import org.tertius.core.InvalidInputException;
 
 /**
@@ -16,20 +17,22 @@ import org.tertius.core.InvalidInputException;
 final class TableShard {
     static final String PREFIX = "# shard: ";
     private static final Pattern LINE = Pattern.compile("# shard: ([0-9]{1,6})/([0-9]{1,6}) of ([0-9]{1,9}) blocks"
-            + " of ([0-9]{1,9}) points");
+            + " of ([0-9]{1,9}) points; version (\\S+)");
     private final Shard shard;
     private final int blocks;
     private final int blockSize;
+    private final String version;
 
-    private TableShard(Shard shard, int blocks, int blockSize) {
+    private TableShard(Shard shard, int blocks, int blockSize, String version) {
         this.shard = shard;
         this.blocks = blocks;
         this.blockSize = blockSize;
+        this.version = version;
     }
 
     /** Shard {@code shard} of a table of {@code blocks} blocks of {@code blockSize} points each. */
     static TableShard of(Shard shard, int blocks, int blockSize) {
-        return new TableShard(shard, blocks, blockSize);
+        return new TableShard(shard, blocks, blockSize, SweepSignature.libraryVersion());
     }
 
     /**
@@ -41,7 +44,8 @@ final class TableShard {
         Matcher m = LINE.matcher(line == null ? "" : line);
         if (!m.matches()) {
             throw new InvalidInputException(argument, file + " is not a shard of a table (its second line is not"
-                    + " '" + PREFIX + "I/N of B blocks of S points'; write shards with 'tertius table --shard I/N')");
+                    + " '" + PREFIX + "I/N of B blocks of S points; version V'; write shards with 'tertius table"
+                    + " --shard I/N')");
         }
         Shard s;
         try {
@@ -49,7 +53,7 @@ final class TableShard {
         } catch (InvalidInputException e) {
             throw new InvalidInputException(argument, file + ": " + e.getMessage());
         }
-        return new TableShard(s, Integer.parseInt(m.group(3)), Integer.parseInt(m.group(4)));
+        return new TableShard(s, Integer.parseInt(m.group(3)), Integer.parseInt(m.group(4)), m.group(5));
     }
 
     Shard shard() {
@@ -62,6 +66,11 @@ final class TableShard {
 
     int blockSize() {
         return blockSize;
+    }
+
+    /** The version of the library that wrote the shard. */
+    String version() {
+        return version;
     }
 
     boolean isWhole() {
@@ -87,6 +96,7 @@ final class TableShard {
 
     /** The line written after the signature line of a shard's file; null for the whole table. */
     String line() {
-        return shard.isWhole() ? null : PREFIX + shard + " of " + blocks + " blocks of " + blockSize + " points";
+        return shard.isWhole() ? null : PREFIX + shard + " of " + blocks + " blocks of " + blockSize + " points; version "
+                + version;
     }
 }

@@ -65,7 +65,8 @@ final class ValueRows {
     /** The comment lines above the rows: the equation, the method, what err means. */
     List<String> comments() {
         return List.of(solution.equationDescription(), solution.methodDescription(), "err: " + errMeaning()
-                + "; NAME_err: the estimated absolute error of value NAME alone" + (invariants ? "; integrals: first integrals within their estimates (ok) or drifting" : ""));
+                + "; NAME_err: the estimated absolute error of value NAME alone"
+                + (invariants ? "; integrals: first integrals within their estimates (ok) or drifting" : ""));
     }
 
     /** The comment lines above high-precision rows. */

@@ -114,8 +114,12 @@ class ShardedTableTest {
         assertEquals(0, table("--line", "1:2:7", a, "--shard", "1/3").status);
         assertEquals(0, table("--line", "1:2:7", b, "--shard", "2/3").status);
         assertEquals(0, table("--line", "1:2:8", c, "--shard", "3/3").status);
+        Path d = dir.resolve("d.csv");
+        String other = Files.readString(b, StandardCharsets.UTF_8)
+                .replaceFirst("; version \\S+\n", "; version 0.0.1\n");
+        Files.writeString(d, other, StandardCharsets.UTF_8);
         String[][] cases = {{a + "," + b, "shard 3/3 is missing"}, {a + "," + a + "," + b, "given twice"},
-            {a + "," + b + "," + c, "another table"}};
+            {a + "," + b + "," + c, "another table"}, {a + "," + d, "by version 0.0.1"}};
         for (String[] k : cases) {
             CommandLineToolTest.Run r = CommandLineToolTest.run("merge", "--shards", k[0]);
             assertEquals(2, r.status, k[0]);

@@ -5,8 +5,8 @@ import java.math.BigInteger;
 /**
  * The shortest decimal that reads back as a given double (with round-half-even reading, as
  * {@link Double#parseDouble} does), and among the shortest the closest (where one digit would do, the closer of the
- * one- and two-digit decimals: 6.9e-323 rather than 7e-323, the rule of {@code Double.toString} since Java 19), appended to a {@link StringBuilder} without
- * intermediate strings. Written for the rows of large tables, where {@code String.format} costs as much as the
+ * one- and two-digit decimals: 6.9e-323 rather than 7e-323, the rule of {@code Double.toString} since Java 19),
+ * appended to a {@link StringBuilder} without intermediate strings. Written for the rows of large tables, where {@code String.format} costs as much as the
  * computation. The digits are found by the Schubfach method (R. Giulietti, "The Schubfach way to render doubles",
  * 2020): the value and the ends of its rounding interval are scaled by a power of ten with one 126-bit
  * multiplication each, from a table of 126-bit approximations of powers of ten filled on first use of each power.
