@@ -15,7 +15,6 @@ import org.openjdk.jmh.annotations.Setup;
 import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.Warmup;
 import org.tertius.core.number.SurfacePoint;
-import org.tertius.core.piii.EngineView;
 import org.tertius.core.solution.Solution;
 import org.tertius.core.solution.StateEstimate;
 
@@ -45,7 +44,7 @@ public class CanonicalBenchmark {
     }
 
     private static Solution engine() {
-        return EngineView.of(Scenario.fresh()).engine();
+        return Scenario.fresh().engineReading().orElseThrow().tree();
     }
 
     private List<StateEstimate> pathCanonical(Solution s) {

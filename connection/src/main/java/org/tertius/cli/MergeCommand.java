@@ -14,7 +14,10 @@ import org.apache.commons.cli.Options;
 import org.tertius.connection.scan.SweepMerge;
 import org.tertius.core.InvalidInputException;
 
-/** Joins the shard files of a sweep ({@code scan --shard}) into the file of the whole sweep. */
+/**
+ * Joins the shard files of a sweep ({@code scan --shard}) or of a table ({@code table --shard}) into the file of the
+ * whole sweep or table.
+ */
 public final class MergeCommand implements Command {
     String shards;
     Path output;
@@ -27,10 +30,11 @@ public final class MergeCommand implements Command {
 
     @Override
     public String description() {
-        return "Join the N shard files of a sweep (written by 'tertius scan --shard I/N') into the CSV of the whole"
-                + " sweep, the same bytes as the sweep run in one process. The files must be all N shards of one"
-                + " sweep (same parameters, solver settings and version), each complete; otherwise one line names"
-                + " the file at fault and nothing is written.";
+        return "Join the N shard files of a sweep (written by 'tertius scan --shard I/N') or of a table ('tertius"
+                + " table --shard I/N') into the CSV of the whole sweep or table, the same bytes as one process"
+                + " writes. The files must be all N shards of one sweep (same parameters, solver settings and"
+                + " version) or of one table (same problem, region and options), each complete; otherwise one line"
+                + " names the file at fault and nothing is written.";
     }
 
     @Override
@@ -39,7 +43,7 @@ public final class MergeCommand implements Command {
                 + " wildcards * and ? (quote it: 'parts/shard-*.csv')"));
         o.addOption(OptionKinds.value("--out", "FILE", "CSV file of the whole sweep; default standard output"));
         o.addOption(OptionKinds.value("--output", "FILE", "the same as --out"));
-        o.addOption(OptionKinds.value("--plot", "FILE.png", "PNG picture of the whole sweep"));
+        o.addOption(OptionKinds.value("--plot", "FILE.png", "PNG picture of the whole sweep (sweeps only)"));
     }
 
     @Override
@@ -66,6 +70,9 @@ public final class MergeCommand implements Command {
         if (plot != null) {
             OutputFile.checkWritable("--plot", plot);
         }
+        if (!files.isEmpty() && TableMerge.isTable(files.get(0))) {
+            return mergeTable(files, out, err);
+        }
         SweepMerge merge = SweepMerge.of("--shards", files);
         StringBuilder text = new StringBuilder();
         for (String line : merge.header()) {
@@ -84,6 +91,27 @@ public final class MergeCommand implements Command {
             OutputFile.writeWhole("--plot", plot, merge::plot);
         }
         err.println("merge: " + files.size() + " shard files, " + merge.rows().size() + " rows"
+                + (output == null ? "" : " -> " + output));
+        return 0;
+    }
+
+    private int mergeTable(List<Path> files, PrintWriter out, PrintWriter err) {
+        if (plot != null) {
+            throw new InvalidInputException("--plot", "draws sweeps; the shards given are of a table (draw it with"
+                    + " 'tertius field')");
+        }
+        TableMerge merge = TableMerge.of("--shards", files);
+        if (output == null) {
+            try {
+                merge.write(out);
+            } catch (IOException e) {
+                throw new UncheckedIOException(e);
+            }
+            out.flush();
+        } else {
+            OutputFile.writeWhole("--out", output, merge::write);
+        }
+        err.println("merge: " + files.size() + " table shard files, " + merge.rows() + " rows"
                 + (output == null ? "" : " -> " + output));
         return 0;
     }

@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.function.Function;
 import org.apache.commons.cli.Options;
+import org.tertius.connection.scan.Shard;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.TertiusException;
 import org.tertius.core.face.ComputedSolution;
@@ -34,6 +35,8 @@ public final class TableCommand implements Command {
     String line;
     Path out;
     boolean resume;
+    String shard;
+    String format;
     private PrintWriter stdout;
     private PrintWriter console;
 
@@ -46,7 +49,9 @@ public final class TableCommand implements Command {
     public String description() {
         return "Tabulate a solution on a line (--line A:B:N), a grid of one sheet (--grid RE0:RE1:NX,IM0:IM1:NY)"
                 + " or a strip in log z (--log-strip) to CSV (columns as eval). Rows are written as computed; an"
-                + " interrupted run keeps them and --resume continues it. Poles met along a line are reported.";
+                + " interrupted run keeps them and --resume continues it. Poles met along a line are reported."
+                + " --shard I/N computes one share of the points (for one job of a job array); 'tertius merge' joins"
+                + " the N shard files into the bytes of the whole table.";
     }
 
     @Override
@@ -59,6 +64,10 @@ public final class TableCommand implements Command {
         o.addOption(OptionKinds.value("--line", "A:B:N", "N points from A to B (complex), e.g. 0.5:10:200"));
         o.addOption(OptionKinds.value("--out", "FILE", "CSV file (default: standard output)"));
         o.addOption(OptionKinds.flag("--resume", "continue an interrupted run in --out FILE"));
+        o.addOption(OptionKinds.value("--shard", "I/N", "compute shard I of N only: the grid rows (line points) k with"
+                + " k mod N = I - 1; join the N files with 'tertius merge'"));
+        o.addOption(OptionKinds.value("--format", "csv|npy", "csv (default) or npy: a NumPy file of records, one per"
+                + " point in the shape of the grid, values as complex fields (needs --out; not resumable)"));
     }
 
     @Override
@@ -66,6 +75,8 @@ public final class TableCommand implements Command {
         line = a.text("--line");
         out = a.path("--out");
         resume = a.has("--resume");
+        shard = a.text("--shard");
+        format = a.choice("--format", "csv", "npy");
     }
 
     @Override
@@ -74,7 +85,16 @@ public final class TableCommand implements Command {
         this.console = console;
         ProblemFile f = solution.file();
         solution.monodromy.refuseDigits(precision.given(f));
+        Shard part = shard == null ? Shard.WHOLE : Shard.parse("--shard", shard);
+        boolean npy = format.equals("npy");
+        if (npy) {
+            checkNpy(precision.given(f));
+        }
         if (plane.given()) {
+            if (shard != null) {
+                throw new InvalidInputException("--shard", "applies to --line, --grid and --log-strip tables; the"
+                        + " (x, t_n) plane is computed with its symmetries in one process");
+            }
             if (line != null || region.given()) {
                 throw new InvalidInputException("--plane", "give one of --line, --grid, --log-strip and --plane");
             }
@@ -102,7 +122,7 @@ public final class TableCommand implements Command {
             }
             List<ExactPoint> exact = Targets.exactLine("--line", lineSpec, k, s.coordinate());
             WorkLimits.checkPrecise("--line", exact, precision.digits);
-            return preciseLine(s, rows, exact, lineSpec, k);
+            return preciseLine(s, rows, exact, lineSpec, k, TableShard.of(part, exact.size(), 1));
         }
         // every argument is read and checked before the first line is written
         List<SurfacePoint> linePoints = lineSpec == null ? null : Targets.line("--line", lineSpec, k, s.coordinate());
@@ -117,18 +137,24 @@ public final class TableCommand implements Command {
         String signature = "tertius table " + solution.describe() + (lineSpec != null ? " line=" + lineSpec
                 : " grid=" + gridSpec + " log-strip=" + region.logStrip) + " sheet=" + k;
         int status;
-        try (TableWriter w = TableWriter.open(stdout, out, resume, signature, solution.withNotes(rows.comments()),
-                rows.columns());
+        TableShard share = linePoints != null ? TableShard.of(part, linePoints.size(), 1)
+                : TableShard.of(part, grid.ny(), grid.nx());
+        TableSink sink = npy ? NpyTable.create(out, rows, linePoints != null ? new int[] {linePoints.size()}
+                : new int[] {grid.ny(), grid.nx()})
+                : new CsvTable(TableWriter.open(stdout, out, resume, signature, share.line(),
+                        solution.withNotes(rows.comments()), rows.columns()), rows);
+        try (TableSink w = sink;
              Progress progress = new Progress("table")) {
-            // on Ctrl-C the rows computed so far reach the file
+            // on Ctrl-C the rows computed so far reach a CSV file
             Thread hook = new Thread(w::flushQuietly);
             Runtime.getRuntime().addShutdownHook(hook);
             try {
                 if (linePoints != null) {
-                    status = line(s, rows, linePoints, w, progress);
+                    status = line(s, linePoints, share, w, progress);
                 } else {
-                    status = grid(s, rows, grid, w, progress);
+                    status = grid(s, grid, share, w, progress);
                 }
+                w.finish();
             } finally {
                 try {
                     Runtime.getRuntime().removeShutdownHook(hook);
@@ -141,6 +167,28 @@ public final class TableCommand implements Command {
             console.println("tertius: wrote " + out);
         }
         return status;
+    }
+
+    /** Refuses the options that a NumPy file cannot serve, with the reason, before anything is written. */
+    private void checkNpy(boolean digits) {
+        if (out == null) {
+            throw new InvalidInputException("--format", "npy is binary: give --out FILE.npy");
+        }
+        if (resume) {
+            throw new InvalidInputException("--resume", "npy files are written whole (a temporary file moved into"
+                    + " place at the end) and cannot be resumed; write CSV for a resumable run");
+        }
+        if (shard != null) {
+            throw new InvalidInputException("--shard", "shards are CSV files (merge joins CSV); drop --format npy");
+        }
+        if (plane.given()) {
+            throw new InvalidInputException("--format", "npy applies to --line, --grid and --log-strip tables; the"
+                    + " (x, t_n) plane is written as CSV");
+        }
+        if (digits) {
+            throw new InvalidInputException("--format", "npy holds doubles; --digits tables are CSV (decimal"
+                    + " strings)");
+        }
     }
 
     /** The physical plane of a member started at x = t_n = 0: rows x, t_n, q, err (by rows of t_n), resumable. */
@@ -178,39 +226,46 @@ public final class TableCommand implements Command {
         return 0;
     }
 
-    private int preciseLine(ComputedSolution s, ValueRows rows, List<ExactPoint> points, String lineSpec, int k) {
+    private int preciseLine(ComputedSolution s, ValueRows rows, List<ExactPoint> points, String lineSpec, int k,
+                            TableShard share) {
         String signature = "tertius table " + solution.describe() + " line=" + lineSpec + " sheet=" + k
                 + " digits=" + precision.digits;
-        try (Progress progress = new Progress("table");
-             TableWriter w = TableWriter.open(stdout, out, resume, signature,
-                     solution.withNotes(precision.comments(rows, solution.special.built())), rows.preciseColumns())) {
+        try (Progress progress = new Progress("table")) {
+            // the digits and the exactness of the data are checked here, before the file is opened
             Function<ExactPoint, String> row = precision.rows(s, solution.special.built(), rows, progress);
-            for (int i = (int) w.existingRows(); i < points.size(); i++) {
-                w.row(row.apply(points.get(i)));
-                w.flush();
+            try (TableWriter w = TableWriter.open(stdout, out, resume, signature, share.line(),
+                    solution.withNotes(precision.comments(rows, solution.special.built())), rows.preciseColumns())) {
+                int[] own = share.ownBlocks();
+                for (int i = (int) w.existingRows(); i < own.length; i++) {
+                    w.row(row.apply(points.get(own[i])));
+                    w.flush();
+                }
             }
         }
         return 0;
     }
 
-    private int line(ComputedSolution s, ValueRows rows, List<SurfacePoint> points, TableWriter w, Progress progress) {
+    private int line(ComputedSolution s, List<SurfacePoint> points, TableShard share, TableSink w,
+                     Progress progress) {
         int unreached = 0;
         long skip = w.existingRows();
-        // the tree is grown along the whole line, also on resume: every row is the row of an uninterrupted run
+        // the tree is grown along the whole line, also on resume and in a shard: every row is the row of an
+        // uninterrupted run of the whole table
         RegionTree tree = RegionTree.growAlong(s, points, RegionSettings.defaults());
-        for (int i = (int) skip; i < points.size(); i++) {
-            SurfacePoint p = points.get(i);
+        int[] own = share.ownBlocks();
+        for (int i = (int) skip; i < own.length; i++) {
+            SurfacePoint p = points.get(own[i]);
             try {
-                w.row(rows.row(tree.value(p)));
+                w.value(tree.value(p));
             } catch (TertiusException e) {
                 unreached++;
-                w.row(rows.unreachedRow(p));
+                w.unreached(p.re(), p.im(), p.sheet());
                 console.println("tertius: point " + p + " not reached: " + e.getMessage());
             }
             if (i % 16 == 15) {
                 w.flush();
             }
-            progress.update(i + 1, points.size());
+            progress.update(i + 1, own.length);
         }
         if (tree.integrated()) {
             for (Singularity pole : PoleFinder.alongLine(tree, points)) {
@@ -224,29 +279,38 @@ public final class TableCommand implements Command {
         return unreached == 0 ? 0 : Main.EXIT_UNREACHED;
     }
 
-    private int grid(ComputedSolution s, ValueRows rows, Grid g, TableWriter w, Progress progress) {
+    private int grid(ComputedSolution s, Grid g, TableShard share, TableSink w, Progress progress) {
         long skip = w.existingRows();
         int nx = g.nx();
         int failed = 0;
-        // the tree is grown over the whole grid, also on resume, so that every band reads the same tree
+        // the tree is grown over the whole grid, also on resume and in a shard, so that every band reads the same tree
         RegionTree tree = RegionTree.grow(s, g, RegionSettings.defaults());
-        for (int j0 = (int) (skip / nx); j0 < g.ny(); j0 += BAND) {
-            int j1 = Math.min(g.ny() - 1, j0 + BAND - 1);
-            Grid band = g.rows(j0, j1);
+        int[] own = share.ownBlocks();
+        for (int k = (int) (skip / nx); k < own.length; ) {
+            // a band: up to BAND consecutive grid rows of this share
+            int j0 = own[k];
+            int m = 1;
+            while (m < BAND && k + m < own.length && own[k + m] == j0 + m) {
+                m++;
+            }
+            Grid band = g.rows(j0, j0 + m - 1);
             GridResult r = RegionSolver.solve(tree, band, RegionSettings.defaults());
             failed += r.statistics().failed();
             for (int j = 0; j < band.ny(); j++) {
                 for (int i = 0; i < nx; i++) {
-                    long index = (long) (j0 + j) * nx + i;
-                    if (index < skip) {
+                    if ((long) (k + j) * nx + i < skip) {
                         continue;
                     }
-                    w.row(r.computed(i, j) ? rows.row(r.value(i, j))
-                            : rows.unreachedRow(band.re(i), band.im(j), band.sheet()));
+                    if (r.computed(i, j)) {
+                        w.value(r.value(i, j));
+                    } else {
+                        w.unreached(band.re(i), band.im(j), band.sheet());
+                    }
                 }
             }
             w.flush();
-            progress.update((long) (j1 + 1) * nx, (long) g.size());
+            k += m;
+            progress.update((long) k * nx, (long) own.length * nx);
         }
         return failed == 0 ? 0 : Main.EXIT_UNREACHED;
     }

@@ -31,11 +31,20 @@ final class TableWriter implements AutoCloseable {
 
     static TableWriter open(PrintWriter stdout, Path path, boolean resume, String signature, List<String> comments,
                             String columns) {
+        return open(stdout, path, resume, signature, null, comments, columns);
+    }
+
+    /**
+     * Opens the output of a table or of one shard of it ({@code shardLine} the line that follows the signature line
+     * in a shard's file, null for the whole table).
+     */
+    static TableWriter open(PrintWriter stdout, Path path, boolean resume, String signature, String shardLine,
+                            List<String> comments, String columns) {
         if (path == null) {
             if (resume) {
                 throw new InvalidInputException("--resume", "needs --out FILE (standard output cannot be resumed)");
             }
-            header(stdout, signature, comments, columns);
+            header(stdout, signature, shardLine, comments, columns);
             return new TableWriter(stdout, 0, null);
         }
         OutputFile.checkWritable("--out", path);
@@ -46,6 +55,14 @@ final class TableWriter implements AutoCloseable {
                     throw new InvalidInputException("--resume", path + " was written for another problem (its first line"
                             + " differs); remove it or drop --resume");
                 }
+                String second = lines.size() > 1 ? lines.get(1) : "";
+                boolean wasShard = second.startsWith(TableShard.PREFIX);
+                if (shardLine != null ? !second.equals(shardLine) : wasShard) {
+                    throw new InvalidInputException("--resume", path + " holds " + (wasShard ? "a shard ("
+                            + second.substring(2) + ")" : "the whole table") + ", not " + (shardLine == null
+                            ? "the whole table" : "this shard (" + shardLine.substring(2) + ")")
+                            + "; give another file or drop --resume");
+                }
                 truncatePartialLine(path);
                 long data = Files.readAllLines(path, StandardCharsets.UTF_8).stream()
                         .filter(l -> !l.startsWith("#") && !l.equals(columns)).count();
@@ -54,7 +71,7 @@ final class TableWriter implements AutoCloseable {
             }
             BufferedWriter w = Files.newBufferedWriter(path, StandardCharsets.UTF_8);
             PrintWriter pw = new PrintWriter(w);
-            header(pw, signature, comments, columns);
+            header(pw, signature, shardLine, comments, columns);
             pw.flush();
             return new TableWriter(pw, 0, path);
         } catch (IOException e) {
@@ -62,8 +79,12 @@ final class TableWriter implements AutoCloseable {
         }
     }
 
-    private static void header(PrintWriter w, String signature, List<String> comments, String columns) {
+    private static void header(PrintWriter w, String signature, String shardLine, List<String> comments,
+                               String columns) {
         w.println("# " + signature);
+        if (shardLine != null) {
+            w.println(shardLine);
+        }
         for (String c : comments) {
             w.println("# " + c);
         }

@@ -3,8 +3,8 @@ package org.tertius.cli;
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.math.RoundingMode;
+import java.nio.ByteBuffer;
 import java.util.List;
-import java.util.Locale;
 import org.apfloat.Apcomplex;
 import org.hipparchus.complex.Complex;
 import org.tertius.connection.special.PreciseValue;
@@ -12,6 +12,7 @@ import org.tertius.core.face.ComputedSolution;
 import org.tertius.core.face.SolutionValue;
 import org.tertius.core.highprecision.HighPrecisionValue;
 import org.tertius.core.number.ExactPoint;
+import org.tertius.core.number.ShortestDecimal;
 import org.tertius.core.number.SurfacePoint;
 
 /**
@@ -23,6 +24,8 @@ import org.tertius.core.number.SurfacePoint;
  * estimated numbers of correct digits in place of the errors ({@code digits}, the smallest, and NAME_digits).
  */
 final class ValueRows {
+    /** Significant digits of the error columns. */
+    private static final int ERROR_DIGITS = 4;
     private final ComputedSolution solution;
     private final boolean invariants;
 
@@ -68,7 +71,8 @@ final class ValueRows {
     /** The comment lines above the rows: the equation, the method, what err means. */
     List<String> comments() {
         return List.of(solution.equationDescription(), solution.methodDescription(), "err: " + errMeaning()
-                + "; NAME_err: the estimated absolute error of value NAME alone" + (invariants ? "; integrals: first integrals within their estimates (ok) or drifting" : ""));
+                + "; NAME_err: the estimated absolute error of value NAME alone"
+                + (invariants ? "; integrals: first integrals within their estimates (ok) or drifting" : ""));
     }
 
     /** The comment lines above high-precision rows. */
@@ -100,16 +104,20 @@ final class ValueRows {
         return name.startsWith("d") && name.length() > 1 ? name.substring(1) + "'" : name;
     }
 
-    /** One double-precision row. */
+    /**
+     * One double-precision row: coordinates and values as the shortest decimals that read back as the same doubles,
+     * errors with 4 significant digits rounded up.
+     */
     String row(SolutionValue v) {
         SurfacePoint p = v.point();
-        StringBuilder b = new StringBuilder(String.format(Locale.ROOT, "%.17g,%.17g,%d", p.re(), p.im(), p.sheet()));
+        StringBuilder b = coordinates(new StringBuilder(40 + 48 * v.size()), p.re(), p.im(), p.sheet());
         for (int i = 0; i < v.size(); i++) {
-            b.append(String.format(Locale.ROOT, ",%.17g,%.17g", v.value(i).getReal(), v.value(i).getImaginary()));
+            ShortestDecimal.append(b.append(','), v.value(i).getReal());
+            ShortestDecimal.append(b.append(','), v.value(i).getImaginary());
         }
-        b.append(String.format(Locale.ROOT, ",%.3e", v.maxError()));
+        error(b, v.maxError());
         for (int i = 0; i < v.size(); i++) {
-            b.append(String.format(Locale.ROOT, ",%.3e", v.error(i)));
+            error(b, v.error(i));
         }
         if (invariants) {
             b.append(v.checksWithinEstimate() ? ",ok" : ",drift");
@@ -122,9 +130,20 @@ final class ValueRows {
         return unreachedRow(p.re(), p.im(), p.sheet());
     }
 
+    private static StringBuilder coordinates(StringBuilder b, double re, double im, int sheet) {
+        ShortestDecimal.append(b, re);
+        ShortestDecimal.append(b.append(','), im);
+        return b.append(',').append(sheet);
+    }
+
+    /** Appends ",e" with e an error estimate to 4 significant digits, rounded up. */
+    private static void error(StringBuilder b, double e) {
+        ShortestDecimal.appendRoundedUp(b.append(','), e, ERROR_DIGITS);
+    }
+
     /** A row for a point that could not be computed, from its coordinates (the branch point included). */
     String unreachedRow(double re, double im, int sheet) {
-        StringBuilder b = new StringBuilder(String.format(Locale.ROOT, "%.17g,%.17g,%d", re, im, sheet));
+        StringBuilder b = coordinates(new StringBuilder(), re, im, sheet);
         for (int i = 0; i < solution.valueNames().size(); i++) {
             b.append(",nan,nan");
         }
@@ -145,8 +164,72 @@ final class ValueRows {
 
     /** One row over the plane of real x and real time t: q and its error (err and q_err alike). */
     static String planeRow(double x, double t, Complex q, double error) {
-        return String.format(Locale.ROOT, "%.17g,%.17g,%.17g,%.17g,%.3e,%.3e", x, t, q.getReal(), q.getImaginary(),
-                error, error);
+        StringBuilder b = ShortestDecimal.append(new StringBuilder(100), x);
+        ShortestDecimal.append(b.append(','), t);
+        ShortestDecimal.append(b.append(','), q.getReal());
+        ShortestDecimal.append(b.append(','), q.getImaginary());
+        error(b, error);
+        error(b, error);
+        return b.toString();
+    }
+
+    /**
+     * The NumPy structured type of a record ({@code .npy} tables): coordinates {@code <f8}, sheet {@code <i4}, each
+     * value as one complex field {@code <c16} named like the value, err and NAME_err {@code <f8}, and for members
+     * {@code integrals_ok} ({@code |b1}); packed, little-endian.
+     */
+    String npyDescr() {
+        String c = solution.coordinate().name();
+        StringBuilder b = new StringBuilder("[('").append(c).append("_re', '<f8'), ('").append(c)
+                .append("_im', '<f8'), ('sheet', '<i4')");
+        for (String v : solution.valueNames()) {
+            b.append(", ('").append(v).append("', '<c16')");
+        }
+        b.append(", ('err', '<f8')");
+        for (String v : solution.valueNames()) {
+            b.append(", ('").append(v).append("_err', '<f8')");
+        }
+        if (invariants) {
+            b.append(", ('integrals_ok', '|b1')");
+        }
+        return b.append(']').toString();
+    }
+
+    /** Bytes of one record of {@link #npyDescr()}. */
+    int npyRecordSize() {
+        int n = solution.valueNames().size();
+        return 8 + 8 + 4 + 16 * n + 8 + 8 * n + (invariants ? 1 : 0);
+    }
+
+    /** Puts the record of a computed point (the buffer little-endian). */
+    void npyRecord(ByteBuffer b, SolutionValue v) {
+        SurfacePoint p = v.point();
+        b.putDouble(p.re()).putDouble(p.im()).putInt(p.sheet());
+        for (int i = 0; i < v.size(); i++) {
+            b.putDouble(v.value(i).getReal()).putDouble(v.value(i).getImaginary());
+        }
+        b.putDouble(v.maxError());
+        for (int i = 0; i < v.size(); i++) {
+            b.putDouble(v.error(i));
+        }
+        if (invariants) {
+            b.put((byte) (v.checksWithinEstimate() ? 1 : 0));
+        }
+    }
+
+    /** Puts the record of a point that could not be computed: values nan, errors inf, integrals not ok. */
+    void npyUnreached(ByteBuffer b, double re, double im, int sheet) {
+        int n = solution.valueNames().size();
+        b.putDouble(re).putDouble(im).putInt(sheet);
+        for (int i = 0; i < 2 * n; i++) {
+            b.putDouble(Double.NaN);
+        }
+        for (int i = 0; i <= n; i++) {
+            b.putDouble(Double.POSITIVE_INFINITY);
+        }
+        if (invariants) {
+            b.put((byte) 0);
+        }
     }
 
     /** One row of a value computed directly to {@code digits} digits (a closed form, a Backlund image). */

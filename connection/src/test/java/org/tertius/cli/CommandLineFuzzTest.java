@@ -30,7 +30,7 @@ class CommandLineFuzzTest {
     private static final String[] OPTIONS = {"--alpha", "--beta", "--gamma", "--delta", "--z0", "--w0", "--dw0", "--d3w0",
         "--at", "--sheet", "--digits", "--line", "--grid", "--log-strip", "--out", "--resume", "--format", "--member",
         "--times", "--s", "--m", "--x0", "--state", "--origin", "--family", "--lambda", "--sigma", "--tol", "--order",
-        "--max-steps", "--size", "--problem", "--shards", "--help", "--bogus", "--no-marks"};
+        "--max-steps", "--size", "--problem", "--shards", "--help", "--bogus", "--no-marks", "--shard"};
     private static final String[] LINES = {"0.5:2:5", "0:1:3", "1:1:3", "1:2:0", "1:2:-5", "a:b:c", "1:2", "1:2:3:4",
         "1:2:1000000000", "0.5:1e9:3"};
     private static final String[] GRIDS = {"-1:1:5,-1:1:5", "0:1:3,0:1:3", "1:1:1,1:1:1", "a:b:c,1:2:3", "-1e400:1:3,0:1:2",
@@ -131,7 +131,11 @@ class CommandLineFuzzTest {
                     out.toString(), out.resolve("p.png").toString()};
                 return paths[random.nextInt(paths.length)];
             case "--format":
-                return random.nextBoolean() ? "json" : "xml";
+                String[] formats = {"json", "xml", "npy", "csv"};
+                return formats[random.nextInt(formats.length)];
+            case "--shard":
+                String[] shards = {"1/2", "2/2", "3/2", "0/1", "1/0", "x", "1/100000", "2/3/4"};
+                return shards[random.nextInt(shards.length)];
             case "--size":
                 return random.nextBoolean() ? "400x300" : "1x1";
             default:

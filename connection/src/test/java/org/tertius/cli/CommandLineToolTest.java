@@ -120,7 +120,7 @@ class CommandLineToolTest {
                 "--dw0=1/3", "--at=-1.5");
         assertEquals(0, spaced.status, spaced.err);
         assertEquals(spaced.out, attached.out);
-        assertTrue(spaced.out.contains("\n-1.5000000000000000,0.0000000000000000,0,"), spaced.out);
+        assertTrue(spaced.out.contains("\n-1.5,0.0,0,"), spaced.out);
     }
 
     @Test

@@ -1,5 +1,7 @@
 package org.tertius.connection.scan;
 
+import java.util.Set;
+import java.util.StringJoiner;
 import org.tertius.core.InvalidInputException;
 
 /**
@@ -53,6 +55,22 @@ public final class Shard {
             throw new InvalidInputException(argument, expected);
         }
         return new Shard(i, n);
+    }
+
+    /**
+     * The message for a set of shard files that lacks some of the {@code count} shards: "shard 2/4 is missing (3 of
+     * 4 shard files given)" or "shards 1/4, 3/4 are missing (...)".
+     */
+    public static String missing(Set<Integer> given, int count) {
+        StringJoiner missing = new StringJoiner(", ");
+        for (int i = 1; i <= count; i++) {
+            if (!given.contains(i)) {
+                missing.add(i + "/" + count);
+            }
+        }
+        boolean one = count - given.size() == 1;
+        return "shard" + (one ? " " : "s ") + missing + (one ? " is" : " are") + " missing (" + given.size() + " of "
+                + count + " shard files given)";
     }
 
     /** 1-based index of this shard. */

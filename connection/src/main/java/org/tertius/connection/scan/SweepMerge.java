@@ -5,7 +5,6 @@ import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
 import java.util.Map;
-import java.util.StringJoiner;
 import java.util.TreeMap;
 import org.tertius.core.InvalidInputException;
 
@@ -69,15 +68,7 @@ public final class SweepMerge {
         }
         int n = firstShard.count();
         if (byShard.size() != n) {
-            StringJoiner missing = new StringJoiner(", ");
-            for (int i = 1; i <= n; i++) {
-                if (!byShard.containsKey(i)) {
-                    missing.add(i + "/" + n);
-                }
-            }
-            boolean one = n - byShard.size() == 1;
-            throw new InvalidInputException(argument, "shard" + (one ? " " : "s ") + missing + (one ? " is" : " are")
-                    + " missing (" + byShard.size() + " of " + n + " shard files given)");
+            throw new InvalidInputException(argument, Shard.missing(byShard.keySet(), n));
         }
         Sweep<? extends ScanRow> sweep = Sweeps.of(SweepSignature.parse(signatureText));
         int size = sweep.size();
