@@ -119,6 +119,37 @@ class MonodromyCommandLineTest {
         assertEquals(csv[1], e11.get("im").asDouble(), 1e-15);
     }
 
+    /**
+     * A Painleve III solution through member 1: the decaying family of PIII(0, 0, 1, -1), w ~ 1 - 2 lambda K0(2z)
+     * (McCoy, Tracy and Wu, J. Math. Phys. 18 (1977) 1058), mapped with s = 1/4, has E11 = 0 and
+     * lambda = (s_0_1 s_0_2 - s_inf_1 s_inf_2) / (4 pi) (derived from the cyclic relation in the connection module's
+     * DecayingMonodromyTest), at two points.
+     */
+    @Test
+    void theDecayingFamilyParameterIsRecoveredFromTheStokesMultipliers() {
+        CommandLineToolTest.Run r = CommandLineToolTest.run("monodromy", "--alpha", "0", "--beta", "0", "--gamma", "1",
+                "--delta", "-1", "--family", "decaying", "--lambda", "0.1", "--at", "1,2.5");
+        assertEquals(0, r.status, r.err);
+        List<String> rows = r.out.lines().filter(l -> !l.startsWith("#")).toList();
+        assertEquals("z_re,z_im,sheet,quantity,re,im,err", rows.get(0));
+        for (int p = 0; p < 2; p++) {
+            Map<String, Complex> v = new LinkedHashMap<>();
+            Map<String, Double> e = new LinkedHashMap<>();
+            for (String row : rows.subList(1 + 10 * p, 11 + 10 * p)) {
+                String[] f = row.split(",");
+                v.put(f[3], new Complex(Double.parseDouble(f[4]), Double.parseDouble(f[5])));
+                e.put(f[3], Double.parseDouble(f[6]));
+            }
+            assertTrue(v.get("E11").norm() <= 2 * e.get("E11"), "E11 = " + v.get("E11"));
+            Complex zero = v.get("s_0_1").multiply(v.get("s_0_2"));
+            Complex infinity = v.get("s_inf_1").multiply(v.get("s_inf_2"));
+            double bound = e.get("s_0_1") * v.get("s_0_2").norm() + e.get("s_0_2") * v.get("s_0_1").norm()
+                    + e.get("s_inf_1") * v.get("s_inf_2").norm() + e.get("s_inf_2") * v.get("s_inf_1").norm();
+            Complex lambda = zero.subtract(infinity).divide(4 * Math.PI);
+            assertTrue(lambda.subtract(0.1).norm() <= 2 * bound / (4 * Math.PI) + 1e-14, "lambda = " + lambda);
+        }
+    }
+
     @Test
     void moreDigitsInTheLambdaIntegrationAgreeWithDouble() {
         CommandLineToolTest.Run d = CommandLineToolTest.run(generic("monodromy", "--at", "0.5"));
