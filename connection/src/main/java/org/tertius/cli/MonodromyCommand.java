@@ -100,9 +100,15 @@ public final class MonodromyCommand implements Command {
             throw new InvalidInputException("--member1-s", "applies to Painleve III solutions only (a member has"
                     + " its own s)");
         }
-        ComputedSolution s = solution.solution();
         Complex mapS = member1S == null ? DEFAULT_MEMBER1_S : ExactText.parse("--member1-s", member1S).toComplex();
+        if (!(mapS.norm() > 0) || !Double.isFinite(mapS.norm())) {
+            throw new InvalidInputException("--member1-s", "must be a finite non-zero complex number, got " + mapS);
+        }
+        ComputedSolution s = solution.solution();
         List<SurfacePoint> points = Targets.list("--at", targets, solution.sheet(sheet), s.coordinate());
+        if (points.isEmpty()) {
+            throw new InvalidInputException("--at", "at least one point is required: --at X[,X...]");
+        }
         if (digits == null) {
             return report(MonodromyMap.doublePrecision(), s, mapS, points, out, err);
         }

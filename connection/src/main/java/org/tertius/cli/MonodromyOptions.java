@@ -212,7 +212,15 @@ final class MonodromyOptions implements OptionGroup {
     }
 
     private static Complex number(String option, String text) {
-        return ExactText.parse(option, text).toComplex();
+        return finite(option, ExactText.parse(option, text).toComplex());
+    }
+
+    private static Complex finite(String option, Complex c) {
+        if (!Double.isFinite(c.getReal()) || !Double.isFinite(c.getImaginary())) {
+            throw new InvalidInputException(option, "must be finite complex numbers (within the range of doubles), got "
+                    + c);
+        }
+        return c;
     }
 
     private static List<Complex> numbers(String option, String text, int count) {
@@ -222,7 +230,7 @@ final class MonodromyOptions implements OptionGroup {
         }
         List<Complex> out = new ArrayList<>();
         for (ExactNumber e : list) {
-            out.add(e.toComplex());
+            out.add(finite(option, e.toComplex()));
         }
         return out;
     }

@@ -297,6 +297,11 @@ class MonodromyCommandLineTest {
                 "300"));
         assertRefused("--member1-s", generic("monodromy", "--at", "0.5", "--member1-s", "1"));
         assertRefused("--at", generic("monodromy"));
+        assertRefused("--at: at least one point", generic("monodromy", "--at", ","));
+        assertRefused("--member1-s: must be a finite non-zero", "monodromy", "--alpha", "1", "--beta", "0", "--gamma",
+                "1", "--delta", "-1", "--z0", "1", "--w0", "1", "--dw0", "0", "--at", "1", "--member1-s", "0");
+        assertRefused("--stokes-zero: must be finite", CommandLineToolTest.with(CommandLineToolTest.with(
+                new String[] {"eval"}, MEMBER1), "--m0", "0", "--stokes-zero", "1e400,1", "--at", "1"));
         assertRefused("branch point", "monodromy", "--profile", "nearfield", "--at", "0");
         String[] selection = CommandLineToolTest.with(new String[] {"eval"}, MEMBER1);
         assertRefused("--m0", CommandLineToolTest.with(selection, "--trivial-stokes-zero", "--at", "1"));
