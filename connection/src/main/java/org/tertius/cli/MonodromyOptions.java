@@ -207,8 +207,8 @@ final class MonodromyOptions implements OptionGroup {
         }
         notes.add(String.format(Locale.ROOT, "residual of the conditions: largest %.2e (error estimate of its quantity"
                 + " %.2e); free real directions %d (gauge)", worst, estimate, found.freeDirections()));
-        notes.add(String.format(Locale.ROOT, "the error estimates of values of this solution do not include the error"
-                + " of its start data (relative %.1e)", worstRelative));
+        notes.add(String.format(Locale.ROOT, "the error of these start data (largest relative %.1e) is carried into the"
+                + " error estimates of the values", worstRelative));
     }
 
     private static Complex number(String option, String text) {
