@@ -1,7 +1,8 @@
 /**
  * The command-line tool: one class per command, shared option groups (the solution of any kind, regions, digits,
- * solver settings), one place that writes value rows ({@link org.tertius.cli.ValueRows}) and pole lists ({@link
- * org.tertius.cli.SingularityRows}), one place that draws fields ({@link org.tertius.cli.FieldPainter}) and line
+ * solver settings, a member selected by its monodromy data), one place that writes value rows ({@link
+ * org.tertius.cli.ValueRows}), pole lists ({@link org.tertius.cli.SingularityRows}) and monodromy data ({@link
+ * org.tertius.cli.MonodromyRows}), one place that draws fields ({@link org.tertius.cli.FieldPainter}) and line
  * plots ({@link org.tertius.cli.LinePlot}). Commands work on the equation-neutral face of a solution.
  *
  * <p>May depend on every module. Commands do not call each other.
