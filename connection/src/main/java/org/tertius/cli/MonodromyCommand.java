@@ -3,6 +3,7 @@ package org.tertius.cli;
 import java.io.PrintWriter;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import org.apache.commons.cli.Options;
 import org.hipparchus.complex.Complex;
 import org.tertius.core.InvalidInputException;
@@ -140,9 +141,9 @@ public final class MonodromyCommand implements Command {
                 out.println("# " + n);
             }
             for (int i = 0; i < points.size(); i++) {
-                out.println("# self-checks at " + points.get(i) + ": worst " + String.format("%.2g",
+                out.println("# self-checks at " + points.get(i) + ": worst " + String.format(Locale.ROOT, "%.2g",
                         data.get(i).worstCheck()) + " of its bound, " + data.get(i).connectionNormalization()
-                        .name().toLowerCase() + " normalisation of E");
+                        .name().toLowerCase(Locale.ROOT) + " normalisation of E");
             }
             out.println(rows.columns());
             for (int i = 0; i < points.size(); i++) {
@@ -159,7 +160,7 @@ public final class MonodromyCommand implements Command {
             }
         }
         if (invariance != null && invariance > 1) {
-            err.println("tertius: the data at the points disagree by " + String.format("%.3g", invariance)
+            err.println("tertius: the data at the points disagree by " + String.format(Locale.ROOT, "%.3g", invariance)
                     + " times their estimates: they cannot be vouched for (points across a branch cut of the"
                     + " solution, or estimates too small)");
             status = Main.EXIT_UNREACHED;
@@ -180,7 +181,7 @@ public final class MonodromyCommand implements Command {
                     + " double-precision state, its error estimate carried into err");
         }
         if (invariance != null) {
-            notes.add(String.format("invariance over %d points: largest disagreement %.3g times the estimates (<= 1:"
+            notes.add(String.format(Locale.ROOT, "invariance over %d points: largest disagreement %.3g times the estimates (<= 1:"
                     + " the data agree)", count, invariance));
         }
         return notes;

@@ -155,7 +155,8 @@ final class MonodromyOptions implements OptionGroup {
         List<Complex> zero = stokesZero == null ? null : numbers("--stokes-zero", stokesZero, 2);
         List<Complex> e = connection == null ? null : numbers("--connection", connection, 4);
         if (trivialStokesZero && zero != null) {
-            throw new InvalidInputException("--trivial-stokes-zero", "does not go with --stokes-zero (give one of them)");
+            throw new InvalidInputException("--trivial-stokes-zero", "does not go with --stokes-zero (give one of"
+                    + " them)");
         }
         if (inf != null && zero != null && e != null) {
             c.add(MonodromyCondition.allData(AR, inf, zero, new Matrix<>(e.get(0), e.get(1), e.get(2), e.get(3)), m,

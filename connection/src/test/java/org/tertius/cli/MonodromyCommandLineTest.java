@@ -257,7 +257,8 @@ class MonodromyCommandLineTest {
             assertTrue(Math.abs(qa - qb) <= 2 * (Double.parseDouble(fa[11]) + Double.parseDouble(fb[11])) + 1e-9,
                     "|q| " + qa + " vs " + qb);
         }
-        double origin = Math.hypot(Double.parseDouble(a.get(2).split(",")[3]), Double.parseDouble(a.get(2).split(",")[4]));
+        String[] near = a.get(2).split(",");
+        double origin = Math.hypot(Double.parseDouble(near[3]), Double.parseDouble(near[4]));
         // q is even in x: |q(0.001)| = 4 + O(1e-6)
         assertEquals(4, origin, 1e-4);
     }
