@@ -15,9 +15,11 @@ import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.tertius.core.UnreachableTargetException;
 import org.tertius.core.number.SurfacePoint;
+import org.tertius.core.step.SolverSettings;
 import org.tertius.hierarchy.MemberParameters;
 import org.tertius.hierarchy.MemberSolution;
 import org.tertius.hierarchy.MemberValue;
+import org.tertius.hierarchy.nls.NearFieldProfile;
 import org.tertius.hierarchy.monodromy.Estimate;
 import org.tertius.hierarchy.monodromy.MonodromyData;
 import org.tertius.hierarchy.monodromy.MonodromyMap;
@@ -261,6 +263,40 @@ class MonodromyCommandLineTest {
         double origin = Math.hypot(Double.parseDouble(near[3]), Double.parseDouble(near[4]));
         // q is even in x: |q(0.001)| = 4 + O(1e-6)
         assertEquals(4, origin, 1e-4);
+    }
+
+    /**
+     * The profile at T = 1/2 (member 2) from all its data (trivial Stokes matrices at both points, m = m0 = 0 and E
+     * of the profile, as the monodromy command prints them) and a first guess 3 per cent off its state at x = 1/2:
+     * its values at x = 1/2 and 0 agree with the profile's. Generated guesses do not converge for this problem within
+     * minutes (tried: exit 3), hence the guess.
+     */
+    @Test
+    @Tag("slow")
+    void theProfileAtAPositiveTimeFollowsFromAllItsDataAndAGuess() {
+        MemberSolution profile = NearFieldProfile.of(2, 0, SolverSettings.defaults()).solution()
+                .atTime(new Complex(0.5));
+        List<Complex> guess = new ArrayList<>();
+        for (Complex c : profile.evaluate(new Complex(0.5)).state()) {
+            guess.add(c.multiply(new Complex(1.02, 0.02)));
+        }
+        double h = Math.sqrt(0.5);
+        String e = text(new Complex(h)) + "," + text(new Complex(-h)) + "," + text(new Complex(h)) + ","
+                + text(new Complex(h));
+        CommandLineToolTest.Run r = CommandLineToolTest.run("eval", "--member", "2", "--times", "0.5", "--s", "2",
+                "--m", "0", "--m0", "0", "--x0", "0.5", "--stokes-infinity", "0,0,0,0", "--stokes-zero", "0,0",
+                "--connection", e, "--guess", join(guess), "--at", "0.5,0");
+        assertEquals(0, r.status, r.err);
+        List<String> rows = r.out.lines().filter(l -> !l.startsWith("#")).toList();
+        Complex[] at = {new Complex(0.5), Complex.ZERO};
+        for (int i = 0; i < 2; i++) {
+            String[] f = rows.get(i + 1).split(",");
+            MemberValue v = profile.evaluate(at[i]);
+            double diff = Math.hypot(Double.parseDouble(f[3]) - v.q().getReal(), Double.parseDouble(f[4])
+                    - v.q().getImaginary());
+            assertTrue(diff <= 2 * (Double.parseDouble(f[11]) + v.errorQ()), "x = " + at[i] + ": q differs by " + diff
+                    + " (estimates " + f[11] + ", " + v.errorQ() + ")");
+        }
     }
 
     /** A pole of q of the generic solution near 1 - i, by Newton on 1/q (q ~ c / (x - p)). */
