@@ -359,6 +359,28 @@ class MonodromyCommandLineTest {
                 "--at", "1"));
     }
 
+    /** Hostile values of the command's own options: exit 0, 2 or 3, never an internal error; refusals in one line. */
+    @Test
+    void hostileValuesEndCleanly() {
+        String[][] options = {{"--at", "1e400", "nan", "", " ", "x", "0", "1,,2", "1:2", "-1", "1e-300", "3+2i"},
+            {"--sheet", "x", "-1", "99999999999", "2"}, {"--digits", "x", "15", "201", "-1", ""},
+            {"--format", "xml", "", "JSON"}};
+        for (String[] o : options) {
+            for (String v : List.of(o).subList(1, o.length)) {
+                String[] line = o[0].equals("--at") ? generic("monodromy", "--at", v)
+                        : generic("monodromy", "--at", "0.7", o[0], v);
+                CommandLineToolTest.Run r = CommandLineToolTest.run(line);
+                String shown = o[0] + " '" + v + "': " + r.err;
+                assertTrue(r.status == 0 || r.status == Main.EXIT_BAD_INPUT || r.status == Main.EXIT_UNREACHED, shown);
+                assertTrue(!r.err.contains("internal error") && !r.err.contains("\tat "), shown);
+                if (r.status == Main.EXIT_BAD_INPUT) {
+                    assertEquals(1, r.err.lines().count(), shown);
+                    assertEquals("", r.out, shown);
+                }
+            }
+        }
+    }
+
     /** Conditions no solution satisfies: the iteration says so (exit 3), and no value is written. */
     @Test
     @Tag("slow")
