@@ -3,6 +3,7 @@ package org.tertius.cli;
 import java.io.PrintWriter;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import org.apache.commons.cli.Options;
 import org.hipparchus.complex.Complex;
 import org.tertius.core.InvalidInputException;
@@ -100,9 +101,15 @@ public final class MonodromyCommand implements Command {
             throw new InvalidInputException("--member1-s", "applies to Painleve III solutions only (a member has"
                     + " its own s)");
         }
-        ComputedSolution s = solution.solution();
         Complex mapS = member1S == null ? DEFAULT_MEMBER1_S : ExactText.parse("--member1-s", member1S).toComplex();
+        if (!(mapS.norm() > 0) || !Double.isFinite(mapS.norm())) {
+            throw new InvalidInputException("--member1-s", "must be a finite non-zero complex number, got " + mapS);
+        }
+        ComputedSolution s = solution.solution();
         List<SurfacePoint> points = Targets.list("--at", targets, solution.sheet(sheet), s.coordinate());
+        if (points.isEmpty()) {
+            throw new InvalidInputException("--at", "at least one point is required: --at X[,X...]");
+        }
         if (digits == null) {
             return report(MonodromyMap.doublePrecision(), s, mapS, points, out, err);
         }
@@ -134,9 +141,9 @@ public final class MonodromyCommand implements Command {
                 out.println("# " + n);
             }
             for (int i = 0; i < points.size(); i++) {
-                out.println("# self-checks at " + points.get(i) + ": worst " + String.format("%.2g",
+                out.println("# self-checks at " + points.get(i) + ": worst " + String.format(Locale.ROOT, "%.2g",
                         data.get(i).worstCheck()) + " of its bound, " + data.get(i).connectionNormalization()
-                        .name().toLowerCase() + " normalisation of E");
+                        .name().toLowerCase(Locale.ROOT) + " normalisation of E");
             }
             out.println(rows.columns());
             for (int i = 0; i < points.size(); i++) {
@@ -153,7 +160,7 @@ public final class MonodromyCommand implements Command {
             }
         }
         if (invariance != null && invariance > 1) {
-            err.println("tertius: the data at the points disagree by " + String.format("%.3g", invariance)
+            err.println("tertius: the data at the points disagree by " + String.format(Locale.ROOT, "%.3g", invariance)
                     + " times their estimates: they cannot be vouched for (points across a branch cut of the"
                     + " solution, or estimates too small)");
             status = Main.EXIT_UNREACHED;
@@ -174,7 +181,7 @@ public final class MonodromyCommand implements Command {
                     + " double-precision state, its error estimate carried into err");
         }
         if (invariance != null) {
-            notes.add(String.format("invariance over %d points: largest disagreement %.3g times the estimates (<= 1:"
+            notes.add(String.format(Locale.ROOT, "invariance over %d points: largest disagreement %.3g times the estimates (<= 1:"
                     + " the data agree)", count, invariance));
         }
         return notes;

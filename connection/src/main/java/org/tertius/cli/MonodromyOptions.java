@@ -155,7 +155,8 @@ final class MonodromyOptions implements OptionGroup {
         List<Complex> zero = stokesZero == null ? null : numbers("--stokes-zero", stokesZero, 2);
         List<Complex> e = connection == null ? null : numbers("--connection", connection, 4);
         if (trivialStokesZero && zero != null) {
-            throw new InvalidInputException("--trivial-stokes-zero", "does not go with --stokes-zero (give one of them)");
+            throw new InvalidInputException("--trivial-stokes-zero", "does not go with --stokes-zero (give one of"
+                    + " them)");
         }
         if (inf != null && zero != null && e != null) {
             c.add(MonodromyCondition.allData(AR, inf, zero, new Matrix<>(e.get(0), e.get(1), e.get(2), e.get(3)), m,
@@ -207,12 +208,20 @@ final class MonodromyOptions implements OptionGroup {
         }
         notes.add(String.format(Locale.ROOT, "residual of the conditions: largest %.2e (error estimate of its quantity"
                 + " %.2e); free real directions %d (gauge)", worst, estimate, found.freeDirections()));
-        notes.add(String.format(Locale.ROOT, "the error estimates of values of this solution do not include the error"
-                + " of its start data (relative %.1e)", worstRelative));
+        notes.add(String.format(Locale.ROOT, "the error of these start data (largest relative %.1e) is carried into the"
+                + " error estimates of the values", worstRelative));
     }
 
     private static Complex number(String option, String text) {
-        return ExactText.parse(option, text).toComplex();
+        return finite(option, ExactText.parse(option, text).toComplex());
+    }
+
+    private static Complex finite(String option, Complex c) {
+        if (!Double.isFinite(c.getReal()) || !Double.isFinite(c.getImaginary())) {
+            throw new InvalidInputException(option, "must be finite complex numbers (within the range of doubles), got "
+                    + c);
+        }
+        return c;
     }
 
     private static List<Complex> numbers(String option, String text, int count) {
@@ -222,7 +231,7 @@ final class MonodromyOptions implements OptionGroup {
         }
         List<Complex> out = new ArrayList<>();
         for (ExactNumber e : list) {
-            out.add(e.toComplex());
+            out.add(finite(option, e.toComplex()));
         }
         return out;
     }

@@ -19,6 +19,7 @@ public final class MemberSolutionBuilder {
     private List<Complex> state;
     private Complex[] origin;
     private ExactStart exact;
+    private double[] startErrors;
 
     MemberSolutionBuilder(MemberParameters parameters) {
         if (parameters == null) {
@@ -49,6 +50,23 @@ public final class MemberSolutionBuilder {
         this.state = state;
         this.origin = null;
         this.exact = null;
+        return this;
+    }
+
+    /**
+     * Error bounds of the start state given to {@link #start(Complex, int, List)} (one per unknown, finite, &gt;= 0),
+     * e.g. of a state found by the inverse monodromy map: the flow carries them into the error estimates of every
+     * value. A start with error bounds is not exact, so it has no high-precision form.
+     */
+    public MemberSolutionBuilder startErrors(double[] errors) {
+        if (errors != null) {
+            for (double e : errors) {
+                if (!(e >= 0) || Double.isInfinite(e)) {
+                    throw new InvalidInputException("start errors", "must be finite and >= 0, got " + e);
+                }
+            }
+        }
+        this.startErrors = errors == null ? null : errors.clone();
         return this;
     }
 
@@ -113,8 +131,13 @@ public final class MemberSolutionBuilder {
         member.checkState(state);
         ExactStart e = exact != null ? exact : ExactStart.atPoint(ExactNumber.ofDouble("x0", x0),
                 ExactStart.ofDoubles("start state", state));
-        return new MemberSolution(member, parameters, settings, x0, x0Sheet, state, new double[state.size()],
-                x0Sheet == 0 ? e : null, null);
+        if (startErrors != null && startErrors.length != state.size()) {
+            throw new InvalidInputException("start errors", "member " + n + " has " + state.size() + " unknowns, got "
+                    + startErrors.length + " error bounds");
+        }
+        boolean withErrors = startErrors != null && Arrays.stream(startErrors).anyMatch(v -> v > 0);
+        return new MemberSolution(member, parameters, settings, x0, x0Sheet, state, withErrors ? startErrors
+                : new double[state.size()], x0Sheet == 0 && !withErrors ? e : null, null);
     }
 
     private MemberSolution fromOrigin() {

@@ -89,17 +89,22 @@ public final class MonodromySolution<T> {
     }
 
     /**
-     * The member solution started from this state (double precision), at x on the sheet given by the argument of x
-     * for member 1.
+     * The member solution started from this state (double precision) with its error estimate (carried into the
+     * error estimates of the values), at x on the sheet given by the argument of x for member 1.
      */
     public MemberSolution solution(SolverSettings settings) {
         AnalyticArithmetic<T> ar = lax.arithmetic();
         Complex x = ar.toComplex(lax.x());
         int sheet = lax.order() == 1 ? (int) Math.round((lax.topArgument() - x.getArgument()) / (2 * Math.PI)) : 0;
         List<Complex> state = new ArrayList<>();
-        for (T v : lax.state()) {
-            state.add(ar.toComplex(v));
+        double[] errors = new double[lax.state().size()];
+        for (int i = 0; i < errors.length; i++) {
+            Complex v = ar.toComplex(lax.state().get(i));
+            state.add(v);
+            // the rounding to double when the state was found in more digits
+            errors[i] = lax.stateError(i) + (ar.epsilon() < 1e-16 ? Math.ulp(v.norm()) : 0);
         }
-        return MemberSolution.builder(parameters()).settings(settings).start(x, sheet, state).build();
+        return MemberSolution.builder(parameters()).settings(settings).start(x, sheet, state).startErrors(errors)
+                .build();
     }
 }
