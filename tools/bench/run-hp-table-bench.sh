@@ -54,11 +54,12 @@ def rows(p):
 a, b = rows(sys.argv[1]), rows(sys.argv[2])
 worst = 0
 for ra, rb in zip(a, b):
-    for x, y in zip(ra[3:7], rb[3:7]):
-        dx, dy = Decimal(x), Decimal(y)
-        if dx != dy:
-            rel = abs(dx - dy) / max(abs(dx), abs(dy))
-            worst = max(worst, float(rel))
-print("  largest relative difference of the values A/B: %.1e (%d rows)" % (worst, len(a)))
+    for k in (3, 5):  # w and w', each relative to its modulus (as the digit estimates are)
+        xr, xi, yr, yi = (Decimal(v) for v in (ra[k], ra[k + 1], rb[k], rb[k + 1]))
+        d = ((xr - yr) ** 2 + (xi - yi) ** 2).sqrt()
+        m = max((xr * xr + xi * xi).sqrt(), (yr * yr + yi * yi).sqrt())
+        if d != 0:
+            worst = max(worst, float(d / m))
+print("  largest difference of the values A/B relative to their moduli: %.1e (%d rows)" % (worst, len(a)))
 PY
 done
