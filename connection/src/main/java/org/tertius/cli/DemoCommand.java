@@ -25,6 +25,9 @@ import org.tertius.core.region.RegionSettings;
 import org.tertius.core.region.RegionSolver;
 import org.tertius.core.region.RegionTree;
 import org.tertius.core.region.Singularity;
+import org.tertius.hierarchy.PlaneGrid;
+import org.tertius.hierarchy.nls.NearFieldProfile;
+import org.tertius.hierarchy.nls.ProfileValue;
 
 /**
  * The built-in demo scenario: a generic D6 solution (alpha = 1, beta = -1/2, gamma = 1, delta = -1,
@@ -57,6 +60,37 @@ public final class DemoCommand implements Command {
     @Override
     public String description() {
         return "Run the built-in scenario (a generic D6 solution) and write its results into a folder.";
+    }
+
+    /**
+     * |Psi(X, T)| of the near-field profile of focusing NLS over X in [-8, 8], T in [-2, 2] (rows in parallel, the
+     * others by symmetry), drawn; its value at the origin, Psi(0, 0) = 4, printed with its error.
+     */
+    private Path nearFieldProfile(PrintWriter console) throws IOException {
+        NearFieldProfile psi = NearFieldProfile.standard();
+        double[] x = new double[401];
+        double[] t = new double[161];
+        for (int i = 0; i < x.length; i++) {
+            x[i] = -8 + 16.0 * i / (x.length - 1);
+        }
+        for (int j = 0; j < t.length; j++) {
+            t[j] = -2 + 4.0 * j / (t.length - 1);
+        }
+        PlaneGrid.Result r = psi.grid(x, t).compute(Runtime.getRuntime().availableProcessors(), null, null);
+        double[] modulus = new double[x.length * t.length];
+        for (int j = 0; j < t.length; j++) {
+            for (int i = 0; i < x.length; i++) {
+                modulus[j * x.length + i] = Double.isFinite(r.error(j, i)) ? r.q(j, i).norm() : Double.NaN;
+            }
+        }
+        BufferedImage img = PlanePainter.paint(modulus, x.length, t.length, -8, 8, -2, 2, PlanePainter.Scale.MODULUS,
+                "near-field profile of focusing NLS: |Psi(X, T)|", "X", "T", "|Psi|", 900, 420);
+        Path picture = out.resolve("nls-profile.png");
+        OutputFile.writeWhole("--out", picture, p -> ImageIO.write(img, "png", p.toFile()));
+        ProfileValue origin = psi.value(0, 0);
+        console.printf(Locale.ROOT, "  near-field NLS profile: Psi(0, 0) = %s (err %.1e); |Psi| over [-8,8] x [-2,2],"
+                + " largest error estimate %.1e%n", ComplexText.format(origin.psi()), origin.error(), r.maxError());
+        return picture;
     }
 
     @Override
@@ -133,12 +167,13 @@ public final class DemoCommand implements Command {
         double[] px = onLine.stream().mapToDouble(p -> p.point().re()).toArray();
         BufferedImage lp = LinePlot.draw(s.equation().toString(), "z (real axis)", "w", x, re, im, px, 900, 500);
         OutputFile.writeWhole("--out", plot, p -> ImageIO.write(lp, "png", p.toFile()));
+        Path profile = nearFieldProfile(console);
         long poleCount = found.stream().filter(p -> p.kind() == Singularity.Kind.POLE).count();
         console.printf(Locale.ROOT, "  %d poles and %d zeros in [-8,8]^2 (sheet 0); %d pole(s) on the real"
                 + " segment [0.25, 10]%n", poleCount, found.size() - poleCount, onLine.size());
         console.printf(Locale.ROOT, "  grid 321 x 321: %s%n", r.statistics());
         console.println("wrote:");
-        for (Path p : List.of(values, table, plot, picture, poles)) {
+        for (Path p : List.of(values, table, plot, picture, poles, profile)) {
             console.println("  " + p.toAbsolutePath());
         }
         console.printf(Locale.ROOT, "done in %.1f s%n", (System.nanoTime() - t0) / 1e9);
