@@ -353,6 +353,9 @@ class MonodromyCommandLineTest {
                 "0.5,0.25", "--at", "1");
         assertRefused("det E = 1", CommandLineToolTest.with(data, "--connection", "1,1,1,1"));
         assertRefused("cyclic relation", CommandLineToolTest.with(data, "--connection", "1,0,0,1"));
+        // a connection matrix alone is a set of conditions, but det E = 1 holds for every solution's data
+        assertRefused("--connection: violates det E = 1", CommandLineToolTest.with(selection, "--m0", "0",
+                "--connection", "1,0,0,2", "--at", "1"));
         assertRefused("--stokes-infinity: expected 2", CommandLineToolTest.with(selection, "--m0", "0",
                 "--stokes-infinity", "1,2,3", "--at", "1"));
         assertRefused("reality", CommandLineToolTest.with(selection, "--m0", "0", "--real", "--trivial-stokes-zero",
