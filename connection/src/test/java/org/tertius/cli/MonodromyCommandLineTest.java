@@ -335,6 +335,12 @@ class MonodromyCommandLineTest {
         assertRefused("--member1-s", generic("monodromy", "--at", "0.5", "--member1-s", "1"));
         assertRefused("--at", generic("monodromy"));
         assertRefused("--at: at least one point", generic("monodromy", "--at", ","));
+        StringBuilder many = new StringBuilder("1");
+        for (int i = 1; i <= MonodromyCommand.MAX_POINTS; i++) {
+            many.append(",1+").append(i).append("e-6i");
+        }
+        assertRefused("--at: at most " + MonodromyCommand.MAX_POINTS + " points", generic("monodromy", "--at",
+                many.toString()));
         assertRefused("--member1-s: must be a finite non-zero", "monodromy", "--alpha", "1", "--beta", "0", "--gamma",
                 "1", "--delta", "-1", "--z0", "1", "--w0", "1", "--dw0", "0", "--at", "1", "--member1-s", "0");
         assertRefused("--stokes-zero: must be finite", CommandLineToolTest.with(CommandLineToolTest.with(
