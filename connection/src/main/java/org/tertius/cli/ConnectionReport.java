@@ -160,6 +160,12 @@ final class ConnectionReport {
         if (startAt != null) {
             tau = logOf("--start-at", startAt, sheet);
             v = data.expansion(eq).at(tau);
+            if (!(v.errW() <= 1 + v.w().norm()) || !(v.errDw() <= 1 + v.dw().norm())) {
+                // not one correct digit: the point lies beyond the reach of the series at 0
+                throw new InvalidInputException("--start-at", "the expansion at 0 does not reach z = " + startAt
+                        + " (estimated errors of w, w' " + v.errW() + ", " + v.errDw() + "); choose a point closer to 0,"
+                        + " or leave --start-at out for the largest |z| <= " + ZERO_START_RADIUS + " where it is accurate");
+            }
         } else {
             tau = new Complex(Math.log(ZERO_START_RADIUS), angle + 2 * Math.PI * sheet);
             v = data.expansion(eq).startData(tau, ZERO_START_TOLERANCE);

@@ -7,6 +7,7 @@ import org.apache.commons.cli.Options;
 import org.hipparchus.complex.Complex;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.number.ComplexArithmetic;
+import org.tertius.core.number.ComplexText;
 import org.tertius.core.number.ExactNumber;
 import org.tertius.core.step.SolverSettings;
 import org.tertius.hierarchy.MemberParameters;
@@ -168,6 +169,9 @@ final class MonodromyOptions implements OptionGroup {
             for (int k = 0; zero != null && k < 2; k++) {
                 c.add(MonodromyCondition.stokesAtZero(k + 1, zero.get(k)));
             }
+            if (e != null) {
+                unitDeterminant(e);
+            }
             for (int k = 0; e != null && k < 4; k++) {
                 c.add(MonodromyCondition.connection(k / 2 + 1, k % 2 + 1, e.get(k)));
             }
@@ -179,6 +183,19 @@ final class MonodromyOptions implements OptionGroup {
             c.add(MonodromyCondition.connectionProduct(number("--connection-product", connectionProduct)));
         }
         return c;
+    }
+
+    /** Refuses a connection matrix given alone whose determinant is not 1 (the constraint det E = 1 of MonodromyMap's contract: no solution has another). */
+    private static void unitDeterminant(List<Complex> e) {
+        Complex det = e.get(0).multiply(e.get(3)).subtract(e.get(1).multiply(e.get(2)));
+        double size = 1;
+        for (Complex v : e) {
+            size = Math.max(size, v.norm());
+        }
+        if (!(det.subtract(1).norm() <= DATA_TOLERANCE * size * size)) {
+            throw new InvalidInputException("--connection", "violates det E = 1 (E11 E22 - E12 E21 must be 1 within "
+                    + DATA_TOLERANCE + " relative), got det E = " + ComplexText.format(det));
+        }
     }
 
     private void report(MonodromySolution<Complex> found, Complex x, List<MonodromyCondition<Complex>> conditions) {

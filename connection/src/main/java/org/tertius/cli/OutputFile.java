@@ -1,6 +1,7 @@
 package org.tertius.cli;
 
 import java.io.IOException;
+import java.nio.file.FileSystemException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
@@ -28,7 +29,10 @@ final class OutputFile {
             Path probe = Files.createTempFile(dir, "." + path.getFileName(), ".probe");
             Files.delete(probe);
         } catch (IOException | SecurityException e) {
-            throw new InvalidInputException(option, "cannot write " + path + ": " + e.getMessage());
+            String reason = e instanceof FileSystemException && ((FileSystemException) e).getReason() != null
+                    ? ((FileSystemException) e).getReason() : "refused";
+            throw new InvalidInputException(option, "cannot write " + path + ": the folder " + dir + " does not take"
+                    + " new files (" + reason + "); choose a writable folder");
         }
     }
 

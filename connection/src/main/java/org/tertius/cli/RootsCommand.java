@@ -135,8 +135,7 @@ public final class RootsCommand implements Command {
                     + " Clarkson, J. Phys. A 36 (2003) 9507, Thm 2.1; DLMF 32.8(iii))");
             comments.add(count(first, s.degree(), "roots"));
         } else {
-            RationalSolution r = RationalSolution.of(SpecialOptions.parameters(equation.texts()),
-                    index == null ? 0 : index);
+            RationalSolution r = rational(index == null ? 0 : index);
             first = r.zeros(d);
             second = r.poles(d);
             firstKind = "zero";
@@ -208,6 +207,22 @@ public final class RootsCommand implements Command {
         }
         return degree + " " + what + " certified: " + text + (proved ? ", all simple (proved)" : "")
                 + (exact > 0 || simple < disks.size() ? "; multiplicities add up to " + degree : "");
+    }
+
+    /** The rational solution of the equation given; a library refusal names the option that sets its argument. */
+    private RationalSolution rational(int which) {
+        try {
+            return RationalSolution.of(SpecialOptions.parameters(equation.texts()), which);
+        } catch (InvalidInputException e) {
+            String reason = e.getMessage().substring(e.argument().length() + 2);
+            if ("family".equals(e.argument())) {
+                throw new InvalidInputException("--alpha", "(with --beta, --gamma, --delta) " + reason);
+            }
+            if ("index".equals(e.argument()) || "root".equals(e.argument())) {
+                throw new InvalidInputException("--special-index", reason);
+            }
+            throw e;
+        }
     }
 
     private static String row(String kind, CertifiedRoot r, int digits) {

@@ -157,6 +157,16 @@ class CommandLineToolTest {
             assertEquals(1, r.err.lines().count(), r.err);
             assertTrue(!Files.exists(dir.resolve("x.png")));
         }
+        // a folder whose permissions allow writing but whose file system takes no new files (Linux /proc): the
+        // refusal says so in words, not with the name of the probe file tried
+        if (Files.isDirectory(Path.of("/proc/self"))) {
+            Run r = run(with(with(new String[] {"table"}, DEMO), "--line", "1:2:3", "--out", "/proc/x.csv"));
+            assertEquals(2, r.status, r.err);
+            assertEquals(1, r.err.lines().count(), r.err);
+            assertTrue(r.err.contains("--out: cannot write /proc/x.csv: the folder /proc does not take new files"),
+                    r.err);
+            assertTrue(!r.err.contains(".probe"), r.err);
+        }
     }
 
     @Test

@@ -335,6 +335,12 @@ class MonodromyCommandLineTest {
         assertRefused("--member1-s", generic("monodromy", "--at", "0.5", "--member1-s", "1"));
         assertRefused("--at", generic("monodromy"));
         assertRefused("--at: at least one point", generic("monodromy", "--at", ","));
+        StringBuilder many = new StringBuilder("1");
+        for (int i = 1; i <= MonodromyCommand.MAX_POINTS; i++) {
+            many.append(",1+").append(i).append("e-6i");
+        }
+        assertRefused("--at: at most " + MonodromyCommand.MAX_POINTS + " points", generic("monodromy", "--at",
+                many.toString()));
         assertRefused("--member1-s: must be a finite non-zero", "monodromy", "--alpha", "1", "--beta", "0", "--gamma",
                 "1", "--delta", "-1", "--z0", "1", "--w0", "1", "--dw0", "0", "--at", "1", "--member1-s", "0");
         assertRefused("--stokes-zero: must be finite", CommandLineToolTest.with(CommandLineToolTest.with(
@@ -353,6 +359,9 @@ class MonodromyCommandLineTest {
                 "0.5,0.25", "--at", "1");
         assertRefused("det E = 1", CommandLineToolTest.with(data, "--connection", "1,1,1,1"));
         assertRefused("cyclic relation", CommandLineToolTest.with(data, "--connection", "1,0,0,1"));
+        // a connection matrix alone is a set of conditions, but det E = 1 holds for every solution's data
+        assertRefused("--connection: violates det E = 1", CommandLineToolTest.with(selection, "--m0", "0",
+                "--connection", "1,0,0,2", "--at", "1"));
         assertRefused("--stokes-infinity: expected 2", CommandLineToolTest.with(selection, "--m0", "0",
                 "--stokes-infinity", "1,2,3", "--at", "1"));
         assertRefused("reality", CommandLineToolTest.with(selection, "--m0", "0", "--real", "--trivial-stokes-zero",

@@ -347,7 +347,8 @@ class SpecialCommandLineTest {
         "roots --n 3 --mu 0 --alpha 3|give either --n N --mu MU",
         "roots --n 3 --mu 1/2 --digits 0|--digits: must be in [1, 10000]",
         "roots --n -1 --mu 0|--n: must be in [0, 1000]",
-        "roots --alpha 1 --beta 1 --gamma 1 --delta -1|no rational solution"})
+        "roots --alpha 1 --beta 1 --gamma 1 --delta -1|--alpha: (with --beta, --gamma, --delta) no rational solution",
+        "roots --alpha 3 --beta 1 --gamma 1 --delta -1 --special-index 5|--special-index: must be in [0, 1]"})
     void badInputIsOneLineNamingTheConditionAndExitTwo(String line, String message) {
         CommandLineToolTest.Run r = run(line.split(" "));
         assertEquals(2, r.status, r.err);

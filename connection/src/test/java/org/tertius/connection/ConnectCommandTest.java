@@ -295,6 +295,11 @@ class ConnectCommandTest {
         assertTrue(e.contains("grows along the ray"), e);
         e = refused(args(demo, "--at-zero", "--radii", "10:40"));
         assertTrue(e.contains("--radii") && e.contains("--at-infinity"), e);
+        // a typed start point beyond the reach of the series at 0 (w came out as Infinity, w' as NaN, exit 0)
+        e = refused(args(EQ, "--from-zero", "0.3,0.8", "--start-at", "1e9"));
+        assertTrue(e.contains("--start-at: the expansion at 0 does not reach"), e);
+        e = refused(args(EQ, "--from-zero", "0.3,0.8", "--start-at", "5"));
+        assertTrue(e.contains("--start-at"), e);
     }
 
     /**
