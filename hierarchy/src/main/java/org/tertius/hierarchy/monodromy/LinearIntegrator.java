@@ -107,8 +107,8 @@ final class LinearIntegrator<T> {
                 T next = logR == end[0] && angle == end[1] ? point(logR, angle) : nearPoint(logR, angle);
                 T h = ar.subtract(next, c);
                 y = sumVector(st.vectorSeries, h);
-                propagators.add(sumMatrix(st.matrixSeries, ar.toComplex(h)));
-                local.add(localError(st, ma.magnitude(h)));
+                propagators.add(sumMatrix(st.matrixSeries, ar.toComplex(h).divide(st.scale)));
+                local.add(localError(st, ma.magnitude(h) / st.scale));
                 c = next;
             }
         }
@@ -139,7 +139,9 @@ final class LinearIntegrator<T> {
 
     private static final class Step<T> {
         List<Matrix.Vector<T>> vectorSeries;
+        /** Coefficients of the propagator in powers of h / scale (so that they stay within the range of doubles). */
         List<Matrix<Complex>> matrixSeries;
+        double scale;
         double length;
         double[] vectorMagnitudes;
         double[] matrixMagnitudes;
@@ -161,6 +163,9 @@ final class LinearIntegrator<T> {
         T twoC = ar.add(c, c);
         Complex cd = ar.toComplex(c);
         Complex c2invD = cd.multiply(cd).reciprocal();
+        // the propagator's coefficients in powers of h / rho, rho the largest step: its coefficients in powers of h
+        // grow like |c|^-j and leave the range of doubles at high orders near lambda = 0 (found at 125 digits)
+        double rho = REACH * ma.magnitude(c);
         List<Matrix.Vector<T>> ys = new ArrayList<>();
         List<Matrix<Complex>> ms = new ArrayList<>();
         ys.add(y);
@@ -168,14 +173,16 @@ final class LinearIntegrator<T> {
         for (int j = 0; j < order; j++) {
             T g = ar.negate(ar.multiply(twoC, integers.get(j)));
             Matrix.Vector<T> sy = ma.scale(g, ys.get(j));
-            Matrix<Complex> sm = DOUBLE.scale(cd.multiply(-2.0 * j), ms.get(j));
+            Matrix<Complex> sm = DOUBLE.scale(cd.multiply(-2.0 * j * rho), ms.get(j));
             if (j >= 1) {
                 sy = add(sy, ma.scale(ar.negate(integers.get(j - 1)), ys.get(j - 1)));
-                sm = DOUBLE.add(sm, DOUBLE.scale(new Complex(-(j - 1)), ms.get(j - 1)));
+                sm = DOUBLE.add(sm, DOUBLE.scale(new Complex(-(j - 1) * rho * rho), ms.get(j - 1)));
             }
+            double power = rho;
             for (int i = 0; i <= Math.min(j, degree); i++) {
                 sy = add(sy, ma.apply(p.get(i), ys.get(j - i)));
-                sm = DOUBLE.add(sm, DOUBLE.multiply(pd.get(i), ms.get(j - i)));
+                sm = DOUBLE.add(sm, DOUBLE.scale(new Complex(power), DOUBLE.multiply(pd.get(i), ms.get(j - i))));
+                power *= rho;
             }
             ys.add(ma.scale(ar.multiply(c2inv, reciprocals.get(j)), sy));
             ms.add(DOUBLE.scale(c2invD.divide(j + 1), sm));
@@ -183,20 +190,27 @@ final class LinearIntegrator<T> {
         Step<T> st = new Step<>();
         st.vectorSeries = ys;
         st.matrixSeries = ms;
+        st.scale = rho;
         st.vectorMagnitudes = new double[order + 1];
         st.matrixMagnitudes = new double[order + 1];
+        double logRho = Math.log(rho);
         for (int j = 0; j <= order; j++) {
-            st.vectorMagnitudes[j] = ma.norm(ys.get(j));
+            // |phi_j| rho^j, formed from logarithms: |phi_j| alone can exceed the range of doubles
+            Matrix.Vector<T> v = ys.get(j);
+            st.vectorMagnitudes[j] = Math.exp(Math.max(logMagnitude(v.top()), logMagnitude(v.bottom())) + j * logRho);
             st.matrixMagnitudes[j] = DOUBLE.norm(ms.get(j));
         }
-        double length = REACH * ma.magnitude(c);
-        length = Math.min(length, admissible(st.vectorMagnitudes));
-        length = Math.min(length, admissible(st.matrixMagnitudes));
+        double length = rho;
+        length = Math.min(length, rho * admissible(st.vectorMagnitudes));
+        length = Math.min(length, rho * admissible(st.matrixMagnitudes));
         st.length = length;
         return st;
     }
 
-    /** The largest h with |phi_N| h^N + |phi_{N-1}| h^(N-1) &lt;= tolerance |phi_0| (each term half of it). */
+    /**
+     * The largest u with |c_N| u^N + |c_{N-1}| u^(N-1) &lt;= tolerance |c_0| (each term half of it), c_j the
+     * coefficients in powers of u = h / scale.
+     */
     private double admissible(double[] mag) {
         double scale = 0.5 * tolerance * mag[0];
         double h = Double.POSITIVE_INFINITY;
@@ -208,12 +222,21 @@ final class LinearIntegrator<T> {
         return h;
     }
 
-    private double localError(Step<T> st, double h) {
-        double truncation = st.vectorMagnitudes[order - 1] * Math.pow(h, order - 1)
-                + st.vectorMagnitudes[order] * Math.pow(h, order);
+    /** log |a|, -infinity for 0, also where |a| lies beyond the range of doubles. */
+    private double logMagnitude(T a) {
+        double m = ma.magnitude(a);
+        if (m == 0) {
+            return Double.NEGATIVE_INFINITY;
+        }
+        return Double.isFinite(m) ? Math.log(m) : ar.logAbs(a);
+    }
+
+    private double localError(Step<T> st, double u) {
+        double truncation = st.vectorMagnitudes[order - 1] * Math.pow(u, order - 1)
+                + st.vectorMagnitudes[order] * Math.pow(u, order);
         double sum = 0;
         for (int j = 0; j <= order; j++) {
-            sum += st.vectorMagnitudes[j] * Math.pow(h, j);
+            sum += st.vectorMagnitudes[j] * Math.pow(u, j);
         }
         return truncation + 2 * tolerance * sum;
     }
