@@ -67,26 +67,30 @@ public final class ConnectCommand implements Command {
         int direction = connection.direction();
         ConnectionRows rows = new ConnectionRows();
         boolean decided = true;
-        switch (direction) {
-            case 0:
-                decided = atZero(rows);
-                break;
-            case 1:
-                refuseDigits("--at-infinity", "the transseries at infinity and its fits are computed in double"
-                        + " precision only");
-                decided = ConnectionReport.atInfinity(painleve3(rows), connection.rayAngle(),
-                        connection.sheetIndex(), connection.sampleRadii(InfinityBehaviourFit.R_MIN,
-                                InfinityBehaviourFit.R_MAX), rows);
-                break;
-            case 2:
-                fromZero(rows);
-                break;
-            case 3:
-                refuseDigits("--from-infinity", "the transseries at infinity is summed in double precision only");
-                fromInfinity(rows);
-                break;
-            default:
-                decaying(rows);
+        try {
+            switch (direction) {
+                case 0:
+                    decided = atZero(rows);
+                    break;
+                case 1:
+                    refuseDigits("--at-infinity", "the transseries at infinity and its fits are computed in double"
+                            + " precision only");
+                    decided = ConnectionReport.atInfinity(painleve3(rows), connection.rayAngle(),
+                            connection.sheetIndex(), connection.sampleRadii(InfinityBehaviourFit.R_MIN,
+                                    InfinityBehaviourFit.R_MAX), rows);
+                    break;
+                case 2:
+                    fromZero(rows);
+                    break;
+                case 3:
+                    refuseDigits("--from-infinity", "the transseries at infinity is summed in double precision only");
+                    fromInfinity(rows);
+                    break;
+                default:
+                    decaying(rows);
+            }
+        } catch (InvalidInputException e) {
+            throw optionNamed(e, direction);
         }
         rows.write(out, connection.format);
         if (!decided) {
@@ -292,5 +296,45 @@ public final class ConnectCommand implements Command {
 
     private static String text(Apfloat a) {
         return a.toString(true);
+    }
+
+    /**
+     * A refusal of the library, named by the option the user typed: the library names its own parameters (ray, p,
+     * sigma, ..); a refusal that already names an option is passed on.
+     */
+    private static InvalidInputException optionNamed(InvalidInputException e, int direction) {
+        String argument = e.argument();
+        if (argument.startsWith("--")) {
+            return e;
+        }
+        String option;
+        switch (argument) {
+            case "ray":
+            case "angle":
+                option = "--ray";
+                break;
+            case "sheet":
+                option = "--sheet";
+                break;
+            case "radius":
+                option = direction == 1 ? "--radii" : "--start-at";
+                break;
+            case "lambda":
+                option = "--lambda";
+                break;
+            case "branch":
+                option = "--branch";
+                break;
+            default:
+                option = direction == 2 ? "--from-zero" : direction == 3 ? "--from-infinity"
+                        : direction < 0 ? (argument.equals("sigma") ? "--sigma" : "--lambda") : null;
+        }
+        if (option == null) {
+            return e;
+        }
+        String text = e.getMessage();
+        String message = text.startsWith(argument + ": ") ? text.substring(argument.length() + 2) : text;
+        return new InvalidInputException(option, option.equals("--" + argument) ? message
+                : "(" + argument + ") " + message);
     }
 }

@@ -30,7 +30,7 @@ import org.tertius.hierarchy.monodromy.MonodromyMap;
 public final class MonodromyCommand implements Command {
     /** Digits the command accepts (the work grows like the square of the digits times the Taylor steps). */
     static final int MIN_DIGITS = 16;
-    static final int MAX_DIGITS = 200;
+    static final int MAX_DIGITS = 125;
     /** Points per command: the data of all points are computed before the first row is written. */
     static final int MAX_POINTS = 10_000;
     /** Measured seconds per point in double precision (member 1 and Painleve III, 200 points, 2-core machine). */

@@ -10,6 +10,7 @@ import org.tertius.connection.scan.Shard;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.TertiusException;
 import org.tertius.core.face.ComputedSolution;
+import org.tertius.core.number.ComplexText;
 import org.tertius.core.number.ExactPoint;
 import org.tertius.core.number.SurfacePoint;
 import org.tertius.core.region.Grid;
@@ -270,7 +271,7 @@ public final class TableCommand implements Command {
         if (tree.integrated()) {
             for (Singularity pole : PoleFinder.alongLine(tree, points)) {
                 String msg = String.format(Locale.ROOT, "%s on the line at %s (lead %s, position error %.1e)",
-                        pole.kind().label(), pole.point(), pole.lead(), pole.error());
+                        pole.kind().label(), pole.point(), ComplexText.format(pole.lead()), pole.error());
                 w.comment(msg);
                 console.println("tertius: " + msg);
             }

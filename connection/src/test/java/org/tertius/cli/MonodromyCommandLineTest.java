@@ -330,7 +330,7 @@ class MonodromyCommandLineTest {
     @Test
     void badInputIsOneLineWithExitTwo() {
         assertRefused("pole", generic("monodromy", "--at", text(pole())));
-        assertRefused("--digits: must be an integer in [16, 200]", generic("monodromy", "--at", "0.5", "--digits",
+        assertRefused("--digits: must be an integer in [16, 125]", generic("monodromy", "--at", "0.5", "--digits",
                 "300"));
         assertRefused("--member1-s", generic("monodromy", "--at", "0.5", "--member1-s", "1"));
         assertRefused("--at", generic("monodromy"));

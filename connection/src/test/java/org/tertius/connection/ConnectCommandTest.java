@@ -274,7 +274,7 @@ class ConnectCommandTest {
             "--dw0", "1/3"};
         // the demo solution has poles along the positive axis (a pole line): the forms at infinity do not apply
         String e = refused(args(demo, "--at-infinity", "--ray", "0"));
-        assertTrue(e.startsWith("tertius: ray:") && e.contains("poles"), e);
+        assertTrue(e.startsWith("tertius: --ray:") && e.contains("poles"), e);
         e = refused(args(EQ, "--from-zero", "1,0.5"));
         assertTrue(e.contains("resonance set") && e.contains("--logarithmic"), e);
         e = refused(args(EQ, "--from-zero", "-1,0.5"));
