@@ -88,7 +88,7 @@ public final class FieldCommand implements Command {
                     + " --log-strip LOGR0:LOGR1:NX,ARG0:ARG1:NY and --line A:B:N");
         }
         int[] wh = parseSize(size);
-        OutputFile.checkWritable("--out", out);
+        OutputFile.checkPicture("--out", out);
         int k = solution.sheet(region.sheet);
         ComputedSolution s = solution.solution();
         solution.notes().forEach(n -> err.println("tertius: " + n));
@@ -124,7 +124,7 @@ public final class FieldCommand implements Command {
     /** |q| (or its phase) over the physical plane of a member started at x = t_n = 0, as a figure. */
     private int planePicture(PrintWriter err) {
         int[] wh = parseSize(size);
-        OutputFile.checkWritable("--out", out);
+        OutputFile.checkPicture("--out", out);
         Grid g = plane.grid();
         OriginSolution o = PlaneOptions.solution(solution);
         PlaneGrid.Result r;

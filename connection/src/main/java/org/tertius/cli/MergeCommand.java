@@ -68,7 +68,7 @@ public final class MergeCommand implements Command {
             }
         }
         if (plot != null) {
-            OutputFile.checkWritable("--plot", plot);
+            OutputFile.checkPicture("--plot", plot);
         }
         if (!files.isEmpty() && TableMerge.isTable(files.get(0))) {
             return mergeTable(files, out, err);
@@ -90,7 +90,7 @@ public final class MergeCommand implements Command {
         if (plot != null) {
             OutputFile.writeWhole("--plot", plot, merge::plot);
         }
-        err.println("merge: " + files.size() + " shard files, " + merge.rows().size() + " rows"
+        err.println("tertius: merge: " + files.size() + " shard files, " + merge.rows().size() + " rows"
                 + (output == null ? "" : " -> " + output));
         return 0;
     }
@@ -111,7 +111,7 @@ public final class MergeCommand implements Command {
         } else {
             OutputFile.writeWhole("--out", output, merge::write);
         }
-        err.println("merge: " + files.size() + " table shard files, " + merge.rows() + " rows"
+        err.println("tertius: merge: " + files.size() + " table shard files, " + merge.rows() + " rows"
                 + (output == null ? "" : " -> " + output));
         return 0;
     }

@@ -36,6 +36,19 @@ final class OutputFile {
         }
     }
 
+    /**
+     * As {@link #checkWritable}, for a picture: pictures are written as PNG, so a name with another extension
+     * (picture.jpg) is refused rather than filled with PNG data.
+     */
+    static void checkPicture(String option, Path path) {
+        String name = path.getFileName() == null ? "" : path.getFileName().toString();
+        int dot = name.lastIndexOf('.');
+        if (dot > 0 && !name.substring(dot + 1).equalsIgnoreCase("png")) {
+            throw new InvalidInputException(option, "pictures are written as PNG: name the file *.png, got " + name);
+        }
+        checkWritable(option, path);
+    }
+
     /** Writes through a temporary file in the same folder, then moves it into place. */
     static void writeWhole(String option, Path path, IOWriter writer) {
         Path tmp = null;

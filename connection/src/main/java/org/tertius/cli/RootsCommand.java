@@ -116,7 +116,7 @@ public final class RootsCommand implements Command {
             OutputFile.checkWritable("--out", out);
         }
         if (plot != null) {
-            OutputFile.checkWritable("--plot", plot);
+            OutputFile.checkPicture("--plot", plot);
         }
         List<String> comments = new ArrayList<>();
         List<CertifiedRoot> first;

@@ -108,7 +108,7 @@ public final class ScanCommand implements Command {
             OutputFile.checkWritable("--out", output);
         }
         if (plot != null) {
-            OutputFile.checkWritable("--plot", plot);
+            OutputFile.checkPicture("--plot", plot);
         }
         return execute(sweep, part, out, err);
     }

@@ -167,6 +167,13 @@ class CommandLineToolTest {
                     r.err);
             assertTrue(!r.err.contains(".probe"), r.err);
         }
+        // pictures are PNG: a picture named otherwise is refused before any work, nothing written
+        Run jpg = run(with(with(new String[] {"field"}, DEMO), "--line", "1:2:20", "--out",
+                dir.resolve("x.jpg").toString()));
+        assertEquals(2, jpg.status, jpg.err);
+        assertEquals(1, jpg.err.lines().count(), jpg.err);
+        assertTrue(jpg.err.contains("--out: pictures are written as PNG"), jpg.err);
+        assertTrue(!Files.exists(dir.resolve("x.jpg")));
     }
 
     @Test
