@@ -191,7 +191,7 @@ public final class ConnectCommand implements Command {
                 data = ZeroBehaviour.power(ExactText.parse("--from-zero", p.get(0)).toComplex(),
                         ExactText.parse("--from-zero", p.get(1)).toComplex());
             } catch (InvalidInputException e) {
-                String m = e.getMessage().substring(e.argument().length() + 2);
+                String m = e.reason();
                 throw new InvalidInputException("--from-zero", m + (m.contains("resonance")
                         ? "; on the command line: --from-zero SIDE,T0 --logarithmic [--branch K]" : ""));
             }
@@ -332,9 +332,7 @@ public final class ConnectCommand implements Command {
         if (option == null) {
             return e;
         }
-        String text = e.getMessage();
-        String message = text.startsWith(argument + ": ") ? text.substring(argument.length() + 2) : text;
-        return new InvalidInputException(option, option.equals("--" + argument) ? message
-                : "(" + argument + ") " + message);
+        return option.equals("--" + argument) ? e.renamed(option)
+                : new InvalidInputException(option, "(" + argument + ") " + e.reason());
     }
 }

@@ -214,12 +214,11 @@ public final class RootsCommand implements Command {
         try {
             return RationalSolution.of(SpecialOptions.parameters(equation.texts()), which);
         } catch (InvalidInputException e) {
-            String reason = e.getMessage().substring(e.argument().length() + 2);
             if ("family".equals(e.argument())) {
-                throw new InvalidInputException("--alpha", "(with --beta, --gamma, --delta) " + reason);
+                throw new InvalidInputException("--alpha", "(with --beta, --gamma, --delta) " + e.reason());
             }
             if ("index".equals(e.argument()) || "root".equals(e.argument())) {
-                throw new InvalidInputException("--special-index", reason);
+                throw e.renamed("--special-index");
             }
             throw e;
         }

@@ -147,7 +147,7 @@ public final class SpecialOptions implements OptionGroup {
             default:
                 return e;
         }
-        return new InvalidInputException(option, e.getMessage().substring(e.argument().length() + 2));
+        return e.renamed(option);
     }
 
     private SpecialSolution special(ExactParameters p, int k) {

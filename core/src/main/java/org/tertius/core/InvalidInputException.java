@@ -4,15 +4,30 @@ package org.tertius.core;
 public class InvalidInputException extends TertiusException {
     private static final long serialVersionUID = 1L;
     private final String argument;
+    private final String reason;
 
     public InvalidInputException(String argument, String message) {
         super(argument + ": " + message);
         this.argument = argument;
+        this.reason = message;
     }
 
     /** @return the name of the offending argument (an option or parameter name) */
     public String argument() {
         return argument;
+    }
+
+    /** @return the message without the argument's name: what is wrong and what is allowed */
+    public String reason() {
+        return reason;
+    }
+
+    /**
+     * The same refusal named by another argument: for example the command-line option that sets the library
+     * parameter named here.
+     */
+    public InvalidInputException renamed(String otherArgument) {
+        return new InvalidInputException(otherArgument, reason);
     }
 
     /** Checks that a value is finite. */
