@@ -186,6 +186,14 @@ final class ConnectionReport {
                     + " [1, 1e4], got " + r);
         }
         LocalValue<Complex> v = data.startData(eq, r);
+        // w' on the scale |w'| + |w|/|z|, so that a constant solution (w' = 0) is not refused
+        double rel = Math.max(v.errW() / v.w().norm(), v.errDw() / (v.dw().norm() + v.w().norm() / r));
+        if (!(rel < 1)) {
+            // a value whose estimated error exceeds it (or an overflow) says nothing: refuse rather than print it
+            throw new InvalidInputException("--start-at", "the transseries at |z| = " + r + " does not fix the start data"
+                    + " (estimated error " + (Double.isFinite(rel) ? String.format(Locale.ROOT, "%.2g", rel) : "unbounded")
+                    + " relative to w or w'); choose a radius in [1, 1e4] where it does, or smaller amplitudes");
+        }
         rows.comment("start data of the solution of " + eq + " with " + data + ", from its transseries at |z| = " + r);
         startRows(v, new Complex(Math.log(r), data.angle() + 2 * Math.PI * data.sheet()), rows);
     }

@@ -293,6 +293,11 @@ class ConnectCommandTest {
         assertTrue(e.contains("background"), e);
         e = refused(args(EQ, "--from-infinity", "root0,0.1,0.1", "--ray", "0"));
         assertTrue(e.contains("grows along the ray"), e);
+        // amplitudes whose oscillation grows (|Re kappa| >= 1/2): before, the start data were printed as 1e32 +- 1e38
+        // at --start-at 20 and as Infinity at 80, exit 0
+        String[] d6 = {"--alpha", "0.7", "--beta", "-0.4", "--gamma", "1", "--delta", "-1"};
+        e = refused(args(d6, "--from-infinity", "root0,1,1", "--ray", "pi/2", "--start-at", "80"));
+        assertTrue(e.startsWith("tertius: --from-infinity:") && e.contains("Re kappa"), e);
         e = refused(args(demo, "--at-zero", "--radii", "10:40"));
         assertTrue(e.contains("--radii") && e.contains("--at-infinity"), e);
         // a typed start point beyond the reach of the series at 0 (w came out as Infinity, w' as NaN, exit 0)

@@ -212,6 +212,32 @@ class InfinityBehaviourTest {
     }
 
     /**
+     * On an oscillating ray the transseries describes solutions only while its terms decay, |Re kappa| &lt; 1/2
+     * (derived here, TransseriesAtInfinity): larger amplitudes are refused as data, and a solution built from such
+     * amplitudes near the limit, whose oscillation grows, is not reported as approaching the background.
+     */
+    @Test
+    void growingOscillationIsRefused() {
+        Painleve3 eq = Painleve3.of(new Complex(0.7), new Complex(-0.4), Complex.ONE, new Complex(-1));
+        Complex c = Complex.ONE;
+        double angle = Math.PI / 2;
+        // kappa = (alpha c - beta/c)/(2 mu) + mu p q = 0.275 + 2 p q (mu = 2)
+        InvalidInputException e = assertThrows(InvalidInputException.class,
+                () -> InfinityBehaviour.of(eq, c, new Complex(0.3), new Complex(0.5), angle, 0));
+        assertEquals("p, q", e.argument());
+        assertTrue(e.getMessage().contains("Re kappa"), e.getMessage());
+        InfinityBehaviour near = InfinityBehaviour.of(eq, c, new Complex(0.3), new Complex(0.35), angle, 0);
+        assertEquals(0.485, near.transseries(eq, 2).kappa().getReal(), 1e-12);
+        // the same p and q with kappa past 1/2: started where the first term is small, read back further out
+        TransseriesAtInfinity past = TransseriesAtInfinity.create(eq, c, new Complex(0.3), new Complex(0.5), 40);
+        LocalValue<Complex> v = past.at(tau(60, angle));
+        Painleve3Solution s = Painleve3Solution.builder(eq).start(v.z(), v.w(), v.dw()).build();
+        InfinityBehaviour f = InfinityBehaviourFit.analyse(s, angle, 0, 20, 100);
+        assertEquals(InfinityBehaviour.Kind.UNDECIDED, f.kind(), f.toString());
+        assertTrue(f.toString().contains("Re kappa"), f.toString());
+    }
+
+    /**
      * Where the engine's solution is not accurate the answer is undecided, not a wrong number: the decaying member
      * started at x = 1 carries the growing exponential beyond x ~ 4 (connection/README.md).
      */

@@ -59,8 +59,9 @@ public final class InfinityBehaviour {
      * from the ray: oscillating if mu e^(i angle) is imaginary to 1e-9 relative, else exponentially small, which
      * requires the amplitude of the growing exponential to be zero.
      *
-     * @throws InvalidInputException for an equation that is not D6, c not a background, or a non-zero amplitude of
-     *     the exponential that grows along the ray
+     * @throws InvalidInputException for an equation that is not D6, c not a background, a non-zero amplitude of
+     *     the exponential that grows along the ray, or, on an oscillating ray, |Re kappa| &gt;= 1/2 (the terms of the
+     *     transseries do not decay)
      */
     public static InfinityBehaviour of(Painleve3 eq, Complex c, Complex p, Complex q, double angle, int sheet) {
         InvalidInputException.requireFinite("angle", angle);
@@ -69,6 +70,14 @@ public final class InfinityBehaviour {
         Kind kind;
         if (Math.abs(Math.cos(direction)) <= 1e-9) {
             kind = Kind.OSCILLATING;
+            // |E^k x^(-n/2)| = r^(k Re kappa - n/2) on the ray (|k| <= n): the terms decay only for |Re kappa| < 1/2
+            double growth = Math.abs(t.kappa().getReal());
+            if (!(growth < 0.5)) {
+                throw new InvalidInputException("p, q", "the oscillation about c = " + c + " with p = " + p + ", q = "
+                        + q + " does not decay along the ray arg z = " + angle + ": |Re kappa| = " + growth
+                        + " (kappa = " + t.kappa() + "), and the transseries describes solutions only for |Re kappa| < 1/2"
+                        + " (smaller amplitudes: p q closer to 0)");
+            }
         } else {
             kind = Kind.EXPONENTIALLY_SMALL;
             boolean qDecays = Math.cos(direction) > 0;

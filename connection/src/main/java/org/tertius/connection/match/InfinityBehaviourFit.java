@@ -125,6 +125,16 @@ public final class InfinityBehaviourFit {
             return InfinityBehaviour.undecided(angle, sheet, "the amplitude fits about c = " + c + " at the outer radii"
                     + " disagree beyond their estimates: " + AmplitudeFit.describe(fits));
         }
+        if (oscillating) {
+            // the transseries holds only while its terms decay, |Re kappa| < 1/2 (TransseriesAtInfinity)
+            double growth = Math.abs(TransseriesAtInfinity.create(eq, c, best.p, best.q, 2).kappa().getReal());
+            if (!(growth < 0.5)) {
+                return InfinityBehaviour.undecided(angle, sheet, "the amplitudes fitted about c = " + c + " on [" + rMin
+                        + ", " + rMax + "] (p = " + best.p + ", q = " + best.q + ") give |Re kappa| = " + growth
+                        + " >= 1/2: such an oscillation grows like |z|^(|Re kappa| - 1/2), so w does not approach c"
+                        + " along this ray");
+            }
+        }
         return InfinityBehaviour.measured(kind, angle, sheet, c, best.p, best.q, best.errP, best.errQ,
                 "fitted at " + fits.size() + " radii in [" + rMin + ", " + rMax + "]");
     }
