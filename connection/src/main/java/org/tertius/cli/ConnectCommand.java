@@ -141,8 +141,9 @@ public final class ConnectCommand implements Command {
         rows.comment("member 1 as Painleve III: w(z) of " + eq + " under z = c sqrt(x), c^2 = 16 s, started at z0 = "
                 + ComplexText.format(v.point().z()) + " (the image of x = " + ComplexText.format(x0) + ") from w, w'"
                 + " with errors " + ConnectionRows.error(v.errW()) + ", " + ConnectionRows.error(v.errDw())
-                + " (not propagated into the fits); sheets and rays below are those of z");
+                + " (carried by the flow into every value); sheets and rays below are those of z");
         return Painleve3Solution.builder(eq).settings(solution.solver.settings()).start(v.point().z(), v.w(), v.dw())
+                .startErrors(v.errW(), v.errDw()).startComputedBy("member 1 of the hierarchy through Member1Map")
                 .build();
     }
 

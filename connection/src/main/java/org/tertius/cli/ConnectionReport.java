@@ -60,8 +60,12 @@ final class ConnectionReport {
             rows.add("B", b.secondParameter(), b.secondParameterError(), new Complex(cb), 2e-16 * Math.abs(cb));
             return true;
         }
-        if (Double.isFinite(b.sigma().norm())) {
+        if (Double.isFinite(b.sigma().norm()) && Double.isFinite(b.sigmaError())) {
             rows.add("sigma", b.sigma(), b.sigmaError());
+        } else if (Double.isFinite(b.sigma().norm())) {
+            // a number without an error estimate is not a result: say it in a comment only
+            rows.comment("sigma appears to be near " + ComplexText.format(b.sigma()) + ", but no error estimate could be"
+                    + " formed, so it is not reported as a value");
         }
         switch (b.kind()) {
             case LOGARITHMIC:

@@ -123,7 +123,7 @@ public final class Families {
             throw new InvalidInputException("x0", "must be real, got " + x0);
         }
         LocalValue<Complex> v = LogarithmicAtZero.at(x0.getReal());
-        return Painleve3Solution.builder(equation).start(v.z(), v.w(), v.dw())
+        return Painleve3Solution.builder(equation).start(v.z(), v.w(), v.dw()).startErrors(v.errW(), v.errDw())
                 .startComputedBy("the logarithmic series at 0 of the decaying family").settings(settings).build();
     }
 
@@ -170,7 +170,7 @@ public final class Families {
         } else {
             v = e.startData(ALGEBRAIC_TOLERANCE);
         }
-        return Painleve3Solution.builder(equation).start(v.z(), v.w(), v.dw())
+        return Painleve3Solution.builder(equation).start(v.z(), v.w(), v.dw()).startErrors(v.errW(), v.errDw())
                 .startComputedBy("the algebraic expansion at infinity").settings(settings).build();
     }
 

@@ -240,7 +240,8 @@ public final class InfinityBehaviour {
             throw new InvalidInputException("radius", "the transseries at |z| = " + radius + " has estimated error " + rel
                     + " (relative), above the tolerance " + tolerance + "; start further out");
         }
-        return Painleve3Solution.builder(eq).start(v.z(), v.w(), v.dw()).settings(settings).build();
+        return Painleve3Solution.builder(eq).start(v.z(), v.w(), v.dw()).startErrors(v.errW(), v.errDw())
+                .startComputedBy("the transseries at infinity").settings(settings).build();
     }
 
     /**

@@ -90,7 +90,7 @@ public final class DecayingConnection {
     /** The member lambda as an integrated solution of the core engine, started at x = MIDDLE. */
     public static Painleve3Solution solution(double lambda, SolverSettings settings) {
         Painleve3Value m = middleValue(lambda);
-        return Painleve3Solution.builder(equation()).start(m.point().z(), m.w(), m.dw())
+        return Painleve3Solution.builder(equation()).start(m.point().z(), m.w(), m.dw()).startErrors(m.errW(), m.errDw())
                 .startComputedBy("the decaying family's transseries at infinity").settings(settings).build();
     }
 

@@ -34,7 +34,8 @@ final class IntegratedSolution extends Painleve3Solution {
     }
 
     static IntegratedSolution create(Painleve3 eq, Complex z0, Complex w0, Complex dw0, Complex d3w0,
-                                     ExactNumber[] exactStart, String computedBy, SolverSettings settings) {
+                                     ExactNumber[] exactStart, String computedBy, SolverSettings settings,
+                                     double errW0, double errDw0) {
         boolean atZero = w0.getReal() == 0 && w0.getImaginary() == 0;
         boolean deltaZero = Painleve3.isZero(eq.delta());
         boolean gammaZero = Painleve3.isZero(eq.gamma());
@@ -81,8 +82,41 @@ final class IntegratedSolution extends Painleve3Solution {
             form.toState(z0, w0, dw0, re, im);
         }
         SurfacePoint p0 = SurfacePoint.of(z0, 0);
-        Solution engine = Solution.start(form.system(), settings, form.projection(), p0.logRe(), p0.logIm(), re, im);
+        double[] e0 = new double[re.length];
+        if (errW0 > 0 || errDw0 > 0) {
+            if (atZero) {
+                throw new InvalidInputException("start errors", "are not taken for a start at a zero of w (w0 = 0)");
+            }
+            addStateError(form, z0, w0, dw0, errW0, true, e0);
+            addStateError(form, z0, w0, dw0, errDw0, false, e0);
+        }
+        // an uncertain start (data computed elsewhere) is carried by the flow like every later error
+        Solution engine = Solution.start(form.system(), settings, form.projection(), p0.logRe(), p0.logIm(), re, im,
+                e0, new double[re.length]);
         return new IntegratedSolution(eq, form, engine, exactStart, atZero, computedBy);
+    }
+
+    /**
+     * Adds |d state / d w0| errW0 (or the same for w'(z0)) to e0: the state map is analytic in w0 and w'(z0), so its
+     * derivative is the difference quotient along a real increment h (central, h relative 1e-6, whose own error,
+     * about h^2, is negligible beside a first-order error estimate).
+     */
+    private static void addStateError(Painleve3Form form, Complex z0, Complex w0, Complex dw0, double error,
+                                      boolean ofW, double[] e0) {
+        if (!(error > 0)) {
+            return;
+        }
+        Complex base = ofW ? w0 : dw0;
+        double h = 1e-6 * Math.max(1, base.norm());
+        int n = e0.length;
+        double[][] plus = {new double[n], new double[n]};
+        double[][] minus = {new double[n], new double[n]};
+        form.toState(z0, ofW ? w0.add(h) : w0, ofW ? dw0 : dw0.add(h), plus[0], plus[1]);
+        form.toState(z0, ofW ? w0.subtract(h) : w0, ofW ? dw0 : dw0.subtract(h), minus[0], minus[1]);
+        for (int i = 0; i < n; i++) {
+            double slope = Math.hypot(plus[0][i] - minus[0][i], plus[1][i] - minus[1][i]) / (2 * h);
+            e0[i] += slope * error;
+        }
     }
 
     @Override

@@ -123,6 +123,8 @@ public abstract class Painleve3Solution implements ComputedSolution {
         private Complex d3w0;
         private ExactNumber[] exactStart;
         private String computedBy;
+        private double errW0;
+        private double errDw0;
         private SolverSettings settings = SolverSettings.defaults();
 
         private Builder(Painleve3 equation) {
@@ -174,6 +176,20 @@ public abstract class Painleve3Solution implements ComputedSolution {
             return this;
         }
 
+        /**
+         * Absolute errors of w0 and w'(z0) when the start data were computed (by a series, a map, another
+         * solution): they are carried by the flow into the error estimate of every value, like the errors of the
+         * steps. Default 0 (data taken as exact).
+         */
+        public Builder startErrors(double errW0, double errDw0) {
+            if (!(errW0 >= 0) || !(errDw0 >= 0) || !Double.isFinite(errW0) || !Double.isFinite(errDw0)) {
+                throw new InvalidInputException("start errors", "must be finite and >= 0, got " + errW0 + ", " + errDw0);
+            }
+            this.errW0 = errW0;
+            this.errDw0 = errDw0;
+            return this;
+        }
+
         public Builder settings(SolverSettings settings) {
             this.settings = settings;
             return this;
@@ -189,7 +205,7 @@ public abstract class Painleve3Solution implements ComputedSolution {
             SurfacePoint.of(z0, 0); // rejects z0 = 0 with a clear message
             ExactNumber[] exact = exactStart != null ? exactStart : new ExactNumber[] {
                 ExactNumber.ofDouble("z0", z0), ExactNumber.ofDouble("w0", w0), ExactNumber.ofDouble("dw0", dw0)};
-            return IntegratedSolution.create(equation, z0, w0, dw0, d3w0, exact, computedBy, settings);
+            return IntegratedSolution.create(equation, z0, w0, dw0, d3w0, exact, computedBy, settings, errW0, errDw0);
         }
 
         private static void check(String name, Complex c) {

@@ -211,4 +211,32 @@ class SolutionPropertiesTest {
                     }
                 });
     }
+
+    /**
+     * Start errors are carried by the flow: a solution started from w0, w'(z0) with stated errors e reports, at
+     * points across the pole field, an estimate that covers the distance to the solutions started from w0 + e and
+     * from w'(z0) + e, and is not far above it (within a factor 100 of the larger distance plus the step errors).
+     */
+    @Test
+    void startErrorsAreCarriedIntoTheEstimates() {
+        double e = 1e-8;
+        Complex w0 = new Complex(0.5, 0.1);
+        Complex dw0 = new Complex(1.0 / 3, -0.2);
+        Painleve3Solution exact = Painleve3Solution.builder(EQ).start(Complex.ONE, w0, dw0).build();
+        Painleve3Solution uncertain = Painleve3Solution.builder(EQ).start(Complex.ONE, w0, dw0).startErrors(e, e)
+                .build();
+        Painleve3Solution movedW = Painleve3Solution.builder(EQ).start(Complex.ONE, w0.add(e), dw0).build();
+        Painleve3Solution movedDw = Painleve3Solution.builder(EQ).start(Complex.ONE, w0, dw0.add(e)).build();
+        for (Complex z : new Complex[] {new Complex(3, 2), new Complex(-2, 4), new Complex(0.2, 0.1)}) {
+            SurfacePoint p = SurfacePoint.of(z, 0);
+            Painleve3Value u = uncertain.evaluate(p);
+            Painleve3Value x = exact.evaluate(p);
+            double moved = Math.max(movedW.evaluate(p).w().subtract(x.w()).norm(),
+                    movedDw.evaluate(p).w().subtract(x.w()).norm());
+            if (!(u.errW() >= moved) || !(u.errW() <= 100 * moved + 10 * x.errW())) {
+                throw new AssertionError("at " + z + ": estimate " + u.errW() + " against a moved start's distance "
+                        + moved + " (step errors alone " + x.errW() + ")");
+            }
+        }
+    }
 }
