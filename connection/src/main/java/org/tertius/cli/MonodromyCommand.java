@@ -208,12 +208,14 @@ public final class MonodromyCommand implements Command {
         try {
             v = piii.evaluate(p);
         } catch (UnreachableTargetException e) {
-            throw new InvalidInputException("--at", "the solution cannot be evaluated at " + p + " (a pole of the"
-                    + " solution or too close to one): " + e.getMessage());
+            // the engine's message says what stopped it; a target at a pole ends in a grown error estimate
+            throw new InvalidInputException("--at", "the solution cannot be evaluated at " + p + " (the point is at or next"
+                    + " to a pole, or the way to it is blocked): " + e.getMessage());
         }
         if (!Double.isFinite(v.w().norm()) || !Double.isFinite(v.dw().norm()) || v.errW() > 1e-4 * (1 + v.w().norm())) {
-            throw new InvalidInputException("--at", p + " is at or next to a pole of the solution (w = " + v.w()
-                    + " +- " + v.errW() + ")");
+            throw new InvalidInputException("--at", "the solution is not known to 1e-4 relative at " + p + " (w = "
+                    + v.w() + " +- " + v.errW() + "): the point is at or next to a pole, or the errors grew along the"
+                    + " path to it; choose another point");
         }
         LaxMatrix<Complex> lax = LaxMatrix.ofPainleve3(piii.equation(), v, mapS);
         if (ar instanceof ComplexArithmetic) {

@@ -330,6 +330,12 @@ class MonodromyCommandLineTest {
     @Test
     void badInputIsOneLineWithExitTwo() {
         assertRefused("pole", generic("monodromy", "--at", text(pole())));
+        // a point 99999 sheets away: the path stalls far from it; before, the line said "a pole of the solution"
+        String[] demo = {"monodromy", "--alpha", "1", "--beta", "-1/2", "--gamma", "1", "--delta", "-1", "--z0", "1",
+            "--w0", "1/2", "--dw0", "1/3", "--at", "2", "--sheet", "99999"};
+        assertRefused("far from the target", demo);
+        CommandLineToolTest.Run far = CommandLineToolTest.run(demo);
+        assertTrue(!far.err.contains("a pole of the solution"), far.err);
         assertRefused("--digits: must be an integer in [16, 125]", generic("monodromy", "--at", "0.5", "--digits",
                 "300"));
         assertRefused("--member1-s", generic("monodromy", "--at", "0.5", "--member1-s", "1"));

@@ -2,6 +2,7 @@ package org.tertius.core.solution;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import org.tertius.core.UnreachableTargetException;
 import org.tertius.core.number.ComplexPairs;
 import org.tertius.core.path.PathSelector;
@@ -108,9 +109,15 @@ final class PathTracer {
                 bestDistance = d;
                 lastProgress = path.size();
             } else if (path.size() - lastProgress > STALL_STEPS) {
+                // near the target a small move helps; far from it the way itself is blocked (a target many
+                // sheets away, or a dense pole field in between)
+                boolean near = bestDistance <= 4 * next.radius();
                 throw new UnreachableTargetException("no progress towards tau = " + point(tauRe, tauIm) + " in "
-                        + STALL_STEPS + " steps (last node at " + point(next.tauRe(), next.tauIm())
-                        + "); the target is hemmed in by singularities: move it slightly");
+                        + STALL_STEPS + " steps (last node at " + point(next.tauRe(), next.tauIm()) + ", closest "
+                        + String.format(Locale.ROOT, "%.3g", bestDistance) + " from the target); " + (near
+                        ? "the target is hemmed in by singularities: move it slightly"
+                        : "singularities block the way there, far from the target: choose a nearer point or"
+                        + " sheet"));
             }
         }
         return new Trace(current, path);

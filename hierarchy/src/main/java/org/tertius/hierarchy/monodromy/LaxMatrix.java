@@ -131,8 +131,9 @@ public final class LaxMatrix<T> {
         try {
             v = solution.evaluate(x);
         } catch (UnreachableTargetException e) {
-            throw new InvalidInputException("x", "the solution cannot be evaluated at " + x + " (a pole of the solution"
-                    + " or too close to one): " + e.getMessage());
+            // the engine's message says what stopped it; a target at a pole ends in a grown error estimate
+            throw new InvalidInputException("x", "the solution cannot be evaluated at " + x + " (the point is at or next"
+                    + " to a pole, or the way to it is blocked): " + e.getMessage());
         }
         List<T> state = new ArrayList<>();
         double[] err = new double[v.state().size()];
@@ -148,8 +149,9 @@ public final class LaxMatrix<T> {
         }
         for (int i = 0; i < err.length; i++) {
             if (err[i] > 1e-4 * Math.max(1, scale)) {
-                throw new InvalidInputException("x", x + " is at or next to a pole of the solution: its state is known"
-                        + " only to " + err[i] + " (entry " + i + "), too little for monodromy data");
+                throw new InvalidInputException("x", "the state of the solution at " + x + " is known only to " + err[i]
+                        + " (entry " + i + "), too little for monodromy data: the point is at or next to a pole, or"
+                        + " the errors grew along the path to it");
             }
         }
         MemberParameters p = solution.parameters();
