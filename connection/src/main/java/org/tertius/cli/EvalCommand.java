@@ -21,6 +21,7 @@ public final class EvalCommand implements Command {
             + " precision; data and targets are then read exactly (decimals or p/q)");
     String at;
     Integer sheet;
+    String format;
 
     @Override
     public String name() {
@@ -29,7 +30,7 @@ public final class EvalCommand implements Command {
 
     @Override
     public String description() {
-        return "Evaluate a solution at points of its Riemann surface (or plane); CSV with error estimates."
+        return "Evaluate a solution at points of its Riemann surface (or plane); CSV (or JSON) with error estimates."
                 + " err is the largest of the estimated absolute errors of the values.";
     }
 
@@ -42,12 +43,57 @@ public final class EvalCommand implements Command {
     public void declare(Options o) {
         o.addOption(OptionKinds.value("--at", "Z[,Z...]", "targets, complex numbers a+bi separated by commas"));
         o.addOption(OptionKinds.value("--sheet", "K", "sheet of the targets (argument in (-pi,pi] + 2 pi K)"));
+        o.addOption(OptionKinds.value("--format", "csv|json", "csv (default), or json: one object with the comments,"
+                + " the columns and a record per point, numbers with the digits of the CSV"));
     }
 
     @Override
     public void read(Arguments a) {
         at = a.text("--at");
         sheet = a.integer("--sheet", null);
+        format = a.choice("--format", "csv", "json");
+    }
+
+    /** Where the lines go: printed at once (CSV), or collected and printed as one JSON object at the end. */
+    private static final class Output {
+        private final PrintWriter out;
+        private final JsonValueRows json;
+
+        Output(PrintWriter out, boolean json) {
+            this.out = out;
+            this.json = json ? new JsonValueRows() : null;
+        }
+
+        void comment(String c) {
+            if (json == null) {
+                out.println("# " + c);
+            } else {
+                json.comment(c);
+            }
+        }
+
+        void columns(String header) {
+            if (json == null) {
+                out.println(header);
+            } else {
+                json.columns(header);
+            }
+        }
+
+        void row(String row) {
+            if (json == null) {
+                out.println(row);
+            } else {
+                json.row(row);
+            }
+        }
+
+        void finish() {
+            if (json != null) {
+                out.println(json.text());
+            }
+            out.flush();
+        }
     }
 
     @Override
@@ -60,6 +106,7 @@ public final class EvalCommand implements Command {
         MemberSolution member = solution.isMember() ? solution.memberSolution() : null;
         ComputedSolution s = member != null ? member : solution.solution();
         ValueRows rows = new ValueRows(s);
+        Output output = new Output(out, "json".equals(format));
         if (precision.given(f)) {
             if (checks.given()) {
                 throw new InvalidInputException("--digits", "the checks of members run in double precision; drop"
@@ -70,44 +117,44 @@ public final class EvalCommand implements Command {
             try (Progress progress = new Progress("eval")) {
                 Function<ExactPoint, String> row = precision.rows(s, solution.special.built(), rows, progress);
                 for (String c : solution.withNotes(precision.comments(rows, solution.special.built()))) {
-                    out.println("# " + c);
+                    output.comment(c);
                 }
-                out.println(rows.preciseColumns());
+                output.columns(rows.preciseColumns());
                 for (ExactPoint p : points) {
-                    out.println(row.apply(p));
+                    output.row(row.apply(p));
                 }
             }
-            out.flush();
+            output.finish();
             return 0;
         }
         List<SurfacePoint> points = Targets.list("--at", targets, k, s.coordinate());
         OriginSolution plane = member == null ? null : solution.memberPlane();
         for (String c : solution.withNotes(rows.comments())) {
-            out.println("# " + c);
+            output.comment(c);
         }
         if (member != null) {
             for (String c : checks.comments(member)) {
-                out.println("# " + c);
+                output.comment(c);
             }
         }
-        out.println(rows.columns() + (member == null ? "" : checks.columns(member)));
+        output.columns(rows.columns() + (member == null ? "" : checks.columns(member)));
         int unreached = 0;
         int drifting = 0;
         for (SurfacePoint p : points) {
             try {
                 SolutionValue v = s.valueAt(p);
-                out.println(rows.row(v) + (member == null ? "" : checks.row(member, plane, p, v)));
+                output.row(rows.row(v) + (member == null ? "" : checks.row(member, plane, p, v)));
                 if (!v.checksWithinEstimate()) {
                     drifting++;
                     err.println("tertius: at " + p + ": " + Checks.drift(v));
                 }
             } catch (TertiusException e) {
                 unreached++;
-                out.println(rows.unreachedRow(p));
+                output.row(rows.unreachedRow(p));
                 err.println("tertius: target " + p + " not reached: " + e.getMessage());
             }
         }
-        out.flush();
+        output.finish();
         // first integrals that drift beyond their estimates mean a value that cannot be vouched for
         return unreached == 0 && (drifting == 0 || checks.acceptDrift) ? 0 : Main.EXIT_UNREACHED;
     }
