@@ -31,8 +31,8 @@ import org.tertius.hierarchy.monodromy.MonodromyMap;
  * section "Monodromy data at z = 0", by the method of Jimbo, Publ. RIMS 18 (1982) 1137, recalled from memory), on 24
  * random D6 solutions: random complex alpha, beta, sigma (|Re sigma| &lt;= 0.8) and B, half of them with gamma = 1,
  * delta = -1 and half with random complex gamma, delta. The solution is built from (sigma, B) by the series at 0
- * (PowerSeriesAtZero, ZeroExpansion), its monodromy data computed by the monodromy map at two points (the start point
- * of the engine away from 0, z = 0.5 and 0.4 + 0.3i), and both directions of the bridge are checked: sigma and B from the
+ * (PowerSeriesAtZero, ZeroExpansion) and continued by the engine, its monodromy data computed by the monodromy map at
+ * two points away from 0 (z = 0.5 and 0.4 + 0.3i), and both directions of the bridge are checked: sigma and B from the
  * data, and the gauge-free data (s_0_1 s_0_2, s_inf_1 s_inf_2, E11 E22, chi) from (sigma, B). Tolerance: within twice
  * the propagated error estimates and below 1e-9.
  */
