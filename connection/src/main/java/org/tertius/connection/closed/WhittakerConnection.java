@@ -1,5 +1,8 @@
 package org.tertius.connection.closed;
 
+import java.util.Collections;
+import java.util.LinkedHashMap;
+import java.util.Map;
 import org.apfloat.Apcomplex;
 import org.apfloat.Apfloat;
 import org.apfloat.ApfloatMath;
@@ -24,21 +27,41 @@ import org.apfloat.FixedPrecisionApcomplexHelper;
  * them is confirmed numerically, see {@link ZeroMonodromyBridge}). Utility.
  */
 final class WhittakerConnection {
+    /** Gamma values already computed (Apfloat's complex Gamma takes about 0.1 s in 40 digits): a bounded memo. */
+    private static final Map<Apcomplex, Apcomplex> GAMMA = Collections.synchronizedMap(
+            new LinkedHashMap<>(64, 0.75f, true) {
+                @Override
+                protected boolean removeEldestEntry(Map.Entry<Apcomplex, Apcomplex> eldest) {
+                    return size() > 256;
+                }
+            });
+
     private WhittakerConnection() {
+    }
+
+    /** Gamma(z) in the helper's precision (remembered). */
+    static Apcomplex gamma(FixedPrecisionApcomplexHelper h, Apcomplex z) {
+        Apcomplex known = GAMMA.get(z);
+        if (known != null && known.precision() == h.precision()) {
+            return known;
+        }
+        Apcomplex g = h.gamma(z);
+        GAMMA.put(z, g);
+        return g;
     }
 
     /** N as {{N11, N12}, {N21, N22}} for the given mh, nu and c12 (2 nu not an integer). */
     static Apcomplex[][] matrix(FixedPrecisionApcomplexHelper h, Apcomplex mh, Apcomplex nu, Apcomplex c12) {
         Apcomplex one = h.valueOf(Apcomplex.ONE);
         Apcomplex twoNu = h.add(nu, nu);
-        Apcomplex n11 = h.divide(h.multiply(power(h, 1, h.subtract(nu, mh)), h.gamma(h.negate(twoNu))),
-                h.multiply(c12, h.gamma(h.negate(h.add(nu, mh)))));
-        Apcomplex n21 = h.divide(h.multiply(power(h, 1, h.negate(h.add(nu, mh))), h.gamma(twoNu)),
-                h.multiply(c12, h.gamma(h.subtract(nu, mh))));
-        Apcomplex n12 = h.negate(h.divide(h.multiply(power(h, -1, h.add(nu, mh)), h.gamma(h.negate(twoNu))),
-                h.gamma(h.add(one, h.subtract(mh, nu)))));
-        Apcomplex n22 = h.negate(h.divide(h.multiply(power(h, -1, h.subtract(mh, nu)), h.gamma(twoNu)),
-                h.gamma(h.add(one, h.add(nu, mh)))));
+        Apcomplex n11 = h.divide(h.multiply(power(h, 1, h.subtract(nu, mh)), gamma(h, h.negate(twoNu))),
+                h.multiply(c12, gamma(h, h.negate(h.add(nu, mh)))));
+        Apcomplex n21 = h.divide(h.multiply(power(h, 1, h.negate(h.add(nu, mh))), gamma(h, twoNu)),
+                h.multiply(c12, gamma(h, h.subtract(nu, mh))));
+        Apcomplex n12 = h.negate(h.divide(h.multiply(power(h, -1, h.add(nu, mh)), gamma(h, h.negate(twoNu))),
+                gamma(h, h.add(one, h.subtract(mh, nu)))));
+        Apcomplex n22 = h.negate(h.divide(h.multiply(power(h, -1, h.subtract(mh, nu)), gamma(h, twoNu)),
+                gamma(h, h.add(one, h.add(nu, mh)))));
         return new Apcomplex[][] {{n11, n12}, {n21, n22}};
     }
 

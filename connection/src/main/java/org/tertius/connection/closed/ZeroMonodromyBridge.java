@@ -151,9 +151,9 @@ public final class ZeroMonodromyBridge {
         Apcomplex prefactor = h.multiply(h.multiply(new Apcomplex(Apfloat.ZERO, new Apfloat(-4, PRECISION)), ap(ks)),
                 h.exp(h.multiply(twoNu, h.subtract(h.log(ap(cSquared)), h.log(h.multiply(ap(s),
                         new Apcomplex(new Apfloat(16, PRECISION))))))));
-        Apcomplex ratio = h.divide(h.gamma(twoNu), h.gamma(h.subtract(one, twoNu)));
-        Apcomplex gammas = h.divide(h.multiply(h.gamma(h.add(one, h.subtract(am0, nu))),
-                h.gamma(h.negate(h.add(nu, am)))), h.multiply(h.gamma(h.add(nu, am0)), h.gamma(h.subtract(nu, am))));
+        Apcomplex ratio = h.divide(WhittakerConnection.gamma(h, twoNu), WhittakerConnection.gamma(h, h.subtract(one, twoNu)));
+        Apcomplex gammas = h.divide(h.multiply(WhittakerConnection.gamma(h, h.add(one, h.subtract(am0, nu))),
+                WhittakerConnection.gamma(h, h.negate(h.add(nu, am)))), h.multiply(WhittakerConnection.gamma(h, h.add(nu, am0)), WhittakerConnection.gamma(h, h.subtract(nu, am))));
         Apcomplex phase = h.exp(h.negate(h.multiply(twoPiI(h), nu)));
         return h.multiply(h.multiply(h.multiply(prefactor, h.pow(two, h.negate(sigma))), phase),
                 h.multiply(h.multiply(ratio, ratio), gammas));
