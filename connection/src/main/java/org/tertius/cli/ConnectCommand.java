@@ -113,7 +113,10 @@ public final class ConnectCommand implements Command {
             HighPrecisionSolution.checkDigits(connection.digits);
             s.highPrecisionForm().requireDigits(connection.digits);
         }
-        boolean decided = ConnectionReport.atZero(s, connection.rayAngle(), connection.sheetIndex(), lambda, rows);
+        BridgeRows.ClosedAtZero bridge = solution.isMember() && solution.monodromy.given()
+                ? BridgeRows.fromSelection(solution.member.parameters(), solution.monodromy) : null;
+        boolean decided = ConnectionReport.atZero(s, connection.rayAngle(), connection.sheetIndex(), lambda, bridge,
+                rows);
         if (connection.digits != null && decided) {
             PreciseConnection.atZero(s, connection.rayAngle(), connection.sheetIndex(), connection.digits, rows);
         }
@@ -197,6 +200,14 @@ public final class ConnectCommand implements Command {
                         ? "; on the command line: --from-zero SIDE,T0 --logarithmic [--branch K]" : ""));
             }
         }
+        if (connection.monodromyData && (connection.logarithmic || connection.digits != null)) {
+            throw new InvalidInputException("--monodromy-data", "applies to the power behaviour in double precision"
+                    + " only (not with " + (connection.logarithmic ? "--logarithmic" : "--digits") + ")");
+        }
+        if (connection.monodromyData) {
+            // refused before anything is written: the bridge needs D6 and |Re sigma| < 1
+            BridgeRows.monodromyRows(eq, data.sigma(), data.secondParameter(), new ConnectionRows());
+        }
         if (connection.digits != null) {
             HighPrecisionSolution.checkDigits(connection.digits);
             if (connection.logarithmic) {
@@ -208,6 +219,9 @@ public final class ConnectCommand implements Command {
             return;
         }
         ConnectionReport.fromZero(eq, data, connection.startAt, connection.rayAngle(), connection.sheetIndex(), rows);
+        if (connection.monodromyData) {
+            BridgeRows.monodromyRows(eq, data.sigma(), data.secondParameter(), rows);
+        }
     }
 
     private void fromInfinity(ConnectionRows rows) {

@@ -24,6 +24,7 @@ final class ConnectionOptions implements OptionGroup {
     String fromZero;
     String fromInfinity;
     boolean logarithmic;
+    boolean monodromyData;
     Integer branch;
     String ray;
     Integer sheet;
@@ -45,6 +46,9 @@ final class ConnectionOptions implements OptionGroup {
                 + " w ~ B z^sigma (|Re sigma| <= 1, sigma != +-1), or with --logarithmic the side +-1 and t0"));
         o.addOption(OptionKinds.flag("--logarithmic", "--from-zero gives the logarithmic behaviour at sigma = +-1"
                 + " (SIGMA is the side, PARAM is t0)"));
+        o.addOption(OptionKinds.flag("--monodromy-data", "--from-zero (D6, |Re sigma| < 1): also the monodromy data"
+                + " of the solution in closed form (member 1 with s = 1/4; Stokes multipliers, connection matrix and"
+                + " the gauge-free products)"));
         o.addOption(OptionKinds.value("--branch", "K", "the branch +1 or -1 of the logarithmic behaviour, needed"
                 + " only where beta (side +1) or alpha (side -1) vanishes"));
         o.addOption(OptionKinds.value("--from-infinity", "C,P,Q", "start data from the data along the ray --ray at"
@@ -72,6 +76,7 @@ final class ConnectionOptions implements OptionGroup {
         fromZero = a.text("--from-zero");
         fromInfinity = a.text("--from-infinity");
         logarithmic = a.has("--logarithmic");
+        monodromyData = a.has("--monodromy-data");
         branch = a.integer("--branch", "+1 or -1");
         ray = a.text("--ray");
         sheet = a.integer("--sheet", "an integer");
@@ -100,7 +105,8 @@ final class ConnectionOptions implements OptionGroup {
                 chosen = i;
             }
         }
-        refuse(chosen != 2, "--from-zero", logarithmic ? "--logarithmic" : null, branch == null ? null : "--branch");
+        refuse(chosen != 2, "--from-zero", logarithmic ? "--logarithmic" : null, branch == null ? null : "--branch",
+                monodromyData ? "--monodromy-data" : null);
         refuse(chosen != 1, "--at-infinity", radii == null ? null : "--radii");
         refuse(chosen != 2 && chosen != 3, "--from-zero or --from-infinity", startAt == null ? null : "--start-at");
         refuse(chosen >= 0, "the decaying family's own mode (--lambda or --sigma alone)",

@@ -36,9 +36,11 @@ final class ConnectionReport {
      *
      * @param decayingLambda lambda of the decaying family of PIII(0, 0, 1, -1) when the solution is one (its closed
      *     form is then written beside the numbers), else null
+     * @param bridge the closed forms from the monodromy data that selected the solution, else null
      * @return whether the kind was decided
      */
-    static boolean atZero(Painleve3Solution s, double angle, int sheet, Double decayingLambda, ConnectionRows rows) {
+    static boolean atZero(Painleve3Solution s, double angle, int sheet, Double decayingLambda,
+                          BridgeRows.ClosedAtZero bridge, ConnectionRows rows) {
         ZeroBehaviour b = ZeroBehaviourFit.analyse(s, angle, sheet);
         rows.comment("behaviour at z = 0 of " + s.equation() + ", read on arg z = " + angle
                 + (sheet == 0 ? "" : " of sheet " + sheet) + " for |z| in [" + ZeroBehaviourFit.R_MIN + ", "
@@ -59,6 +61,23 @@ final class ConnectionReport {
             rows.add("sigma", b.sigma(), b.sigmaError(), new Complex(cs), 2e-16 * Math.abs(cs));
             rows.add("B", b.secondParameter(), b.secondParameterError(), new Complex(cb), 2e-16 * Math.abs(cb));
             return true;
+        }
+        if (bridge != null) {
+            bridge.comments().forEach(rows::comment);
+            if (b.kind() == ZeroBehaviour.Kind.POWER && bridge.sigma() != null) {
+                rows.add("sigma", b.sigma(), b.sigmaError(), bridge.sigma().value(), bridge.sigma().error());
+                if (bridge.b() != null) {
+                    rows.add("B", b.secondParameter(), b.secondParameterError(), bridge.b().value(),
+                            bridge.b().error());
+                } else {
+                    rows.add("B", b.secondParameter(), b.secondParameterError());
+                }
+                return true;
+            }
+            if (bridge.sigma() != null) {
+                rows.comment("the closed form applies to the power kind (|Re sigma| < 1); it gives sigma = "
+                        + ConnectionRows.complex(bridge.sigma().value()));
+            }
         }
         if (Double.isFinite(b.sigma().norm()) && Double.isFinite(b.sigmaError())) {
             rows.add("sigma", b.sigma(), b.sigmaError());

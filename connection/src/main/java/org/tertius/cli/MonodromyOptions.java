@@ -150,6 +150,26 @@ final class MonodromyOptions implements OptionGroup {
         return found.solution(settings);
     }
 
+    /** The exponent --m0 given (null when not given). */
+    Complex m0Value() {
+        return m0 == null ? null : number("--m0", m0);
+    }
+
+    /** The Stokes multipliers at infinity given for member n (null when not given). */
+    List<Complex> stokesInfinityValues(int n) {
+        return stokesInfinity == null ? null : numbers("--stokes-infinity", stokesInfinity, 2 * n);
+    }
+
+    /** The Stokes multipliers at 0 given (null when not given). */
+    List<Complex> stokesZeroValues() {
+        return stokesZero == null ? null : numbers("--stokes-zero", stokesZero, 2);
+    }
+
+    /** The connection matrix given, E11, E12, E21, E22 (null when not given). */
+    List<Complex> connectionValues() {
+        return connection == null ? null : numbers("--connection", connection, 4);
+    }
+
     private List<MonodromyCondition<Complex>> conditions(int n, Complex m, Complex m0Value) {
         List<MonodromyCondition<Complex>> c = new ArrayList<>();
         List<Complex> inf = stokesInfinity == null ? null : numbers("--stokes-infinity", stokesInfinity, 2 * n);

@@ -1,0 +1,103 @@
+package org.tertius.cli;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.hipparchus.complex.Complex;
+import org.tertius.connection.closed.MonodromyFromZero;
+import org.tertius.connection.closed.ZeroMonodromyBridge;
+import org.tertius.core.InvalidInputException;
+import org.tertius.core.piii.Painleve3;
+import org.tertius.hierarchy.MemberParameters;
+import org.tertius.hierarchy.monodromy.Estimate;
+
+/**
+ * The bridge between the behaviour w ~ B z^sigma at 0 and the monodromy data (ZeroMonodromyBridge,
+ * MonodromyFromZero; derived in connection/README.md, "Monodromy data at z = 0") in the rows of connect: the closed
+ * forms of sigma and B beside --at-zero of a member-1 solution selected by its monodromy data, and the monodromy data
+ * in closed form with --from-zero --monodromy-data.
+ */
+final class BridgeRows {
+    /** The member-1 constant s of the map used by the commands for Painleve III (Member1Map.forEquation). */
+    static final Complex PAINLEVE3_S = new Complex(0.25);
+
+    /**
+     * sigma and B in closed form with their comment lines; sigma or B is null where the data given do not fix it
+     * (the comments say why).
+     */
+    record ClosedAtZero(List<String> comments, Estimate<Complex> sigma, Estimate<Complex> b) {
+    }
+
+    private BridgeRows() {
+    }
+
+    /** The closed forms from the data that selected a member-1 solution (exact data: only rounding errors). */
+    static ClosedAtZero fromSelection(MemberParameters member, MonodromyOptions data) {
+        List<String> comments = new ArrayList<>();
+        Complex m0 = data.m0Value();
+        Complex traceIntegral = Complex.I.multiply(2).multiply(member.s()).multiply(m0);
+        ZeroMonodromyBridge bridge = ZeroMonodromyBridge.ofMember1(member.s(), member.m(), traceIntegral);
+        List<Complex> zero = data.stokesZeroValues();
+        List<Complex> inf = data.stokesInfinityValues(1);
+        List<Complex> e = data.connectionValues();
+        if (zero == null && inf == null) {
+            comments.add("closed form (bridge to the monodromy data): sigma needs --stokes-zero or --stokes-infinity,"
+                    + " not given");
+            return new ClosedAtZero(comments, null, null);
+        }
+        List<Estimate<Complex>> found;
+        try {
+            found = bridge.zeroData(exact(zero, 0), exact(zero, 1), exact(inf, 0), exact(inf, 1), exact(e, 0),
+                    exact(e, 2));
+        } catch (InvalidInputException ex) {
+            comments.add("closed form (bridge to the monodromy data) not available: " + ex.reason());
+            return new ClosedAtZero(comments, null, null);
+        }
+        comments.add("closed form: the bridge to the monodromy data given (derived here, connection/README.md"
+                + " 'Monodromy data at z = 0', method of Jimbo, Publ. RIMS 18 (1982) 1137): tr M_0 = 2 sin(pi sigma/2)"
+                + (found.get(1) == null ? "; B needs all of --stokes-infinity and --connection"
+                : "; B = G(sigma) (e^(2 pi i (m + nu)) - chi)/(e^(2 pi i (m - nu)) - chi), nu = (1 - sigma)/4,"
+                + " chi = 1 - s_inf_1 E11/E21 = " + ConnectionRows.complex(ZeroMonodromyBridge.chi(inf.get(0),
+                        e.get(0), e.get(2)))));
+        return new ClosedAtZero(comments, found.get(0), found.get(1));
+    }
+
+    private static Estimate<Complex> exact(List<Complex> values, int index) {
+        return values == null ? null : new Estimate<>(values.get(index), 0);
+    }
+
+    /**
+     * The monodromy data of the solution with sigma and B at 0 in closed form, as rows with the closed_form columns
+     * filled (member 1 through Member1Map.forEquation with s = 1/4; the gauge of MonodromyFromZero).
+     */
+    static void monodromyRows(Painleve3 eq, Complex sigma, Complex b, ConnectionRows rows) {
+        ZeroMonodromyBridge bridge;
+        MonodromyFromZero d;
+        try {
+            bridge = ZeroMonodromyBridge.of(eq, PAINLEVE3_S);
+            d = MonodromyFromZero.of(bridge, sigma, b);
+        } catch (InvalidInputException e) {
+            throw new InvalidInputException("--monodromy-data", "(" + e.argument() + ") " + e.reason()
+                    + " (the bridge covers D6, gamma delta != 0, with |Re sigma| < 1)");
+        }
+        rows.comment("monodromy data in closed form (derived here, connection/README.md 'Monodromy data at z = 0'):"
+                + " member 1 with s = 1/4 (Member1Map.forEquation), in the gauge where x^(m sigma3) a_-1 x^(-m sigma3)"
+                + " -> C with C12 = 1 as x -> 0; the products s_inf_1 s_inf_2, s_0_1 s_0_2, E11 E22 and chi are free"
+                + " of the gauges (the monodromy command prints the data of a point in its own gauge)");
+        Complex[] values = {bridge.m(), bridge.m0(), d.stokesAtInfinity(1), d.stokesAtInfinity(2), d.stokesAtZero(1),
+            d.stokesAtZero(2), d.connection(1, 1), d.connection(1, 2), d.connection(2, 1), d.connection(2, 2),
+            d.connectionProduct(), d.chi(), ZeroMonodromyBridge.trace(sigma)};
+        String[] names = {"m", "m0", "s_inf_1", "s_inf_2", "s_0_1", "s_0_2", "E11", "E12", "E21", "E22", "E11_E22",
+            "chi", "trace_M0"};
+        // rounding: the formulas are evaluated in 40 digits from the double inputs; their conditioning is that of
+        // the inputs, estimated by a relative change of sigma and B of 1e-15
+        MonodromyFromZero moved = MonodromyFromZero.of(bridge, sigma.multiply(1 + 1e-15), b.multiply(1 + 1e-15));
+        Complex[] other = {bridge.m(), bridge.m0(), moved.stokesAtInfinity(1), moved.stokesAtInfinity(2),
+            moved.stokesAtZero(1), moved.stokesAtZero(2), moved.connection(1, 1), moved.connection(1, 2),
+            moved.connection(2, 1), moved.connection(2, 2), moved.connectionProduct(), moved.chi(),
+            ZeroMonodromyBridge.trace(sigma.multiply(1 + 1e-15))};
+        for (int i = 0; i < values.length; i++) {
+            double err = 4 * Math.ulp(1.0) * values[i].norm() + 2 * values[i].subtract(other[i]).norm();
+            rows.add(names[i], "double", "", "", ConnectionRows.complex(values[i]), ConnectionRows.error(err));
+        }
+    }
+}

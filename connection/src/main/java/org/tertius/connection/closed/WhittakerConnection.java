@@ -1,0 +1,104 @@
+package org.tertius.connection.closed;
+
+import java.util.Collections;
+import java.util.LinkedHashMap;
+import java.util.Map;
+import org.apfloat.Apcomplex;
+import org.apfloat.Apfloat;
+import org.apfloat.ApfloatMath;
+import org.apfloat.FixedPrecisionApcomplexHelper;
+
+/**
+ * The connection matrix of the confluent hypergeometric (Whittaker) system {@code dY/dmu = (-i sigma3 + C/mu) Y},
+ * {@code C = [[mh, c12], [c21, -mh]]} with eigenvalues +-nu (derived here, connection/README.md, "Monodromy data at
+ * z = 0"): with {@code P = [[c12, c12], [nu - mh, -nu - mh]]} (columns: eigenvectors of C for nu, -nu), the
+ * Fuchsian solution {@code Y_F = P (I + O(mu)) mu^(nu sigma3)} and the canonical solution
+ * {@code Y_1 ~ (I + O(1/mu)) mu^(mh sigma3) e^(-i mu sigma3)} in -pi &lt; arg mu &lt; pi are related by
+ * {@code Y_1 = Y_F N} with
+ * <pre>
+ *   N11 = (2i)^(nu - mh) Gamma(-2 nu) / (c12 Gamma(-nu - mh)),   N12 = -(-2i)^(nu + mh) Gamma(-2 nu) / Gamma(1 + mh - nu),
+ *   N21 = (2i)^(-nu - mh) Gamma(2 nu) / (c12 Gamma(nu - mh)),    N22 = -(-2i)^(mh - nu) Gamma(2 nu) / Gamma(1 + nu + mh),
+ * </pre>
+ * powers principal ((2i)^p = 2^p e^(i pi p/2), (-2i)^p = 2^p e^(-i pi p/2)). The first row of Y solves
+ * {@code mu^2 y'' + mu y' + (mu^2 + i (1 + 2 mh) mu - nu^2) y = 0}, with solutions
+ * {@code mu^(+-nu) e^(-i mu) M(+-nu - mh, 1 +- 2 nu, 2i mu)} at 0 and {@code mu^nu e^(-i mu) U(nu - mh, 1 + 2 nu, 2i mu)
+ * ~ (2i)^(mh - nu) mu^mh e^(-i mu)} (recessive on arg mu = -pi/2); the second row likewise with i -> -i, mh -> -mh.
+ * U in terms of the two M is DLMF 13.2.42 and U ~ z^(-a) is DLMF 13.7.3 (both from memory; the whole bridge built on
+ * them is confirmed numerically, see {@link ZeroMonodromyBridge}). Utility.
+ */
+final class WhittakerConnection {
+    /** Gamma values already computed (Apfloat's complex Gamma takes about 0.1 s in 40 digits): a bounded memo. */
+    private static final Map<Apcomplex, Apcomplex> GAMMA = Collections.synchronizedMap(
+            new LinkedHashMap<>(64, 0.75f, true) {
+                @Override
+                protected boolean removeEldestEntry(Map.Entry<Apcomplex, Apcomplex> eldest) {
+                    return size() > 256;
+                }
+            });
+
+    private WhittakerConnection() {
+    }
+
+    /** Gamma(z) in the helper's precision (remembered). */
+    static Apcomplex gamma(FixedPrecisionApcomplexHelper h, Apcomplex z) {
+        Apcomplex known = GAMMA.get(z);
+        if (known != null && known.precision() == h.precision()) {
+            return known;
+        }
+        Apcomplex g = h.gamma(z);
+        GAMMA.put(z, g);
+        return g;
+    }
+
+    /** N as {{N11, N12}, {N21, N22}} for the given mh, nu and c12 (2 nu not an integer). */
+    static Apcomplex[][] matrix(FixedPrecisionApcomplexHelper h, Apcomplex mh, Apcomplex nu, Apcomplex c12) {
+        Apcomplex one = h.valueOf(Apcomplex.ONE);
+        Apcomplex twoNu = h.add(nu, nu);
+        Apcomplex n11 = h.divide(h.multiply(power(h, 1, h.subtract(nu, mh)), gamma(h, h.negate(twoNu))),
+                h.multiply(c12, gamma(h, h.negate(h.add(nu, mh)))));
+        Apcomplex n21 = h.divide(h.multiply(power(h, 1, h.negate(h.add(nu, mh))), gamma(h, twoNu)),
+                h.multiply(c12, gamma(h, h.subtract(nu, mh))));
+        Apcomplex n12 = h.negate(h.divide(h.multiply(power(h, -1, h.add(nu, mh)), gamma(h, h.negate(twoNu))),
+                gamma(h, h.add(one, h.subtract(mh, nu)))));
+        Apcomplex n22 = h.negate(h.divide(h.multiply(power(h, -1, h.subtract(mh, nu)), gamma(h, twoNu)),
+                gamma(h, h.add(one, h.add(nu, mh)))));
+        return new Apcomplex[][] {{n11, n12}, {n21, n22}};
+    }
+
+    /** (2i)^p for sign = 1, (-2i)^p for sign = -1: 2^p e^(sign i pi p / 2). */
+    static Apcomplex power(FixedPrecisionApcomplexHelper h, int sign, Apcomplex p) {
+        long precision = h.precision();
+        Apfloat two = new Apfloat(2, precision);
+        Apfloat halfPi = ApfloatMath.pi(precision).divide(two);
+        Apcomplex logOfBase = new Apcomplex(ApfloatMath.log(two), halfPi.multiply(new Apfloat(sign, precision)));
+        return h.exp(h.multiply(p, logOfBase));
+    }
+
+    static Apcomplex[][] multiply(FixedPrecisionApcomplexHelper h, Apcomplex[][] a, Apcomplex[][] b) {
+        Apcomplex[][] c = new Apcomplex[2][2];
+        for (int i = 0; i < 2; i++) {
+            for (int j = 0; j < 2; j++) {
+                c[i][j] = h.add(h.multiply(a[i][0], b[0][j]), h.multiply(a[i][1], b[1][j]));
+            }
+        }
+        return c;
+    }
+
+    static Apcomplex determinant(FixedPrecisionApcomplexHelper h, Apcomplex[][] a) {
+        return h.subtract(h.multiply(a[0][0], a[1][1]), h.multiply(a[0][1], a[1][0]));
+    }
+
+    static Apcomplex[][] inverse(FixedPrecisionApcomplexHelper h, Apcomplex[][] a) {
+        Apcomplex d = determinant(h, a);
+        return new Apcomplex[][] {{h.divide(a[1][1], d), h.negate(h.divide(a[0][1], d))},
+            {h.negate(h.divide(a[1][0], d)), h.divide(a[0][0], d)}};
+    }
+
+    /** diag(e^(2 pi i p), e^(-2 pi i p)) as a pair. */
+    static Apcomplex[] turn(FixedPrecisionApcomplexHelper h, Apcomplex p) {
+        Apcomplex twoPiI = new Apcomplex(Apfloat.ZERO, ApfloatMath.pi(h.precision()).multiply(
+                new Apfloat(2, h.precision())));
+        Apcomplex e = h.exp(h.multiply(twoPiI, p));
+        return new Apcomplex[] {e, h.divide(h.valueOf(Apcomplex.ONE), e)};
+    }
+}

@@ -1,0 +1,122 @@
+package org.tertius.connection;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.util.HashMap;
+import java.util.Map;
+import org.hipparchus.complex.Complex;
+import org.junit.jupiter.api.Tag;
+import org.junit.jupiter.api.Test;
+import org.tertius.cli.Main;
+import org.tertius.connection.closed.MonodromyFromZero;
+import org.tertius.connection.closed.ZeroMonodromyBridge;
+import org.tertius.core.number.ComplexText;
+import org.tertius.core.piii.Painleve3;
+
+/**
+ * The bridge between the behaviour at 0 and the monodromy data from the command line (derived here,
+ * connection/README.md, section "Monodromy data at z = 0"): {@code connect --from-zero SIGMA,B --monodromy-data}
+ * prints the library's closed forms, and the member-1 solution selected by those data has, read off at 0 by the
+ * fits, the typed sigma and B, with the closed forms beside them; bad input refused in one line with exit 2.
+ */
+class BridgeCommandTest {
+    private static final String[] EQ = {"--alpha", "0.7+0.2i", "--beta", "-0.4+0.1i", "--gamma", "1", "--delta", "-1"};
+    private static final Complex SIGMA = new Complex(0.3, 0.2);
+    private static final Complex B = new Complex(0.8, -0.1);
+
+    private static Map<String, String[]> rows(int status, String... args) {
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        assertEquals(status, Main.execute(args, new PrintWriter(out, true), new PrintWriter(err, true)),
+                err.toString());
+        Map<String, String[]> m = new HashMap<>();
+        for (String line : out.toString().lines().toList()) {
+            if (!line.startsWith("#") && !line.startsWith("quantity,")) {
+                String[] c = line.split(",", -1);
+                m.put(c[0], c);
+            }
+        }
+        return m;
+    }
+
+    private static String[] connect(String... more) {
+        String[] out = new String[1 + EQ.length + more.length];
+        out[0] = "connect";
+        System.arraycopy(EQ, 0, out, 1, EQ.length);
+        System.arraycopy(more, 0, out, 1 + EQ.length, more.length);
+        return out;
+    }
+
+    private static Complex closed(Map<String, String[]> rows, String q) {
+        return ComplexText.parse(q, rows.get(q)[4]);
+    }
+
+    @Test
+    void fromZeroPrintsTheLibrarysMonodromyData() {
+        Map<String, String[]> r = rows(0, connect("--from-zero", "0.3+0.2i,0.8-0.1i", "--monodromy-data"));
+        ZeroMonodromyBridge bridge = ZeroMonodromyBridge.of(Painleve3.of(new Complex(0.7, 0.2), new Complex(-0.4, 0.1),
+                Complex.ONE, new Complex(-1)), new Complex(0.25));
+        MonodromyFromZero d = MonodromyFromZero.of(bridge, SIGMA, B);
+        Complex[] expected = {d.stokesAtInfinity(1), d.stokesAtInfinity(2), d.stokesAtZero(1), d.stokesAtZero(2),
+            d.connection(1, 1), d.connection(1, 2), d.connection(2, 1), d.connection(2, 2), d.chi()};
+        String[] names = {"s_inf_1", "s_inf_2", "s_0_1", "s_0_2", "E11", "E12", "E21", "E22", "chi"};
+        for (int i = 0; i < names.length; i++) {
+            assertEquals(0, closed(r, names[i]).subtract(expected[i]).norm(), 1e-15 * (1 + expected[i].norm()),
+                    names[i]);
+            assertTrue(r.get(names[i])[2].isEmpty(), names[i] + ": no numerical value is claimed");
+        }
+        // derived here (README section above): tr M_0 = 2 sin(pi sigma / 2), and the cyclic relation's trace
+        Complex trace = ZeroMonodromyBridge.traceAtZero(bridge.m0(), d.stokesAtZero(1), d.stokesAtZero(2));
+        assertEquals(0, trace.subtract(ZeroMonodromyBridge.trace(SIGMA)).norm(), 1e-13);
+        Complex traceInf = ZeroMonodromyBridge.traceAtInfinity(bridge.m(), d.stokesAtInfinity(1),
+                d.stokesAtInfinity(2));
+        assertEquals(0, traceInf.subtract(trace).norm(), 1e-13);
+        // the bridge's inverse gives B back from chi
+        assertEquals(0, bridge.amplitude(SIGMA, d.chi()).subtract(B).norm(), 1e-13);
+    }
+
+    /** The whole chain: (sigma, B) -> data in closed form -> member-1 solution by the inverse map -> fits at 0. */
+    @Test
+    @Tag("slow")
+    void theSolutionSelectedByTheClosedFormDataHasTheTypedDataAtZero() {
+        Map<String, String[]> d = rows(0, connect("--from-zero", "0.3+0.2i,0.8-0.1i", "--monodromy-data"));
+        Map<String, String[]> r = rows(0, "connect", "--member", "1", "--s", "0.25", "--m", d.get("m")[4], "--m0",
+                d.get("m0")[4], "--x0", "0.0625", "--stokes-infinity", d.get("s_inf_1")[4] + "," + d.get("s_inf_2")[4],
+                "--stokes-zero", d.get("s_0_1")[4] + "," + d.get("s_0_2")[4], "--connection", d.get("E11")[4] + ","
+                + d.get("E12")[4] + "," + d.get("E21")[4] + "," + d.get("E22")[4], "--at-zero");
+        assertEquals("power", r.get("kind")[2]);
+        for (String q : new String[] {"sigma", "B"}) {
+            Complex typed = q.equals("sigma") ? SIGMA : B;
+            Complex numerical = ComplexText.parse(q, r.get(q)[2]);
+            double err = Double.parseDouble(r.get(q)[3]);
+            assertTrue(numerical.subtract(typed).norm() <= Math.min(2 * err, 1e-8), q + " " + numerical);
+            // the closed form from the data typed (derived here, connection/README.md "Monodromy data at z = 0")
+            assertEquals(0, closed(r, q).subtract(typed).norm(), 1e-13, q + " closed form");
+            assertTrue(Double.parseDouble(r.get(q)[5]) < 1e-13, q + " closed-form error");
+        }
+    }
+
+    @Test
+    void badInputIsOneLineAndExitTwo() {
+        String[][] cases = {
+            {"connect", "--alpha", "1", "--beta", "0", "--gamma", "0", "--delta", "-1", "--from-zero", "0.3,1",
+                "--monodromy-data"},
+            {"connect", "--alpha", "1", "--beta", "0", "--gamma", "1", "--delta", "-1", "--from-zero", "1+0.5i,1",
+                "--monodromy-data"},
+            {"connect", "--alpha", "1", "--beta", "0", "--gamma", "1", "--delta", "-1", "--z0", "0.5", "--w0", "1",
+                "--dw0", "0", "--at-zero", "--monodromy-data"},
+            {"connect", "--alpha", "1", "--beta", "0", "--gamma", "1", "--delta", "-1", "--from-zero", "0.3,1",
+                "--monodromy-data", "--digits", "30"}};
+        for (String[] c : cases) {
+            StringWriter out = new StringWriter();
+            StringWriter err = new StringWriter();
+            assertEquals(2, Main.execute(c, new PrintWriter(out, true), new PrintWriter(err, true)), String.join(" ", c));
+            assertTrue(out.toString().isEmpty(), "nothing written: " + out);
+            assertEquals(1, err.toString().lines().count(), err.toString());
+            assertTrue(err.toString().startsWith("tertius: --monodromy-data"), err.toString());
+        }
+    }
+}
