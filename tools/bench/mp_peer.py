@@ -29,6 +29,10 @@ import mpmath
 from mpmath import mp, mpf, mpc, fdot
 
 
+class Blocked(Exception):
+    """A segment not followed to its end within the step budget."""
+
+
 class TaylorIntegrator:
     """Arbitrary-precision Taylor integrator for a scalar second-order ODE
     whose Taylor coefficients are produced by `coefficients(c, y, dy, p)`
@@ -57,10 +61,15 @@ class TaylorIntegrator:
             r = r * h + x
         return r
 
-    def segment(self, z, y, dy, z1):
-        """Integrate along the straight segment from z to z1."""
+    def segment(self, z, y, dy, z1, max_steps=None):
+        """Integrate along the straight segment from z to z1; with max_steps,
+        raise Blocked when that many steps do not reach z1 (a pole in the way)."""
         shrink = mpmath.exp(-2)
+        taken = 0
         while z != z1:
+            if max_steps is not None and taken >= max_steps:
+                raise Blocked()
+            taken += 1
             a, d = self.coefficients(z, y, dy, self.order)
             h = shrink * self._radius(a)
             rem = z1 - z

@@ -22,39 +22,7 @@ import time
 import mpmath
 from mpmath import mp, mpc, mpf
 
-from mp_peer import TaylorIntegrator, piii_coefficients
-
-
-class Blocked(Exception):
-    pass
-
-
-class BoundedIntegrator(TaylorIntegrator):
-    """The peer's integrator with a step budget per target."""
-
-    def __init__(self, coefficients, digits, max_steps):
-        super().__init__(coefficients, digits)
-        self.max_steps = max_steps
-
-    def segment(self, z, y, dy, z1):
-        shrink = mpmath.exp(-2)
-        taken = 0
-        while z != z1:
-            if taken >= self.max_steps:
-                raise Blocked()
-            a, d = self.coefficients(z, y, dy, self.order)
-            h = shrink * self._radius(a)
-            rem = z1 - z
-            if abs(rem) <= h:
-                hc, znew = rem, z1
-            else:
-                hc = rem * (h / abs(rem))
-                znew = z + hc
-            y, dy = self._eval(a, hc), self._eval(d, hc)
-            z = znew
-            taken += 1
-            self.steps += 1
-        return y, dy
+from mp_peer import Blocked, TaylorIntegrator, piii_coefficients
 
 
 def parse(text):
@@ -84,10 +52,10 @@ def main():
     t_reached = 0.0
     t0 = time.perf_counter()
     for text in args.at.split(','):
-        integ = BoundedIntegrator(piii_coefficients(al, be, ga, de), args.digits, args.max_steps)
+        integ = TaylorIntegrator(piii_coefficients(al, be, ga, de), args.digits)
         t = time.perf_counter()
         try:
-            w, _ = integ.segment(z0, w0, dw0, parse(text))
+            w, _ = integ.segment(z0, w0, dw0, parse(text), args.max_steps)
         except Blocked:
             blocked += 1
             print('%s blocked' % text)

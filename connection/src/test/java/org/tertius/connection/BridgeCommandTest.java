@@ -5,7 +5,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.PrintWriter;
 import java.io.StringWriter;
-import java.util.HashMap;
 import java.util.Map;
 import org.hipparchus.complex.Complex;
 import org.junit.jupiter.api.Tag;
@@ -28,18 +27,7 @@ class BridgeCommandTest {
     private static final Complex B = new Complex(0.8, -0.1);
 
     private static Map<String, String[]> rows(int status, String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        assertEquals(status, Main.execute(args, new PrintWriter(out, true), new PrintWriter(err, true)),
-                err.toString());
-        Map<String, String[]> m = new HashMap<>();
-        for (String line : out.toString().lines().toList()) {
-            if (!line.startsWith("#") && !line.startsWith("quantity,")) {
-                String[] c = line.split(",", -1);
-                m.put(c[0], c);
-            }
-        }
-        return m;
+        return ConnectCommandTest.rows(status, args);
     }
 
     private static String[] connect(String... more) {

@@ -60,7 +60,7 @@ class ConnectCommandTest {
     }
 
     /** Runs connect; returns the CSV rows by quantity (the last row of each name wins) and checks the status. */
-    private static Map<String, String[]> rows(int status, String... args) {
+    static Map<String, String[]> rows(int status, String... args) {
         StringWriter out = new StringWriter();
         StringWriter err = new StringWriter();
         assertEquals(status, Main.execute(args, new PrintWriter(out, true), new PrintWriter(err, true)),
