@@ -6,14 +6,23 @@ import org.hipparchus.complex.Complex;
 import org.tertius.connection.closed.MonodromyFromZero;
 import org.tertius.connection.closed.ZeroMonodromyBridge;
 import org.tertius.core.InvalidInputException;
+import org.tertius.core.TertiusException;
+import org.tertius.core.number.ComplexText;
+import org.tertius.core.number.SurfacePoint;
 import org.tertius.core.piii.Painleve3;
+import org.tertius.core.piii.Painleve3Solution;
+import org.tertius.core.piii.Painleve3Value;
 import org.tertius.hierarchy.MemberParameters;
 import org.tertius.hierarchy.monodromy.Estimate;
+import org.tertius.hierarchy.monodromy.LaxMatrix;
+import org.tertius.hierarchy.monodromy.MonodromyData;
+import org.tertius.hierarchy.monodromy.MonodromyMap;
 
 /**
  * The bridge between the behaviour w ~ B z^sigma at 0 and the monodromy data (ZeroMonodromyBridge,
  * MonodromyFromZero; derived in connection/README.md, "Monodromy data at z = 0") in the rows of connect: the closed
- * forms of sigma and B beside --at-zero of a member-1 solution selected by its monodromy data, and the monodromy data
+ * forms of sigma and B beside --at-zero of a member-1 solution selected by its monodromy data or, with
+ * --at-zero --monodromy-data, of any D6 solution from its monodromy data computed at a point; and the monodromy data
  * in closed form with --from-zero --monodromy-data.
  */
 final class BridgeRows {
@@ -59,6 +68,66 @@ final class BridgeRows {
                 + " chi = 1 - s_inf_1 E11/E21 = " + ConnectionRows.complex(ZeroMonodromyBridge.chi(inf.get(0),
                         e.get(0), e.get(2)))));
         return new ClosedAtZero(comments, found.get(0), found.get(1));
+    }
+
+    /**
+     * The closed forms from the monodromy data of a Painleve III (D6) solution computed at the first point of the ray
+     * (|z| = 1, 0.75, 1.5, 0.5, 2) where the solution is known to 1e-10 relative and the data pass their self-checks;
+     * their errors (the solution's error carried through the map, and the lambda-integration) are propagated.
+     *
+     * @throws InvalidInputException (--monodromy-data) for a non-D6 equation or a sheet other than 0 (the bridge is
+     *     derived on the principal sheet), or when no such point is found
+     */
+    static ClosedAtZero fromSolution(Painleve3Solution s, double angle, int sheet) {
+        Painleve3 eq = s.equation();
+        if (sheet != 0) {
+            throw new InvalidInputException("--monodromy-data", "the bridge at 0 is derived on the principal sheet;"
+                    + " use --sheet 0");
+        }
+        ZeroMonodromyBridge bridge;
+        try {
+            bridge = ZeroMonodromyBridge.of(eq, PAINLEVE3_S);
+        } catch (InvalidInputException e) {
+            throw new InvalidInputException("--monodromy-data", "(" + e.argument() + ") " + e.reason());
+        }
+        MonodromyMap<Complex> map = MonodromyMap.doublePrecision();
+        String last = "";
+        for (double r : new double[] {1, 0.75, 1.5, 0.5, 2}) {
+            SurfacePoint p = SurfacePoint.fromLog(Math.log(r), angle);
+            MonodromyData<Complex> d;
+            try {
+                Painleve3Value v = s.evaluate(p);
+                if (!(v.errW() <= 1e-10 * (1 + v.w().norm())) || !(v.errDw() <= 1e-10 * (1 + v.dw().norm()))) {
+                    last = "the solution is known only to " + v.errW() + " at " + p;
+                    continue;
+                }
+                d = map.compute(LaxMatrix.ofPainleve3(eq, v, PAINLEVE3_S));
+            } catch (TertiusException e) {
+                last = e.getMessage();
+                continue;
+            }
+            if (!d.checksHold()) {
+                last = "the self-checks of the data at " + p + " fail: " + d.checks();
+                continue;
+            }
+            List<String> comments = new ArrayList<>();
+            List<Estimate<Complex>> found;
+            try {
+                found = bridge.zeroData(d.stokesAtZero(1), d.stokesAtZero(2), d.stokesAtInfinity(1),
+                        d.stokesAtInfinity(2), d.connection(1, 1), d.connection(2, 1));
+            } catch (InvalidInputException e) {
+                comments.add("closed form (bridge to the monodromy data) not available: " + e.reason());
+                return new ClosedAtZero(comments, null, null);
+            }
+            comments.add("closed form: sigma and B from the monodromy data of the solution computed at z = "
+                    + ComplexText.format(p.z()) + " (member 1 with s = 1/4) through the bridge derived here"
+                    + " (connection/README.md 'Monodromy data at z = 0', method of Jimbo, Publ. RIMS 18 (1982) 1137):"
+                    + " tr M_0 = 2 sin(pi sigma/2), B = G(sigma) (e^(2 pi i (m + nu)) - chi)/(e^(2 pi i (m - nu)) - chi);"
+                    + " errors: those of the data (the solution's, carried through the map) propagated");
+            return new ClosedAtZero(comments, found.get(0), found.get(1));
+        }
+        throw new InvalidInputException("--monodromy-data", "no point of the ray at |z| in {1, 0.75, 1.5, 0.5, 2}"
+                + " gave monodromy data that pass their checks (last: " + last + "); choose another --ray");
     }
 
     private static Estimate<Complex> exact(List<Complex> values, int index) {

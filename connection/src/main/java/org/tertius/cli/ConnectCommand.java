@@ -115,6 +115,17 @@ public final class ConnectCommand implements Command {
         }
         BridgeRows.ClosedAtZero bridge = solution.isMember() && solution.monodromy.given()
                 ? BridgeRows.fromSelection(solution.member.parameters(), solution.monodromy) : null;
+        if (connection.monodromyData) {
+            if (bridge != null) {
+                throw new InvalidInputException("--monodromy-data", "the solution is selected by its monodromy data,"
+                        + " whose closed forms are printed anyway; remove it");
+            }
+            if (connection.digits != null) {
+                throw new InvalidInputException("--monodromy-data", "the monodromy data are computed in double"
+                        + " precision; drop --digits or --monodromy-data");
+            }
+            bridge = BridgeRows.fromSolution(s, connection.rayAngle(), connection.sheetIndex());
+        }
         boolean decided = ConnectionReport.atZero(s, connection.rayAngle(), connection.sheetIndex(), lambda, bridge,
                 rows);
         if (connection.digits != null && decided) {

@@ -60,6 +60,16 @@ final class ConnectionReport {
             double cb = McCoyTracyWu.amplitude(decayingLambda);
             rows.add("sigma", b.sigma(), b.sigmaError(), new Complex(cs), 2e-16 * Math.abs(cs));
             rows.add("B", b.secondParameter(), b.secondParameterError(), new Complex(cb), 2e-16 * Math.abs(cb));
+            if (bridge != null) {
+                // the columns hold McCoy-Tracy-Wu; the bridge's values (asked for) go into a comment
+                bridge.comments().forEach(rows::comment);
+                if (bridge.sigma() != null) {
+                    rows.comment("the bridge gives sigma = " + ConnectionRows.complex(bridge.sigma().value()) + " +- "
+                            + ConnectionRows.error(bridge.sigma().error()) + (bridge.b() == null ? "" : ", B = "
+                            + ConnectionRows.complex(bridge.b().value()) + " +- "
+                            + ConnectionRows.error(bridge.b().error())));
+                }
+            }
             return true;
         }
         if (bridge != null) {

@@ -87,6 +87,28 @@ class BridgeCommandTest {
         }
     }
 
+    /**
+     * Any D6 solution, given by start data: --at-zero --monodromy-data computes its monodromy data at a point and puts
+     * sigma and B from the bridge (derived here, connection/README.md "Monodromy data at z = 0") beside the fitted
+     * ones; both agree with the (sigma, B) the start data were made from, within their estimates.
+     */
+    @Test
+    void anySolutionGetsTheClosedFormFromItsComputedData() {
+        Map<String, String[]> start = rows(0, connect("--from-zero", "0.3+0.2i,0.8-0.1i"));
+        Map<String, String[]> r = rows(0, connect("--z0", start.get("z")[2], "--w0", start.get("w")[2], "--dw0",
+                start.get("dw")[2], "--at-zero", "--monodromy-data"));
+        assertEquals("power", r.get("kind")[2]);
+        for (String q : new String[] {"sigma", "B"}) {
+            Complex typed = q.equals("sigma") ? SIGMA : B;
+            double startError = 1e-14; // the start data's own errors (series at 0), far below the estimates here
+            double closedErr = Double.parseDouble(r.get(q)[5]);
+            assertTrue(closedErr > 0 && closedErr < 1e-9, q + " closed-form error " + closedErr);
+            assertTrue(closed(r, q).subtract(typed).norm() <= closedErr + startError, q + " " + closed(r, q));
+            double err = Double.parseDouble(r.get(q)[3]);
+            assertTrue(ComplexText.parse(q, r.get(q)[2]).subtract(typed).norm() <= err + startError, q);
+        }
+    }
+
     @Test
     void badInputIsOneLineAndExitTwo() {
         String[][] cases = {
@@ -95,7 +117,11 @@ class BridgeCommandTest {
             {"connect", "--alpha", "1", "--beta", "0", "--gamma", "1", "--delta", "-1", "--from-zero", "1+0.5i,1",
                 "--monodromy-data"},
             {"connect", "--alpha", "1", "--beta", "0", "--gamma", "1", "--delta", "-1", "--z0", "0.5", "--w0", "1",
-                "--dw0", "0", "--at-zero", "--monodromy-data"},
+                "--dw0", "0", "--at-infinity", "--ray", "pi/2", "--monodromy-data"},
+            {"connect", "--alpha", "1", "--beta", "0", "--gamma", "1", "--delta", "-1", "--z0", "0.5", "--w0", "1",
+                "--dw0", "0", "--at-zero", "--sheet", "1", "--monodromy-data"},
+            {"connect", "--alpha", "1", "--beta", "0", "--gamma", "1", "--delta", "-1", "--z0", "1/2", "--w0", "1",
+                "--dw0", "0", "--at-zero", "--monodromy-data", "--digits", "30"},
             {"connect", "--alpha", "1", "--beta", "0", "--gamma", "1", "--delta", "-1", "--from-zero", "0.3,1",
                 "--monodromy-data", "--digits", "30"}};
         for (String[] c : cases) {
