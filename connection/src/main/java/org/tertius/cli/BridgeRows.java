@@ -165,7 +165,8 @@ final class BridgeRows {
             moved.connection(2, 1), moved.connection(2, 2), moved.connectionProduct(), moved.chi(),
             ZeroMonodromyBridge.trace(sigma.multiply(1 + 1e-15))};
         for (int i = 0; i < values.length; i++) {
-            double err = 4 * Math.ulp(1.0) * values[i].norm() + 2 * values[i].subtract(other[i]).norm();
+            // the Gamma values are good to about 1e-14 relative (ComplexGamma): 64 ulp of each value
+            double err = 64 * Math.ulp(1.0) * values[i].norm() + 2 * values[i].subtract(other[i]).norm();
             rows.add(names[i], "double", "", "", ConnectionRows.complex(values[i]), ConnectionRows.error(err));
         }
     }

@@ -75,7 +75,7 @@ public final class ConnectCommand implements Command {
                 case 1:
                     refuseDigits("--at-infinity", "the transseries at infinity and its fits are computed in double"
                             + " precision only");
-                    decided = ConnectionReport.atInfinity(painleve3(rows), connection.rayAngle(),
+                    decided = ConnectionReport.atInfinity(painleve3(rows), moved, connection.rayAngle(),
                             connection.sheetIndex(), connection.sampleRadii(InfinityBehaviourFit.R_MIN,
                                     InfinityBehaviourFit.R_MAX), rows);
                     break;
@@ -99,6 +99,9 @@ public final class ConnectCommand implements Command {
         }
         return 0;
     }
+
+    /** Solutions started from the member's image moved by its errors (empty for start data given as such). */
+    private List<Painleve3Solution> moved = List.of();
 
     private void refuseDigits(String direction, String why) {
         if (connection.digits != null) {
@@ -126,8 +129,8 @@ public final class ConnectCommand implements Command {
             }
             bridge = BridgeRows.fromSolution(s, connection.rayAngle(), connection.sheetIndex());
         }
-        boolean decided = ConnectionReport.atZero(s, connection.rayAngle(), connection.sheetIndex(), lambda, bridge,
-                rows);
+        boolean decided = ConnectionReport.atZero(s, moved, connection.rayAngle(), connection.sheetIndex(), lambda,
+                bridge, rows);
         if (connection.digits != null && decided) {
             PreciseConnection.atZero(s, connection.rayAngle(), connection.sheetIndex(), connection.digits, rows);
         }
@@ -155,10 +158,20 @@ public final class ConnectCommand implements Command {
         rows.comment("member 1 as Painleve III: w(z) of " + eq + " under z = c sqrt(x), c^2 = 16 s, started at z0 = "
                 + ComplexText.format(v.point().z()) + " (the image of x = " + ComplexText.format(x0) + ") from w, w'"
                 + " with errors " + ConnectionRows.error(v.errW()) + ", " + ConnectionRows.error(v.errDw())
-                + " (carried by the flow into every value); sheets and rays below are those of z");
+                + " (propagated into the fits by refitting the solutions started from w + err w and w' + err w');"
+                + " sheets and rays below are those of z");
+        moved = new ArrayList<>();
+        String source = "member 1 of the hierarchy through Member1Map";
+        if (v.errW() > 0) {
+            moved.add(Painleve3Solution.builder(eq).settings(solution.solver.settings())
+                    .start(v.point().z(), v.w().add(v.errW()), v.dw()).startComputedBy(source).build());
+        }
+        if (v.errDw() > 0) {
+            moved.add(Painleve3Solution.builder(eq).settings(solution.solver.settings())
+                    .start(v.point().z(), v.w(), v.dw().add(v.errDw())).startComputedBy(source).build());
+        }
         return Painleve3Solution.builder(eq).settings(solution.solver.settings()).start(v.point().z(), v.w(), v.dw())
-                .startErrors(v.errW(), v.errDw()).startComputedBy("member 1 of the hierarchy through Member1Map")
-                .build();
+                .startComputedBy(source).build();
     }
 
     /** lambda when the solution is the decaying family with real lambda, else null. */

@@ -8,6 +8,7 @@ import org.tertius.connection.infinity.InfinityBehaviour;
 import org.tertius.connection.infinity.TransseriesAtInfinity;
 import org.tertius.connection.match.InfinityBehaviourFit;
 import org.tertius.connection.match.PoleFreeSector;
+import org.tertius.connection.match.StartSensitivity;
 import org.tertius.connection.match.ZeroBehaviourFit;
 import org.tertius.connection.zero.LocalValue;
 import org.tertius.connection.zero.ZeroBehaviour;
@@ -34,14 +35,15 @@ final class ConnectionReport {
     /**
      * The behaviour at 0 on the ray (angle, sheet).
      *
+     * @param moved solutions started from uncertain start data moved by their errors (StartSensitivity), or empty
      * @param decayingLambda lambda of the decaying family of PIII(0, 0, 1, -1) when the solution is one (its closed
      *     form is then written beside the numbers), else null
      * @param bridge the closed forms from the monodromy data that selected the solution, else null
      * @return whether the kind was decided
      */
-    static boolean atZero(Painleve3Solution s, double angle, int sheet, Double decayingLambda,
-                          BridgeRows.ClosedAtZero bridge, ConnectionRows rows) {
-        ZeroBehaviour b = ZeroBehaviourFit.analyse(s, angle, sheet);
+    static boolean atZero(Painleve3Solution s, List<Painleve3Solution> moved, double angle, int sheet,
+                          Double decayingLambda, BridgeRows.ClosedAtZero bridge, ConnectionRows rows) {
+        ZeroBehaviour b = StartSensitivity.atZero(s, moved, angle, sheet);
         rows.comment("behaviour at z = 0 of " + s.equation() + ", read on arg z = " + angle
                 + (sheet == 0 ? "" : " of sheet " + sheet) + " for |z| in [" + ZeroBehaviourFit.R_MIN + ", "
                 + ZeroBehaviourFit.R_MAX + "]");
@@ -131,9 +133,10 @@ final class ConnectionReport {
      * @return whether the kind was decided
      * @throws InvalidInputException for a ray through poles (a pole line) or an equation of another type
      */
-    static boolean atInfinity(Painleve3Solution s, double angle, int sheet, double[] radii, ConnectionRows rows) {
+    static boolean atInfinity(Painleve3Solution s, List<Painleve3Solution> moved, double angle, int sheet,
+                              double[] radii, ConnectionRows rows) {
         Painleve3 eq = s.equation();
-        InfinityBehaviour b = InfinityBehaviourFit.analyse(s, angle, sheet, radii[0], radii[1]);
+        InfinityBehaviour b = StartSensitivity.atInfinity(s, moved, angle, sheet, radii[0], radii[1]);
         rows.comment("behaviour at infinity of " + s.equation() + " along arg z = " + angle
                 + (sheet == 0 ? "" : " of sheet " + sheet) + ", sampled on |z| in [" + radii[0] + ", " + radii[1]
                 + "]: w = c e^u, u ~ x^(-1/2) (p E + q/E) + ..., E = e^(mu x) x^kappa"

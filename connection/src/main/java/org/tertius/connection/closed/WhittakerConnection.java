@@ -1,12 +1,11 @@
 package org.tertius.connection.closed;
 
-import java.util.Collections;
-import java.util.LinkedHashMap;
-import java.util.Map;
 import org.apfloat.Apcomplex;
 import org.apfloat.Apfloat;
 import org.apfloat.ApfloatMath;
 import org.apfloat.FixedPrecisionApcomplexHelper;
+import org.hipparchus.complex.Complex;
+import org.tertius.core.number.ComplexGamma;
 
 /**
  * The connection matrix of the confluent hypergeometric (Whittaker) system {@code dY/dmu = (-i sigma3 + C/mu) Y},
@@ -27,27 +26,21 @@ import org.apfloat.FixedPrecisionApcomplexHelper;
  * them is confirmed numerically, see {@link ZeroMonodromyBridge}). Utility.
  */
 final class WhittakerConnection {
-    /** Gamma values already computed (Apfloat's complex Gamma takes about 0.1 s in 40 digits): a bounded memo. */
-    private static final Map<Apcomplex, Apcomplex> GAMMA = Collections.synchronizedMap(
-            new LinkedHashMap<>(64, 0.75f, true) {
-                @Override
-                protected boolean removeEldestEntry(Map.Entry<Apcomplex, Apcomplex> eldest) {
-                    return size() > 256;
-                }
-            });
+    /** Relative rounding of a product of a few Gamma values (ComplexGamma: about 1e-14 each, measured). */
+    static final double GAMMA_ROUNDING = 64 * Math.ulp(1.0);
 
     private WhittakerConnection() {
     }
 
-    /** Gamma(z) in the helper's precision (remembered). */
+    /**
+     * Gamma(z) by {@link ComplexGamma} in double precision (about 1e-14 relative), carried in the helper's precision:
+     * the closed forms are returned in double, and Apfloat's Gamma (about 0.1 s a call in 40 digits) made the error
+     * propagation, which evaluates them a dozen times, take seconds. {@link #GAMMA_ROUNDING} is its share of the
+     * rounding estimate of a closed form.
+     */
     static Apcomplex gamma(FixedPrecisionApcomplexHelper h, Apcomplex z) {
-        Apcomplex known = GAMMA.get(z);
-        if (known != null && known.precision() == h.precision()) {
-            return known;
-        }
-        Apcomplex g = h.gamma(z);
-        GAMMA.put(z, g);
-        return g;
+        Complex g = ComplexGamma.gamma(new Complex(z.real().doubleValue(), z.imag().doubleValue()));
+        return new Apcomplex(new Apfloat(g.getReal(), h.precision()), new Apfloat(g.getImaginary(), h.precision()));
     }
 
     /** N as {{N11, N12}, {N21, N22}} for the given mh, nu and c12 (2 nu not an integer). */

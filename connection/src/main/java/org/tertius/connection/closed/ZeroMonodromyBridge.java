@@ -245,7 +245,7 @@ public final class ZeroMonodromyBridge {
         List<Complex> x = new ArrayList<>();
         in.forEach(e -> x.add(e.value()));
         Complex value = f.apply(x);
-        double error = 4 * Math.ulp(1.0) * value.norm();
+        double error = WhittakerConnection.GAMMA_ROUNDING * value.norm();
         for (int i = 0; i < x.size(); i++) {
             double given = in.get(i).error() + Math.ulp(1.0) * x.get(i).norm();
             double h = STEP * Math.max(1, x.get(i).norm());
