@@ -83,7 +83,6 @@ public final class ConnectCommand implements Command {
                     fromZero(rows);
                     break;
                 case 3:
-                    refuseDigits("--from-infinity", "the transseries at infinity is summed in double precision only");
                     fromInfinity(rows);
                     break;
                 default:
@@ -228,6 +227,11 @@ public final class ConnectCommand implements Command {
         }
         InfinityBehaviour data = InfinityBehaviour.of(eq, c, ComplexText.parse("--from-infinity", p.get(1)),
                 ComplexText.parse("--from-infinity", p.get(2)), connection.rayAngle(), connection.sheetIndex());
+        if (connection.digits != null) {
+            HighPrecisionSolution.checkDigits(connection.digits);
+            PreciseConnection.fromInfinity(eq, roots.indexOf(data.background()), p, connection, rows);
+            return;
+        }
         Double radius = null;
         if (connection.startAt != null) {
             Complex r = ComplexText.parse("--start-at", connection.startAt);

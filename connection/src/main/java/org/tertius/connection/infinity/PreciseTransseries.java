@@ -1,5 +1,8 @@
 package org.tertius.connection.infinity;
 
+import java.math.BigDecimal;
+import java.math.BigInteger;
+import java.math.RoundingMode;
 import java.util.List;
 import org.hipparchus.complex.Complex;
 import org.tertius.connection.zero.LocalValue;
@@ -218,6 +221,37 @@ public final class PreciseTransseries {
         double eps = ar.epsilon();
         return new LocalValue<>(l.z(), w, dw, aw * l.errW() + 4 * eps * aw,
                 aw * (l.errDw() + ar.abs(total) * l.errW()) + 8 * eps * ar.abs(dw));
+    }
+
+    /**
+     * The point r e^(i angle) with its parts rounded to {@code digits() + GUARD} significant digits (relative to r) as
+     * an exact decimal number: the start point that is printed and replayed, off the ray by less than 10^-(digits +
+     * GUARD) r (the transseries is evaluated at this point itself, so the start data belong to it exactly).
+     *
+     * @param angle the argument of the ray at the working precision (for example pi/2 computed here)
+     */
+    public ExactNumber pointOnRay(BigDecimal radius, MpComplex angle) {
+        MpComplex z = ar.multiply(ctx().fromExact(ExactNumber.parse("radius", radius.toPlainString())), ar.exp(ar.multiply(ar.of(0, 1), angle)));
+        BigDecimal[] parts = MpContext.exactDecimal(z);
+        int keep = digits + GUARD;
+        int scale = keep - 1 - (radius.precision() - radius.scale() - 1);
+        BigInteger[] num = new BigInteger[2];
+        BigInteger den = BigInteger.TEN.pow(Math.max(scale, 0));
+        for (int i = 0; i < 2; i++) {
+            BigDecimal x = parts[i].setScale(Math.max(scale, 0), RoundingMode.HALF_EVEN);
+            num[i] = x.unscaledValue();
+        }
+        return ExactNumber.ofComplexRational(num[0], den, num[1], den);
+    }
+
+    /** w and w' at an exact point z on the sheet {@code sheet} (log z = principal log + 2 pi i sheet). */
+    public LocalValue<MpComplex> startData(ExactNumber z, int sheet) {
+        MpComplex turn = ar.multiply(ar.of(0, 2 * sheet), ar.pi());
+        return at(ar.add(ar.log(ctx().fromExact(z)), turn));
+    }
+
+    private MpContext ctx() {
+        return ar.context();
     }
 
     /**
