@@ -229,7 +229,7 @@ public final class ConnectCommand implements Command {
                 ComplexText.parse("--from-infinity", p.get(2)), connection.rayAngle(), connection.sheetIndex());
         if (connection.digits != null) {
             HighPrecisionSolution.checkDigits(connection.digits);
-            PreciseConnection.fromInfinity(eq, roots.indexOf(data.background()), p, connection, rows);
+            PreciseConnection.fromInfinity(eq, data, roots.indexOf(data.background()), p, connection, rows);
             return;
         }
         Double radius = null;

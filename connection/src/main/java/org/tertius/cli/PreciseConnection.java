@@ -3,11 +3,13 @@ package org.tertius.cli;
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.math.RoundingMode;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
 import org.apfloat.Apcomplex;
 import org.apfloat.Apfloat;
 import org.apfloat.ApfloatMath;
+import org.tertius.connection.infinity.InfinityBehaviour;
 import org.tertius.connection.infinity.PreciseTransseries;
 import org.tertius.connection.match.PreciseZeroFit;
 import org.tertius.connection.match.ZeroBehaviourFit;
@@ -100,10 +102,22 @@ final class PreciseConnection {
      * background of index {@code background}, computed exactly from the equation), at the typed radius or by default
      * at the smallest radius of {@link #INFINITY_RADII} where the transseries reaches D digits.
      */
-    static void fromInfinity(Painleve3 eq, int background, List<String> parts, ConnectionOptions options,
-                             ConnectionRows rows) {
+    static void fromInfinity(Painleve3 eq, InfinityBehaviour data, int background, List<String> parts,
+                             ConnectionOptions options, ConnectionRows rows) {
         int digits = options.digits;
         int sheet = options.sheetIndex();
+        double phase = options.rayAngle() + 2 * Math.PI * sheet;
+        double[] radii = INFINITY_RADII;
+        if (options.startAt == null) {
+            double planned = PreciseTransseries.plannedRadius(eq, data.background(), data.p(), data.q(), digits,
+                    INFINITY_RADII, phase);
+            if (planned < 0) {
+                throw new InvalidInputException("--digits", digits + " digits are not reached by the transseries at"
+                        + " infinity (" + PreciseTransseries.ordersFor(digits) + " orders) for |z| in [1, 1e4] on this"
+                        + " ray; ask fewer digits");
+            }
+            radii = Arrays.stream(INFINITY_RADII).filter(r -> r >= planned).toArray();
+        }
         PreciseTransseries t;
         try (Progress progress = new Progress("connect")) {
             progress.update(0, 1);
@@ -116,7 +130,6 @@ final class PreciseConnection {
         long[] pi = options.rayPiMultiple();
         MpComplex angle = pi != null ? ar.multiply(ar.pi(), ar.ratio(pi[0], pi[1]))
                 : ar.context().fromExact(ExactText.parse("--ray", options.ray == null ? "0" : options.ray));
-        double phase = options.rayAngle() + 2 * Math.PI * sheet;
         BigDecimal radius;
         if (options.startAt != null) {
             ExactNumber r = ExactText.parse("--start-at", options.startAt);
@@ -127,7 +140,7 @@ final class PreciseConnection {
             }
             radius = r.realPart(new MathContext(digits + PreciseTransseries.GUARD));
         } else {
-            double r = t.reach(INFINITY_RADII, phase);
+            double r = t.reach(radii, phase);
             if (r < 0) {
                 throw new InvalidInputException("--digits", digits + " digits are not reached by the transseries at"
                         + " infinity (" + t.orders() + " orders) for |z| in [1, 1e4] on this ray; ask fewer digits");

@@ -7,6 +7,7 @@ import java.util.List;
 import org.hipparchus.complex.Complex;
 import org.tertius.connection.zero.LocalValue;
 import org.tertius.core.InvalidInputException;
+import org.tertius.core.number.AnalyticArithmetic;
 import org.tertius.core.number.ComplexArithmetic;
 import org.tertius.core.number.ExactNumber;
 import org.tertius.core.number.MpArithmetic;
@@ -96,36 +97,62 @@ public final class PreciseTransseries {
         MpComplex qq = ctx.fromExact(q);
         boolean d7 = eq.type() == Painleve3Type.D7;
         MpComplex c;
-        HarmonicTransseries<MpComplex> core;
-        HarmonicTransseries<Complex> check;
         if (d7) {
             MpComplex c0 = ar.pow(ar.negate(ar.divide(delta, alpha)), ar.ratio(1, 3));
             MpComplex turn = ar.exp(ar.multiply(ar.of(0, 1), ar.multiply(ar.pi(), ar.ratio(2L * background, 3))));
             c = background == 0 ? c0 : ar.multiply(c0, turn);
-            MpComplex a = ar.multiply(ar.multiply(alpha, c), ar.ratio(9, 4));
-            MpComplex b = ar.multiply(ar.divide(beta, c), ar.ratio(9, 4));
-            core = new HarmonicTransseries<>(ar, List.of(a, ar.negate(a)), new int[] {1, -2}, List.of(b),
-                    new int[] {-1}, pp, qq, orders);
-            Complex ad = a.toComplex();
-            check = new HarmonicTransseries<>(ComplexArithmetic.INSTANCE, List.of(ad, ad.negate()), new int[] {1, -2},
-                    List.of(b.toComplex()), new int[] {-1}, pp.toComplex(), qq.toComplex(), orders);
         } else {
-            MpComplex c0 = ar.pow(ar.negate(ar.divide(delta, gamma)), ar.ratio(1, 4));
             MpComplex rot = ar.one();
             for (int k = 0; k < background; k++) {
                 rot = ar.multiply(rot, ar.of(0, 1));
             }
-            c = ar.multiply(c0, rot);
-            MpComplex m = ar.multiply(gamma, ar.multiply(c, c));
-            MpComplex a = ar.multiply(alpha, c);
-            MpComplex b = ar.divide(beta, c);
-            core = new HarmonicTransseries<>(ar, List.of(m, ar.negate(m)), new int[] {2, -2}, List.of(a, b),
-                    new int[] {1, -1}, pp, qq, orders);
-            Complex md = m.toComplex();
-            check = new HarmonicTransseries<>(ComplexArithmetic.INSTANCE, List.of(md, md.negate()), new int[] {2, -2},
-                    List.of(a.toComplex(), b.toComplex()), new int[] {1, -1}, pp.toComplex(), qq.toComplex(), orders);
+            c = ar.multiply(ar.pow(ar.negate(ar.divide(delta, gamma)), ar.ratio(1, 4)), rot);
         }
+        HarmonicTransseries<MpComplex> core = core(ar, d7, alpha, beta, gamma, c, pp, qq, orders);
+        HarmonicTransseries<Complex> check = core(ComplexArithmetic.INSTANCE, d7, alpha.toComplex(),
+                beta.toComplex(), gamma.toComplex(), c.toComplex(), pp.toComplex(), qq.toComplex(), orders);
         return new PreciseTransseries(ar, d7, c, core, amplification(core, check, orders), digits);
+    }
+
+    /**
+     * The recursion of the equation about c: D6 with A = (gamma c^2, -gamma c^2) at (2, -2), B = (alpha c, beta/c) at
+     * (1, -1); D7 (variable s = x^(2/3)) with A = (9/4) alpha c (1, -1) at (1, -2), B = (9/4) beta/c at -1.
+     */
+    private static <T> HarmonicTransseries<T> core(AnalyticArithmetic<T> ar, boolean d7, T alpha, T beta, T gamma,
+                                                   T c, T p, T q, int orders) {
+        if (d7) {
+            T a = ar.multiply(ar.multiply(alpha, c), ar.ratio(9, 4));
+            T b = ar.multiply(ar.divide(beta, c), ar.ratio(9, 4));
+            return new HarmonicTransseries<>(ar, List.of(a, ar.negate(a)), new int[] {1, -2}, List.of(b),
+                    new int[] {-1}, p, q, orders);
+        }
+        T m = ar.multiply(gamma, ar.multiply(c, c));
+        return new HarmonicTransseries<>(ar, List.of(m, ar.negate(m)), new int[] {2, -2},
+                List.of(ar.multiply(alpha, c), ar.divide(beta, c)), new int[] {1, -1}, p, q, orders);
+    }
+
+    /**
+     * The smallest radius of {@code radii} (increasing) on the ray of log-coordinate phase {@code phase} where the
+     * truncation estimate of {@link #ordersFor}(digits) orders is below a tenth of 10^-digits, from the recursion
+     * in double precision (fast: it decides whether the digits can be reached before the precise build), or -1.
+     *
+     * @param c the background (a root, as {@link TransseriesAtInfinity#backgrounds} gives it)
+     */
+    public static double plannedRadius(Painleve3 eq, Complex c, Complex p, Complex q, int digits, double[] radii,
+                                       double phase) {
+        boolean d7 = eq.type() == Painleve3Type.D7;
+        int orders = ordersFor(digits);
+        HarmonicTransseries<Complex> t = core(ComplexArithmetic.INSTANCE, d7, eq.alpha(), eq.beta(), eq.gamma(), c, p,
+                q, orders);
+        double target = 0.1 * Math.pow(10, -digits);
+        for (double r : radii) {
+            double y = d7 ? Math.pow(r, 2.0 / 3) : r;
+            LocalValue<Complex> v = t.at(new Complex(Math.log(y), (d7 ? 2.0 / 3 : 1) * phase), orders, 0);
+            if (v.errW() <= target && v.errDw() <= target * (1 + v.dw().norm())) {
+                return r;
+            }
+        }
+        return -1;
     }
 
     private static void requireDigits(String name, ExactNumber x, int digits) {
