@@ -165,6 +165,19 @@ final class PreciseConnection {
                 + " reaches " + digits + " digits" : ""));
         rows.comment("z is exact (its parts rounded to " + (digits + PreciseTransseries.GUARD) + " digits, on the ray"
                 + " to that accuracy); the errors of w and dw include the rounding of the printed digits");
+        if (ar.abs(ar.context().fromExact(ExactText.parse("--from-infinity", parts.get(1)))) > 0
+                || ar.abs(ar.context().fromExact(ExactText.parse("--from-infinity", parts.get(2)))) > 0) {
+            // how well the start data fix the amplitudes: their part of w against the error (exponentially small rays)
+            PreciseTransseries bare = PreciseTransseries.create(eq, eq.exactParameters(), background,
+                    ExactNumber.ofInteger(0), ExactNumber.ofInteger(0), digits, t.orders());
+            LocalValue<MpComplex> v0 = bare.startData(z, sheet);
+            double carried = ar.abs(ar.subtract(v.w(), v0.w()));
+            double resolution = (v.errW() + v0.errW()) / carried;
+            rows.comment("the amplitudes change w here by " + String.format(Locale.ROOT, "%.2g", carried)
+                    + (resolution < 1 ? ", so these start data fix them to about " + String.format(Locale.ROOT, "%.2g",
+                    resolution) + " relative" : ", less than the error: these start data do not fix them (a ray on or"
+                    + " near a Stokes line; start closer with --start-at, at fewer digits)"));
+        }
         rows.add("z", "exact", ValueRows.exactComplex(z), "0", "", "");
         rows.add("sheet", "exact", Integer.toString(sheet), "0", "", "");
         rows.add("w", digits + " digits", complex(w, digits), ConnectionRows.error(v.errW() + printed(w, digits)), "",

@@ -47,7 +47,11 @@ class Laurent<T> {
         return Math.abs(k) > width ? null : (T) c[k + width];
     }
 
+    /** Sets the coefficient of E^k; an exact zero where nothing was set is not stored (products skip it). */
     void set(int k, T v) {
+        if (c[k + width] == null && ar.abs(v) == 0) {
+            return;
+        }
         c[k + width] = v;
         widen(k);
     }
