@@ -73,8 +73,8 @@ public final class ConnectCommand implements Command {
                     decided = atZero(rows);
                     break;
                 case 1:
-                    refuseDigits("--at-infinity", "the transseries at infinity and its fits are computed in double"
-                            + " precision only");
+                    refuseDigits("--at-infinity", "the fits at infinity are computed in double precision only (start"
+                            + " data in D digits from exact data at infinity: --from-infinity C,P,Q --digits D)");
                     decided = ConnectionReport.atInfinity(painleve3(rows), connection.rayAngle(),
                             connection.sheetIndex(), connection.sampleRadii(InfinityBehaviourFit.R_MIN,
                                     InfinityBehaviourFit.R_MAX), rows);
