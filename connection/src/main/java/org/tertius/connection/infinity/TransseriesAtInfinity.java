@@ -12,7 +12,8 @@ import org.tertius.core.piii.Painleve3Type;
 /**
  * The two-parameter transseries at infinity of the solutions of a D6 equation (gamma delta != 0, DLMF eq. 32.2.3)
  * about a background c (gamma c^4 + delta = 0), and of a D7 equation with gamma = 0 (alpha delta != 0) about
- * c x^(1/3) (alpha c^3 + delta = 0), in double precision (arbitrary precision: {@link PreciseTransseries}). Derived here; the recursion is {@link HarmonicTransseries}.
+ * c x^(1/3) (alpha c^3 + delta = 0), in double precision (arbitrary precision: {@link PreciseTransseries}). Derived
+ * here; the recursion is {@link HarmonicTransseries}.
  *
  * <p>With w = c e^u the equation becomes
  * <pre>  u'' + u'/x = 2 m sinh 2u + (a e^u + b e^-u)/x,   m = gamma c^2, a = alpha c, b = beta/c</pre>
