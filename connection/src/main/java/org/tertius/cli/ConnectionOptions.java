@@ -57,8 +57,8 @@ final class ConnectionOptions implements OptionGroup {
                 + " 10:40)"));
         o.addOption(OptionKinds.value("--start-at", "Z", "--from-zero: the point z of the start data on sheet --sheet"
                 + " (default: the largest |z| = 2^-k/4 on the ray where the series at 0 is accurate); --from-infinity:"
-                + " the radius |z| on the ray (default: where the transseries fixes the amplitudes best; with --digits D"
-                + " the smallest radius where it reaches D digits)"));
+                + " the radius |z| on the ray (default: where the transseries fixes the amplitudes best; with --digits"
+                + " D the smallest radius where it reaches D digits)"));
         o.addOption(OptionKinds.value("--fit-at", "X", "decaying family (--lambda or --sigma alone): where sigma and"
                 + " B are fitted (default 1e-3)"));
         o.addOption(OptionKinds.value("--digits", "D", "decaying family, --from-zero, --at-zero and --from-infinity:"

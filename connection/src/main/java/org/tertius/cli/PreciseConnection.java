@@ -152,8 +152,8 @@ final class PreciseConnection {
         double rel = Math.max(v.errW() / ar.abs(v.w()), v.errDw() / (ar.abs(v.dw()) + ar.abs(v.w()) / radius
                 .doubleValue()));
         if (!(rel < 1)) {
-            throw new InvalidInputException("--start-at", "the transseries at |z| = " + radius + " does not fix the start"
-                    + " data (estimated error " + (Double.isFinite(rel) ? String.format(Locale.ROOT, "%.2g", rel)
+            throw new InvalidInputException("--start-at", "the transseries at |z| = " + radius + " does not fix the"
+                    + " start data (estimated error " + (Double.isFinite(rel) ? String.format(Locale.ROOT, "%.2g", rel)
                     : "unbounded") + " relative to w or w'); choose a larger radius in [1, 1e4]");
         }
         Apcomplex w = ar.context().toApcomplex(v.w());

@@ -53,7 +53,8 @@ final class HarmonicTransseries<T> {
         if (!(ar.abs(sumA) <= 1e-12 * (1 + ar.abs(a.get(0))))) {
             throw new IllegalArgumentException("u = 0 is not a background: sum A = " + ar.toComplex(sumA));
         }
-        // adding zero turns a signed zero imaginary part (double) into +0: on the negative axis the root is +i sqrt|mu^2|
+        // adding zero turns a signed zero imaginary part (double) into +0: on the negative axis the root is
+        // +i sqrt|mu^2|
         this.mu = ar.sqrt(ar.add(mu2, ar.zero()));
         int n = orders + 2;
         this.width = n + 2;

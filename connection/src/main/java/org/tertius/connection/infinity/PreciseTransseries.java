@@ -258,7 +258,8 @@ public final class PreciseTransseries {
      * @param angle the argument of the ray at the working precision (for example pi/2 computed here)
      */
     public ExactNumber pointOnRay(BigDecimal radius, MpComplex angle) {
-        MpComplex z = ar.multiply(ctx().fromExact(ExactNumber.parse("radius", radius.toPlainString())), ar.exp(ar.multiply(ar.of(0, 1), angle)));
+        MpComplex r = ctx().fromExact(ExactNumber.parse("radius", radius.toPlainString()));
+        MpComplex z = ar.multiply(r, ar.exp(ar.multiply(ar.of(0, 1), angle)));
         BigDecimal[] parts = MpContext.exactDecimal(z);
         int keep = digits + GUARD;
         int scale = keep - 1 - (radius.precision() - radius.scale() - 1);
