@@ -73,8 +73,8 @@ public final class ConnectCommand implements Command {
                     decided = atZero(rows);
                     break;
                 case 1:
-                    refuseDigits("--at-infinity", "the transseries at infinity and its fits are computed in double"
-                            + " precision only");
+                    refuseDigits("--at-infinity", "the fits at infinity are computed in double precision only (start"
+                            + " data in D digits from exact data at infinity: --from-infinity C,P,Q --digits D)");
                     decided = ConnectionReport.atInfinity(painleve3(rows), moved, connection.rayAngle(),
                             connection.sheetIndex(), connection.sampleRadii(InfinityBehaviourFit.R_MIN,
                                     InfinityBehaviourFit.R_MAX), rows);
@@ -83,7 +83,6 @@ public final class ConnectCommand implements Command {
                     fromZero(rows);
                     break;
                 case 3:
-                    refuseDigits("--from-infinity", "the transseries at infinity is summed in double precision only");
                     fromInfinity(rows);
                     break;
                 default:
@@ -266,6 +265,11 @@ public final class ConnectCommand implements Command {
         }
         InfinityBehaviour data = InfinityBehaviour.of(eq, c, ComplexText.parse("--from-infinity", p.get(1)),
                 ComplexText.parse("--from-infinity", p.get(2)), connection.rayAngle(), connection.sheetIndex());
+        if (connection.digits != null) {
+            HighPrecisionSolution.checkDigits(connection.digits);
+            PreciseConnection.fromInfinity(eq, data, roots.indexOf(data.background()), p, connection, rows);
+            return;
+        }
         Double radius = null;
         if (connection.startAt != null) {
             Complex r = ComplexText.parse("--start-at", connection.startAt);

@@ -62,11 +62,12 @@ final class ConnectionOptions implements OptionGroup {
                 + " 10:40)"));
         o.addOption(OptionKinds.value("--start-at", "Z", "--from-zero: the point z of the start data on sheet --sheet"
                 + " (default: the largest |z| = 2^-k/4 on the ray where the series at 0 is accurate); --from-infinity:"
-                + " the radius |z| on the ray (default: where the transseries fixes the amplitudes best)"));
+                + " the radius |z| on the ray (default: where the transseries fixes the amplitudes best; with --digits"
+                + " D the smallest radius where it reaches D digits)"));
         o.addOption(OptionKinds.value("--fit-at", "X", "decaying family (--lambda or --sigma alone): where sigma and"
                 + " B are fitted (default 1e-3)"));
-        o.addOption(OptionKinds.value("--digits", "D", "decaying family and --from-zero, --at-zero: also in"
-                + " arbitrary precision with D digits (slow: tens of seconds)"));
+        o.addOption(OptionKinds.value("--digits", "D", "decaying family, --from-zero, --at-zero and --from-infinity:"
+                + " also in arbitrary precision with D digits (slow: tens of seconds to minutes)"));
         o.addOption(OptionKinds.value("--format", "FMT", "csv (default), json or text"));
     }
 
@@ -156,6 +157,24 @@ final class ConnectionOptions implements OptionGroup {
             throw new InvalidInputException("--ray", "must be an angle in (-pi, pi]: a number or a multiple of pi"
                     + " such as pi/2 or -3pi/4, got '" + text + "'");
         }
+    }
+
+    /**
+     * The ray exactly, for --digits: {P, Q} when it was typed as a multiple P pi/Q of pi (P signed), else null (then
+     * the typed number is read exactly).
+     */
+    long[] rayPiMultiple() {
+        if (ray == null) {
+            return null;
+        }
+        Matcher m = PI_MULTIPLE.matcher(ray.trim().replace(" ", "").replace("*", ""));
+        if (!m.matches()) {
+            return null;
+        }
+        rayAngle();
+        long p = m.group(2).isEmpty() ? 1 : Long.parseLong(m.group(2));
+        long q = m.group(3) == null ? 1 : Long.parseLong(m.group(3));
+        return new long[] {"-".equals(m.group(1)) ? -p : p, q};
     }
 
     int sheetIndex() {

@@ -1,10 +1,16 @@
 package org.tertius.cli;
 
+import java.math.BigDecimal;
+import java.math.MathContext;
 import java.math.RoundingMode;
+import java.util.Arrays;
 import java.util.List;
+import java.util.Locale;
 import org.apfloat.Apcomplex;
 import org.apfloat.Apfloat;
 import org.apfloat.ApfloatMath;
+import org.tertius.connection.infinity.InfinityBehaviour;
+import org.tertius.connection.infinity.PreciseTransseries;
 import org.tertius.connection.match.PreciseZeroFit;
 import org.tertius.connection.match.ZeroBehaviourFit;
 import org.tertius.connection.zero.LocalValue;
@@ -12,18 +18,33 @@ import org.tertius.connection.zero.ZeroBehaviour;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.number.ApcomplexArithmetic;
 import org.tertius.core.number.ExactNumber;
+import org.tertius.core.number.MpArithmetic;
+import org.tertius.core.number.MpComplex;
 import org.tertius.core.piii.Painleve3;
 import org.tertius.core.piii.Painleve3Solution;
 
 /**
- * {@code connect --digits D} at 0: the power behaviour of a solution with exact start data fitted in arbitrary
- * precision, and start data from exact (sigma, B) ({@link PreciseZeroFit}). Typed numbers are read exactly.
+ * {@code connect --digits D}: at 0 the power behaviour of a solution with exact start data fitted in arbitrary
+ * precision, and start data from exact (sigma, B) ({@link PreciseZeroFit}); at infinity start data from exact (c, p,
+ * q) ({@link PreciseTransseries}). Typed numbers are read exactly.
  */
 final class PreciseConnection {
     /** Rows of the series at 0 in arbitrary precision (the default point is chosen small enough for them). */
     static final int ROWS = 16;
+    /** The radii tried for start data at infinity in D digits: 1, 1.25, 1.5, 2, 2.5, 3, 4, 5, 6, 8 times 10^k. */
+    static final double[] INFINITY_RADII = radii();
 
     private PreciseConnection() {
+    }
+
+    private static double[] radii() {
+        double[] steps = {1, 1.25, 1.5, 2, 2.5, 3, 4, 5, 6, 8};
+        double[] r = new double[41];
+        for (int i = 0; i < 40; i++) {
+            r[i] = steps[i % 10] * Math.pow(10, i / 10);
+        }
+        r[40] = 1e4;
+        return r;
     }
 
     /** The rows of the fit at 0 in D digits, after the double-precision rows (which decide the kind). */
@@ -74,6 +95,101 @@ final class PreciseConnection {
         rows.add("sheet", "exact", Integer.toString(sheet), "0", "", "");
         rows.add("w", digits + " digits", complex(v.w(), digits), ConnectionRows.error(v.errW()), "", "");
         rows.add("dw", digits + " digits", complex(v.dw(), digits), ConnectionRows.error(v.errDw()), "", "");
+    }
+
+    /**
+     * Start data in D digits from the data at infinity typed as --from-infinity C,P,Q (P, Q read exactly; C names the
+     * background of index {@code background}, computed exactly from the equation), at the typed radius or by default
+     * at the smallest radius of {@link #INFINITY_RADII} where the transseries reaches D digits.
+     */
+    static void fromInfinity(Painleve3 eq, InfinityBehaviour data, int background, List<String> parts,
+                             ConnectionOptions options, ConnectionRows rows) {
+        int digits = options.digits;
+        int sheet = options.sheetIndex();
+        double phase = options.rayAngle() + 2 * Math.PI * sheet;
+        double[] radii = INFINITY_RADII;
+        if (options.startAt == null) {
+            double planned = PreciseTransseries.plannedRadius(eq, data.background(), data.p(), data.q(), digits,
+                    INFINITY_RADII, phase);
+            if (planned < 0) {
+                throw new InvalidInputException("--digits", digits + " digits are not reached by the transseries at"
+                        + " infinity (" + PreciseTransseries.ordersFor(digits) + " orders) for |z| in [1, 1e4] on this"
+                        + " ray; ask fewer digits");
+            }
+            radii = Arrays.stream(INFINITY_RADII).filter(r -> r >= planned).toArray();
+        }
+        PreciseTransseries t;
+        try (Progress progress = new Progress("connect")) {
+            progress.update(0, 1);
+            t = PreciseTransseries.create(eq, eq.exactParameters(), background, ExactText.parse("--from-infinity",
+                    parts.get(1)), ExactText.parse("--from-infinity", parts.get(2)), digits,
+                    PreciseTransseries.ordersFor(digits));
+            progress.update(1, 1);
+        }
+        MpArithmetic ar = t.arithmetic();
+        long[] pi = options.rayPiMultiple();
+        MpComplex angle = pi != null ? ar.multiply(ar.pi(), ar.ratio(pi[0], pi[1]))
+                : ar.context().fromExact(ExactText.parse("--ray", options.ray == null ? "0" : options.ray));
+        BigDecimal radius;
+        if (options.startAt != null) {
+            ExactNumber r = ExactText.parse("--start-at", options.startAt);
+            double rd = r.toComplex().getReal();
+            if (!r.imaginaryPart(MathContext.DECIMAL64).equals(BigDecimal.ZERO) || !(rd >= 1 && rd <= 1e4)) {
+                throw new InvalidInputException("--start-at", "for --from-infinity it is the radius |z| on the ray, in"
+                        + " [1, 1e4], got " + options.startAt);
+            }
+            radius = r.realPart(new MathContext(digits + PreciseTransseries.GUARD));
+        } else {
+            double r = t.reach(radii, phase);
+            if (r < 0) {
+                throw new InvalidInputException("--digits", digits + " digits are not reached by the transseries at"
+                        + " infinity (" + t.orders() + " orders) for |z| in [1, 1e4] on this ray; ask fewer digits");
+            }
+            radius = new BigDecimal(Double.toString(r));
+        }
+        ExactNumber z = t.pointOnRay(radius, angle);
+        LocalValue<MpComplex> v = t.startData(z, sheet);
+        double rel = Math.max(v.errW() / ar.abs(v.w()), v.errDw() / (ar.abs(v.dw()) + ar.abs(v.w()) / radius
+                .doubleValue()));
+        if (!(rel < 1)) {
+            throw new InvalidInputException("--start-at", "the transseries at |z| = " + radius + " does not fix the"
+                    + " start data (estimated error " + (Double.isFinite(rel) ? String.format(Locale.ROOT, "%.2g", rel)
+                    : "unbounded") + " relative to w or w'); choose a larger radius in [1, 1e4]");
+        }
+        Apcomplex w = ar.context().toApcomplex(v.w());
+        Apcomplex dw = ar.context().toApcomplex(v.dw());
+        rows.comment("start data in " + digits + " digits from c = root" + background + ", p = " + parts.get(1)
+                + ", q = " + parts.get(2) + " (read exactly), from the transseries at infinity (" + t.orders()
+                + " orders, rounding amplification " + String.format(Locale.ROOT, "%.3g", t.roundingAmplification())
+                + ") at |z| = " + radius.toPlainString() + (options.startAt == null ? ", the smallest radius where it"
+                + " reaches " + digits + " digits" : ""));
+        rows.comment("z is exact (its parts rounded to " + (digits + PreciseTransseries.GUARD) + " digits, on the ray"
+                + " to that accuracy); the errors of w and dw include the rounding of the printed digits");
+        if (ar.abs(ar.context().fromExact(ExactText.parse("--from-infinity", parts.get(1)))) > 0
+                || ar.abs(ar.context().fromExact(ExactText.parse("--from-infinity", parts.get(2)))) > 0) {
+            // how well the start data fix the amplitudes: their part of w against the error (exponentially small rays)
+            PreciseTransseries bare = PreciseTransseries.create(eq, eq.exactParameters(), background,
+                    ExactNumber.ofInteger(0), ExactNumber.ofInteger(0), digits, t.orders());
+            LocalValue<MpComplex> v0 = bare.startData(z, sheet);
+            double carried = ar.abs(ar.subtract(v.w(), v0.w()));
+            double resolution = (v.errW() + v0.errW()) / carried;
+            rows.comment("the amplitudes change w here by " + String.format(Locale.ROOT, "%.2g", carried)
+                    + (resolution < 1 ? ", so these start data fix them to about " + String.format(Locale.ROOT, "%.2g",
+                    resolution) + " relative" : ", less than the error: these start data do not fix them (a ray on or"
+                    + " near a Stokes line; start closer with --start-at, at fewer digits)"));
+        }
+        rows.add("z", "exact", ValueRows.exactComplex(z), "0", "", "");
+        rows.add("sheet", "exact", Integer.toString(sheet), "0", "", "");
+        rows.add("w", digits + " digits", complex(w, digits), ConnectionRows.error(v.errW() + printed(w, digits)), "",
+                "");
+        rows.add("dw", digits + " digits", complex(dw, digits), ConnectionRows.error(v.errDw() + printed(dw, digits)),
+                "", "");
+    }
+
+    /** A bound of the rounding of {@link #complex} to D digits: one unit in the D-th digit of the larger part. */
+    private static double printed(Apcomplex c, int digits) {
+        double top = Math.max(Math.abs(c.real().doubleValue()), Math.abs(c.imag().doubleValue()));
+        return top * Math.pow(10, 1 - digits);
     }
 
     /** a+bi with D significant digits relative to the modulus. */

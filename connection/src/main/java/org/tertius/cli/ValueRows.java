@@ -11,6 +11,7 @@ import org.tertius.connection.special.PreciseValue;
 import org.tertius.core.face.ComputedSolution;
 import org.tertius.core.face.SolutionValue;
 import org.tertius.core.highprecision.HighPrecisionValue;
+import org.tertius.core.number.ExactNumber;
 import org.tertius.core.number.ExactPoint;
 import org.tertius.core.number.ShortestDecimal;
 import org.tertius.core.number.SurfacePoint;
@@ -265,6 +266,13 @@ final class ValueRows {
     static String exactCoordinates(ExactPoint point, int digits) {
         MathContext mc = new MathContext(Math.max(digits, 17), RoundingMode.HALF_EVEN);
         return decimal(point.z().realPart(mc)) + ',' + decimal(point.z().imaginaryPart(mc)) + ',' + point.sheet();
+    }
+
+    /** An exact number whose decimal expansion ends (a decimal or a dyadic rational) as a+bi text, exactly. */
+    static String exactComplex(ExactNumber z) {
+        MathContext mc = MathContext.UNLIMITED;
+        BigDecimal im = z.imaginaryPart(mc);
+        return decimal(z.realPart(mc)) + (im.signum() < 0 ? "-" : "+") + decimal(im.abs()) + "i";
     }
 
     private static String decimal(BigDecimal d) {

@@ -2,9 +2,9 @@ package org.tertius.connection.infinity;
 
 import java.util.ArrayList;
 import java.util.List;
-import org.hipparchus.complex.Complex;
 import org.tertius.connection.zero.LocalValue;
 import org.tertius.core.InvalidInputException;
+import org.tertius.core.number.AnalyticArithmetic;
 
 /**
  * The two-parameter transseries at y = infinity of {@code u'' + u'/y = sum_j A_j e^(c_j u) + (1/y) sum_j B_j e^(d_j u)}
@@ -22,54 +22,64 @@ import org.tertius.core.InvalidInputException;
  * The coefficients of e^(cu) follow from {@code n F_n = sum_j j c u_j F_(n-j)}. With A = (m, -m) at c = (2, -2) and
  * B = (alpha c, beta/c) at d = (1, -1) this is D6 ({@link TransseriesAtInfinity}); with A = (A7, -A7) at (1, -2) and
  * B at -1 it is D7 in the variable y = x^(2/3). mu is the principal root of mu^2 (+i sqrt|mu^2| on the negative axis).
- * Immutable and thread-safe.
+ *
+ * <p>Written once over the arithmetic family: double precision for the fits, arbitrary precision for
+ * {@link PreciseTransseries}. Immutable and thread-safe.
+ *
+ * @param <T> the number type
  */
-final class HarmonicTransseries {
-    private static final double EPS = 0x1p-52;
-    private final Complex mu;
-    private final Complex kappa;
-    private final Complex p;
-    private final Complex q;
+final class HarmonicTransseries<T> {
+    private final AnalyticArithmetic<T> ar;
+    private final T mu;
+    private final T kappa;
+    private final T p;
+    private final T q;
     private final int orders;
     private final int width;
-    private final Complex[][] u;
+    private final List<List<T>> u;
     private double driftResidual;
 
-    HarmonicTransseries(Complex[] a, int[] ca, Complex[] b, int[] db, Complex p, Complex q, int orders) {
+    HarmonicTransseries(AnalyticArithmetic<T> ar, List<T> a, int[] ca, List<T> b, int[] db, T p, T q, int orders) {
+        this.ar = ar;
         this.p = p;
         this.q = q;
         this.orders = orders;
-        Complex mu2 = Complex.ZERO;
-        Complex sumA = Complex.ZERO;
-        for (int j = 0; j < a.length; j++) {
-            mu2 = mu2.add(a[j].multiply(ca[j]));
-            sumA = sumA.add(a[j]);
+        T mu2 = ar.zero();
+        T sumA = ar.zero();
+        for (int j = 0; j < a.size(); j++) {
+            mu2 = ar.add(mu2, ar.multiply(a.get(j), ar.of(ca[j])));
+            sumA = ar.add(sumA, a.get(j));
         }
-        if (!(sumA.norm() <= 1e-12 * (1 + a[0].norm()))) {
-            throw new IllegalArgumentException("u = 0 is not a background: sum A = " + sumA);
+        if (!(ar.abs(sumA) <= 1e-12 * (1 + ar.abs(a.get(0))))) {
+            throw new IllegalArgumentException("u = 0 is not a background: sum A = " + ar.toComplex(sumA));
         }
-        // +0.0 for a signed zero imaginary part: on the negative axis the root is +i sqrt|mu^2|
-        this.mu = new Complex(mu2.getReal(), mu2.getImaginary() + 0.0).sqrt();
+        // adding zero turns a signed zero imaginary part (double) into +0: on the negative axis the root is
+        // +i sqrt|mu^2|
+        this.mu = ar.sqrt(ar.add(mu2, ar.zero()));
         int n = orders + 2;
         this.width = n + 2;
-        this.u = new Complex[n + 1][2 * width + 1];
-        Complex b1 = Complex.ZERO;
-        for (int j = 0; j < b.length; j++) {
-            b1 = b1.add(b[j].multiply(db[j]));
+        this.u = new ArrayList<>();
+        T b1 = ar.zero();
+        for (int j = 0; j < b.size(); j++) {
+            b1 = ar.add(b1, ar.multiply(b.get(j), ar.of(db[j])));
         }
         this.kappa = build(a, ca, b, db, b1, n);
     }
 
-    Complex mu() {
+    T mu() {
         return mu;
     }
 
-    Complex kappa() {
+    T kappa() {
         return kappa;
     }
 
-    Complex coefficient(int n, int k) {
-        return Math.abs(k) > width ? Complex.ZERO : u[n][k + width];
+    int orders() {
+        return orders;
+    }
+
+    T coefficient(int n, int k) {
+        return Math.abs(k) > width ? ar.zero() : u.get(n).get(k + width);
     }
 
     double driftResidual() {
@@ -92,39 +102,39 @@ final class HarmonicTransseries {
         return e;
     }
 
-    private Complex build(Complex[] a, int[] ca, Complex[] b, int[] db, Complex b1, int n) {
+    private T build(List<T> a, int[] ca, List<T> b, int[] db, T b1, int n) {
         List<Integer> cs = exponents(ca, db);
         State st = new State(cs, n, new Terms(a, ca, b, db, b1, cs), b1);
-        st.uu[1].set(1, p);
-        st.uu[1].set(-1, q);
+        st.uu.get(1).set(1, p);
+        st.uu.get(1).set(-1, q);
         for (int i = 0; i < cs.size(); i++) {
-            st.f[i][1] = st.uu[1].scaled(cs.get(i));
+            st.f.get(i).set(1, st.uu.get(1).scaled(cs.get(i)));
         }
-        st.kappa = b1.divide(mu.multiply(2));
+        st.kappa = ar.divide(b1, ar.multiply(mu, ar.of(2)));
         for (int order = 2; order <= n; order++) {
             if (order >= 5 && order % 2 == 1) {
                 // u_(order-2, +-1) from the k = +-1 conditions of this order; they enter R_order directly and through
                 // u_(order-1) (a quadratic nonlinearity couples them), both linearly: the residual at zero and the
                 // linear response give the 2 x 2 system
-                Complex[] r0 = st.trial(order, Complex.ZERO, Complex.ZERO);
-                Complex[] r1 = st.response(order, Complex.ONE, Complex.ZERO);
-                Complex[] r2 = st.response(order, Complex.ZERO, Complex.ONE);
-                Complex a11 = r1[0];
-                Complex a21 = r1[1];
-                Complex a12 = r2[0];
-                Complex a22 = r2[1];
-                Complex det = a11.multiply(a22).subtract(a12.multiply(a21));
-                if (!(det.norm() > 0)) {
-                    throw new InvalidInputException("amplitude", "the amplitudes p = " + p + ", q = " + q
-                            + " hit a resonance of the transseries at order " + order);
+                List<T> r0 = st.trial(order, ar.zero(), ar.zero());
+                List<T> r1 = st.response(order, ar.one(), ar.zero());
+                List<T> r2 = st.response(order, ar.zero(), ar.one());
+                T a11 = r1.get(0);
+                T a21 = r1.get(1);
+                T a12 = r2.get(0);
+                T a22 = r2.get(1);
+                T det = ar.subtract(ar.multiply(a11, a22), ar.multiply(a12, a21));
+                if (!(ar.abs(det) > 0)) {
+                    throw new InvalidInputException("amplitude", "the amplitudes p = " + ar.toComplex(p) + ", q = "
+                            + ar.toComplex(q) + " hit a resonance of the transseries at order " + order);
                 }
-                Complex d1 = a12.multiply(r0[1]).subtract(a22.multiply(r0[0])).divide(det);
-                Complex dm1 = a21.multiply(r0[0]).subtract(a11.multiply(r0[1])).divide(det);
+                T d1 = ar.divide(ar.subtract(ar.multiply(a12, r0.get(1)), ar.multiply(a22, r0.get(0))), det);
+                T dm1 = ar.divide(ar.subtract(ar.multiply(a21, r0.get(0)), ar.multiply(a11, r0.get(1))), det);
                 st.trial(order, d1, dm1);
                 st.finish(order);
             } else {
                 st.computeF(order);
-                Laurent r = st.terms.rhs(st.f, st.uu, order);
+                Laurent<T> r = st.terms.rhs(st.f, st.uu, order);
                 if (order == 3) {
                     st.kappa = drift(r, b1, st.kappa);
                 }
@@ -133,9 +143,11 @@ final class HarmonicTransseries {
             }
         }
         for (int j = 0; j <= n; j++) {
+            List<T> row = new ArrayList<>();
             for (int k = -width; k <= width; k++) {
-                u[j][k + width] = st.uu[j].get(k);
+                row.add(st.uu.get(j).get(k));
             }
+            u.add(row);
         }
         return st.kappa;
     }
@@ -143,52 +155,59 @@ final class HarmonicTransseries {
     /** The coefficients of u and of e^(c u) being built, order by order. */
     private final class State {
         final List<Integer> cs;
-        final Laurent[][] f;
-        final Laurent[] uu;
+        final List<List<Laurent<T>>> f;
+        final List<Laurent<T>> uu;
         final Terms terms;
-        final Complex b1;
-        Complex kappa;
+        final T b1;
+        T kappa;
 
-        State(List<Integer> cs, int n, Terms terms, Complex b1) {
+        State(List<Integer> cs, int n, Terms terms, T b1) {
             this.cs = cs;
             this.terms = terms;
             this.b1 = b1;
-            this.f = new Laurent[cs.size()][n + 1];
-            this.uu = new Laurent[n + 1];
+            this.f = new ArrayList<>();
+            this.uu = new ArrayList<>();
             for (int j = 0; j <= n; j++) {
-                uu[j] = new Laurent(width);
+                uu.add(Laurent.of(ar, width));
             }
             for (int i = 0; i < cs.size(); i++) {
-                f[i][0] = new Laurent(width);
-                f[i][0].set(0, Complex.ONE);
+                List<Laurent<T>> fi = new ArrayList<>();
+                for (int j = 0; j <= n; j++) {
+                    fi.add(null);
+                }
+                Laurent<T> one = Laurent.of(ar, width);
+                one.set(0, ar.one());
+                fi.set(0, one);
+                f.add(fi);
             }
         }
 
         /** F^(c)_order from u_1 .. u_(order-1) (u_order taken as zero). */
         void computeF(int order) {
             for (int i = 0; i < cs.size(); i++) {
-                f[i][order] = expOrder(f[i], uu, cs.get(i), order);
+                f.get(i).set(order, expOrder(f.get(i), uu, cs.get(i), order));
             }
         }
 
         /** u_(order,k) for k != +-1 from the right side r. */
-        void solveOthers(int order, Laurent r) {
+        void solveOthers(int order, Laurent<T> r) {
+            T mu2 = ar.multiply(mu, mu);
             for (int k = -order; k <= order; k += 2) {
                 if (Math.abs(k) == 1) {
                     continue;
                 }
-                Complex value = r.get(k).subtract(linear(k, order, b1, kappa).multiply(uu[order - 2].get(k)));
+                T value = ar.subtract(r.get(k), ar.multiply(linear(k, order, b1, kappa), uu.get(order - 2).get(k)));
                 if (order >= 4) {
-                    value = value.subtract(secondOrder(k, order, kappa).multiply(uu[order - 4].get(k)));
+                    value = ar.subtract(value, ar.multiply(secondOrder(k, order, kappa), uu.get(order - 4).get(k)));
                 }
-                uu[order].set(k, value.divide(mu.multiply(mu).multiply(k * k - 1)));
+                uu.get(order).set(k, ar.divide(value, ar.multiply(mu2, ar.of(k * k - 1))));
             }
         }
 
         /** Adds the linear part c u_order to F^(c)_order. */
         void finish(int order) {
             for (int i = 0; i < cs.size(); i++) {
-                f[i][order].addInPlace(uu[order], cs.get(i));
+                f.get(i).get(order).addInPlace(uu.get(order), cs.get(i));
             }
         }
 
@@ -198,125 +217,125 @@ final class HarmonicTransseries {
          * ((k^2-1) mu^2), delta F^(c)_(order-1) = c (delta F_1 + delta u_(order-1)), delta F^(c)_order = c (delta F_2 +
          * delta u_(order-1) F_1), from delta e^(cu) = c (delta u) e^(cu).
          */
-        Complex[] response(int order, Complex d1, Complex dm1) {
-            Laurent delta = new Laurent(width);
+        List<T> response(int order, T d1, T dm1) {
+            Laurent<T> delta = Laurent.of(ar, width);
             delta.set(1, d1);
             delta.set(-1, dm1);
-            Laurent dr1 = new Laurent(width);
-            for (int j = 0; j < terms.a.length; j++) {
+            Laurent<T> dr1 = Laurent.of(ar, width);
+            for (int j = 0; j < terms.a.size(); j++) {
                 int i = terms.ia[j];
-                dr1.addInPlace(delta.times(f[i][1]).scaled(cs.get(i)), terms.a[j]);
+                dr1.addInPlace(delta.times(f.get(i).get(1)).scaled(cs.get(i)), terms.a.get(j));
             }
-            Laurent du1 = new Laurent(width);
+            Laurent<T> du1 = Laurent.of(ar, width);
+            T mu2 = ar.multiply(mu, mu);
             for (int k = -(order - 1); k <= order - 1; k += 2) {
-                du1.set(k, dr1.get(k).divide(mu.multiply(mu).multiply(k * k - 1)));
+                du1.set(k, ar.divide(dr1.get(k), ar.multiply(mu2, ar.of(k * k - 1))));
             }
-            Laurent dr = new Laurent(width);
-            for (int j = 0; j < terms.a.length; j++) {
+            Laurent<T> dr = Laurent.of(ar, width);
+            for (int j = 0; j < terms.a.size(); j++) {
                 int i = terms.ia[j];
-                Laurent df = delta.times(f[i][2]);
-                df.addInPlace(du1.times(f[i][1]), 1);
-                dr.addInPlace(df.scaled(cs.get(i)), terms.a[j]);
+                Laurent<T> df = delta.times(f.get(i).get(2));
+                df.addInPlace(du1.times(f.get(i).get(1)), 1);
+                dr.addInPlace(df.scaled(cs.get(i)), terms.a.get(j));
             }
-            return new Complex[] {linear(1, order, b1, kappa).multiply(d1).subtract(dr.get(1)),
-                linear(-1, order, b1, kappa).multiply(dm1).subtract(dr.get(-1))};
+            return List.of(ar.subtract(ar.multiply(linear(1, order, b1, kappa), d1), dr.get(1)),
+                    ar.subtract(ar.multiply(linear(-1, order, b1, kappa), dm1), dr.get(-1)));
         }
 
         /**
          * With u_(order-2, 1) = d1 and u_(order-2, -1) = dm1: recomputes F_(order-2), the order order-1 and the right
          * side of this order, solves its k != +-1 parts, and returns the residuals of the k = +-1 conditions.
          */
-        Complex[] trial(int order, Complex d1, Complex dm1) {
+        List<T> trial(int order, T d1, T dm1) {
             int m2 = order - 2;
-            uu[m2].set(1, d1);
-            uu[m2].set(-1, dm1);
+            uu.get(m2).set(1, d1);
+            uu.get(m2).set(-1, dm1);
             for (int i = 0; i < cs.size(); i++) {
-                f[i][m2] = expOrder(f[i], uu, cs.get(i), m2);
-                f[i][m2].addInPlace(uu[m2], cs.get(i));
+                Laurent<T> fm = expOrder(f.get(i), uu, cs.get(i), m2);
+                fm.addInPlace(uu.get(m2), cs.get(i));
+                f.get(i).set(m2, fm);
             }
             computeF(order - 1);
-            Laurent r1 = terms.rhs(f, uu, order - 1);
-            uu[order - 1] = new Laurent(width);
+            Laurent<T> r1 = terms.rhs(f, uu, order - 1);
+            uu.set(order - 1, Laurent.of(ar, width));
             solveOthers(order - 1, r1);
             finish(order - 1);
-            uu[order] = new Laurent(width);
+            uu.set(order, Laurent.of(ar, width));
             computeF(order);
-            Laurent r = terms.rhs(f, uu, order);
+            Laurent<T> r = terms.rhs(f, uu, order);
             solveOthers(order, r);
-            Complex[] res = new Complex[2];
-            int[] ks = {1, -1};
-            for (int i = 0; i < 2; i++) {
-                int k = ks[i];
-                res[i] = linear(k, order, b1, kappa).multiply(uu[m2].get(k))
-                        .add(secondOrder(k, order, kappa).multiply(uu[order - 4].get(k))).subtract(r.get(k));
+            List<T> res = new ArrayList<>();
+            for (int k : new int[] {1, -1}) {
+                res.add(ar.subtract(ar.add(ar.multiply(linear(k, order, b1, kappa), uu.get(m2).get(k)),
+                        ar.multiply(secondOrder(k, order, kappa), uu.get(order - 4).get(k))), r.get(k)));
             }
             return res;
         }
     }
 
     /** kappa from the order-3 conditions [k mu 2k kappa - b1] u_(1,k) = R_(3,k) (k = 1 if p != 0, else -1). */
-    private Complex drift(Laurent r, Complex b1, Complex fallback) {
-        Complex kp = p.norm() > 0 ? b1.add(r.get(1).divide(p)).divide(mu.multiply(2)) : null;
-        Complex kq = q.norm() > 0 ? b1.add(r.get(-1).divide(q)).divide(mu.multiply(2)) : null;
+    private T drift(Laurent<T> r, T b1, T fallback) {
+        T twoMu = ar.multiply(mu, ar.of(2));
+        T kp = ar.abs(p) > 0 ? ar.divide(ar.add(b1, ar.divide(r.get(1), p)), twoMu) : null;
+        T kq = ar.abs(q) > 0 ? ar.divide(ar.add(b1, ar.divide(r.get(-1), q)), twoMu) : null;
         if (kp != null && kq != null) {
-            driftResidual = kp.subtract(kq).norm() / (1 + kp.norm());
+            driftResidual = ar.abs(ar.subtract(kp, kq)) / (1 + ar.abs(kp));
         }
         return kp != null ? kp : (kq != null ? kq : fallback);
     }
 
     /** k mu (2 k kappa - n + 3) - b1. */
-    private Complex linear(int k, int n, Complex b1, Complex kap) {
-        return mu.multiply(k).multiply(kap.multiply(2 * k).add(3 - n)).subtract(b1);
+    private T linear(int k, int n, T b1, T kap) {
+        return ar.subtract(ar.multiply(ar.multiply(mu, ar.of(k)), ar.add(ar.multiply(kap, ar.of(2 * k)),
+                ar.of(3 - n))), b1);
     }
 
     /** (k kappa - (n-4)/2)^2. */
-    private static Complex secondOrder(int k, int n, Complex kap) {
-        Complex s = kap.multiply(k).subtract((n - 4) / 2.0);
-        return s.multiply(s);
+    private T secondOrder(int k, int n, T kap) {
+        T s = ar.subtract(ar.multiply(kap, ar.of(k)), ar.ratio(n - 4, 2));
+        return ar.multiply(s, s);
     }
 
     /** The right side and the coupling G of the orders. */
     private final class Terms {
-        final Complex[] a;
+        final List<T> a;
         final int[] ia;
-        private final int[] ca;
-        private final Complex[] b;
+        private final List<T> b;
         private final int[] ib;
-        private final Complex b1;
+        private final T minusB1;
 
-        Terms(Complex[] a, int[] ca, Complex[] b, int[] db, Complex b1, List<Integer> cs) {
+        Terms(List<T> a, int[] ca, List<T> b, int[] db, T b1, List<Integer> cs) {
             this.a = a;
-            this.ca = ca;
             this.b = b;
-            this.b1 = b1;
-            this.ia = new int[a.length];
-            this.ib = new int[b.length];
-            for (int j = 0; j < a.length; j++) {
+            this.minusB1 = ar.negate(b1);
+            this.ia = new int[a.size()];
+            this.ib = new int[b.size()];
+            for (int j = 0; j < a.size(); j++) {
                 ia[j] = cs.indexOf(ca[j]);
             }
-            for (int j = 0; j < b.length; j++) {
+            for (int j = 0; j < b.size(); j++) {
                 ib[j] = cs.indexOf(db[j]);
             }
         }
 
-        Laurent rhs(Laurent[][] f, Laurent[] uu, int n) {
-            Laurent r = new Laurent(width);
-            for (int j = 0; j < a.length; j++) {
-                r.addInPlace(f[ia[j]][n], a[j]);
+        Laurent<T> rhs(List<List<Laurent<T>>> f, List<Laurent<T>> uu, int n) {
+            Laurent<T> r = Laurent.of(ar, width);
+            for (int j = 0; j < a.size(); j++) {
+                r.addInPlace(f.get(ia[j]).get(n), a.get(j));
             }
-            for (int j = 0; j < b.length; j++) {
-                r.addInPlace(f[ib[j]][n - 2], b[j]);
+            for (int j = 0; j < b.size(); j++) {
+                r.addInPlace(f.get(ib[j]).get(n - 2), b.get(j));
             }
-            r.addInPlace(uu[n - 2], b1.negate());
+            r.addInPlace(uu.get(n - 2), minusB1);
             return r;
         }
     }
 
     /** n F_n = sum_(j=1)^(n-1) j c u_j F_(n-j) (u_n still zero). */
-    private Laurent expOrder(Laurent[] f, Laurent[] uu, int cc, int n) {
-        Laurent s = new Laurent(width);
+    private Laurent<T> expOrder(List<Laurent<T>> f, List<Laurent<T>> uu, int cc, int n) {
+        Laurent<T> s = Laurent.of(ar, width);
         for (int j = 1; j < n; j++) {
-            s.addInPlace(uu[j].times(f[n - j]), (double) j * cc / n);
+            s.addInPlace(uu.get(j).times(f.get(n - j)), ar.ratio((long) j * cc, n));
         }
         return s;
     }
@@ -325,62 +344,87 @@ final class HarmonicTransseries {
      * u and du/dy at y = exp(tauY) (tauY the log coordinate of y, used for y^kappa and y^(-1/2)), truncated at the
      * smallest pair of orders, with error estimates (the next pair, plus rounding). The value's z is y.
      */
-    LocalValue<Complex> at(Complex tauY) {
-        Complex y = tauY.exp();
-        Complex e = mu.multiply(y).add(kappa.multiply(tauY)).exp();
-        Complex einv = e.reciprocal();
-        double ae = e.norm();
-        Complex root = tauY.multiply(-0.5).exp();
-        double ar = root.norm();
-        double[] size = new double[orders + 1];
-        double[] sizeD = new double[orders + 1];
-        Complex[] term = new Complex[orders + 1];
-        Complex[] dterm = new Complex[orders + 1];
-        Complex pow = Complex.ONE;
-        Complex yinv = y.reciprocal();
-        for (int n = 1; n <= orders; n++) {
-            pow = pow.multiply(root);
-            Complex s = Complex.ZERO;
-            Complex ds = Complex.ZERO;
+    LocalValue<T> at(T tauY) {
+        return at(tauY, orders, 1);
+    }
+
+    /**
+     * As {@link #at(Object)} with the orders limited to {@code use} (at most the orders built; the truncation is
+     * sought among orders 2..use-2) and the rounding estimate multiplied by {@code rounding} (the amplification of
+     * rounding by the recursion, where it was measured).
+     */
+    LocalValue<T> at(T tauY, int use, double rounding) {
+        T y = ar.exp(tauY);
+        T e = ar.exp(ar.add(ar.multiply(mu, y), ar.multiply(kappa, tauY)));
+        T einv = ar.reciprocal(e);
+        double ae = ar.abs(e);
+        T root = ar.exp(ar.multiply(tauY, ar.ratio(-1, 2)));
+        double ar0 = ar.abs(root);
+        double[] size = new double[use + 1];
+        double[] sizeD = new double[use + 1];
+        List<T> term = new ArrayList<>();
+        List<T> dterm = new ArrayList<>();
+        term.add(ar.zero());
+        dterm.add(ar.zero());
+        List<T> powers = new ArrayList<>();
+        List<T> inversePowers = new ArrayList<>();
+        powers.add(ar.one());
+        inversePowers.add(ar.one());
+        T pow = ar.one();
+        T yinv = ar.reciprocal(y);
+        for (int n = 1; n <= use; n++) {
+            pow = ar.multiply(pow, root);
+            T s = ar.zero();
+            T ds = ar.zero();
             for (int k = -n; k <= n; k += 2) {
-                Complex coef = u[n][k + width];
-                if (coef.getReal() == 0 && coef.getImaginary() == 0) {
+                T coef = u.get(n).get(k + width);
+                double ac = ar.abs(coef);
+                if (ac == 0) {
                     continue;
                 }
-                Complex ek = k >= 0 ? e.pow(k) : einv.pow(-k);
-                Complex t = coef.multiply(ek);
-                s = s.add(t);
-                Complex factor = mu.multiply(k).add(kappa.multiply(k).subtract(n / 2.0).multiply(yinv));
-                ds = ds.add(t.multiply(factor));
-                size[n] += coef.norm() * Math.pow(ae, k);
-                sizeD[n] += coef.norm() * Math.pow(ae, k) * factor.norm();
+                T t = ar.multiply(coef, k >= 0 ? power(powers, e, k) : power(inversePowers, einv, -k));
+                s = ar.add(s, t);
+                T factor = ar.add(ar.multiply(mu, ar.of(k)), ar.multiply(ar.subtract(ar.multiply(kappa, ar.of(k)),
+                        ar.ratio(n, 2)), yinv));
+                ds = ar.add(ds, ar.multiply(t, factor));
+                size[n] += ac * Math.pow(ae, k);
+                sizeD[n] += ac * Math.pow(ae, k) * ar.abs(factor);
             }
-            size[n] *= Math.pow(ar, n);
-            sizeD[n] *= Math.pow(ar, n);
-            term[n] = s.multiply(pow);
-            dterm[n] = ds.multiply(pow);
+            size[n] *= Math.pow(ar0, n);
+            sizeD[n] *= Math.pow(ar0, n);
+            term.add(ar.multiply(s, pow));
+            dterm.add(ar.multiply(ds, pow));
         }
-        int stop = orders - 2;
+        int stop = use - 2;
         double bestPair = Double.POSITIVE_INFINITY;
-        for (int n = 2; n <= orders - 2; n++) {
+        for (int n = 2; n <= use - 2; n++) {
             double pair = size[n + 1] + size[n + 2];
             if (pair < bestPair) {
                 bestPair = pair;
                 stop = n;
             }
         }
-        Complex uu = Complex.ZERO;
-        Complex du = Complex.ZERO;
+        T uu = ar.zero();
+        T du = ar.zero();
         double abs = 0;
         double absD = 0;
         for (int n = 1; n <= stop; n++) {
-            uu = uu.add(term[n]);
-            du = du.add(dterm[n]);
+            uu = ar.add(uu, term.get(n));
+            du = ar.add(du, dterm.get(n));
             abs += size[n];
-            absD += dterm[n].norm();
+            absD += ar.abs(dterm.get(n));
         }
-        double errU = bestPair + 8 * EPS * abs * (stop + 1);
-        double errDu = sizeD[stop + 1] + sizeD[stop + 2] + 8 * EPS * absD * (stop + 1);
+        double eps = 2 * ar.epsilon() * rounding; // 2^-52 in double precision
+        double errU = bestPair + 8 * eps * abs * (stop + 1);
+        double errDu = sizeD[stop + 1] + sizeD[stop + 2] + 8 * eps * absD * (stop + 1);
         return new LocalValue<>(y, uu, du, errU, errDu);
+    }
+
+    /** base^k from the list of powers computed so far (extended by products). */
+    private T power(List<T> powers, T base, int k) {
+        while (powers.size() <= k) {
+            powers.add(ar.multiply(powers.get(powers.size() - 1), base));
+        }
+        return powers.get(k);
     }
 }

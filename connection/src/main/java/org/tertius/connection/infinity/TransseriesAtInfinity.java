@@ -5,13 +5,15 @@ import java.util.List;
 import org.hipparchus.complex.Complex;
 import org.tertius.connection.zero.LocalValue;
 import org.tertius.core.InvalidInputException;
+import org.tertius.core.number.ComplexArithmetic;
 import org.tertius.core.piii.Painleve3;
 import org.tertius.core.piii.Painleve3Type;
 
 /**
  * The two-parameter transseries at infinity of the solutions of a D6 equation (gamma delta != 0, DLMF eq. 32.2.3)
  * about a background c (gamma c^4 + delta = 0), and of a D7 equation with gamma = 0 (alpha delta != 0) about
- * c x^(1/3) (alpha c^3 + delta = 0), double precision. Derived here; the recursion is {@link HarmonicTransseries}.
+ * c x^(1/3) (alpha c^3 + delta = 0), in double precision (arbitrary precision: {@link PreciseTransseries}). Derived
+ * here; the recursion is {@link HarmonicTransseries}.
  *
  * <p>With w = c e^u the equation becomes
  * <pre>  u'' + u'/x = 2 m sinh 2u + (a e^u + b e^-u)/x,   m = gamma c^2, a = alpha c, b = beta/c</pre>
@@ -48,7 +50,7 @@ public final class TransseriesAtInfinity {
     private final Complex c;
     private final Complex p;
     private final Complex q;
-    private final HarmonicTransseries core;
+    private final HarmonicTransseries<Complex> core;
 
     private TransseriesAtInfinity(Painleve3 eq, Complex c, Complex p, Complex q, int orders) {
         this.d7 = eq.type() == Painleve3Type.D7;
@@ -57,12 +59,12 @@ public final class TransseriesAtInfinity {
         this.q = q;
         if (d7) {
             Complex a = eq.alpha().multiply(c).multiply(2.25);
-            this.core = new HarmonicTransseries(new Complex[] {a, a.negate()}, new int[] {1, -2},
-                    new Complex[] {eq.beta().divide(c).multiply(2.25)}, new int[] {-1}, p, q, orders);
+            this.core = new HarmonicTransseries<>(ComplexArithmetic.INSTANCE, List.of(a, a.negate()), new int[] {1, -2},
+                    List.of(eq.beta().divide(c).multiply(2.25)), new int[] {-1}, p, q, orders);
         } else {
             Complex m = eq.gamma().multiply(c).multiply(c);
-            this.core = new HarmonicTransseries(new Complex[] {m, m.negate()}, new int[] {2, -2},
-                    new Complex[] {eq.alpha().multiply(c), eq.beta().divide(c)}, new int[] {1, -1}, p, q, orders);
+            this.core = new HarmonicTransseries<>(ComplexArithmetic.INSTANCE, List.of(m, m.negate()), new int[] {2, -2},
+                    List.of(eq.alpha().multiply(c), eq.beta().divide(c)), new int[] {1, -1}, p, q, orders);
         }
     }
 
