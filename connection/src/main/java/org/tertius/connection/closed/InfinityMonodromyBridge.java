@@ -166,7 +166,7 @@ public final class InfinityMonodromyBridge {
      * The background selected by the data and its oscillation constants, from the full data in one gauge (as the
      * monodromy map or {@link MonodromyFromZero} give them) with their errors, propagated to first order. Selection
      * rule (identified numerically, not derived): the principal logarithm gives |Re kappa| &lt; 1/2 for exactly one of
-     * the two backgrounds; it held on 23 of 24 measured sets (connection/README.md), so a selection is a claim to be
+     * the two backgrounds; it held on 27 of 28 measured solutions (connection/README.md), so a selection is a claim to be
      * checked where it matters; {@link #oscillation(int, List)} takes the background as given.
      *
      * @throws InvalidInputException if no background has |Re kappa| &lt; 1/2 (the data describe no solution
