@@ -67,7 +67,39 @@ public final class RegionTree {
                 }
             }
         }
-        return grow(solution, reading, coarse, settings);
+        Solution own = grow(reading, coarse, settings);
+        fill(own, reading, grid, solution, settings);
+        return new RegionTree(solution, reading, own.freeze(), own.nodeCount() - 1);
+    }
+
+    /**
+     * Extends a tree grown towards the coarse subset of a grid to every point of the grid that still lies outside
+     * all disks, in row order (a fixed order: the tree stays a function of the grid). Such holes open next to
+     * poles, where the disks are small, and at the edges; each extension adds a short path whose last disks cover
+     * the hole's neighbours too, so that a grid point rarely needs a path of its own in the grid pass (a detached
+     * path per point, dropped afterwards, is what a hole costs there).
+     */
+    private static void fill(Solution own, EngineReading reading, Grid grid, ComputedSolution solution,
+                             RegionSettings settings) {
+        for (int j = 0; j < grid.ny(); j++) {
+            RegionSolver.checkCancelled(settings);
+            for (int i = 0; i < grid.nx(); i++) {
+                SurfacePoint p = grid.point(i, j, solution.coordinate());
+                if (p == null) {
+                    continue;
+                }
+                double tauRe = reading.tauRe(p);
+                double tauIm = reading.tauIm(p);
+                if (own.inStoredDisk(tauRe, tauIm)) {
+                    continue;
+                }
+                try {
+                    own.extendTo(tauRe, tauIm);
+                } catch (TertiusException e) {
+                    // the point itself reports it when it is evaluated
+                }
+            }
+        }
     }
 
     /**
@@ -89,12 +121,12 @@ public final class RegionTree {
                 last = p;
             }
         }
-        return grow(solution, reading, coarse, settings);
+        Solution own = grow(reading, coarse, settings);
+        return new RegionTree(solution, reading, own.freeze(), own.nodeCount() - 1);
     }
 
     /** Grows a root-only copy of the solution's tree towards the points in order of distance from the start. */
-    private static RegionTree grow(ComputedSolution solution, EngineReading reading, List<SurfacePoint> targets,
-                                   RegionSettings settings) {
+    private static Solution grow(EngineReading reading, List<SurfacePoint> targets, RegionSettings settings) {
         Solution own = reading.tree().withRootOnly();
         Node root = own.root();
         SurfacePoint start = reading.point(root.tauRe(), root.tauIm());
@@ -111,7 +143,7 @@ public final class RegionTree {
             }
             settings.progress().update(++done, sorted.size());
         }
-        return new RegionTree(solution, reading, own.freeze(), own.nodeCount() - 1);
+        return own;
     }
 
     private static double distance(SurfacePoint p, SurfacePoint start) {

@@ -44,6 +44,19 @@ final class TreeReader {
         return best;
     }
 
+    /** Whether the disk of a node of the snapshot holds tau (the test of {@link #stored}). */
+    static boolean inSomeDisk(Node[] snapshot, NodeIndex index, double tRe, double tIm) {
+        for (int id : index.candidates(tRe, tIm)) {
+            if (id < snapshot.length) {
+                Node n = snapshot[id];
+                if (ComplexPairs.abs(tRe - n.tauRe(), tIm - n.tauIm()) / n.radius() <= 1) {
+                    return true;
+                }
+            }
+        }
+        return false;
+    }
+
     /**
      * The node a new path starts from: the nearest disk, with a penalty for nodes that carry a large error
      * (half a radius per decade above {@link #PENALTY_FROM}), so that paths do not grow from nodes placed next
