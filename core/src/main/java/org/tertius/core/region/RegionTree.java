@@ -1,8 +1,13 @@
 package org.tertius.core.region;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.Comparator;
 import java.util.List;
+import java.util.concurrent.CancellationException;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ForkJoinPool;
+import java.util.stream.IntStream;
 import org.tertius.core.TertiusException;
 import org.tertius.core.face.ComputedSolution;
 import org.tertius.core.face.EngineReading;
@@ -77,29 +82,49 @@ public final class RegionTree {
      * all disks, in row order (a fixed order: the tree stays a function of the grid). Such holes open next to
      * poles, where the disks are small, and at the edges; each extension adds a short path whose last disks cover
      * the hole's neighbours too, so that a grid point rarely needs a path of its own in the grid pass (a detached
-     * path per point, dropped afterwards, is what a hole costs there).
+     * path per point, dropped afterwards, is what a hole costs there). The points outside the disks of the coarse
+     * tree are listed first (on all threads; a point inside a disk stays inside as nodes are added).
      */
     private static void fill(Solution own, EngineReading reading, Grid grid, ComputedSolution solution,
                              RegionSettings settings) {
-        for (int j = 0; j < grid.ny(); j++) {
-            RegionSolver.checkCancelled(settings);
-            for (int i = 0; i < grid.nx(); i++) {
-                SurfacePoint p = grid.point(i, j, solution.coordinate());
-                if (p == null) {
-                    continue;
+        double[][] rows = new double[grid.ny()][];
+        ForkJoinPool pool = new ForkJoinPool(settings.threads());
+        try {
+            pool.submit(() -> IntStream.range(0, grid.ny()).parallel().forEach(j -> {
+                double[] holes = new double[2 * grid.nx()];
+                int count = 0;
+                for (int i = 0; i < grid.nx(); i++) {
+                    SurfacePoint p = grid.point(i, j, solution.coordinate());
+                    if (p != null && !own.inStoredDisk(reading.tauRe(p), reading.tauIm(p))) {
+                        holes[2 * count] = reading.tauRe(p);
+                        holes[2 * count + 1] = reading.tauIm(p);
+                        count++;
+                    }
                 }
-                double tauRe = reading.tauRe(p);
-                double tauIm = reading.tauIm(p);
-                if (own.inStoredDisk(tauRe, tauIm)) {
-                    continue;
-                }
-                try {
-                    own.extendTo(tauRe, tauIm);
-                } catch (TertiusException e) {
-                    // the point itself reports it when it is evaluated
-                }
+                rows[j] = Arrays.copyOf(holes, 2 * count);
+            })).get();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new CancellationException("tree growth interrupted");
+        } catch (ExecutionException e) {
+            throw new TertiusException("tree growth failed: " + e.getCause(), e.getCause());
+        } finally {
+            pool.shutdown();
+        }
+        int total = 0;
+        for (double[] r : rows) {
+            total += r.length / 2;
+        }
+        double[] re = new double[total];
+        double[] im = new double[total];
+        int k = 0;
+        for (double[] r : rows) {
+            for (int h = 0; h < r.length; h += 2) {
+                re[k] = r[h];
+                im[k++] = r[h + 1];
             }
         }
+        own.extendToEach(re, im, true, settings.threads(), n -> RegionSolver.checkCancelled(settings));
     }
 
     /**
@@ -133,16 +158,18 @@ public final class RegionTree {
         List<SurfacePoint> sorted = new ArrayList<>(targets);
         sorted.sort(Comparator.comparingDouble((SurfacePoint p) -> distance(p, start)).thenComparingDouble(SurfacePoint::im)
                 .thenComparingDouble(SurfacePoint::re).thenComparingInt(SurfacePoint::sheet));
-        long done = 0;
-        for (SurfacePoint p : sorted) {
-            RegionSolver.checkCancelled(settings);
-            try {
-                own.extendTo(reading.tauRe(p), reading.tauIm(p));
-            } catch (TertiusException e) {
-                // the point itself reports it when it is evaluated
-            }
-            settings.progress().update(++done, sorted.size());
+        double[] re = new double[sorted.size()];
+        double[] im = new double[sorted.size()];
+        for (int k = 0; k < re.length; k++) {
+            re[k] = reading.tauRe(sorted.get(k));
+            im[k] = reading.tauIm(sorted.get(k));
         }
+        // a point that cannot be reached adds nothing here: it reports it when it is evaluated
+        own.extendToEach(re, im, false, settings.threads(), k -> {
+            RegionSolver.checkCancelled(settings);
+            settings.progress().update(k, re.length);
+        });
+        settings.progress().update(re.length, re.length);
         return own;
     }
 

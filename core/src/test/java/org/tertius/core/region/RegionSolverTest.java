@@ -16,6 +16,7 @@ import org.tertius.core.piii.Painleve3;
 import org.tertius.core.piii.Painleve3Solution;
 import org.tertius.core.piii.Painleve3Value;
 import org.tertius.core.piii.RiccatiReferenceAccess;
+import org.tertius.core.step.Node;
 
 /** Grids against direct evaluations, determinism, cancellation and bad regions. */
 class RegionSolverTest {
@@ -51,6 +52,25 @@ class RegionSolverTest {
         RegionStatistics st = RegionSolver.solve(demo(), g, RegionSettings.defaults()).statistics();
         assertEquals(0, st.integrated(), st.toString());
         assertEquals(g.size(), st.servedFromTree(), st.toString());
+    }
+
+    @Test
+    void theTreeGrownForAGridDoesNotDependOnTheNumberOfThreads() {
+        // paths traced ahead on other threads are kept only where the one-thread growth would trace the same
+        Grid g = Grid.of(-4, 4, 81, -4, 4, 81, 0);
+        List<Node> one = RegionTree.grow(demo(), g, RegionSettings.builder().threads(1).build()).nodes();
+        for (int threads : new int[] {2, 4}) {
+            List<Node> more = RegionTree.grow(demo(), g, RegionSettings.builder().threads(threads).build()).nodes();
+            assertEquals(one.size(), more.size());
+            for (int k = 0; k < one.size(); k++) {
+                Node a = one.get(k);
+                Node b = more.get(k);
+                assertEquals(a.parent(), b.parent(), "node " + k);
+                assertArrayEquals(new double[] {a.tauRe(), a.tauIm(), a.radius(), a.stateRe(0), a.stateIm(0),
+                        a.accumulatedError()}, new double[] {b.tauRe(), b.tauIm(), b.radius(), b.stateRe(0),
+                        b.stateIm(0), b.accumulatedError()}, 0.0, "node " + k + " with " + threads + " threads");
+            }
+        }
     }
 
     @Test
