@@ -31,6 +31,8 @@ import org.tertius.core.step.Node;
 public final class RegionTree {
     /** Target spacing of the coarse subset in units of |z| (a fraction of the typical pole spacing). */
     static final double COARSE_SPACING = 0.45;
+    /** Spacing in grid points of the sublattice whose holes are filled first. */
+    static final int FILL_STRIDE = 8;
 
     private final ComputedSolution solution;
     private final EngineReading reading;
@@ -79,29 +81,31 @@ public final class RegionTree {
 
     /**
      * Extends a tree grown towards the coarse subset of a grid to every point of the grid that still lies outside
-     * all disks, in row order (a fixed order: the tree stays a function of the grid). Such holes open next to
-     * poles, where the disks are small, and at the edges; each extension adds a short path whose last disks cover
-     * the hole's neighbours too, so that a grid point rarely needs a path of its own in the grid pass (a detached
-     * path per point, dropped afterwards, is what a hole costs there). The points outside the disks of the coarse
-     * tree are listed first (on all threads; a point inside a disk stays inside as nodes are added).
+     * all disks. Such holes open next to poles, where the disks are small, and at the edges; each extension adds a
+     * short path whose last disks cover the hole's neighbours too, so that a grid point rarely needs a path of its
+     * own in the grid pass (a detached path per point, dropped afterwards, is what a hole costs there). The points
+     * outside the disks of the coarse tree are listed first (on all threads; a point inside a disk stays inside as
+     * nodes are added), then taken in a fixed order (the tree stays a function of the grid): the points of a
+     * sublattice {@value #FILL_STRIDE} points apart before the others, so that one extension tends to serve a
+     * whole hole and targets that follow one another lie apart (their paths, traced ahead on other processors,
+     * then stay valid).
      */
     private static void fill(Solution own, EngineReading reading, Grid grid, ComputedSolution solution,
                              RegionSettings settings) {
-        double[][] rows = new double[grid.ny()][];
+        int nx = grid.nx();
+        int[][] rows = new int[grid.ny()][];
         ForkJoinPool pool = new ForkJoinPool(settings.threads());
         try {
             pool.submit(() -> IntStream.range(0, grid.ny()).parallel().forEach(j -> {
-                double[] holes = new double[2 * grid.nx()];
+                int[] holes = new int[nx];
                 int count = 0;
-                for (int i = 0; i < grid.nx(); i++) {
+                for (int i = 0; i < nx; i++) {
                     SurfacePoint p = grid.point(i, j, solution.coordinate());
                     if (p != null && !own.inStoredDisk(reading.tauRe(p), reading.tauIm(p))) {
-                        holes[2 * count] = reading.tauRe(p);
-                        holes[2 * count + 1] = reading.tauIm(p);
-                        count++;
+                        holes[count++] = i;
                     }
                 }
-                rows[j] = Arrays.copyOf(holes, 2 * count);
+                rows[j] = Arrays.copyOf(holes, count);
             })).get();
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
@@ -111,18 +115,20 @@ public final class RegionTree {
         } finally {
             pool.shutdown();
         }
-        int total = 0;
-        for (double[] r : rows) {
-            total += r.length / 2;
-        }
-        double[] re = new double[total];
-        double[] im = new double[total];
-        int k = 0;
-        for (double[] r : rows) {
-            for (int h = 0; h < r.length; h += 2) {
-                re[k] = r[h];
-                im[k++] = r[h + 1];
+        List<long[]> holes = new ArrayList<>();
+        for (int j = 0; j < rows.length; j++) {
+            for (int i : rows[j]) {
+                holes.add(new long[] {(long) (j % FILL_STRIDE) * FILL_STRIDE + i % FILL_STRIDE, j, i});
             }
+        }
+        holes.sort(Comparator.comparingLong((long[] h) -> h[0]).thenComparingLong(h -> h[1])
+                .thenComparingLong(h -> h[2]));
+        double[] re = new double[holes.size()];
+        double[] im = new double[holes.size()];
+        for (int k = 0; k < re.length; k++) {
+            SurfacePoint p = grid.point((int) holes.get(k)[2], (int) holes.get(k)[1], solution.coordinate());
+            re[k] = reading.tauRe(p);
+            im[k] = reading.tauIm(p);
         }
         own.extendToEach(re, im, true, settings.threads(), n -> RegionSolver.checkCancelled(settings));
     }
