@@ -5,8 +5,8 @@
 #  1. `field` on the 401 x 401 grid over [-10, 10]^2 of the demo solution (the launcher of each build): wall, user
 #     and resident memory, B's summary line (nodes, points served by the tree, by own paths);
 #  2. `eval --at 3+2i --digits 100` by A, B and the mpmath peer (tools/bench/mp_peer.py), in turn;
-#  3. thread scaling in one JVM (org.tertius.bench.GridScaling): the grid pass alone and the tree growth alone with
-#     1, 2 and all processors.
+#  3. thread scaling in one JVM (org.tertius.bench.GridScaling): the grid pass alone and the tree growth alone (one
+#     thread but for the listing of its holes) with 1, 2 and all processors.
 # A is a connection/target folder of another build, built in place (its launcher's class-data archive names the
 # jar's path), e.g. of main:
 #   git worktree add /tmp/main main && (cd /tmp/main && mvn -o -q -pl connection -am -DskipTests package)

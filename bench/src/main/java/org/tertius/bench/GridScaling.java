@@ -17,7 +17,8 @@ import org.tertius.core.region.RegionTree;
 
 /**
  * Thread scaling of the 401 x 401 grid of the benchmark scenario (not a test): the grid pass alone, from one tree
- * grown beforehand, and the tree growth alone, each with 1, 2 and as many threads as the machine has, the thread
+ * grown beforehand, and the tree growth alone (one thread but for the listing of the holes between its disks),
+ * each with 1, 2 and as many threads as the machine has, the thread
  * counts alternating run by run after warm-up runs in this JVM; medians, minima and the ratio to one thread side
  * by side, with the machine and its load average before and after. The values are the same for every thread
  * count (the tree is compared node count and all, the grid value by value), which this report checks too.

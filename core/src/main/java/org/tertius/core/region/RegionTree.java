@@ -87,8 +87,7 @@ public final class RegionTree {
      * outside the disks of the coarse tree are listed first (on all threads; a point inside a disk stays inside as
      * nodes are added), then taken in a fixed order (the tree stays a function of the grid): the points of a
      * sublattice {@value #FILL_STRIDE} points apart before the others, so that one extension tends to serve a
-     * whole hole and targets that follow one another lie apart (their paths, traced ahead on other processors,
-     * then stay valid).
+     * whole hole.
      */
     private static void fill(Solution own, EngineReading reading, Grid grid, ComputedSolution solution,
                              RegionSettings settings) {
@@ -123,14 +122,20 @@ public final class RegionTree {
         }
         holes.sort(Comparator.comparingLong((long[] h) -> h[0]).thenComparingLong(h -> h[1])
                 .thenComparingLong(h -> h[2]));
-        double[] re = new double[holes.size()];
-        double[] im = new double[holes.size()];
-        for (int k = 0; k < re.length; k++) {
-            SurfacePoint p = grid.point((int) holes.get(k)[2], (int) holes.get(k)[1], solution.coordinate());
-            re[k] = reading.tauRe(p);
-            im[k] = reading.tauIm(p);
+        for (long[] h : holes) {
+            RegionSolver.checkCancelled(settings);
+            SurfacePoint p = grid.point((int) h[2], (int) h[1], solution.coordinate());
+            double tauRe = reading.tauRe(p);
+            double tauIm = reading.tauIm(p);
+            if (own.inStoredDisk(tauRe, tauIm)) {
+                continue;
+            }
+            try {
+                own.extendTo(tauRe, tauIm);
+            } catch (TertiusException e) {
+                // the point itself reports it when it is evaluated
+            }
         }
-        own.extendToEach(re, im, true, settings.threads(), n -> RegionSolver.checkCancelled(settings));
     }
 
     /**
@@ -164,18 +169,16 @@ public final class RegionTree {
         List<SurfacePoint> sorted = new ArrayList<>(targets);
         sorted.sort(Comparator.comparingDouble((SurfacePoint p) -> distance(p, start)).thenComparingDouble(SurfacePoint::im)
                 .thenComparingDouble(SurfacePoint::re).thenComparingInt(SurfacePoint::sheet));
-        double[] re = new double[sorted.size()];
-        double[] im = new double[sorted.size()];
-        for (int k = 0; k < re.length; k++) {
-            re[k] = reading.tauRe(sorted.get(k));
-            im[k] = reading.tauIm(sorted.get(k));
-        }
-        // a point that cannot be reached adds nothing here: it reports it when it is evaluated
-        own.extendToEach(re, im, false, settings.threads(), k -> {
+        long done = 0;
+        for (SurfacePoint p : sorted) {
             RegionSolver.checkCancelled(settings);
-            settings.progress().update(k, re.length);
-        });
-        settings.progress().update(re.length, re.length);
+            try {
+                own.extendTo(reading.tauRe(p), reading.tauIm(p));
+            } catch (TertiusException e) {
+                // the point itself reports it when it is evaluated
+            }
+            settings.progress().update(++done, sorted.size());
+        }
         return own;
     }
 

@@ -2,7 +2,6 @@ package org.tertius.core.solution;
 
 import java.util.Arrays;
 import java.util.List;
-import java.util.function.IntConsumer;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.UnreachableTargetException;
 import org.tertius.core.equation.IndependentVariable;
@@ -223,28 +222,6 @@ public final class Solution {
     }
 
     /**
-     * Grows the tree towards each target in turn as {@link #extendTo} does (a target that cannot be reached adds
-     * nothing), with the paths of the targets just ahead traced on {@code threads - 1} other threads meanwhile: the
-     * tree grown is the same, bit for bit, whatever the number of threads (see {@link AheadGrowth}).
-     *
-     * @param outsideDisksOnly whether targets inside the disk of a stored node are passed over
-     * @param before called with each target's index before it is added (progress, cancellation: it may throw)
-     */
-    public void extendToEach(double[] tauRe, double[] tauIm, boolean outsideDisksOnly, int threads,
-                             IntConsumer before) {
-        AheadGrowth.grow(this, tauRe, tauIm, outsideDisksOnly, threads, before);
-    }
-
-    /** The nodes as they stand (index = node id). */
-    Node[] snapshot() {
-        return nodes;
-    }
-
-    NodeIndex index() {
-        return index;
-    }
-
-    /**
      * Whether the disk of a stored node holds tau (no value is computed): a point outside every disk has no
      * stored approximant, so a tree grown for a region is extended to it ({@code RegionTree}).
      */
@@ -293,7 +270,7 @@ public final class Solution {
         return t.steps() == 0 ? t.end() : merge(start, t.nodes());
     }
 
-    Node merge(Node start, List<Node> path) {
+    private Node merge(Node start, List<Node> path) {
         synchronized (lock) {
             Node[] old = nodes;
             Node[] grown = Arrays.copyOf(old, old.length + path.size());

@@ -56,7 +56,7 @@ class RegionSolverTest {
 
     @Test
     void theTreeGrownForAGridDoesNotDependOnTheNumberOfThreads() {
-        // paths traced ahead on other threads are kept only where the one-thread growth would trace the same
+        // the holes between the disks are listed on all threads, then filled in a fixed order
         Grid g = Grid.of(-4, 4, 81, -4, 4, 81, 0);
         List<Node> one = RegionTree.grow(demo(), g, RegionSettings.builder().threads(1).build()).nodes();
         for (int threads : new int[] {2, 4}) {
