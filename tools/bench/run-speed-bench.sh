@@ -1,7 +1,8 @@
 #!/usr/bin/env bash
 # Speed benchmark (not a test): whole processes of two builds, A (the build to compare with) and B (this one),
 # alternating run by run so that a drift of the machine's speed touches both alike, with the machine and its load
-# average printed beside the figures:
+# average printed beside the figures (each round waits for a moment when the processors are idle, since the
+# machine is shared; a round that could not wait says so):
 #  1. `field` on the 401 x 401 grid over [-10, 10]^2 of the demo solution (the launcher of each build): wall, user
 #     and resident memory, B's summary line (nodes, points served by the tree, by own paths);
 #  2. `eval --at 3+2i --digits 100` by A, B and the mpmath peer (tools/bench/mp_peer.py), in turn;
@@ -37,6 +38,17 @@ ratio() { # ratio of the min and median walls of two files: first / second
   paste <(sort -n "$1" | cut -d' ' -f1) <(sort -n "$2" | cut -d' ' -f1) |
     awk '{a[NR]=$1; b[NR]=$2} END {k=int((NR+1)/2); printf "%.2fx (min), %.2fx (median)", a[1]/b[1], a[k]/b[k]}'
 }
+idle_percent() { # share of idle processor time over 2 s, from /proc/stat
+  local a b t i
+  a=($(head -1 /proc/stat)); sleep 2; b=($(head -1 /proc/stat)); t=0
+  for i in 1 2 3 4 5 6 7 8; do t=$((t + b[i] - a[i])); done
+  echo $((100 * (b[4] - a[4]) / t))
+}
+quiet() { # before a round: wait (at most about 3 minutes) for the other users of the machine to pause
+  local i
+  for i in $(seq 60); do [ "$(idle_percent)" -ge 97 ] && return; done
+  echo "   (round started on a busy machine: load $(load))"
+}
 timed() { # appends "wall user rss" of the command to file $1
   local file=$1; shift
   /usr/bin/time -o "$out/t" -f "%e %U %M" "$@" >/dev/null 2>"$out/err" || { cat "$out/err" >&2; exit 1; }
@@ -45,6 +57,7 @@ timed() { # appends "wall user rss" of the command to file $1
 
 echo "== 1. field $G, whole processes, $runs rounds (A, B alternating); load $(load)"
 for i in $(seq "$runs"); do
+  quiet
   timed "$out/fa" "$A" field $P $G --out "$out/a.png"
   timed "$out/fb" "$B" field $P $G --out "$out/b.png"
 done
@@ -55,6 +68,7 @@ echo "   A / B: $(ratio "$out/fa" "$out/fb"); load $(load)"
 
 echo "== 2. eval $P --at 3+2i --digits 100, $runs rounds (A, B, peer alternating); load $(load)"
 for i in $(seq "$runs"); do
+  quiet
   timed "$out/ea" "$A" eval $P --at 3+2i --digits 100
   timed "$out/eb" "$B" eval $P --at 3+2i --digits 100
   timed "$out/ep" python3 tools/bench/mp_peer.py --digits 100
@@ -65,4 +79,5 @@ echo "   peer: $(summary < "$out/ep")"
 echo "   A / B: $(ratio "$out/ea" "$out/eb"); peer / A: $(ratio "$out/ep" "$out/ea"); peer / B: $(ratio "$out/ep" "$out/eb"); load $(load)"
 
 echo "== 3. thread scaling in one JVM (B)"
+quiet
 java -cp bench/target/tertius-benchmarks.jar org.tertius.bench.GridScaling "$runs"
