@@ -103,6 +103,10 @@ public final class FieldCommand implements Command {
         if (note != null) {
             err.println("tertius: " + note);
         }
+        // the drawing's start-up on another thread while the tree grows (that pass runs on one processor)
+        Thread warmUp = new Thread(FieldPainter::warmUp, "tertius-draw-warm-up");
+        warmUp.setDaemon(true);
+        warmUp.start();
         GridResult r;
         try (Progress progress = new Progress("field")) {
             r = RegionSolver.solve(s, g, RegionSettings.builder().progress(progress::update).build());

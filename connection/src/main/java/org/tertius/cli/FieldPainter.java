@@ -7,8 +7,13 @@ import java.awt.FontMetrics;
 import java.awt.Graphics2D;
 import java.awt.RenderingHints;
 import java.awt.image.BufferedImage;
+import java.awt.image.DataBufferInt;
+import java.io.IOException;
+import java.io.OutputStream;
 import java.util.List;
 import java.util.Locale;
+import java.util.stream.IntStream;
+import javax.imageio.ImageIO;
 import org.hipparchus.complex.Complex;
 import org.tertius.core.region.Grid;
 import org.tertius.core.region.GridResult;
@@ -111,21 +116,19 @@ final class FieldPainter {
         gr.fillRect(0, 0, width, height);
         int pw = width - LEFT - RIGHT;
         int ph = height - TOP - BOTTOM;
+        // each pixel shows the grid point nearest to it: the colours of the grid points (a pure function of the
+        // values, so computed on all processors) are spread over the pixels' rows of the raster
+        int[] colour = gridColours(r);
+        int[] column = new int[pw];
+        for (int x = 0; x < pw; x++) {
+            column[x] = g.nx() == 1 ? 0 : (int) Math.round((double) x / Math.max(1, pw - 1) * (g.nx() - 1));
+        }
+        int[] raster = ((DataBufferInt) img.getRaster().getDataBuffer()).getData();
         for (int y = 0; y < ph; y++) {
             int j = g.ny() == 1 ? 0 : (int) Math.round((double) (ph - 1 - y) / Math.max(1, ph - 1) * (g.ny() - 1));
+            int offset = (TOP + y) * width + LEFT;
             for (int x = 0; x < pw; x++) {
-                int i = g.nx() == 1 ? 0 : (int) Math.round((double) x / Math.max(1, pw - 1) * (g.nx() - 1));
-                int c;
-                Complex w = r.primary(i, j);
-                if (r.computed(i, j)) {
-                    c = rgb(w.getReal(), w.getImaginary());
-                } else if (w.isInfinite() || w.norm() > NEXT_TO_POLE) {
-                    // closer to a pole than its position is known: no digit, but certainly next to a pole
-                    c = Color.WHITE.getRGB();
-                } else {
-                    c = MISSING.getRGB();
-                }
-                img.setRGB(LEFT + x, TOP + y, c);
+                raster[offset + x] = colour[j * g.nx() + column[x]] & 0xffffff;
             }
         }
         gr.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
@@ -148,6 +151,54 @@ final class FieldPainter {
         legend(gr, value, width, height);
         gr.dispose();
         return img;
+    }
+
+    /** The colour of every grid point (row-major), as {@link #rgb} and the legend say. */
+    static int[] gridColours(GridResult r) {
+        Grid g = r.grid();
+        int nx = g.nx();
+        int[] colour = new int[nx * g.ny()];
+        IntStream.range(0, g.ny()).parallel().forEach(j -> {
+            for (int i = 0; i < nx; i++) {
+                Complex w = r.primary(i, j);
+                int c;
+                if (r.computed(i, j)) {
+                    c = rgb(w.getReal(), w.getImaginary());
+                } else if (w.isInfinite() || w.norm() > NEXT_TO_POLE) {
+                    // closer to a pole than its position is known: no digit, but certainly next to a pole
+                    c = Color.WHITE.getRGB();
+                } else {
+                    c = MISSING.getRGB();
+                }
+                colour[j * nx + i] = c;
+            }
+        });
+        return colour;
+    }
+
+    /**
+     * Loads and initialises what drawing and writing a picture use (the imaging classes, the fonts of the labels,
+     * the PNG writer) by drawing a small picture that is thrown away: run on another thread while the values are
+     * computed, it takes that start-up cost off the path of a {@code field} run.
+     */
+    static void warmUp() {
+        try {
+            BufferedImage img = new BufferedImage(64, 32, BufferedImage.TYPE_INT_RGB);
+            Graphics2D gr = img.createGraphics();
+            gr.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
+            gr.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
+            for (int style : new int[] {Font.BOLD, Font.PLAIN}) {
+                gr.setFont(new Font(Font.SANS_SERIF, style, 12));
+                gr.drawString("0.5 Re z", 2, 12);
+                gr.getFontMetrics().stringWidth("-10");
+            }
+            gr.setStroke(new BasicStroke(1.5f));
+            gr.drawOval(20, 10, 10, 10);
+            gr.dispose();
+            ImageIO.write(img, "png", OutputStream.nullOutputStream());
+        } catch (IOException | RuntimeException | LinkageError e) {
+            // only a warm-up: drawing the real picture meets the same failure and reports it
+        }
     }
 
     /**

@@ -14,6 +14,12 @@ import org.tertius.core.number.ComplexPairs;
  * <p>Stateless and thread-safe: all work arrays are local to a call.
  */
 public final class RobustPade {
+    /**
+     * Per-thread storage of the Toeplitz matrix (its leading rows x cols entries in use): an approximant is built
+     * several times per step, and the quick compiler of short runs does not keep such arrays off the heap.
+     */
+    private static final ThreadLocal<double[][]> MATRIX = ThreadLocal.withInitial(() -> new double[2][0]);
+
     private RobustPade() {
     }
 
@@ -97,8 +103,15 @@ public final class RobustPade {
             // Toeplitz matrix T (n x (n+1)), T[r][j] = c_{m+1+r-j}
             int rows = n;
             int cols = n + 1;
-            double[] ar = new double[rows * cols];
-            double[] ai = new double[rows * cols];
+            double[][] matrix = MATRIX.get();
+            if (matrix[0].length < rows * cols) {
+                matrix[0] = new double[rows * cols];
+                matrix[1] = new double[rows * cols];
+            }
+            double[] ar = matrix[0];
+            double[] ai = matrix[1];
+            Arrays.fill(ar, 0, rows * cols, 0.0);
+            Arrays.fill(ai, 0, rows * cols, 0.0);
             for (int r = 0; r < rows; r++) {
                 for (int j = 0; j < cols; j++) {
                     int idx = m + 1 + r - j;

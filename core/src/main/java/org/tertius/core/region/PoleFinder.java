@@ -3,6 +3,8 @@ package org.tertius.core.region;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
+import java.util.stream.Collectors;
+import java.util.stream.IntStream;
 import org.hipparchus.complex.Complex;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.face.ComputedSolution;
@@ -66,16 +68,23 @@ public final class PoleFinder {
         int comp = reading.primaryComponent();
         boolean reciprocal = reading.primaryReciprocal();
         boolean logarithmic = solution.coordinate().hasSheets();
-        List<Candidate> all = new ArrayList<>();
-        for (Node n : tree.nodes()) {
-            if (!near(reading, logarithmic, n, grid)) {
-                continue;
+        // the candidates of each node on all processors (a node's roots depend on it alone), then in node order
+        List<Node> nodes = tree.nodes();
+        List<List<Candidate>> perNode = IntStream.range(0, nodes.size()).parallel().mapToObj(k -> {
+            Node n = nodes.get(k);
+            List<Candidate> own = new ArrayList<>();
+            if (near(reading, logarithmic, n, grid)) {
+                PadeApproximant hi = n.approximant(comp);
+                PadeApproximant lo = n.lowerApproximant(comp);
+                collect(own, reading, n, hi, lo, true, reciprocal ? Singularity.Kind.ZERO : Singularity.Kind.POLE,
+                        grid);
+                collect(own, reading, n, hi, lo, false, reciprocal ? Singularity.Kind.POLE : Singularity.Kind.ZERO,
+                        grid);
             }
-            PadeApproximant hi = n.approximant(comp);
-            PadeApproximant lo = n.lowerApproximant(comp);
-            collect(all, reading, n, hi, lo, true, reciprocal ? Singularity.Kind.ZERO : Singularity.Kind.POLE, grid);
-            collect(all, reading, n, hi, lo, false, reciprocal ? Singularity.Kind.POLE : Singularity.Kind.ZERO, grid);
-        }
+            return own;
+        }).collect(Collectors.toList());
+        List<Candidate> all = new ArrayList<>();
+        perNode.forEach(all::addAll);
         // the best-determined copy first (smallest position error, then nearest to its node's centre), then merge
         all.sort(Comparator.comparingDouble((Candidate c) -> c.s.error()).thenComparingDouble(c -> c.centrality)
                 .thenComparingDouble(c -> c.s.point().re()).thenComparingDouble(c -> c.s.point().im()));

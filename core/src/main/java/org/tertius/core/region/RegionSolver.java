@@ -3,13 +3,13 @@ package org.tertius.core.region;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Collections;
-import java.util.Comparator;
 import java.util.List;
 import java.util.concurrent.CancellationException;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
+import java.util.concurrent.atomic.AtomicInteger;
 import java.util.concurrent.atomic.AtomicLong;
 import org.tertius.core.TertiusException;
 import org.tertius.core.face.ComputedSolution;
@@ -21,11 +21,12 @@ import org.tertius.core.solution.PoleProximityException;
  * A solution over a whole grid. For a solution integrated by the engine, in three passes (after Fornberg and
  * Weideman, J. Comput. Phys. 230 (2011)):
  * <ol>
- *   <li>tree: a tree grown for the grid from the solution's root alone ({@link RegionTree}), then frozen;</li>
+ *   <li>tree: a tree grown for the grid from the solution's root alone, towards a coarse subset and then into the
+ *   holes left between its disks ({@link RegionTree}), then frozen;</li>
  *   <li>grid: every point is evaluated from the stored approximant that covers it best (read-only, on all
  *   threads);</li>
  *   <li>rest: the few points that no stored node covers to the accuracy get their own detached paths from the
- *   frozen tree, which are dropped afterwards.</li>
+ *   frozen tree, which are dropped afterwards (on all threads: each depends on the tree and its point alone).</li>
  * </ol>
  * Every value depends on the solution's start, the grid the tree was grown for and the point only: not on the
  * number of threads, not on what was computed before, not on the band of a table being computed (so a resumed
@@ -65,6 +66,8 @@ public final class RegionSolver {
 
         // pass 2: every point from the stored tree (or, without a tree, directly), in parallel by rows
         List<Integer> missing = Collections.synchronizedList(new ArrayList<>());
+        AtomicInteger integrated = new AtomicInteger();
+        AtomicInteger failed = new AtomicInteger();
         ExecutorService pool = Executors.newFixedThreadPool(settings.threads(), r -> {
             Thread t = new Thread(r, "tertius-grid");
             t.setDaemon(true);
@@ -94,7 +97,48 @@ public final class RegionSolver {
                     settings.progress().update(done.addAndGet(nx), total);
                 }));
             }
-            for (Future<?> f : rows) {
+            await(rows);
+            checkCancelled(settings);
+
+            // pass 3: the rest, each from the frozen tree by a detached path (independent of the others, so in
+            // parallel too)
+            List<Future<?>> rest = new ArrayList<>();
+            for (int k : missing) {
+                rest.add(pool.submit(() -> {
+                    if (settings.cancelled().getAsBoolean()) {
+                        return;
+                    }
+                    SurfacePoint p = grid.point(k % nx, k / nx, solution.coordinate());
+                    try {
+                        store.put(tree.value(p), k);
+                        integrated.incrementAndGet();
+                    } catch (PoleProximityException e) {
+                        // closer to a pole than its position is known: the value is infinite for all we know
+                        store.putPole(k);
+                        failed.incrementAndGet();
+                    } catch (TertiusException e) {
+                        failed.incrementAndGet();
+                    }
+                }));
+            }
+            await(rest);
+        } finally {
+            pool.shutdownNow();
+        }
+        checkCancelled(settings);
+        int served = total - missing.size();
+        long t2 = System.nanoTime();
+        settings.progress().update(total, total);
+        RegionStatistics stats = new RegionStatistics(tree.nodes().size(), tree.nodesGrown(), served, integrated.get(),
+                failed.get(),
+                treeNanos, t2 - t1, tree.footprint());
+        return new GridResult(grid, tree, store.re, store.im, store.err, stats);
+    }
+
+    /** Waits for the tasks of a pass; a failure of one is the failure of the grid. */
+    private static void await(List<Future<?>> tasks) {
+        try {
+            for (Future<?> f : tasks) {
                 f.get();
             }
         } catch (InterruptedException e) {
@@ -102,36 +146,7 @@ public final class RegionSolver {
             throw new CancellationException("grid computation interrupted");
         } catch (ExecutionException e) {
             throw new TertiusException("grid computation failed: " + e.getCause(), e.getCause());
-        } finally {
-            pool.shutdownNow();
         }
-        checkCancelled(settings);
-        int served = total - missing.size();
-
-        // pass 3: the rest, one by one, each from the frozen tree by a detached path (independent of the others)
-        List<Integer> rest = new ArrayList<>(missing);
-        rest.sort(null);
-        int integrated = 0;
-        int failed = 0;
-        for (int k : rest) {
-            checkCancelled(settings);
-            SurfacePoint p = grid.point(k % nx, k / nx, solution.coordinate());
-            try {
-                store.put(tree.value(p), k);
-                integrated++;
-            } catch (PoleProximityException e) {
-                // closer to a pole than its position is known: the value is infinite for all we know
-                store.putPole(k);
-                failed++;
-            } catch (TertiusException e) {
-                failed++;
-            }
-        }
-        long t2 = System.nanoTime();
-        settings.progress().update(total, total);
-        RegionStatistics stats = new RegionStatistics(tree.nodes().size(), tree.nodesGrown(), served, integrated, failed,
-                treeNanos, t2 - t1, tree.footprint());
-        return new GridResult(grid, tree, store.re, store.im, store.err, stats);
     }
 
     /** The value arrays of a grid: per value, real and imaginary parts and errors at every point. */

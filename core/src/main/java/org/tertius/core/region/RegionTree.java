@@ -1,8 +1,13 @@
 package org.tertius.core.region;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.Comparator;
 import java.util.List;
+import java.util.concurrent.CancellationException;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ForkJoinPool;
+import java.util.stream.IntStream;
 import org.tertius.core.TertiusException;
 import org.tertius.core.face.ComputedSolution;
 import org.tertius.core.face.EngineReading;
@@ -26,6 +31,8 @@ import org.tertius.core.step.Node;
 public final class RegionTree {
     /** Target spacing of the coarse subset in units of |z| (a fraction of the typical pole spacing). */
     static final double COARSE_SPACING = 0.45;
+    /** Spacing in grid points of the sublattice whose holes are filled first. */
+    static final int FILL_STRIDE = 8;
 
     private final ComputedSolution solution;
     private final EngineReading reading;
@@ -67,7 +74,68 @@ public final class RegionTree {
                 }
             }
         }
-        return grow(solution, reading, coarse, settings);
+        Solution own = grow(reading, coarse, settings);
+        fill(own, reading, grid, solution, settings);
+        return new RegionTree(solution, reading, own.freeze(), own.nodeCount() - 1);
+    }
+
+    /**
+     * Extends a tree grown towards the coarse subset of a grid to every point of the grid that still lies outside
+     * all disks. Such holes open next to poles, where the disks are small, and at the edges; each extension adds a
+     * short path whose last disks cover the hole's neighbours too, so that a grid point rarely needs a path of its
+     * own in the grid pass (a detached path per point, dropped afterwards, is what a hole costs there). The points
+     * outside the disks of the coarse tree are listed first (on all threads; a point inside a disk stays inside as
+     * nodes are added), then taken in a fixed order (the tree stays a function of the grid): the points of a
+     * sublattice {@value #FILL_STRIDE} points apart before the others, so that one extension tends to serve a
+     * whole hole.
+     */
+    private static void fill(Solution own, EngineReading reading, Grid grid, ComputedSolution solution,
+                             RegionSettings settings) {
+        int nx = grid.nx();
+        int[][] rows = new int[grid.ny()][];
+        ForkJoinPool pool = new ForkJoinPool(settings.threads());
+        try {
+            pool.submit(() -> IntStream.range(0, grid.ny()).parallel().forEach(j -> {
+                int[] holes = new int[nx];
+                int count = 0;
+                for (int i = 0; i < nx; i++) {
+                    SurfacePoint p = grid.point(i, j, solution.coordinate());
+                    if (p != null && !own.inStoredDisk(reading.tauRe(p), reading.tauIm(p))) {
+                        holes[count++] = i;
+                    }
+                }
+                rows[j] = Arrays.copyOf(holes, count);
+            })).get();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new CancellationException("tree growth interrupted");
+        } catch (ExecutionException e) {
+            throw new TertiusException("tree growth failed: " + e.getCause(), e.getCause());
+        } finally {
+            pool.shutdown();
+        }
+        List<long[]> holes = new ArrayList<>();
+        for (int j = 0; j < rows.length; j++) {
+            for (int i : rows[j]) {
+                holes.add(new long[] {(long) (j % FILL_STRIDE) * FILL_STRIDE + i % FILL_STRIDE, j, i});
+            }
+        }
+        holes.sort(Comparator.comparingLong((long[] h) -> h[0]).thenComparingLong(h -> h[1])
+                .thenComparingLong(h -> h[2]));
+        for (long[] h : holes) {
+            RegionSolver.checkCancelled(settings);
+            SurfacePoint p = grid.point((int) h[2], (int) h[1], solution.coordinate());
+            double tauRe = reading.tauRe(p);
+            double tauIm = reading.tauIm(p);
+            if (own.inStoredDisk(tauRe, tauIm)) {
+                continue;
+            }
+            try {
+                own.extendTo(tauRe, tauIm);
+            } catch (TertiusException e) {
+                // the point itself reports it when it is evaluated
+            }
+        }
     }
 
     /**
@@ -89,12 +157,12 @@ public final class RegionTree {
                 last = p;
             }
         }
-        return grow(solution, reading, coarse, settings);
+        Solution own = grow(reading, coarse, settings);
+        return new RegionTree(solution, reading, own.freeze(), own.nodeCount() - 1);
     }
 
     /** Grows a root-only copy of the solution's tree towards the points in order of distance from the start. */
-    private static RegionTree grow(ComputedSolution solution, EngineReading reading, List<SurfacePoint> targets,
-                                   RegionSettings settings) {
+    private static Solution grow(EngineReading reading, List<SurfacePoint> targets, RegionSettings settings) {
         Solution own = reading.tree().withRootOnly();
         Node root = own.root();
         SurfacePoint start = reading.point(root.tauRe(), root.tauIm());
@@ -111,7 +179,7 @@ public final class RegionTree {
             }
             settings.progress().update(++done, sorted.size());
         }
-        return new RegionTree(solution, reading, own.freeze(), own.nodeCount() - 1);
+        return own;
     }
 
     private static double distance(SurfacePoint p, SurfacePoint start) {

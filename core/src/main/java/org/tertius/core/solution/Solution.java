@@ -222,6 +222,14 @@ public final class Solution {
     }
 
     /**
+     * Whether the disk of a stored node holds tau (no value is computed): a point outside every disk has no
+     * stored approximant, so a tree grown for a region is extended to it ({@code RegionTree}).
+     */
+    public boolean inStoredDisk(double tauRe, double tauIm) {
+        return TreeReader.inSomeDisk(nodes, index, tauRe, tauIm);
+    }
+
+    /**
      * The value at tau from the stored tree only (no new steps), with the inherited error bounded over the
      * serving node's disk: the fast path for evaluating many points (grids, tables) once a tree covers them.
      *

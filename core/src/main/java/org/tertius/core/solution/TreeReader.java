@@ -14,6 +14,37 @@ final class TreeReader {
     /** Carried relative error above which a node is penalised as the start of a new path. */
     static final double PENALTY_FROM = 1e-10;
 
+    /**
+     * Per-thread work arrays of {@link #stored}, called for every point of a grid (the quick compiler of short
+     * runs does not keep such arrays off the heap); the estimate returned holds copies.
+     */
+    private static final ThreadLocal<Work> WORK = ThreadLocal.withInitial(Work::new);
+
+    private static final class Work {
+        double[] out = new double[0];
+        double[] err = new double[0];
+        double[] trunc = new double[0];
+        double[] rel = new double[0];
+        int[] order = new int[0];
+
+        /**
+         * Arrays of exactly n components (their length is the estimate's dimension) and for at least that many
+         * candidate nodes; contents are left over, each use writes before it reads.
+         */
+        Work fit(int n, int candidates) {
+            if (err.length != n) {
+                out = new double[2 * n];
+                err = new double[n];
+                trunc = new double[n];
+            }
+            if (rel.length < candidates) {
+                rel = new double[candidates];
+                order = new int[candidates];
+            }
+            return this;
+        }
+    }
+
     private TreeReader() {
     }
 
@@ -42,6 +73,19 @@ final class TreeReader {
             }
         }
         return best;
+    }
+
+    /** Whether the disk of a node of the snapshot holds tau (the test of {@link #stored}). */
+    static boolean inSomeDisk(Node[] snapshot, NodeIndex index, double tRe, double tIm) {
+        for (int id : index.candidates(tRe, tIm)) {
+            if (id < snapshot.length) {
+                Node n = snapshot[id];
+                if (ComplexPairs.abs(tRe - n.tauRe(), tIm - n.tauIm()) / n.radius() <= 1) {
+                    return true;
+                }
+            }
+        }
+        return false;
     }
 
     /**
@@ -80,13 +124,14 @@ final class TreeReader {
     static StateEstimate stored(Node[] snapshot, NodeIndex index, double tauRe, double tauIm,
                                 double maxRelativeError) {
         int n = snapshot[0].dimension();
-        double[] out = new double[2 * n];
-        double[] err = new double[n];
-        double[] trunc = new double[n];
         int[] ids = index.candidates(tauRe, tauIm);
-        double[] rel = new double[ids.length];
+        Work w = WORK.get().fit(n, ids.length);
+        double[] out = w.out;
+        double[] err = w.err;
+        double[] trunc = w.trunc;
+        double[] rel = w.rel;
         int count = 0;
-        int[] order = new int[ids.length];
+        int[] order = w.order;
         for (int id : ids) {
             if (id >= snapshot.length) {
                 continue;

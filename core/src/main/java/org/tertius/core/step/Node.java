@@ -14,6 +14,13 @@ import org.tertius.core.pade.PadeApproximant;
  */
 public final class Node {
     /**
+     * Per-thread work arrays of an evaluation (a node is shared between threads): evaluations run by the million
+     * in a grid pass, and the quick compiler of short runs does not keep such arrays off the heap.
+     */
+    private static final ThreadLocal<double[][]> EVALUATION =
+            ThreadLocal.withInitial(() -> new double[][] {new double[5], new double[4]});
+
+    /**
      * Safety factor on the local error in what is reported and propagated: the difference of two orders is an
      * estimate, not a bound (common practice; calibrated on the reference tests, where the true error came up
      * to twice the unscaled estimate).
@@ -258,8 +265,9 @@ public final class Node {
 
     private void evaluateInto(double sr, double si, double[] out, double[] trunc, double[] rounding,
                               double[] total, boolean withInherited) {
-        double[] a = new double[5];
-        double[] b = new double[4];
+        double[][] work = EVALUATION.get();
+        double[] a = work[0];
+        double[] b = work[1];
         for (int i = 0; i < high.length; i++) {
             high[i].evaluate(sr, si, a);
             low[i].evaluate(sr, si, b);

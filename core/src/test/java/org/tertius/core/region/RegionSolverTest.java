@@ -16,6 +16,7 @@ import org.tertius.core.piii.Painleve3;
 import org.tertius.core.piii.Painleve3Solution;
 import org.tertius.core.piii.Painleve3Value;
 import org.tertius.core.piii.RiccatiReferenceAccess;
+import org.tertius.core.step.Node;
 
 /** Grids against direct evaluations, determinism, cancellation and bad regions. */
 class RegionSolverTest {
@@ -45,19 +46,59 @@ class RegionSolverTest {
     }
 
     @Test
-    void valuesDoNotDependOnTheNumberOfThreads() {
-        Grid g = Grid.of(-3, 3, 61, -3, 3, 61, 0);
-        GridResult one = RegionSolver.solve(demo(), g, RegionSettings.builder().threads(1).build());
-        GridResult two = RegionSolver.solve(demo(), g, RegionSettings.builder().threads(3).build());
-        double[] a = new double[g.size()];
-        double[] b = new double[g.size()];
-        for (int j = 0; j < g.ny(); j++) {
-            for (int i = 0; i < g.nx(); i++) {
-                a[j * g.nx() + i] = one.primary(i, j).getReal() + one.error(i, j);
-                b[j * g.nx() + i] = two.primary(i, j).getReal() + two.error(i, j);
+    void aTreeGrownForAGridServesEveryPointFromAStoredApproximant() {
+        // before the tree was extended into the holes between its disks, 361 of these points took paths of their own
+        Grid g = Grid.of(-4, 4, 81, -4, 4, 81, 0);
+        RegionStatistics st = RegionSolver.solve(demo(), g, RegionSettings.defaults()).statistics();
+        assertEquals(0, st.integrated(), st.toString());
+        assertEquals(g.size(), st.servedFromTree(), st.toString());
+    }
+
+    @Test
+    void theTreeGrownForAGridDoesNotDependOnTheNumberOfThreads() {
+        // the holes between the disks are listed on all threads, then filled in a fixed order
+        Grid g = Grid.of(-4, 4, 81, -4, 4, 81, 0);
+        List<Node> one = RegionTree.grow(demo(), g, RegionSettings.builder().threads(1).build()).nodes();
+        for (int threads : new int[] {2, 4}) {
+            List<Node> more = RegionTree.grow(demo(), g, RegionSettings.builder().threads(threads).build()).nodes();
+            assertEquals(one.size(), more.size());
+            for (int k = 0; k < one.size(); k++) {
+                Node a = one.get(k);
+                Node b = more.get(k);
+                assertEquals(a.parent(), b.parent(), "node " + k);
+                assertArrayEquals(new double[] {a.tauRe(), a.tauIm(), a.radius(), a.stateRe(0), a.stateIm(0),
+                        a.accumulatedError()}, new double[] {b.tauRe(), b.tauIm(), b.radius(), b.stateRe(0),
+                        b.stateIm(0), b.accumulatedError()}, 0.0, "node " + k + " with " + threads + " threads");
             }
         }
-        assertArrayEquals(a, b, 0.0);
+    }
+
+    @Test
+    void valuesDoNotDependOnTheNumberOfThreads() {
+        Grid g = Grid.of(-3, 3, 61, -3, 3, 61, 0);
+        // at the default accuracy every point is served by the tree; at 1e-14 some take detached paths (pass 3)
+        for (double accuracy : new double[] {1e-10, 1e-14}) {
+            GridResult one = RegionSolver.solve(demo(), g,
+                    RegionSettings.builder().threads(1).maxRelativeError(accuracy).build());
+            GridResult two = RegionSolver.solve(demo(), g,
+                    RegionSettings.builder().threads(3).maxRelativeError(accuracy).build());
+            if (accuracy < 1e-12) {
+                assertTrue(one.statistics().integrated() > 0, one.statistics().toString());
+            }
+            assertEquals(one.statistics().integrated(), two.statistics().integrated());
+            double[] a = new double[2 * g.size()];
+            double[] b = new double[2 * g.size()];
+            for (int j = 0; j < g.ny(); j++) {
+                for (int i = 0; i < g.nx(); i++) {
+                    int k = j * g.nx() + i;
+                    a[2 * k] = one.primary(i, j).getReal() + one.primary(i, j).getImaginary();
+                    a[2 * k + 1] = one.error(i, j);
+                    b[2 * k] = two.primary(i, j).getReal() + two.primary(i, j).getImaginary();
+                    b[2 * k + 1] = two.error(i, j);
+                }
+            }
+            assertArrayEquals(a, b, 0.0);
+        }
     }
 
     @Test
