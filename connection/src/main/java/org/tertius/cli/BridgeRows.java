@@ -122,7 +122,8 @@ final class BridgeRows {
             comments.add("closed form: sigma and B from the monodromy data of the solution computed at z = "
                     + ComplexText.format(p.z()) + " (member 1 with s = 1/4) through the bridge derived here"
                     + " (connection/README.md 'Monodromy data at z = 0', method of Jimbo, Publ. RIMS 18 (1982) 1137):"
-                    + " tr M_0 = 2 sin(pi sigma/2), B = G(sigma) (e^(2 pi i (m + nu)) - chi)/(e^(2 pi i (m - nu)) - chi);"
+                    + " tr M_0 = 2 sin(pi sigma/2),"
+                    + " B = G(sigma) (e^(2 pi i (m + nu)) - chi)/(e^(2 pi i (m - nu)) - chi);"
                     + " errors: those of the data (the solution's, carried through the map) propagated");
             return new ClosedAtZero(comments, found.get(0), found.get(1));
         }
@@ -157,16 +158,17 @@ final class BridgeRows {
             d.connectionProduct(), d.chi(), ZeroMonodromyBridge.trace(sigma)};
         String[] names = {"m", "m0", "s_inf_1", "s_inf_2", "s_0_1", "s_0_2", "E11", "E12", "E21", "E22", "E11_E22",
             "chi", "trace_M0"};
-        // rounding: the formulas are evaluated in 40 digits from the double inputs; their conditioning is that of
-        // the inputs, estimated by a relative change of sigma and B of 1e-15
+        // rounding: the formulas are evaluated in Apfloat from the double inputs with Gamma values good to
+        // ComplexGamma.RELATIVE_ERROR each; their conditioning is that of the inputs, estimated by a relative change of
+        // sigma and B of 1e-15
         MonodromyFromZero moved = MonodromyFromZero.of(bridge, sigma.multiply(1 + 1e-15), b.multiply(1 + 1e-15));
         Complex[] other = {bridge.m(), bridge.m0(), moved.stokesAtInfinity(1), moved.stokesAtInfinity(2),
             moved.stokesAtZero(1), moved.stokesAtZero(2), moved.connection(1, 1), moved.connection(1, 2),
             moved.connection(2, 1), moved.connection(2, 2), moved.connectionProduct(), moved.chi(),
             ZeroMonodromyBridge.trace(sigma.multiply(1 + 1e-15))};
         for (int i = 0; i < values.length; i++) {
-            // the Gamma values are good to about 1e-14 relative (ComplexGamma): 64 ulp of each value
-            double err = 64 * Math.ulp(1.0) * values[i].norm() + 2 * values[i].subtract(other[i]).norm();
+            double err = ZeroMonodromyBridge.closedFormRounding() * values[i].norm()
+                    + 2 * values[i].subtract(other[i]).norm();
             rows.add(names[i], "double", "", "", ConnectionRows.complex(values[i]), ConnectionRows.error(err));
         }
     }

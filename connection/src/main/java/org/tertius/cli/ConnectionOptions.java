@@ -55,7 +55,8 @@ final class ConnectionOptions implements OptionGroup {
         o.addOption(OptionKinds.value("--from-infinity", "C,P,Q", "start data from the data along the ray --ray at"
                 + " infinity: background c (a value, or root0..root3 in the order of the library), amplitudes p of"
                 + " E and q of 1/E"));
-        o.addOption(OptionKinds.value("--ray", "ARG", "the argument of the ray, in (-pi, pi]: a number or a multiple of pi such as pi/2, -3pi/4, pi (default 0)"));
+        o.addOption(OptionKinds.value("--ray", "ARG", "the argument of the ray, in (-pi, pi]: a number or a multiple"
+                + " of pi such as pi/2, -3pi/4, pi (default 0)"));
         o.addOption(OptionKinds.value("--sheet", "K", "the sheet of the ray (--at-zero, --at-infinity) or of"
                 + " --start-at (default 0)"));
         o.addOption(OptionKinds.value("--radii", "R0:R1", "--at-infinity: the interval of |z| sampled (default"

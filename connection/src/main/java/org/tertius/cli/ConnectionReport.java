@@ -95,8 +95,8 @@ final class ConnectionReport {
             rows.add("sigma", b.sigma(), b.sigmaError());
         } else if (Double.isFinite(b.sigma().norm())) {
             // a number without an error estimate is not a result: say it in a comment only
-            rows.comment("sigma appears to be near " + ComplexText.format(b.sigma()) + ", but no error estimate could be"
-                    + " formed, so it is not reported as a value");
+            rows.comment("sigma appears to be near " + ComplexText.format(b.sigma())
+                    + ", but no error estimate could be formed, so it is not reported as a value");
         }
         switch (b.kind()) {
             case LOGARITHMIC:
@@ -199,8 +199,9 @@ final class ConnectionReport {
             if (!(v.errW() <= 1 + v.w().norm()) || !(v.errDw() <= 1 + v.dw().norm())) {
                 // not one correct digit: the point lies beyond the reach of the series at 0
                 throw new InvalidInputException("--start-at", "the expansion at 0 does not reach z = " + startAt
-                        + " (estimated errors of w, w' " + v.errW() + ", " + v.errDw() + "); choose a point closer to 0,"
-                        + " or leave --start-at out for the largest |z| <= " + ZERO_START_RADIUS + " where it is accurate");
+                        + " (estimated errors of w, w' " + v.errW() + ", " + v.errDw() + "); choose a point closer"
+                        + " to 0, or leave --start-at out for the largest |z| <= " + ZERO_START_RADIUS
+                        + " where it is accurate");
             }
         } else {
             tau = new Complex(Math.log(ZERO_START_RADIUS), angle + 2 * Math.PI * sheet);
@@ -226,8 +227,9 @@ final class ConnectionReport {
         double rel = Math.max(v.errW() / v.w().norm(), v.errDw() / (v.dw().norm() + v.w().norm() / r));
         if (!(rel < 1)) {
             // a value whose estimated error exceeds it (or an overflow) says nothing: refuse rather than print it
-            throw new InvalidInputException("--start-at", "the transseries at |z| = " + r + " does not fix the start data"
-                    + " (estimated error " + (Double.isFinite(rel) ? String.format(Locale.ROOT, "%.2g", rel) : "unbounded")
+            throw new InvalidInputException("--start-at", "the transseries at |z| = " + r + " does not fix the start"
+                    + " data (estimated error "
+                    + (Double.isFinite(rel) ? String.format(Locale.ROOT, "%.2g", rel) : "unbounded")
                     + " relative to w or w'); choose a radius in [1, 1e4] where it does, or smaller amplitudes");
         }
         rows.comment("start data of the solution of " + eq + " with " + data + ", from its transseries at |z| = " + r);

@@ -38,7 +38,8 @@ final class JsonValueRows {
     void row(String csvRow) {
         String[] fields = csvRow.split(",", -1);
         if (fields.length != columns.length) {
-            throw new IllegalStateException("a row of " + fields.length + " fields under " + columns.length + " columns");
+            throw new IllegalStateException("a row of " + fields.length + " fields under " + columns.length
+                    + " columns");
         }
         rows.add(fields);
     }

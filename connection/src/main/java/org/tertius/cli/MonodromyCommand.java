@@ -191,8 +191,8 @@ public final class MonodromyCommand implements Command {
                     + " double-precision state, its error estimate carried into err");
         }
         if (invariance != null) {
-            notes.add(String.format(Locale.ROOT, "invariance over %d points: largest disagreement %.3g times the estimates (<= 1:"
-                    + " the data agree)", count, invariance));
+            notes.add(String.format(Locale.ROOT, "invariance over %d points: largest disagreement %.3g times the"
+                    + " estimates (<= 1: the data agree)", count, invariance));
         }
         return notes;
     }
@@ -209,8 +209,8 @@ public final class MonodromyCommand implements Command {
             v = piii.evaluate(p);
         } catch (UnreachableTargetException e) {
             // the engine's message says what stopped it; a target at a pole ends in a grown error estimate
-            throw new InvalidInputException("--at", "the solution cannot be evaluated at " + p + " (the point is at or next"
-                    + " to a pole, or the way to it is blocked): " + e.getMessage());
+            throw new InvalidInputException("--at", "the solution cannot be evaluated at " + p + " (the point is at or"
+                    + " next to a pole, or the way to it is blocked): " + e.getMessage());
         }
         if (!Double.isFinite(v.w().norm()) || !Double.isFinite(v.dw().norm()) || v.errW() > 1e-4 * (1 + v.w().norm())) {
             throw new InvalidInputException("--at", "the solution is not known to 1e-4 relative at " + p + " (w = "

@@ -205,7 +205,10 @@ final class MonodromyOptions implements OptionGroup {
         return c;
     }
 
-    /** Refuses a connection matrix given alone whose determinant is not 1 (the constraint det E = 1 of MonodromyMap's contract: no solution has another). */
+    /**
+     * Refuses a connection matrix given alone whose determinant is not 1 (the constraint det E = 1 of MonodromyMap's
+     * contract: no solution has another).
+     */
     private static void unitDeterminant(List<Complex> e) {
         Complex det = e.get(0).multiply(e.get(3)).subtract(e.get(1).multiply(e.get(2)));
         double size = 1;

@@ -123,7 +123,13 @@ class BridgeCommandTest {
             {"connect", "--alpha", "1", "--beta", "0", "--gamma", "1", "--delta", "-1", "--z0", "1/2", "--w0", "1",
                 "--dw0", "0", "--at-zero", "--monodromy-data", "--digits", "30"},
             {"connect", "--alpha", "1", "--beta", "0", "--gamma", "1", "--delta", "-1", "--from-zero", "0.3,1",
-                "--monodromy-data", "--digits", "30"}};
+                "--monodromy-data", "--digits", "30"},
+            // formal exponent m0 = -25i: e^(2 pi i m0) spans 68 digits, more than the working precision holds
+            {"connect", "--alpha", "0.7", "--beta", "100i", "--gamma", "1", "--delta", "-1", "--from-zero", "0.3,0.8",
+                "--monodromy-data"},
+            // m of size 1.75e149: Gamma factors far beyond double precision
+            {"connect", "--alpha", "0.7", "--beta", "-0.4", "--gamma", "1e-300", "--delta", "-1", "--from-zero",
+                "0.3,0.8", "--monodromy-data"}};
         for (String[] c : cases) {
             StringWriter out = new StringWriter();
             StringWriter err = new StringWriter();
@@ -131,6 +137,19 @@ class BridgeCommandTest {
             assertTrue(out.toString().isEmpty(), "nothing written: " + out);
             assertEquals(1, err.toString().lines().count(), err.toString());
             assertTrue(err.toString().startsWith("tertius: --monodromy-data"), err.toString());
+            assertTrue(!err.toString().contains("Riccati") || c[4].equals("0"), "not called special: " + err);
         }
+    }
+
+    @Test
+    void gammaFactorsOutsideTheMeasuredSquareComeFromApfloatAndRoundTrip() {
+        // alpha = 100: m = 24.5, Gamma arguments beyond |Re z| = 20, where ComplexGamma's error is not measured;
+        // round trip (sigma, B) -> monodromy data -> (sigma, B), derived here
+        Painleve3 eq = Painleve3.of(new Complex(100), new Complex(-0.4), Complex.ONE, new Complex(-1));
+        ZeroMonodromyBridge bridge = ZeroMonodromyBridge.of(eq, new Complex(0.25));
+        Complex sigma = new Complex(0.3, 0.2);
+        Complex b = new Complex(0.8, -0.1);
+        MonodromyFromZero d = MonodromyFromZero.of(bridge, sigma, b);
+        assertEquals(0, bridge.amplitude(sigma, d.chi()).subtract(b).norm(), 1e-12);
     }
 }

@@ -5,6 +5,7 @@ import org.apfloat.Apfloat;
 import org.apfloat.FixedPrecisionApcomplexHelper;
 import org.hipparchus.complex.Complex;
 import org.tertius.core.InvalidInputException;
+import org.tertius.core.number.ComplexText;
 
 /**
  * The monodromy data of the solution {@code w ~ B z^sigma} (|Re sigma| &lt; 1) at 0 of a D6 equation, in closed form
@@ -41,10 +42,11 @@ public final class MonodromyFromZero {
      */
     public static MonodromyFromZero of(ZeroMonodromyBridge bridge, Complex sigma, Complex b) {
         if (!(Math.abs(sigma.getReal()) < 1)) {
-            throw new InvalidInputException("sigma", "the bridge needs |Re sigma| < 1, got " + sigma);
+            throw new InvalidInputException("sigma", "the bridge needs |Re sigma| < 1, got "
+                    + ComplexText.brief(sigma));
         }
         if (!(b.norm() > 0) || !Double.isFinite(b.norm())) {
-            throw new InvalidInputException("B", "must be finite and non-zero, got " + b);
+            throw new InvalidInputException("B", "must be finite and non-zero, got " + ComplexText.brief(b));
         }
         Complex[][] out = new Complex[3][];
         Complex[][] e = new Complex[2][2];

@@ -5,7 +5,9 @@ import org.apfloat.Apfloat;
 import org.apfloat.ApfloatMath;
 import org.apfloat.FixedPrecisionApcomplexHelper;
 import org.hipparchus.complex.Complex;
+import org.tertius.core.InvalidInputException;
 import org.tertius.core.number.ComplexGamma;
+import org.tertius.core.number.ComplexText;
 
 /**
  * The connection matrix of the confluent hypergeometric (Whittaker) system {@code dY/dmu = (-i sigma3 + C/mu) Y},
@@ -26,20 +28,42 @@ import org.tertius.core.number.ComplexGamma;
  * them is confirmed numerically, see {@link ZeroMonodromyBridge}). Utility.
  */
 final class WhittakerConnection {
-    /** Relative rounding of a product of a few Gamma values (ComplexGamma: about 1e-14 each, measured). */
-    static final double GAMMA_ROUNDING = 64 * Math.ulp(1.0);
+    /**
+     * Relative rounding of a closed form built from Gamma values: {@link ComplexGamma#RELATIVE_ERROR} for each of the
+     * at most 8 Gamma factors (counted with multiplicity) of a closed form of the bridge at 0; the Apfloat arithmetic
+     * around them is exact to far below this.
+     */
+    static final double GAMMA_ROUNDING = 8 * ComplexGamma.RELATIVE_ERROR;
+
+    /** The largest |z| at which a Gamma factor is evaluated (Apfloat's Gamma is slow far out; the values overflow). */
+    static final double LARGEST_ARGUMENT = 1e4;
 
     private WhittakerConnection() {
     }
 
     /**
-     * Gamma(z) by {@link ComplexGamma} in double precision (about 1e-14 relative), carried in the helper's precision:
-     * the closed forms are returned in double, and Apfloat's Gamma (about 0.1 s a call in 40 digits) made the error
-     * propagation, which evaluates them a dozen times, take seconds. {@link #GAMMA_ROUNDING} is its share of the
-     * rounding estimate of a closed form.
+     * Gamma(z) carried in the helper's precision: by {@link ComplexGamma} in double precision in the square where its
+     * error {@link ComplexGamma#RELATIVE_ERROR} is measured, by Apfloat's Gamma (about 0.1 s a call in 40 digits)
+     * outside it. The closed forms are returned in double, and Apfloat's Gamma everywhere made the error propagation,
+     * which evaluates them a dozen times, take seconds. {@link #GAMMA_ROUNDING} is its share of the rounding estimate
+     * of a closed form.
      */
     static Apcomplex gamma(FixedPrecisionApcomplexHelper h, Apcomplex z) {
-        Complex g = ComplexGamma.gamma(new Complex(z.real().doubleValue(), z.imag().doubleValue()));
+        Complex x = new Complex(z.real().doubleValue(), z.imag().doubleValue());
+        if (!(x.norm() <= LARGEST_ARGUMENT)) {
+            throw new InvalidInputException("data", "the closed form needs Gamma at " + ComplexText.brief(x)
+                    + ", beyond |z| = " + LARGEST_ARGUMENT + " (the formal exponents m, m0 or sigma are too large for the"
+                    + " double-precision bridge)");
+        }
+        if (!ComplexGamma.inTestedSquare(x)) {
+            try {
+                return h.gamma(z);
+            } catch (ArithmeticException e) {
+                throw new InvalidInputException("data", "a Gamma factor of the closed form has a pole at "
+                        + ComplexText.brief(x));
+            }
+        }
+        Complex g = ComplexGamma.gamma(x);
         return new Apcomplex(new Apfloat(g.getReal(), h.precision()), new Apfloat(g.getImaginary(), h.precision()));
     }
 

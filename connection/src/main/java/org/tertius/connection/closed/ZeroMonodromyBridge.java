@@ -2,6 +2,7 @@ package org.tertius.connection.closed;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import java.util.function.Function;
 import java.util.function.Supplier;
 import org.apfloat.Apcomplex;
@@ -10,6 +11,7 @@ import org.apfloat.ApfloatMath;
 import org.apfloat.FixedPrecisionApcomplexHelper;
 import org.hipparchus.complex.Complex;
 import org.tertius.core.InvalidInputException;
+import org.tertius.core.number.ComplexText;
 import org.tertius.core.piii.Painleve3;
 import org.tertius.hierarchy.Member1Map;
 import org.tertius.hierarchy.monodromy.Estimate;
@@ -44,6 +46,8 @@ import org.tertius.hierarchy.monodromy.Estimate;
  */
 public final class ZeroMonodromyBridge {
     static final long PRECISION = 40;
+    /** Digits the working precision keeps beyond those lost to e^(2 pi i m), e^(2 pi i m0): double's 16 and 4 more. */
+    private static final long MARGIN_DIGITS = 20;
     private static final double STEP = 1e-7;
 
     private final Painleve3 equation;
@@ -69,7 +73,17 @@ public final class ZeroMonodromyBridge {
      * @throws InvalidInputException if gamma or delta vanishes or s = 0
      */
     public static ZeroMonodromyBridge of(Painleve3 equation, Complex s) {
-        return new ZeroMonodromyBridge(equation, s, Member1Map.forEquation(equation, s));
+        ZeroMonodromyBridge bridge = new ZeroMonodromyBridge(equation, s, Member1Map.forEquation(equation, s));
+        // the closed forms combine e^(2 pi i m), e^(2 pi i m0) and their inverses: digits lost in cancellation
+        double lost = 2 * Math.PI * (Math.abs(bridge.m.getImaginary()) + Math.abs(bridge.m0.getImaginary()))
+                / Math.log(10);
+        if (!(lost <= PRECISION - MARGIN_DIGITS)) {
+            throw new InvalidInputException("equation", "the formal exponents m = " + ComplexText.brief(bridge.m)
+                    + ", m0 = " + ComplexText.brief(bridge.m0) + " lose about "
+                    + String.format(Locale.ROOT, "%.1f", lost) + " of the bridge's " + PRECISION + " working digits in"
+                    + " cancellation; it takes 2 pi (|Im m| + |Im m0|) / ln 10 <= " + (PRECISION - MARGIN_DIGITS));
+        }
+        return bridge;
     }
 
     /** The bridge for member 1 itself (s, m and the trace-form integral T), through its canonical image. */
@@ -83,6 +97,11 @@ public final class ZeroMonodromyBridge {
 
     public Complex s() {
         return s;
+    }
+
+    /** The relative rounding error of a closed form of the bridge (its Gamma factors; the Apfloat part is smaller). */
+    public static double closedFormRounding() {
+        return WhittakerConnection.GAMMA_ROUNDING;
     }
 
     /** The formal exponent m at lambda = infinity. */
@@ -151,9 +170,9 @@ public final class ZeroMonodromyBridge {
         Apcomplex prefactor = h.multiply(h.multiply(new Apcomplex(Apfloat.ZERO, new Apfloat(-4, PRECISION)), ap(ks)),
                 h.exp(h.multiply(twoNu, h.subtract(h.log(ap(cSquared)), h.log(h.multiply(ap(s),
                         new Apcomplex(new Apfloat(16, PRECISION))))))));
-        Apcomplex ratio = h.divide(WhittakerConnection.gamma(h, twoNu), WhittakerConnection.gamma(h, h.subtract(one, twoNu)));
-        Apcomplex gammas = h.divide(h.multiply(WhittakerConnection.gamma(h, h.add(one, h.subtract(am0, nu))),
-                WhittakerConnection.gamma(h, h.negate(h.add(nu, am)))), h.multiply(WhittakerConnection.gamma(h, h.add(nu, am0)), WhittakerConnection.gamma(h, h.subtract(nu, am))));
+        Apcomplex ratio = h.divide(gamma(h, twoNu), gamma(h, h.subtract(one, twoNu)));
+        Apcomplex gammas = h.divide(h.multiply(gamma(h, h.add(one, h.subtract(am0, nu))),
+                gamma(h, h.negate(h.add(nu, am)))), h.multiply(gamma(h, h.add(nu, am0)), gamma(h, h.subtract(nu, am))));
         Apcomplex phase = h.exp(h.negate(h.multiply(twoPiI(h), nu)));
         return h.multiply(h.multiply(h.multiply(prefactor, h.pow(two, h.negate(sigma))), phase),
                 h.multiply(h.multiply(ratio, ratio), gammas));
@@ -258,24 +277,35 @@ public final class ZeroMonodromyBridge {
 
     private static Complex requireStrip(Complex sigma) {
         if (!(Math.abs(sigma.getReal()) < 1)) {
-            throw new InvalidInputException("sigma", "the bridge needs |Re sigma| < 1, got " + sigma);
+            throw new InvalidInputException("sigma", "the bridge needs |Re sigma| < 1, got "
+                    + ComplexText.brief(sigma));
         }
         return sigma;
     }
 
-    /** An Apfloat evaluation in double; a pole or a zero division is refused with one line naming the argument. */
+    /**
+     * An Apfloat evaluation in double; a pole or a zero division, and a value beyond the range of double precision, are
+     * refused with one line naming the argument.
+     */
     static Complex evaluate(String argument, Supplier<Apcomplex> formula) {
-        Complex value;
+        Apcomplex exact;
         try {
-            value = toComplex(formula.get());
+            exact = formula.get();
         } catch (ArithmeticException e) {
-            value = Complex.NaN;
-        }
-        if (!Double.isFinite(value.getReal()) || !Double.isFinite(value.getImaginary())) {
             throw new InvalidInputException(argument, "the bridge formula degenerates here (a Gamma function at a"
-                    + " pole or a vanishing denominator: a special, e.g. Riccati, solution)");
+                    + " pole or a vanishing denominator: a special, e.g. Riccati, solution, or a value that cancels"
+                    + " to zero in the working precision)");
+        }
+        Complex value = toComplex(exact);
+        if (!Double.isFinite(value.getReal()) || !Double.isFinite(value.getImaginary())) {
+            throw new InvalidInputException(argument, "the closed form is of size 1e" + exact.scale()
+                    + ", beyond double precision (the bridge is evaluated in double; smaller parameters are needed)");
         }
         return value;
+    }
+
+    private static Apcomplex gamma(FixedPrecisionApcomplexHelper h, Apcomplex z) {
+        return WhittakerConnection.gamma(h, z);
     }
 
     static FixedPrecisionApcomplexHelper helper() {

@@ -4,8 +4,9 @@ import org.hipparchus.complex.Complex;
 import org.tertius.core.InvalidInputException;
 
 /**
- * The Gamma function of a complex argument in double precision, to about 1e-14 relative (measured against Apfloat's
- * Gamma in 40 digits in the tests): the logarithm by Stirling's series (NIST DLMF eq. 5.11.1, with the Bernoulli
+ * The Gamma function of a complex argument in double precision, to {@link #RELATIVE_ERROR} relative in the square
+ * {@link #inTestedSquare} (measured against Apfloat's Gamma in the tests; the worst of 3000 random points was 1.2e-14
+ * for |Re z|, |Im z| &lt;= 8 and 2.0e-14 up to 20; outside the square the error is not measured): the logarithm by Stirling's series (NIST DLMF eq. 5.11.1, with the Bernoulli
  * numbers B_2 .. B_20 of DLMF table 24.2.1) at |z| &gt;= 15 after moving Re z up with the recurrence
  * Gamma(z + 1) = z Gamma(z) (DLMF eq. 5.5.1), and the reflection formula Gamma(z) Gamma(1 - z) = pi / sin(pi z)
  * (DLMF eq. 5.5.3) for Re z &lt; 1/2. Hipparchus has the real Gamma function only; Apfloat's complex one takes
@@ -19,8 +20,17 @@ public final class ComplexGamma {
     /** Where Stirling's series is summed: |z| at least this (its 11th term is then below 1e-19 relative). */
     private static final double STIRLING_RADIUS = 15;
     private static final double HALF_LOG_TWO_PI = 0.5 * Math.log(2 * Math.PI);
+    /** Half the side of the square about 0 in which the relative error is measured. */
+    public static final double TESTED_HALF_SIDE = 20;
+    /** The relative error bound in the tested square, as the tests assert it (measured worst 2.0e-14). */
+    public static final double RELATIVE_ERROR = 3e-14;
 
     private ComplexGamma() {
+    }
+
+    /** Whether z lies in the square |Re z|, |Im z| &lt;= {@link #TESTED_HALF_SIDE} where {@link #RELATIVE_ERROR} holds. */
+    public static boolean inTestedSquare(Complex z) {
+        return Math.abs(z.getReal()) <= TESTED_HALF_SIDE && Math.abs(z.getImaginary()) <= TESTED_HALF_SIDE;
     }
 
     /**

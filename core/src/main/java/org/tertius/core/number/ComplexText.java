@@ -119,4 +119,13 @@ public final class ComplexText {
     public static String format(Complex c) {
         return format(c.getReal(), c.getImaginary());
     }
+
+    /** Writes a complex number briefly as a+bi (each part the shortest decimal that reads back exactly), for messages. */
+    public static String brief(Complex c) {
+        double im = c.getImaginary();
+        if (im == 0) {
+            return Double.toString(c.getReal());
+        }
+        return c.getReal() + (im < 0 ? "-" : "+") + Math.abs(im) + "i";
+    }
 }
