@@ -21,8 +21,9 @@ import org.tertius.core.number.ComplexGamma;
  * </pre>
  * The Gamma functions and the powers of 2 are those of the parabolic-cylinder (Weber) local problem at each saddle
  * (its connection formulas, DLMF §12.2(v), recalled from memory, give off-diagonal entries sqrt(2 pi)/Gamma(-nu)
- * and the like, and the local scale brings 2^nu); the integers (r, e, a2, b2, n2, B3, B4) of each configuration (j, k) were identified
- * numerically (least squares on log|P/Q|, then the constant K, on 300 solutions given at infinity), not derived.
+ * and the like, and the local scale brings 2^nu); the integers (r, e, a2, b2, n2, B3, B4) of each configuration
+ * (j, k) were identified numerically (least squares on log|P/Q|, then the constant K, on 300 solutions given at
+ * infinity), not derived.
  * Nine of the ten configurations of the principal sheet are covered; (j, k) = (1, 1) (C = -i, psi = 0) and eps = -1
  * (never met) are not ({@link #covers}). The common sign of (p, q) is not fixed by p q and p/q and is not given here.
  */
