@@ -115,8 +115,8 @@ class BridgeCommandTest {
 
     /**
      * The oscillation at infinity in closed form (connection/README.md "Monodromy data at infinity", identified here):
-     * --from-zero --monodromy-data on an oscillating ray prints the library's fromZero values; on the ray 0 of this
-     * equation (the configuration not covered) kappa is printed and p/q is said to be unavailable.
+     * --from-zero --monodromy-data on an oscillating ray prints the library's fromZero values (rays pi and 0 of this
+     * equation: two saddle configurations).
      */
     @Test
     void fromZeroPrintsTheOscillationAtInfinity() {
@@ -130,7 +130,10 @@ class BridgeCommandTest {
         assertTrue(r.get("p_over_q")[2].isEmpty(), "no numerical value is claimed");
         Map<String, String[]> zero = rows(0, connect("--from-zero", "0.3+0.2i,0.8-0.1i", "--monodromy-data", "--ray",
                 "0"));
-        assertTrue(zero.containsKey("kappa") && !zero.containsKey("p_over_q"), "ray 0: kappa only");
+        Oscillation onZero = InfinityMonodromyBridge.of(eq, new Complex(0.25), 0).fromZero(ZeroMonodromyBridge.of(eq,
+                new Complex(0.25)), new Estimate<>(SIGMA, 0), new Estimate<>(B, 0));
+        assertEquals(0, closed(zero, "p_over_q").subtract(onZero.ratio().value()).norm(),
+                1e-15 * onZero.ratio().value().norm());
     }
 
     /**

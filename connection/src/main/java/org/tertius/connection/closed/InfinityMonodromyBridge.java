@@ -32,8 +32,8 @@ import org.tertius.hierarchy.monodromy.Estimate;
  * Novokshenov, recalled from memory); which pair (j, k), the diagonal or anti-diagonal form, and the factor 2 of the
  * two saddles were identified numerically (connection/README.md). Of the two backgrounds c, -c oscillating on a ray
  * the data select the one whose kappa lies in the strip |Re kappa| &lt; 1/2 where the transseries holds; data for which
- * neither (or both) does are refused. The ratio p/q (the phase) is {@link OscillationPhase}'s, on nine of the ten
- * saddle configurations. Double precision. Immutable.
+ * neither (or both) does are refused. The ratio p/q (the phase) is {@link OscillationPhase}'s. Double precision.
+ * Immutable.
  */
 public final class InfinityMonodromyBridge {
     private static final double TOLERANCE = 1e-6;

@@ -16,20 +16,24 @@ import org.tertius.core.number.ComplexGamma;
  * <pre>
  *   P/Q = K R^r [Gamma(1 + nu1) Gamma(nu2) / (Gamma(1 - nu1) Gamma(1 - nu2))]^e 2^(-4 e (2 nu1 + a2 m + b2 m0))
  *         e^(2 pi i e (j - k) nu1 + i pi (B3 m + B4 m0)),
- *   R = (X1_12 / X1_21)(X2_21 / X2_12) (C = +-i),  (X1_11 / X1_22)(X2_22 / X2_11) (C = +-1),
+ *   R = (X1_12 / X1_21)(X2_21 / X2_12) (C = +-i; times X1_22 / X2_22 for (j, k) = (1, 1)),
+ *   R = (X1_11 / X1_22)(X2_22 / X2_11) (C = +-1),
  *   K = 4^r i (C = +-i),  4^r r (C = +-1),   r = +1 for C = i, 1 and -1 for C = -i, -1.
  * </pre>
  * The Gamma functions and the powers of 2 are those of the parabolic-cylinder (Weber) local problem at each saddle
  * (its connection formulas, DLMF §12.2(v), recalled from memory, give off-diagonal entries sqrt(2 pi)/Gamma(-nu)
  * and the like, and the local scale brings 2^nu); the integers (r, e, a2, b2, n2, B3, B4) of each configuration
- * (j, k) were identified numerically (least squares on log|P/Q|, then the constant K, on 300 solutions given at
- * infinity), not derived.
- * Nine of the ten configurations of the principal sheet are covered; (j, k) = (1, 1) (C = -i, psi = 0) and eps = -1
- * (never met) are not ({@link #covers}). The common sign of (p, q) is not fixed by p q and p/q and is not given here.
+ * (j, k) were identified numerically (robust least squares on log|P/Q|, then the constant K, on 300 solutions given
+ * at infinity), not derived.
+ * All ten configurations of the principal sheet are covered; eps = -1 (never met) is not ({@link #covers}). The
+ * common sign of (p, q) is not fixed by p q and p/q and is not given here.
  */
 final class OscillationPhase {
     /** The identified integers of one configuration (j, k). */
-    private record Row(int r, int e, int a2, int b2, int n2, int b3, int b4) {
+    private record Row(int r, int e, int a2, int b2, int n2, int b3, int b4, boolean lowerRight) {
+        Row(int r, int e, int a2, int b2, int n2, int b3, int b4) {
+            this(r, e, a2, b2, n2, b3, b4, false);
+        }
     }
 
     private static final Map<List<Integer>, Row> ROWS = Map.of(
@@ -41,7 +45,8 @@ final class OscillationPhase {
             List.of(0, 1), new Row(-1, -1, -1, -1, 0, 1, -3),
             List.of(1, 0), new Row(-1, 1, 1, 1, 1, 3, -1),
             List.of(1, 2), new Row(1, -1, 1, 1, 1, -1, 3),
-            List.of(2, 1), new Row(1, 1, -1, -1, 0, -3, 1));
+            List.of(2, 1), new Row(1, 1, -1, -1, 0, -3, 1),
+            List.of(1, 1), new Row(-1, 1, 1, -1, 1, 0, 4, true));
 
     private OscillationPhase() {
     }
@@ -54,8 +59,8 @@ final class OscillationPhase {
     /** Why a configuration is not covered (for the comments of the commands). */
     static String reason(int j, int k, int eps) {
         return eps != 1 ? "the ray has E of the data as 1/E of the canonical image (eps = -1), never met in the"
-                + " measurements" : "the saddle configuration (j, k) = (" + j + ", " + k + ") (canonical background -i"
-                + " on psi = 0) did not fit the form identified on the others";
+                + " measurements" : "the saddle configuration (j, k) = (" + j + ", " + k + ") was never met in the"
+                + " measurements";
     }
 
     /**
@@ -68,6 +73,9 @@ final class OscillationPhase {
         Complex r = antiDiagonal
                 ? x1[0][0].divide(x1[1][1]).multiply(x2[1][1].divide(x2[0][0]))
                 : x1[0][1].divide(x1[1][0]).multiply(x2[1][0].divide(x2[0][1]));
+        if (row.lowerRight()) {
+            r = r.multiply(x1[1][1].divide(x2[1][1]));
+        }
         Complex shift = m.multiply(row.a2()).add(m0.multiply(row.b2()));
         Complex nu2 = nu1.add(shift).add(row.n2());
         Complex gammas = ComplexGamma.gamma(nu1.add(1)).multiply(ComplexGamma.gamma(nu2))
