@@ -74,6 +74,47 @@ class OscillationPhaseTest {
         return sets.stream();
     }
 
+    /**
+     * Sets on rays where the ray's E is the canonical image's 1/E (eps = -1; general gamma, delta only), which the
+     * first generator does not meet.
+     */
+    static Stream<Arguments> reversedSets() {
+        Random r = new Random(20_2027);
+        List<Arguments> sets = new ArrayList<>();
+        while (sets.size() < 8) {
+            Complex alpha = new Complex(r.nextDouble(-1.5, 1.5), r.nextDouble(-0.5, 0.5));
+            Complex beta = new Complex(r.nextDouble(-1.5, 1.5), r.nextDouble(-0.5, 0.5));
+            Complex gamma = new Complex(r.nextDouble(0.3, 2), r.nextDouble(-1, 1));
+            Complex delta = new Complex(r.nextDouble(-2, 2), r.nextDouble(-2, 2));
+            Painleve3 eq = Painleve3.of(alpha, beta, gamma, delta);
+            Complex c = TransseriesAtInfinity.backgrounds(eq).get(r.nextInt(4));
+            List<Double> rays = InfinityBehaviour.oscillatingRays(eq, c);
+            double angle = rays.get(r.nextInt(rays.size()));
+            Complex p = new Complex(r.nextDouble(-0.4, 0.4), r.nextDouble(-0.4, 0.4));
+            Complex q = new Complex(r.nextDouble(-0.4, 0.4), r.nextDouble(-0.4, 0.4));
+            InfinityMonodromyBridge bridge = InfinityMonodromyBridge.of(eq, S, angle);
+            int i = bridge.backgrounds().indexOf(c);
+            if (bridge.orientation(i) != -1 || bridge.ratioCovered(i) != null) {
+                continue;
+            }
+            try {
+                InfinityBehaviour.of(eq, c, p, q, angle, 0);
+            } catch (RuntimeException e) {
+                continue;
+            }
+            sets.add(Arguments.of(100 + sets.size(), eq, c, p, q, angle));
+        }
+        return sets.stream();
+    }
+
+    /** Eight sets with eps = -1 (about 1.5 s each). */
+    @ParameterizedTest(name = "set {0}")
+    @MethodSource("reversedSets")
+    @Tag("slow")
+    void ratioFromTheDataWhereTheRayReversesE(int index, Painleve3 eq, Complex c, Complex p, Complex q, double angle) {
+        check(index, eq, c, p, q, angle);
+    }
+
     static Stream<Arguments> firstSets() {
         return sets().limit(4);
     }

@@ -164,6 +164,11 @@ public final class InfinityMonodromyBridge {
         return OscillationPhase.covers(g.j(), g.k(), g.eps()) ? null : OscillationPhase.reason(g.j(), g.k(), g.eps());
     }
 
+    /** eps of background index i: +1 where the ray's E is the canonical image's E, -1 where it is its 1/E. */
+    public int orientation(int index) {
+        return geometries.get(index).eps();
+    }
+
     /** p/q about background index i from the data (v as in {@link #oscillation(int, List)}) and kappa (its branch). */
     Complex ratio(int index, List<Complex> v, Complex kappa) {
         Geometry g = geometries.get(index);
@@ -171,7 +176,7 @@ public final class InfinityMonodromyBridge {
         Complex[][] x1 = saddle(g.j(), g.k(), v.get(0), v.get(1), v.get(2), v.get(3), e);
         Complex[][] x2 = saddle(g.j() + 1, g.k() + 1, v.get(0), v.get(1), v.get(2), v.get(3), e);
         Complex nu1 = kappa.subtract(g.kappa0()).divide(-2.0 * g.sigma() * g.eps());
-        return OscillationPhase.ratio(g.j(), g.k(), g.antiDiagonal(), x1, x2, nu1, kappa, m, m0, logScale);
+        return OscillationPhase.ratio(g.j(), g.k(), g.eps(), g.antiDiagonal(), x1, x2, nu1, kappa, m, m0, logScale);
     }
 
     private Complex[][] saddle(int j, int k, Complex sInf1, Complex sInf2, Complex s01, Complex s02, Complex[][] e) {

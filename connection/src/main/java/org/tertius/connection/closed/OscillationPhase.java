@@ -25,8 +25,10 @@ import org.tertius.core.number.ComplexGamma;
  * and the like, and the local scale brings 2^nu); the integers (r, e, a2, b2, n2, B3, B4) of each configuration
  * (j, k) were identified numerically (robust least squares on log|P/Q|, then the constant K, on 300 solutions given
  * at infinity), not derived.
- * All ten configurations of the principal sheet are covered; eps = -1 (never met) is not ({@link #covers}). The
- * common sign of (p, q) is not fixed by p q and p/q and is not given here.
+ * All ten configurations of the principal sheet are covered with eps = 1; where eps = -1 (the ray's E is the image's
+ * 1/E, so P is the ray's q: p/q = (Q/P) rho^(-2 kappa)) the four configurations met, (0, 0), (1, -1), (1, 1), (2, 0),
+ * are covered and checked, the others refused ({@link #covers}). The common sign of (p, q) is not fixed by p q and
+ * p/q and is not given here.
  */
 final class OscillationPhase {
     /** The identified integers of one configuration (j, k). */
@@ -48,26 +50,30 @@ final class OscillationPhase {
             List.of(2, 1), new Row(1, 1, -1, -1, 0, -3, 1),
             List.of(1, 1), new Row(-1, 1, 1, -1, 1, 0, 4, true));
 
+    /** The configurations where eps = -1 (E of the ray is 1/E of the canonical image) was met and checked. */
+    private static final List<List<Integer>> REVERSED = List.of(List.of(0, 0), List.of(1, -1), List.of(1, 1),
+            List.of(2, 0));
+
     private OscillationPhase() {
     }
 
     /** Whether the ratio is identified for this saddle configuration. */
     static boolean covers(int j, int k, int eps) {
-        return eps == 1 && ROWS.containsKey(List.of(j, k));
+        return ROWS.containsKey(List.of(j, k)) && (eps == 1 || REVERSED.contains(List.of(j, k)));
     }
 
     /** Why a configuration is not covered (for the comments of the commands). */
     static String reason(int j, int k, int eps) {
-        return eps != 1 ? "the ray has E of the data as 1/E of the canonical image (eps = -1), never met in the"
-                + " measurements" : "the saddle configuration (j, k) = (" + j + ", " + k + ") was never met in the"
-                + " measurements";
+        return eps != 1 ? "the ray has E of the data as 1/E of the canonical image (eps = -1) in the saddle"
+                + " configuration (j, k) = (" + j + ", " + k + "), never met in the measurements" : "the saddle"
+                + " configuration (j, k) = (" + j + ", " + k + ") was never met in the measurements";
     }
 
     /**
      * p/q from the saddle matrices x1 = X(j, k), x2 = X(j + 1, k + 1), the exponent kappa (with the branch of the
      * drift), m, m0 and ell = log(c_map / c0).
      */
-    static Complex ratio(int j, int k, boolean antiDiagonal, Complex[][] x1, Complex[][] x2, Complex nu1,
+    static Complex ratio(int j, int k, int eps, boolean antiDiagonal, Complex[][] x1, Complex[][] x2, Complex nu1,
                          Complex kappa, Complex m, Complex m0, Complex ell) {
         Row row = ROWS.get(List.of(j, k));
         Complex r = antiDiagonal
@@ -88,7 +94,9 @@ final class OscillationPhase {
         Complex constant = antiDiagonal ? new Complex(size * row.r()) : new Complex(0, size);
         Complex canonical = constant.multiply(row.r() == 1 ? r : r.reciprocal())
                 .multiply(row.e() == 1 ? gammas : gammas.reciprocal()).multiply(exponent.exp());
-        // back from the canonical image: p/q = (P/Q) rho^(-2 kappa)
-        return canonical.multiply(kappa.multiply(ell).multiply(-2).exp());
+        // back from the canonical image: p/q = (P/Q) rho^(-2 kappa), or (Q/P) rho^(-2 kappa) where eps = -1 (the
+        // image's E is the ray's 1/E, so its P is the ray's q)
+        Complex scale = kappa.multiply(ell).multiply(-2).exp();
+        return eps == 1 ? canonical.multiply(scale) : scale.divide(canonical);
     }
 }
