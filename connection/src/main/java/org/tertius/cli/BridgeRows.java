@@ -3,6 +3,8 @@ package org.tertius.cli;
 import java.util.ArrayList;
 import java.util.List;
 import org.hipparchus.complex.Complex;
+import org.tertius.connection.closed.InfinityMonodromyBridge;
+import org.tertius.connection.closed.InfinityMonodromyBridge.Oscillation;
 import org.tertius.connection.closed.MonodromyFromZero;
 import org.tertius.connection.closed.ZeroMonodromyBridge;
 import org.tertius.core.InvalidInputException;
@@ -23,7 +25,8 @@ import org.tertius.hierarchy.monodromy.MonodromyMap;
  * MonodromyFromZero; derived in connection/README.md, "Monodromy data at z = 0") in the rows of connect: the closed
  * forms of sigma and B beside --at-zero of a member-1 solution selected by its monodromy data or, with
  * --at-zero --monodromy-data, of any D6 solution from its monodromy data computed at a point; and the monodromy data
- * in closed form with --from-zero --monodromy-data.
+ * in closed form with --from-zero --monodromy-data, and there also the oscillation at infinity along --ray in closed
+ * form.
  */
 final class BridgeRows {
     /** The member-1 constant s of the map used by the commands for Painleve III (Member1Map.forEquation). */
@@ -129,6 +132,103 @@ final class BridgeRows {
         }
         throw new InvalidInputException("--monodromy-data", "no point of the ray at |z| in {1, 0.75, 1.5, 0.5, 2}"
                 + " gave monodromy data that pass their checks (last: " + last + "); choose another --ray");
+    }
+
+    /**
+     * The oscillation at infinity along the ray in closed form from (sigma, B) at 0 (InfinityMonodromyBridge.fromZero;
+     * connection/README.md 'Monodromy data at infinity'): the closed-form cells of background, amplitude, phase and
+     * drift beside the numerical ones, and the rows kappa and p_over_q; a comment only where the bridge gives nothing
+     * on this ray (no background oscillates along it, or the data select none).
+     */
+    static void infinityRows(Painleve3 eq, Complex sigma, Complex b, double angle, int sheet, ConnectionRows rows) {
+        if (sheet != 0) {
+            rows.comment("closed form at infinity: the bridge is derived on the principal sheet; use --sheet 0");
+            return;
+        }
+        Oscillation o;
+        InfinityMonodromyBridge bridge;
+        try {
+            bridge = InfinityMonodromyBridge.of(eq, PAINLEVE3_S, angle);
+            o = bridge.fromZero(ZeroMonodromyBridge.of(eq, PAINLEVE3_S), new Estimate<>(sigma, 0),
+                    new Estimate<>(b, 0));
+        } catch (InvalidInputException e) {
+            rows.comment("closed form at infinity not available on this ray: " + e.reason());
+            return;
+        }
+        rows.comment("closed form at infinity: the monodromy data of (sigma, B) in closed form");
+        closedRows(bridge, o, rows);
+    }
+
+    /**
+     * The oscillation at infinity along the ray in closed form from the monodromy data of the solution, computed at
+     * the first point of the ray (|z| = 1, 0.75, 1.5, 0.5, 2) where the solution is known to 1e-10 relative and the
+     * data pass their self-checks (InfinityMonodromyBridge.oscillation; errors of the data propagated); a comment
+     * where the bridge gives nothing on this ray.
+     */
+    static void infinityFromSolution(Painleve3Solution s, double angle, ConnectionRows rows) {
+        Painleve3 eq = s.equation();
+        InfinityMonodromyBridge bridge;
+        try {
+            bridge = InfinityMonodromyBridge.of(eq, PAINLEVE3_S, angle);
+        } catch (InvalidInputException e) {
+            rows.comment("closed form at infinity not available on this ray: " + e.reason());
+            return;
+        }
+        MonodromyMap<Complex> map = MonodromyMap.doublePrecision();
+        String last = "";
+        for (double r : new double[] {1, 0.75, 1.5, 0.5, 2}) {
+            SurfacePoint p = SurfacePoint.fromLog(Math.log(r), angle);
+            MonodromyData<Complex> d;
+            try {
+                Painleve3Value v = s.evaluate(p);
+                if (!(v.errW() <= 1e-10 * (1 + v.w().norm())) || !(v.errDw() <= 1e-10 * (1 + v.dw().norm()))) {
+                    last = "the solution is known only to " + v.errW() + " at " + p;
+                    continue;
+                }
+                d = map.compute(LaxMatrix.ofPainleve3(eq, v, PAINLEVE3_S));
+            } catch (TertiusException e) {
+                last = e.getMessage();
+                continue;
+            }
+            if (!d.checksHold()) {
+                last = "the self-checks of the data at " + p + " fail: " + d.checks();
+                continue;
+            }
+            Oscillation o;
+            try {
+                o = bridge.oscillation(d.stokesAtInfinity(1), d.stokesAtInfinity(2), d.stokesAtZero(1),
+                        d.stokesAtZero(2), d.connection(1, 1), d.connection(1, 2), d.connection(2, 1),
+                        d.connection(2, 2));
+            } catch (InvalidInputException e) {
+                rows.comment("closed form at infinity not available: " + e.reason());
+                return;
+            }
+            rows.comment("closed form at infinity: from the monodromy data of the solution computed at z = "
+                    + ComplexText.format(p.z()) + " (member 1 with s = 1/4), errors of the data propagated");
+            closedRows(bridge, o, rows);
+            return;
+        }
+        rows.comment("closed form at infinity not available: no point of the ray at |z| in {1, 0.75, 1.5, 0.5, 2}"
+                + " gave monodromy data that pass their checks (last: " + last + ")");
+    }
+
+    private static void closedRows(InfinityMonodromyBridge bridge, Oscillation o, ConnectionRows rows) {
+        rows.comment("closed form at infinity (connection/README.md 'Monodromy data at infinity'): the saddle"
+                + " connection matrices X = (Y^inf_j)^-1 Y^0_k; kappa - kappa0 = mu p q from X11 X22 (or -X12 X21),"
+                + " p/q from the two saddles with the Gamma factors of the parabolic-cylinder matching (configuration"
+                + " integers identified numerically); drift = -i mu p q as in the numerical rows; the background is"
+                + " the one whose kappa has |Re kappa| < 1/2 (identified numerically)");
+        rows.closedForm("background", o.background(), 0x1p-51 * o.background().norm());
+        rows.closedForm("amplitude", o.amplitude().value(), o.amplitude().error());
+        rows.closedForm("kappa", o.kappa().value(), o.kappa().error());
+        rows.closedForm("drift", o.drift().value().multiply(Complex.I.negate()), o.drift().error());
+        int index = bridge.backgrounds().indexOf(o.background());
+        if (o.ratio() == null) {
+            rows.comment("closed form of p/q (phase) not available on this ray: " + bridge.ratioCovered(index));
+            return;
+        }
+        rows.closedForm("phase", o.phase().value(), o.phase().error());
+        rows.closedForm("p_over_q", o.ratio().value(), o.ratio().error());
     }
 
     private static Estimate<Complex> exact(List<Complex> values, int index) {

@@ -75,9 +75,17 @@ public final class ConnectCommand implements Command {
                 case 1:
                     refuseDigits("--at-infinity", "the fits at infinity are computed in double precision only (start"
                             + " data in D digits from exact data at infinity: --from-infinity C,P,Q --digits D)");
-                    decided = ConnectionReport.atInfinity(painleve3(rows), moved, connection.rayAngle(),
+                    Painleve3Solution atInfinity = painleve3(rows);
+                    if (connection.monodromyData && connection.sheetIndex() != 0) {
+                        throw new InvalidInputException("--monodromy-data", "the bridge at infinity is derived on the"
+                                + " principal sheet; use --sheet 0");
+                    }
+                    decided = ConnectionReport.atInfinity(atInfinity, moved, connection.rayAngle(),
                             connection.sheetIndex(), connection.sampleRadii(InfinityBehaviourFit.R_MIN,
                                     InfinityBehaviourFit.R_MAX), rows);
+                    if (connection.monodromyData) {
+                        BridgeRows.infinityFromSolution(atInfinity, connection.rayAngle(), rows);
+                    }
                     break;
                 case 2:
                     fromZero(rows);
@@ -243,6 +251,8 @@ public final class ConnectCommand implements Command {
         }
         ConnectionReport.fromZero(eq, data, connection.startAt, connection.rayAngle(), connection.sheetIndex(), rows);
         if (connection.monodromyData) {
+            BridgeRows.infinityRows(eq, data.sigma(), data.secondParameter(), connection.rayAngle(),
+                    connection.sheetIndex(), rows);
             BridgeRows.monodromyRows(eq, data.sigma(), data.secondParameter(), rows);
         }
     }

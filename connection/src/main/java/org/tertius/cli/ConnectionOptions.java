@@ -48,8 +48,10 @@ final class ConnectionOptions implements OptionGroup {
                 + " (SIGMA is the side, PARAM is t0)"));
         o.addOption(OptionKinds.flag("--monodromy-data", "--from-zero (D6, |Re sigma| < 1): also the monodromy data"
                 + " of the solution in closed form (member 1 with s = 1/4; Stokes multipliers, connection matrix and"
-                + " the gauge-free products); --at-zero (D6, sheet 0): also sigma and B in closed form from the"
-                + " solution's monodromy data, computed at a point of the ray"));
+                + " the gauge-free products) and, on an oscillating --ray, the oscillation at infinity in closed form;"
+                + " --at-zero or --at-infinity (D6, sheet 0): also sigma and B, or the background, kappa, drift,"
+                + " amplitude and phase, in closed form from the solution's monodromy data, computed at a point of the"
+                + " ray"));
         o.addOption(OptionKinds.value("--branch", "K", "the branch +1 or -1 of the logarithmic behaviour, needed"
                 + " only where beta (side +1) or alpha (side -1) vanishes"));
         o.addOption(OptionKinds.value("--from-infinity", "C,P,Q", "start data from the data along the ray --ray at"
@@ -109,7 +111,8 @@ final class ConnectionOptions implements OptionGroup {
             }
         }
         refuse(chosen != 2, "--from-zero", logarithmic ? "--logarithmic" : null, branch == null ? null : "--branch");
-        refuse(chosen != 0 && chosen != 2, "--from-zero or --at-zero", monodromyData ? "--monodromy-data" : null);
+        refuse(chosen != 0 && chosen != 1 && chosen != 2, "--from-zero, --at-zero or --at-infinity",
+                monodromyData ? "--monodromy-data" : null);
         refuse(chosen != 1, "--at-infinity", radii == null ? null : "--radii");
         refuse(chosen != 2 && chosen != 3, "--from-zero or --from-infinity", startAt == null ? null : "--start-at");
         refuse(chosen >= 0, "the decaying family's own mode (--lambda or --sigma alone)",

@@ -47,6 +47,22 @@ final class ConnectionRows {
         add(quantity, "double", complex(value), error(error), complex(closed), error(closedError));
     }
 
+    /**
+     * Puts a closed form beside the numerical value of the row named quantity (the first such row with its closed-form
+     * cells empty), or adds a row with the closed form alone when there is none.
+     */
+    void closedForm(String quantity, Complex closed, double closedError) {
+        for (String[] row : rows) {
+            if (row[0].equals(quantity) && row[4].isEmpty()) {
+                row[1] = "double";
+                row[4] = complex(closed);
+                row[5] = error(closedError);
+                return;
+            }
+        }
+        add(quantity, "double", "", "", complex(closed), error(closedError));
+    }
+
     /** A real quantity (e.g. an angle) without a closed form. */
     void addReal(String quantity, double value, double error) {
         add(quantity, "double", real(value), error(error), "", "");

@@ -10,16 +10,20 @@ import org.hipparchus.complex.Complex;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.tertius.cli.Main;
+import org.tertius.connection.closed.InfinityMonodromyBridge;
+import org.tertius.connection.closed.InfinityMonodromyBridge.Oscillation;
 import org.tertius.connection.closed.MonodromyFromZero;
 import org.tertius.connection.closed.ZeroMonodromyBridge;
 import org.tertius.core.number.ComplexText;
 import org.tertius.core.piii.Painleve3;
+import org.tertius.hierarchy.monodromy.Estimate;
 
 /**
  * The bridge between the behaviour at 0 and the monodromy data from the command line (derived here,
  * connection/README.md, section "Monodromy data at z = 0"): {@code connect --from-zero SIGMA,B --monodromy-data}
  * prints the library's closed forms, and the member-1 solution selected by those data has, read off at 0 by the
- * fits, the typed sigma and B, with the closed forms beside them; bad input refused in one line with exit 2.
+ * fits, the typed sigma and B, with the closed forms beside them; the oscillation at infinity in closed form
+ * (section "Monodromy data at infinity"); bad input refused in one line with exit 2.
  */
 class BridgeCommandTest {
     private static final String[] EQ = {"--alpha", "0.7+0.2i", "--beta", "-0.4+0.1i", "--gamma", "1", "--delta", "-1"};
@@ -109,6 +113,48 @@ class BridgeCommandTest {
         }
     }
 
+    /**
+     * The oscillation at infinity in closed form (connection/README.md "Monodromy data at infinity", identified here):
+     * --from-zero --monodromy-data on an oscillating ray prints the library's fromZero values (rays pi and 0 of this
+     * equation: two saddle configurations).
+     */
+    @Test
+    void fromZeroPrintsTheOscillationAtInfinity() {
+        Painleve3 eq = Painleve3.of(new Complex(0.7, 0.2), new Complex(-0.4, 0.1), Complex.ONE, new Complex(-1));
+        Map<String, String[]> r = rows(0, connect("--from-zero", "0.3+0.2i,0.8-0.1i", "--monodromy-data", "--ray",
+                "pi"));
+        Oscillation o = InfinityMonodromyBridge.of(eq, new Complex(0.25), Math.PI).fromZero(ZeroMonodromyBridge.of(eq,
+                new Complex(0.25)), new Estimate<>(SIGMA, 0), new Estimate<>(B, 0));
+        assertEquals(0, closed(r, "p_over_q").subtract(o.ratio().value()).norm(), 1e-15 * o.ratio().value().norm());
+        assertEquals(0, closed(r, "kappa").subtract(o.kappa().value()).norm(), 1e-15);
+        assertTrue(r.get("p_over_q")[2].isEmpty(), "no numerical value is claimed");
+        Map<String, String[]> zero = rows(0, connect("--from-zero", "0.3+0.2i,0.8-0.1i", "--monodromy-data", "--ray",
+                "0"));
+        Oscillation onZero = InfinityMonodromyBridge.of(eq, new Complex(0.25), 0).fromZero(ZeroMonodromyBridge.of(eq,
+                new Complex(0.25)), new Estimate<>(SIGMA, 0), new Estimate<>(B, 0));
+        assertEquals(0, closed(zero, "p_over_q").subtract(onZero.ratio().value()).norm(),
+                1e-15 * onZero.ratio().value().norm());
+    }
+
+    /**
+     * --at-infinity --monodromy-data: the closed form from the solution's data computed at a point (identified here,
+     * connection/README.md "Monodromy data at infinity") beside the fitted phase, drift and amplitude, within the
+     * summed estimates.
+     */
+    @Test
+    void atInfinityPutsTheClosedFormBesideTheFit() {
+        Map<String, String[]> start = rows(0, connect("--from-zero", "0.3+0.2i,0.8-0.1i", "--ray", "pi"));
+        Map<String, String[]> r = rows(0, connect("--z0", start.get("z")[2], "--w0", start.get("w")[2], "--dw0",
+                start.get("dw")[2], "--at-infinity", "--ray", "pi", "--monodromy-data"));
+        assertEquals("oscillating", r.get("kind")[2]);
+        for (String q : new String[] {"phase", "drift", "amplitude", "background"}) {
+            double budget = Double.parseDouble(r.get(q)[3]) + Double.parseDouble(r.get(q)[5]);
+            assertTrue(budget < 1e-8, q + " estimates " + budget);
+            assertTrue(closed(r, q).subtract(ComplexText.parse(q, r.get(q)[2])).norm() <= budget + 1e-14, q + " "
+                    + r.get(q)[2] + " numerically, " + r.get(q)[4] + " closed form");
+        }
+    }
+
     @Test
     void badInputIsOneLineAndExitTwo() {
         String[][] cases = {
@@ -117,7 +163,7 @@ class BridgeCommandTest {
             {"connect", "--alpha", "1", "--beta", "0", "--gamma", "1", "--delta", "-1", "--from-zero", "1+0.5i,1",
                 "--monodromy-data"},
             {"connect", "--alpha", "1", "--beta", "0", "--gamma", "1", "--delta", "-1", "--z0", "0.5", "--w0", "1",
-                "--dw0", "0", "--at-infinity", "--ray", "pi/2", "--monodromy-data"},
+                "--dw0", "0", "--at-infinity", "--ray", "pi/2", "--sheet", "1", "--monodromy-data"},
             {"connect", "--alpha", "1", "--beta", "0", "--gamma", "1", "--delta", "-1", "--z0", "0.5", "--w0", "1",
                 "--dw0", "0", "--at-zero", "--sheet", "1", "--monodromy-data"},
             {"connect", "--alpha", "1", "--beta", "0", "--gamma", "1", "--delta", "-1", "--z0", "1/2", "--w0", "1",

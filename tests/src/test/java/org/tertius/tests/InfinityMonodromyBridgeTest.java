@@ -44,7 +44,8 @@ import org.tertius.hierarchy.monodromy.MonodromyMap;
  *   mu p q from the data against the given ones;</li>
  *   <li>the composed connection 0 -> infinity (slow): 20 random (sigma, B) at 0, data in closed form
  *   ({@link MonodromyFromZero}), the oscillation on a ray from the data against the numerical connection (solution
- *   from the series at 0, engine, fit at infinity by {@link InfinityBehaviourFit}).</li>
+ *   from the series at 0, engine, fit at infinity by {@link InfinityBehaviourFit}): kappa and, where the
+ *   configuration is covered, the ratio p/q (section "The ratio p/q" there).</li>
  * </ul>
  */
 class InfinityMonodromyBridgeTest {
@@ -65,6 +66,8 @@ class InfinityMonodromyBridgeTest {
     private static int composedCompared;
     private static int composedFitFailed;
     private static int composedRefused;
+    private static int ratioCompared;
+    private static double worstRatio;
 
     static Stream<Arguments> infinitySets() {
         Random r = new Random(20_1982);
@@ -230,6 +233,19 @@ class InfinityMonodromyBridgeTest {
         assertTrue(dKappa <= Math.min(TOLERANCE, 2 * budget + 1e-13), at + "kappa " + closed.kappa()
                 + " closed form, " + numericalKappa + " numerically (estimates " + budget + ")");
         worstComposed = Math.max(worstComposed, dKappa);
+        if (closed.ratio() != null) {
+            // connection/README.md "The ratio p/q": p/q composed from (sigma, B) against the numerical fit's
+            Complex numericalRatio = numerical.p().divide(numerical.q());
+            double relative = numerical.errP() / numerical.p().norm() + numerical.errQ() / numerical.q().norm();
+            double dRatio = closed.ratio().value().subtract(numericalRatio).norm() / numericalRatio.norm();
+            System.out.printf("composed set %d: |d(p/q)|/|p/q| %.2e, estimates: closed %.2e, numerical %.2e%n", index,
+                    dRatio, closed.ratio().error() / numericalRatio.norm(), relative);
+            double ratioBudget = relative + closed.ratio().error() / numericalRatio.norm();
+            assertTrue(dRatio <= Math.min(TOLERANCE, 2 * ratioBudget + 1e-12), at + "p/q " + closed.ratio()
+                    + " closed form, " + numericalRatio + " numerically (relative estimates " + ratioBudget + ")");
+            ratioCompared++;
+            worstRatio = Math.max(worstRatio, dRatio);
+        }
     }
 
     @AfterAll
@@ -239,6 +255,8 @@ class InfinityMonodromyBridgeTest {
                 + " numerical fit undecided, %d refused); background selected by the principal branch on %d of %d sets%n",
                 worstKappa, worstComposed, composedCompared, composedFitFailed, composedRefused, selectedRight,
                 selections);
+        System.out.printf("composed p/q against the numerical fit: largest relative deviation %.2e on %d sets%n",
+                worstRatio, ratioCompared);
         if (composedCompared + composedFitFailed + composedRefused == SETS_AT_ZERO) {
             assertTrue(composedCompared >= 20, "only " + composedCompared + " full comparisons of the composed"
                     + " connection");

@@ -32,7 +32,8 @@ import org.tertius.hierarchy.monodromy.Estimate;
  * Novokshenov, recalled from memory); which pair (j, k), the diagonal or anti-diagonal form, and the factor 2 of the
  * two saddles were identified numerically (connection/README.md). Of the two backgrounds c, -c oscillating on a ray
  * the data select the one whose kappa lies in the strip |Re kappa| &lt; 1/2 where the transseries holds; data for which
- * neither (or both) does are refused. The phase of p/q is not covered here. Double precision. Immutable.
+ * neither (or both) does are refused. The ratio p/q (the phase) is {@link OscillationPhase}'s. Double precision.
+ * Immutable.
  */
 public final class InfinityMonodromyBridge {
     private static final double TOLERANCE = 1e-6;
@@ -44,14 +45,20 @@ public final class InfinityMonodromyBridge {
     private final Complex m0;
     private final List<Complex> backgrounds;
     private final List<Geometry> geometries;
+    private final Complex logScale;
 
     /** Where the saddle connection matrix sits for one background. */
     private record Geometry(int j, int k, boolean antiDiagonal, int sigma, int eps, Complex mu, Complex kappa0) {
     }
 
-    /** What the data give on the ray: the selected background, kappa, the drift mu p q, p q and A = 2 sqrt(p q). */
+    /**
+     * What the data give on the ray: the selected background, kappa, the drift mu p q, p q, A = 2 sqrt(p q), and
+     * the ratio p/q with the phase log(p/q)/(2i) (principal log; both null where {@link OscillationPhase} does not
+     * cover the configuration, see {@link #ratioCovered}).
+     */
     public record Oscillation(Complex background, Estimate<Complex> kappa, Estimate<Complex> drift,
-                              Estimate<Complex> product, Estimate<Complex> amplitude) {
+                              Estimate<Complex> product, Estimate<Complex> amplitude, Estimate<Complex> ratio,
+                              Estimate<Complex> phase) {
     }
 
     private InfinityMonodromyBridge(Painleve3 equation, double angle, Complex s) {
@@ -62,6 +69,7 @@ public final class InfinityMonodromyBridge {
         this.m = map.m(equation);
         this.m0 = map.traceIntegral(equation).divide(Complex.I.multiply(2).multiply(s));
         Complex logCMap = map.cSquared().log().multiply(0.5);
+        this.logScale = logCMap.subtract(Math.log(4 * Math.sqrt(s.getReal())));
         double psi = 2 * (angle - logCMap.getImaginary());
         double c0 = 4 * Math.sqrt(s.getReal());
         Complex toCanonical = Complex.I.divide(s.multiply(4)).multiply(c0).divide(map.k().multiply(logCMap.exp()));
@@ -143,9 +151,37 @@ public final class InfinityMonodromyBridge {
      */
     public Complex saddleProduct(int index, Complex sInf1, Complex sInf2, Complex s01, Complex s02, Complex[][] e) {
         Geometry g = geometries.get(index);
-        Complex[][] x = multiply(multiply(inverse(path(g.j(), lower(sInf1), upper(sInf2), m)), e),
-                path(g.k(), upper(s01), lower(s02), m0));
+        Complex[][] x = saddle(g.j(), g.k(), sInf1, sInf2, s01, s02, e);
         return g.antiDiagonal() ? x[0][1].multiply(x[1][0]).negate() : x[0][0].multiply(x[1][1]);
+    }
+
+    /**
+     * Whether the ratio p/q about background index i is identified (connection/README.md): null if it is, else the
+     * reason it is not.
+     */
+    public String ratioCovered(int index) {
+        Geometry g = geometries.get(index);
+        return OscillationPhase.covers(g.j(), g.k(), g.eps()) ? null : OscillationPhase.reason(g.j(), g.k(), g.eps());
+    }
+
+    /** eps of background index i: +1 where the ray's E is the canonical image's E, -1 where it is its 1/E. */
+    public int orientation(int index) {
+        return geometries.get(index).eps();
+    }
+
+    /** p/q about background index i from the data (v as in {@link #oscillation(int, List)}) and kappa (its branch). */
+    Complex ratio(int index, List<Complex> v, Complex kappa) {
+        Geometry g = geometries.get(index);
+        Complex[][] e = {{v.get(4), v.get(5)}, {v.get(6), v.get(7)}};
+        Complex[][] x1 = saddle(g.j(), g.k(), v.get(0), v.get(1), v.get(2), v.get(3), e);
+        Complex[][] x2 = saddle(g.j() + 1, g.k() + 1, v.get(0), v.get(1), v.get(2), v.get(3), e);
+        Complex nu1 = kappa.subtract(g.kappa0()).divide(-2.0 * g.sigma() * g.eps());
+        return OscillationPhase.ratio(g.j(), g.k(), g.eps(), g.antiDiagonal(), x1, x2, nu1, kappa, m, m0, logScale);
+    }
+
+    private Complex[][] saddle(int j, int k, Complex sInf1, Complex sInf2, Complex s01, Complex s02, Complex[][] e) {
+        return multiply(multiply(inverse(path(j, lower(sInf1), upper(sInf2), m)), e), path(k, upper(s01), lower(s02),
+                m0));
     }
 
     /** The value Q must have for an oscillation about background index i with the given drift mu p q (the reverse). */
@@ -223,7 +259,14 @@ public final class InfinityMonodromyBridge {
                 .divide(g.mu()), in);
         Estimate<Complex> amplitude = ZeroMonodromyBridge.propagate(v -> kappaOf.apply(v).subtract(g.kappa0())
                 .divide(g.mu()).sqrt().multiply(2), in);
-        return new Oscillation(backgrounds.get(index), kappa, drift, pq, amplitude);
+        Estimate<Complex> ratio = null;
+        Estimate<Complex> phase = null;
+        if (ratioCovered(index) == null) {
+            ratio = ZeroMonodromyBridge.propagate(v -> ratio(index, v, kappaOf.apply(v)), in);
+            phase = ZeroMonodromyBridge.propagate(v -> ratio(index, v, kappaOf.apply(v)).log().divide(
+                    new Complex(0, 2)), in);
+        }
+        return new Oscillation(backgrounds.get(index), kappa, drift, pq, amplitude, ratio, phase);
     }
 
     /** The oscillation of the solution w ~ B z^sigma at 0 (data in closed form by {@link MonodromyFromZero}). */
@@ -252,12 +295,28 @@ public final class InfinityMonodromyBridge {
         };
         Estimate<Complex> kappa = ZeroMonodromyBridge.propagate(kappaOf, in);
         double error = kappa.error() + centre.kappa().error();
+        Estimate<Complex> ratio = null;
+        Estimate<Complex> phase = null;
+        if (centre.ratio() != null) {
+            Function<List<Complex>, Complex> ratioOf = v -> {
+                MonodromyFromZero d = MonodromyFromZero.of(zero, v.get(0), v.get(1));
+                List<Complex> data = List.of(d.stokesAtInfinity(1), d.stokesAtInfinity(2), d.stokesAtZero(1),
+                        d.stokesAtZero(2), d.connection(1, 1), d.connection(1, 2), d.connection(2, 1),
+                        d.connection(2, 2));
+                return ratio(index, data, kappaOf.apply(v));
+            };
+            Estimate<Complex> r = ZeroMonodromyBridge.propagate(ratioOf, in);
+            ratio = new Estimate<>(r.value(), r.error() + centre.ratio().error());
+            double relative = ratio.error() / ratio.value().norm();
+            phase = new Estimate<>(ratio.value().log().divide(new Complex(0, 2)), relative / 2);
+        }
         Complex drift = kappa.value().subtract(g.kappa0());
         Complex pq = drift.divide(g.mu());
         Complex amplitude = pq.sqrt().multiply(2);
         double errPq = error / g.mu().norm();
         return new Oscillation(centre.background(), new Estimate<>(kappa.value(), error), new Estimate<>(drift, error),
-                new Estimate<>(pq, errPq), new Estimate<>(amplitude, errPq / Math.max(pq.sqrt().norm(), 1e-300)));
+                new Estimate<>(pq, errPq), new Estimate<>(amplitude, errPq / Math.max(pq.sqrt().norm(), 1e-300)), ratio,
+                phase);
     }
 
     private Complex product(int index, List<Complex> v) {
