@@ -13,6 +13,7 @@ import org.tertius.connection.infinity.InfinityBehaviour;
 import org.tertius.connection.infinity.TransseriesAtInfinity;
 import org.tertius.connection.match.DecayingConnection;
 import org.tertius.connection.match.InfinityBehaviourFit;
+import org.tertius.connection.match.PreciseInfinityFit;
 import org.tertius.connection.match.ZeroFit;
 import org.tertius.connection.zero.ZeroBehaviour;
 import org.tertius.core.InvalidInputException;
@@ -73,11 +74,7 @@ public final class ConnectCommand implements Command {
                     decided = atZero(rows);
                     break;
                 case 1:
-                    refuseDigits("--at-infinity", "the fits at infinity are computed in double precision only (start"
-                            + " data in D digits from exact data at infinity: --from-infinity C,P,Q --digits D)");
-                    decided = ConnectionReport.atInfinity(painleve3(rows), moved, connection.rayAngle(),
-                            connection.sheetIndex(), connection.sampleRadii(InfinityBehaviourFit.R_MIN,
-                                    InfinityBehaviourFit.R_MAX), rows);
+                    decided = atInfinity(rows);
                     break;
                 case 2:
                     fromZero(rows);
@@ -102,11 +99,6 @@ public final class ConnectCommand implements Command {
     /** Solutions started from the member's image moved by its errors (empty for start data given as such). */
     private List<Painleve3Solution> moved = List.of();
 
-    private void refuseDigits(String direction, String why) {
-        if (connection.digits != null) {
-            throw new InvalidInputException("--digits", "not available with " + direction + ": " + why);
-        }
-    }
 
     private boolean atZero(ConnectionRows rows) {
         Painleve3Solution s = painleve3(rows);
@@ -134,6 +126,33 @@ public final class ConnectCommand implements Command {
             PreciseConnection.atZero(s, connection.rayAngle(), connection.sheetIndex(), connection.digits, rows);
         }
         return decided;
+    }
+
+    private boolean atInfinity(ConnectionRows rows) {
+        Painleve3Solution s = painleve3(rows);
+        Integer digits = connection.digits;
+        if (digits != null) {
+            if (digits < HighPrecisionSolution.MIN_DIGITS || digits > PreciseInfinityFit.MAX_DIGITS) {
+                throw new InvalidInputException("--digits", "must be in [" + HighPrecisionSolution.MIN_DIGITS + ", "
+                        + PreciseInfinityFit.MAX_DIGITS + "] with --at-infinity, got " + digits);
+            }
+            if (s.equation().exactParameters() == null) {
+                throw new InvalidInputException("--digits", "needs the equation's parameters exact (decimals or p/q)");
+            }
+            try {
+                s.highPrecisionForm().requireDigits(digits + 5);
+            } catch (InvalidInputException e) {
+                throw new InvalidInputException("--digits", "needs exact start data (--z0 --w0 --dw0 as decimals or"
+                        + " p/q, e.g. from --from-infinity C,P,Q --digits D): " + e.argument() + " " + e.reason());
+            }
+        }
+        return ConnectionReport.atInfinity(s, moved, connection.rayAngle(), connection.sheetIndex(),
+                connection.sampleRadii(InfinityBehaviourFit.R_MIN, InfinityBehaviourFit.R_MAX), rows,
+                b -> {
+                    if (digits != null) {
+                        PreciseConnection.atInfinity(s, b, digits, rows);
+                    }
+                });
     }
 
     /**

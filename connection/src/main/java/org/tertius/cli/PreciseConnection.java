@@ -8,9 +8,13 @@ import java.util.List;
 import java.util.Locale;
 import org.apfloat.Apcomplex;
 import org.apfloat.Apfloat;
+import org.apfloat.ApcomplexMath;
 import org.apfloat.ApfloatMath;
+import org.hipparchus.complex.Complex;
 import org.tertius.connection.infinity.InfinityBehaviour;
 import org.tertius.connection.infinity.PreciseTransseries;
+import org.tertius.connection.infinity.TransseriesAtInfinity;
+import org.tertius.connection.match.PreciseInfinityFit;
 import org.tertius.connection.match.PreciseZeroFit;
 import org.tertius.connection.match.ZeroBehaviourFit;
 import org.tertius.connection.zero.LocalValue;
@@ -60,6 +64,52 @@ final class PreciseConnection {
             rows.add("B", digits + " digits", complex(r.amplitude(), digits), ConnectionRows.error(r.amplitudeError()),
                     "", "");
         }
+    }
+
+    /**
+     * The rows of the behaviour at infinity in D digits, after the double-precision rows (which decide the kind, the
+     * background and the start of Newton's method): p, q and on an oscillating ray amplitude, phase and drift.
+     */
+    static void atInfinity(Painleve3Solution s, InfinityBehaviour estimate, int digits, ConnectionRows rows) {
+        PreciseInfinityFit.Result r;
+        try (Progress progress = new Progress("connect")) {
+            r = PreciseInfinityFit.fit(s, estimate, digits, f -> progress.update(Math.round(f * 1000), 1000));
+        }
+        boolean both = estimate.kind() == InfinityBehaviour.Kind.OSCILLATING;
+        rows.comment(digits + " digits: the solution replayed in arbitrary precision to z1 = " + r.inner() + " and z2 = "
+                + r.outer() + " (" + String.format(Locale.ROOT, "%.1f", r.replayDigits()) + " correct digits), the"
+                + " transseries with " + r.orders() + " orders solved at z1 for " + (both ? "p and q from w and w'"
+                : "the decaying amplitude from w") + " by Newton's method (" + r.builds() + " builds); the errors"
+                + " include the disagreement at z2 (" + String.format(Locale.ROOT, "%.2g", r.disagreement()) + ")");
+        rows.add("p", digits + " digits", complex(r.p(), digits), ConnectionRows.error(r.errP()), "", "");
+        rows.add("q", digits + " digits", complex(r.q(), digits), ConnectionRows.error(r.errQ()), "", "");
+        if (!both) {
+            return;
+        }
+        Painleve3 eq = s.equation();
+        long precision = digits + PreciseTransseries.GUARD;
+        Apcomplex pq = r.p().multiply(r.q());
+        Apcomplex amplitude = ApcomplexMath.sqrt(pq).multiply(new Apfloat(2, precision));
+        Apcomplex phase = ApcomplexMath.log(r.p().divide(r.q())).divide(new Apcomplex(Apfloat.ZERO,
+                new Apfloat(2, precision)));
+        InfinityBehaviour b = InfinityBehaviour.measured(estimate.kind(), estimate.angle(), estimate.sheet(),
+                estimate.background(), toComplex(r.p()), toComplex(r.q()), r.errP(), r.errQ(), "");
+        // drift = -i (kappa(p, q) - kappa(0, 0)); kappa is fixed at order 3 (4 orders built)
+        int index = TransseriesAtInfinity.backgrounds(eq).indexOf(estimate.background());
+        PreciseTransseries with = PreciseTransseries.create(eq, eq.exactParameters(), index, r.p(), r.q(), digits, 4);
+        PreciseTransseries without = PreciseTransseries.create(eq, eq.exactParameters(), index, Apcomplex.ZERO,
+                Apcomplex.ZERO, digits, 4);
+        MpArithmetic ar = with.arithmetic();
+        Apcomplex drift = ar.context().toApcomplex(ar.subtract(with.kappa(), without.kappa()))
+                .multiply(new Apcomplex(Apfloat.ZERO, new Apfloat(-1, precision)));
+        rows.add("amplitude", digits + " digits", complex(amplitude, digits), ConnectionRows.error(b.amplitudeError()),
+                "", "");
+        rows.add("phase", digits + " digits", complex(phase, digits), ConnectionRows.error(b.phaseError()), "", "");
+        rows.add("drift", digits + " digits", complex(drift, digits), ConnectionRows.error(b.driftError(eq)), "", "");
+    }
+
+    private static Complex toComplex(Apcomplex a) {
+        return new Complex(a.real().doubleValue(), a.imag().doubleValue());
     }
 
     /** Start data in D digits from exact (sigma, B) typed as the two parts of --from-zero. */

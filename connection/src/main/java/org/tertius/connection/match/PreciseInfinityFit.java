@@ -1,0 +1,303 @@
+package org.tertius.connection.match;
+
+import java.util.List;
+import java.util.function.DoubleConsumer;
+import org.apfloat.Apcomplex;
+import org.hipparchus.complex.Complex;
+import org.tertius.connection.infinity.InfinityBehaviour;
+import org.tertius.connection.infinity.PreciseTransseries;
+import org.tertius.connection.infinity.TransseriesAtInfinity;
+import org.tertius.connection.zero.LocalValue;
+import org.tertius.core.InvalidInputException;
+import org.tertius.core.TertiusException;
+import org.tertius.core.highprecision.HighPrecisionSolution;
+import org.tertius.core.highprecision.HighPrecisionValue;
+import org.tertius.core.number.ExactNumber;
+import org.tertius.core.number.ExactPoint;
+import org.tertius.core.number.MpArithmetic;
+import org.tertius.core.number.MpComplex;
+import org.tertius.core.number.MpContext;
+import org.tertius.core.piii.Painleve3;
+import org.tertius.core.piii.Painleve3Solution;
+
+/**
+ * The amplitudes p, q of the transseries at infinity ({@link PreciseTransseries}) of a solution with exact start data,
+ * in arbitrary precision, along a ray whose kind the double-precision fit ({@link InfinityBehaviourFit}) has decided
+ * (derived here, common practice for the method): the solution is replayed to D digits
+ * ({@link HighPrecisionSolution}) to two radii r1 &lt; r2 on the ray, and the equations "transseries at r1 = (w, w')"
+ * (oscillating ray: both amplitudes; one decaying exponential: its amplitude from w alone) are solved by Newton's
+ * method started from the double-precision amplitudes. Every iterate needs a new transseries (its coefficients depend
+ * on p q); the Jacobian is that of the double-precision transseries, so each step gains about as many digits as the
+ * Jacobian has (about 10) and the iteration stops when a step is below the accuracy asked for.
+ *
+ * <p><b>Radii.</b> On an oscillating ray the amplitudes change w by about |x|^(-1/2), so they are well fixed far out,
+ * where the asymptotic series needs few orders for D digits (its terms fall like Gamma(n/2) / |mu x|^(n/2)) and the
+ * build is cheap (its cost grows like the fourth power of the orders): r1 is the smallest of {@link #RADII} at or
+ * beyond 40 where at most D/2 + 20 orders reach D + 3 digits, r2 = 1.25 r1. Where one exponential decays its
+ * amplitude changes w by only e^(-Re(mu x)) |x|^(-1/2): r1 is the radius of {@link #RADII} where the truncation
+ * and the replay's digits fix it best (relative), r2 the better of its neighbours.
+ *
+ * <p><b>Errors.</b> The replay's errors and the transseries' own estimates (truncation, rounding) at r1 are mapped
+ * through the inverse Jacobian; added: the last Newton step, and the disagreement at r2 (the Newton step the final
+ * amplitudes would take there). Thread-safe (no state).
+ */
+public final class PreciseInfinityFit {
+    /** Most digits: beyond, the builds (and the replay to large radii) take minutes. */
+    public static final int MAX_DIGITS = 60;
+    /** Radii tried for the fit (|z|). */
+    static final double[] RADII = {5, 6, 8, 10, 12, 15, 20, 25, 30, 40, 50, 60, 80, 100, 120, 150, 200, 250, 300, 400};
+    private static final int MAX_BUILDS = 6;
+    private static final double OSCILLATING_FROM = 40;
+
+    private PreciseInfinityFit() {
+    }
+
+    /** A fit in arbitrary precision: p, q with absolute errors, where and how they were found. */
+    public record Result(Apcomplex p, Apcomplex q, double errP, double errQ, ExactPoint inner, ExactPoint outer,
+                         int orders, int builds, double replayDigits, double disagreement) {
+    }
+
+    /**
+     * p and q of {@code solution} (exact start data, exact equation) to about {@code digits} digits on the ray and
+     * sheet of {@code estimate}.
+     *
+     * @param estimate the double-precision behaviour on that ray ({@link InfinityBehaviourFit}); must be decided
+     * @throws InvalidInputException for an undecided estimate, digits outside [16, {@link #MAX_DIGITS}], start data
+     *     or parameters not exact, a ray where no radius reaches the digits
+     * @throws TertiusException if Newton's method does not converge
+     */
+    public static Result fit(Painleve3Solution solution, InfinityBehaviour estimate, int digits,
+                             DoubleConsumer progress) {
+        if (estimate.kind() == InfinityBehaviour.Kind.UNDECIDED) {
+            throw new InvalidInputException("digits", "the behaviour at infinity is undecided in double precision ("
+                    + estimate.note() + "), so there is nothing to refine");
+        }
+        if (digits < HighPrecisionSolution.MIN_DIGITS || digits > MAX_DIGITS) {
+            throw new InvalidInputException("digits", "must be in [" + HighPrecisionSolution.MIN_DIGITS + ", "
+                    + MAX_DIGITS + "] for the behaviour at infinity, got " + digits);
+        }
+        Painleve3 eq = solution.equation();
+        ExactNumber[] parameters = eq.exactParameters();
+        if (parameters == null) {
+            throw new InvalidInputException("digits", "the equation's parameters must be exact (decimals or p/q)");
+        }
+        solution.highPrecisionForm().requireDigits(digits + 5);
+        List<Complex> roots = TransseriesAtInfinity.backgrounds(eq);
+        int background = roots.indexOf(estimate.background());
+        if (background < 0) {
+            throw new InvalidInputException("digits", "the background " + estimate.background() + " is not one of "
+                    + roots);
+        }
+        boolean both = estimate.kind() == InfinityBehaviour.Kind.OSCILLATING;
+        double phase = estimate.angle() + 2 * Math.PI * estimate.sheet();
+        TransseriesAtInfinity probe = TransseriesAtInfinity.create(eq, estimate.background(), Complex.ZERO,
+                Complex.ZERO, 4);
+        // which exponential decays along the ray (as InfinityBehaviourFit decides it): -1 for 1/E (q), +1 for E (p)
+        int free = both ? 0 : Math.cos(probe.direction(phase)) > 0 ? -1 : 1;
+        double target = Math.pow(10, -digits);
+        double[] radii = both ? oscillatingRadii(eq, estimate, digits, phase)
+                : decayingRadii(eq, estimate, digits, phase, free);
+        int orders = PreciseTransseries.ordersAt(eq, estimate.background(), estimate.p(), estimate.q(),
+                1e-3 * target, radii[0], phase, both ? digits / 2 + 20 : PreciseTransseries.ordersFor(digits));
+        if (orders < 0) {
+            orders = PreciseTransseries.ordersFor(digits);
+        }
+        HighPrecisionSolution replay = HighPrecisionSolution.of(solution, digits + 5, f -> progress.accept(0.5 * f));
+        ExactPoint inner = point(radii[0], estimate);
+        ExactPoint outer = point(radii[1], estimate);
+        HighPrecisionValue v1 = replay.evaluate(inner);
+        HighPrecisionValue v2 = replay.evaluate(outer);
+        progress.accept(0.5);
+        Newton newton = new Newton(eq, parameters, background, estimate, digits, orders);
+        return newton.solve(inner, v1, outer, v2, target, progress);
+    }
+
+    /** The point r e^(i angle) as an exact number (rounded to doubles: it is exact whatever it is) on the sheet. */
+    private static ExactPoint point(double r, InfinityBehaviour estimate) {
+        double cos = Math.cos(estimate.angle());
+        double sin = Math.sin(estimate.angle());
+        // on the axes exactly (cos(pi/2) is 6e-17 in double)
+        Complex z = new Complex(Math.abs(cos) < 1e-15 ? 0 : cos, Math.abs(sin) < 1e-15 ? 0 : sin).multiply(r);
+        return ExactPoint.of(ExactNumber.ofDouble("radius", z), estimate.sheet());
+    }
+
+    private static double[] oscillatingRadii(Painleve3 eq, InfinityBehaviour e, int digits, double phase) {
+        int budget = digits / 2 + 20;
+        for (double r : RADII) {
+            if (r >= OSCILLATING_FROM && PreciseTransseries.ordersAt(eq, e.background(), e.p(), e.q(),
+                    1e-3 * Math.pow(10, -digits), r, phase, budget) > 0) {
+                return new double[] {r, 1.25 * r};
+            }
+        }
+        throw new InvalidInputException("digits", digits + " digits are not reached by the transseries with at most "
+                + budget + " orders for |z| <= " + RADII[RADII.length - 1] + " on this ray; ask fewer digits");
+    }
+
+    /**
+     * The radius where the decaying amplitude is best fixed: its part of u, |a| |E^(+-1)| |x|^(-1/2), against the
+     * truncation estimate of {@link PreciseTransseries#ordersFor} orders plus 10^-(D+3); and its better neighbour.
+     */
+    private static double[] decayingRadii(Painleve3 eq, InfinityBehaviour e, int digits, double phase, int free) {
+        TransseriesAtInfinity probe = TransseriesAtInfinity.create(eq, e.background(), e.p(), e.q(), 4);
+        int orders = PreciseTransseries.ordersFor(digits);
+        Complex a = free > 0 ? e.p() : e.q();
+        double[] rel = new double[RADII.length];
+        int best = 0;
+        for (int i = 0; i < RADII.length; i++) {
+            double y = probe.isD7() ? Math.pow(RADII[i], 2.0 / 3) : RADII[i];
+            Complex tauY = new Complex(Math.log(y), probe.phaseFactor() * phase);
+            Complex exponent = probe.mu().multiply(tauY.exp()).add(probe.kappa().multiply(tauY));
+            double part = (a.norm() > 0 ? a.norm() : 1) * Math.exp(free * exponent.getReal()) / Math.sqrt(y);
+            double truncation = PreciseTransseries.truncationAt(eq, e.background(), e.p(), e.q(), orders, RADII[i],
+                    phase);
+            rel[i] = (truncation + Math.pow(10, -digits - 3)) / part;
+            if (rel[i] < rel[best]) {
+                best = i;
+            }
+        }
+        int other = best == 0 ? 1 : best == RADII.length - 1 ? best - 1 : rel[best - 1] < rel[best + 1] ? best - 1
+                : best + 1;
+        return new double[] {RADII[Math.min(best, other)], RADII[Math.max(best, other)]};
+    }
+
+    /** Newton's method on the precise transseries with the Jacobian of the double one. */
+    private static final class Newton {
+        private final Painleve3 eq;
+        private final ExactNumber[] parameters;
+        private final int background;
+        private final Complex c;
+        private final int digits;
+        private final int orders;
+        private Complex pd;
+        private Complex qd;
+
+        Newton(Painleve3 eq, ExactNumber[] parameters, int background, InfinityBehaviour e, int digits, int orders) {
+            this.eq = eq;
+            this.parameters = parameters;
+            this.background = background;
+            this.c = e.background();
+            this.digits = digits;
+            this.orders = orders;
+            this.pd = e.p();
+            this.qd = e.q();
+        }
+
+        Result solve(ExactPoint inner, HighPrecisionValue v1, ExactPoint outer, HighPrecisionValue v2, double target,
+                     DoubleConsumer progress) {
+            MpArithmetic ar = new MpArithmetic(digits + PreciseTransseries.GUARD);
+            MpContext ctx = ar.context();
+            MpComplex p = ctx.fromDouble(pd.getReal(), pd.getImaginary());
+            MpComplex q = ctx.fromDouble(qd.getReal(), qd.getImaginary());
+            double last = Double.POSITIVE_INFINITY;
+            for (int build = 1; build <= MAX_BUILDS; build++) {
+                PreciseTransseries t = PreciseTransseries.create(eq, parameters, background, ctx.toApcomplex(p),
+                        ctx.toApcomplex(q), digits, orders);
+                progress.accept(0.5 + 0.5 * build / (MAX_BUILDS + 1.0));
+                Complex[][] j = jacobian(tau(inner));
+                Complex[] step = solve(j, residual(ar, t, inner, v1));
+                double size = step[0].norm() / (1 + pd.norm()) + step[1].norm() / (1 + qd.norm());
+                double[] err = dataErrors(ar, t, j, inner, v1);
+                // below the errors of the data and the model a step only follows their noise
+                boolean noise = step[0].norm() <= 0.1 * err[0] && step[1].norm() <= 0.1 * err[1];
+                if (!Double.isFinite(size) || (build >= 3 && size > 0.5 * last && !noise)) {
+                    throw new TertiusException("Newton's method for the amplitudes in " + digits + " digits does not"
+                            + " converge (step " + size + " after " + build + " builds)");
+                }
+                if (size <= 1e-3 * target || noise || build == MAX_BUILDS) {
+                    // the last step is not taken: the model of this build belongs to (p, q); it enters the errors
+                    return result(ar, t, j, step, p, q, inner, v1, outer, v2, build);
+                }
+                p = ar.subtract(p, ctx.fromDouble(step[0].getReal(), step[0].getImaginary()));
+                q = ar.subtract(q, ctx.fromDouble(step[1].getReal(), step[1].getImaginary()));
+                pd = ar.toComplex(p);
+                qd = ar.toComplex(q);
+                last = size;
+            }
+            throw new IllegalStateException("unreachable");
+        }
+
+        private Result result(MpArithmetic ar, PreciseTransseries t, Complex[][] j, Complex[] step, MpComplex p,
+                              MpComplex q, ExactPoint inner, HighPrecisionValue v1, ExactPoint outer,
+                              HighPrecisionValue v2, int builds) {
+            double[] err = dataErrors(ar, t, j, inner, v1);
+            MpContext ctx = ar.context();
+            // the disagreement at r2: the step the amplitudes would take there (with its own data errors)
+            Complex[] other = solve(jacobian(tau(outer)), residual(ar, t, outer, v2));
+            double dp = other[0].norm();
+            double dq = other[1].norm();
+            return new Result(ctx.toApcomplex(p), ctx.toApcomplex(q), err[0] + step[0].norm() + dp,
+                    err[1] + step[1].norm() + dq, inner, outer, orders, builds,
+                    Math.min(v1.correctDigits(), v2.correctDigits()), Math.max(dp, dq));
+        }
+
+        /** The data's and the model's errors at the point through the inverse Jacobian. */
+        private double[] dataErrors(MpArithmetic ar, PreciseTransseries t, Complex[][] j, ExactPoint z,
+                                    HighPrecisionValue v) {
+            LocalValue<MpComplex> m = t.startData(z.z(), z.sheet());
+            double rel = Math.pow(10, -v.correctDigits());
+            MpContext ctx = ar.context();
+            double e1 = rel * ar.abs(ctx.fromApcomplex(v.value(0))) + m.errW();
+            double e2 = rel * ar.abs(ctx.fromApcomplex(v.value(1))) + m.errDw();
+            return errors(j, e1, e2);
+        }
+
+        private Complex tau(ExactPoint z) {
+            Complex zz = z.z().toComplex();
+            return new Complex(Math.log(zz.norm()), zz.getArgument() + 2 * Math.PI * z.sheet());
+        }
+
+        /** model - data at the point: {w, w'} for both amplitudes, {w} for one (as the first component). */
+        private Complex[] residual(MpArithmetic ar, PreciseTransseries t, ExactPoint z, HighPrecisionValue v) {
+            LocalValue<MpComplex> m = t.startData(z.z(), z.sheet());
+            MpContext ctx = ar.context();
+            MpComplex w = ctx.fromApcomplex(v.value(0));
+            MpComplex dw = ctx.fromApcomplex(v.value(1));
+            return new Complex[] {ar.toComplex(ar.subtract(m.w(), w)), ar.toComplex(ar.subtract(m.dw(), dw))};
+        }
+
+        /**
+         * d(w, w')/d(p, q) of the double transseries at tau by central differences of u = log(w/reference) and u' (which
+         * keep the relative accuracy of an exponentially small amplitude part); one amplitude enters almost linearly,
+         * so its step is large.
+         */
+        private Complex[][] jacobian(Complex tau) {
+            TransseriesAtInfinity at = TransseriesAtInfinity.create(eq, c, pd, qd, InfinityBehaviour.ORDERS);
+            // steps that change u by about 1e-5 |u| through the linear part x^(-1/2) (p E + q/E), or 1e-5 |a|
+            Complex tauY = at.isD7() ? tau.multiply(2.0 / 3) : tau;
+            double e = at.mu().multiply(tauY.exp()).add(at.kappa().multiply(tauY)).getReal();
+            double root = Math.exp(tauY.getReal() / 2);
+            double hp = 1e-5 * Math.max(pd.norm(), root * Math.exp(-e));
+            double hq = 1e-5 * Math.max(qd.norm(), root * Math.exp(e));
+            LocalValue<Complex> v = at.at(tau);
+            Complex[] dp = slope(v, logModel(pd.add(hp), qd, tau), logModel(pd.subtract(hp), qd, tau), 2 * hp);
+            Complex[] dq = slope(v, logModel(pd, qd.add(hq), tau), logModel(pd, qd.subtract(hq), tau), 2 * hq);
+            return new Complex[][] {{dp[0], dq[0]}, {dp[1], dq[1]}};
+        }
+
+        /** {dw, dw'} from the differences of u and u': w = ref e^u, w' = w (u' + ref'/ref). */
+        private static Complex[] slope(LocalValue<Complex> v, LocalValue<Complex> plus, LocalValue<Complex> minus,
+                                       double h) {
+            Complex du = plus.w().subtract(minus.w()).divide(h);
+            Complex ddu = plus.dw().subtract(minus.dw()).divide(h);
+            return new Complex[] {v.w().multiply(du), v.dw().multiply(du).add(v.w().multiply(ddu))};
+        }
+
+        private LocalValue<Complex> logModel(Complex p, Complex q, Complex tau) {
+            return TransseriesAtInfinity.create(eq, c, p, q, InfinityBehaviour.ORDERS).logAt(tau);
+        }
+
+        /** The Newton step {dp, dq}: the 2 x 2 system. */
+        private static Complex[] solve(Complex[][] j, Complex[] r) {
+            Complex det = j[0][0].multiply(j[1][1]).subtract(j[0][1].multiply(j[1][0]));
+            return new Complex[] {j[1][1].multiply(r[0]).subtract(j[0][1].multiply(r[1])).divide(det),
+                j[0][0].multiply(r[1]).subtract(j[1][0].multiply(r[0])).divide(det)};
+        }
+
+        /** First-order errors of (p, q) from errors e1 of w and e2 of w'. */
+        private static double[] errors(Complex[][] j, double e1, double e2) {
+            double det = j[0][0].multiply(j[1][1]).subtract(j[0][1].multiply(j[1][0])).norm();
+            return new double[] {(j[1][1].norm() * e1 + j[0][1].norm() * e2) / det,
+                (j[1][0].norm() * e1 + j[0][0].norm() * e2) / det};
+        }
+    }
+}
