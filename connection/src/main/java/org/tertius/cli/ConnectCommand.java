@@ -387,6 +387,9 @@ public final class ConnectCommand implements Command {
             case "branch":
                 option = "--branch";
                 break;
+            case "digits":
+                option = "--digits";
+                break;
             default:
                 option = direction == 2 ? "--from-zero" : direction == 3 ? "--from-infinity"
                         : direction < 0 ? (argument.equals("sigma") ? "--sigma" : "--lambda") : null;

@@ -148,6 +148,7 @@ final class ConnectionReport {
         }
         rows.addLabel("kind", b.kind().name().toLowerCase(Locale.ROOT));
         if (b.kind() == InfinityBehaviour.Kind.UNDECIDED) {
+            precise.accept(b); // refuses digits for an undecided behaviour
             return false;
         }
         List<Complex> roots = TransseriesAtInfinity.backgrounds(eq);

@@ -71,16 +71,27 @@ final class PreciseConnection {
      * background and the start of Newton's method): p, q and on an oscillating ray amplitude, phase and drift.
      */
     static void atInfinity(Painleve3Solution s, InfinityBehaviour estimate, int digits, ConnectionRows rows) {
+        if (estimate.kind() == InfinityBehaviour.Kind.UNDECIDED) {
+            throw new InvalidInputException("--digits", "the behaviour at infinity is undecided in double precision ("
+                    + estimate.note() + "), so there is nothing to find to " + digits + " digits");
+        }
         PreciseInfinityFit.Result r;
         try (Progress progress = new Progress("connect")) {
             r = PreciseInfinityFit.fit(s, estimate, digits, f -> progress.update(Math.round(f * 1000), 1000));
         }
         boolean both = estimate.kind() == InfinityBehaviour.Kind.OSCILLATING;
-        rows.comment(digits + " digits: the solution replayed in arbitrary precision to z1 = " + r.inner() + " and z2 = "
-                + r.outer() + " (" + String.format(Locale.ROOT, "%.1f", r.replayDigits()) + " correct digits), the"
-                + " transseries with " + r.orders() + " orders solved at z1 for " + (both ? "p and q from w and w'"
-                : "the decaying amplitude from w") + " by Newton's method (" + r.builds() + " builds); the errors"
-                + " include the disagreement at z2 (" + String.format(Locale.ROOT, "%.2g", r.disagreement()) + ")");
+        rows.comment(digits + " digits: the solution replayed in arbitrary precision to z1 = "
+                + ValueRows.exactComplex(r.fitPoint().z()) + " and z2 = " + ValueRows.exactComplex(r.checkPoint().z())
+                + " (" + String.format(Locale.ROOT, "%.1f", r.replayDigits()) + " correct digits), the transseries with "
+                + r.orders() + " orders solved at z1 for p and q from w and w' by Newton's method (" + r.builds()
+                + " builds); the errors include the disagreement at z2 (" + String.format(Locale.ROOT, "%.2g",
+                r.disagreement()) + ") as far as it exceeds the errors there (" + String.format(Locale.ROOT, "%.2g",
+                r.checkError()) + ")");
+        if (!both) {
+            rows.comment(digits + " digits, exponentially small: the amplitude of the exponential that grows along the"
+                    + " ray is fitted too (linearly); start data rounded to D digits carry a tiny one, so it is not"
+                    + " exactly 0, and such a solution leaves the background far out");
+        }
         rows.add("p", digits + " digits", complex(r.p(), digits), ConnectionRows.error(r.errP()), "", "");
         rows.add("q", digits + " digits", complex(r.q(), digits), ConnectionRows.error(r.errQ()), "", "");
         if (!both) {

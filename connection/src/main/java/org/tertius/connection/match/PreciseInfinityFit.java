@@ -19,6 +19,7 @@ import org.tertius.core.number.MpComplex;
 import org.tertius.core.number.MpContext;
 import org.tertius.core.piii.Painleve3;
 import org.tertius.core.piii.Painleve3Solution;
+import org.tertius.core.piii.Painleve3Type;
 
 /**
  * The amplitudes p, q of the transseries at infinity ({@link PreciseTransseries}) of a solution with exact start data,
@@ -39,7 +40,7 @@ import org.tertius.core.piii.Painleve3Solution;
  *
  * <p><b>Errors.</b> The replay's errors and the transseries' own estimates (truncation, rounding) at r1 are mapped
  * through the inverse Jacobian; added: the last Newton step, and the disagreement at r2 (the Newton step the final
- * amplitudes would take there). Thread-safe (no state).
+ * amplitudes would take there) as far as it exceeds the errors mapped at r2. Thread-safe (no state).
  */
 public final class PreciseInfinityFit {
     /** Most digits: beyond, the builds (and the replay to large radii) take minutes. */
@@ -53,8 +54,8 @@ public final class PreciseInfinityFit {
     }
 
     /** A fit in arbitrary precision: p, q with absolute errors, where and how they were found. */
-    public record Result(Apcomplex p, Apcomplex q, double errP, double errQ, ExactPoint inner, ExactPoint outer,
-                         int orders, int builds, double replayDigits, double disagreement) {
+    public record Result(Apcomplex p, Apcomplex q, double errP, double errQ, ExactPoint fitPoint, ExactPoint checkPoint,
+                         int orders, int builds, double replayDigits, double disagreement, double checkError) {
     }
 
     /**
@@ -98,18 +99,18 @@ public final class PreciseInfinityFit {
         double[] radii = both ? oscillatingRadii(eq, estimate, digits, phase)
                 : decayingRadii(eq, estimate, digits, phase, free);
         int orders = PreciseTransseries.ordersAt(eq, estimate.background(), estimate.p(), estimate.q(),
-                1e-3 * target, radii[0], phase, both ? digits / 2 + 20 : PreciseTransseries.ordersFor(digits));
+                1e-3 * target, Math.min(radii[0], radii[1]), phase, both ? digits / 2 + 20 : PreciseTransseries.ordersFor(digits));
         if (orders < 0) {
             orders = PreciseTransseries.ordersFor(digits);
         }
         HighPrecisionSolution replay = HighPrecisionSolution.of(solution, digits + 5, f -> progress.accept(0.5 * f));
-        ExactPoint inner = point(radii[0], estimate);
-        ExactPoint outer = point(radii[1], estimate);
-        HighPrecisionValue v1 = replay.evaluate(inner);
-        HighPrecisionValue v2 = replay.evaluate(outer);
+        ExactPoint fitPoint = point(radii[0], estimate);
+        ExactPoint checkPoint = point(radii[1], estimate);
+        HighPrecisionValue v1 = replay.evaluate(fitPoint);
+        HighPrecisionValue v2 = replay.evaluate(checkPoint);
         progress.accept(0.5);
-        Newton newton = new Newton(eq, parameters, background, estimate, digits, orders);
-        return newton.solve(inner, v1, outer, v2, target, progress);
+        Newton newton = new Newton(eq, parameters, background, estimate, digits, orders, both ? -1 : free < 0 ? 0 : 1);
+        return newton.solve(fitPoint, v1, checkPoint, v2, target, progress);
     }
 
     /** The point r e^(i angle) as an exact number (rounded to doubles: it is exact whatever it is) on the sheet. */
@@ -135,13 +136,14 @@ public final class PreciseInfinityFit {
 
     /**
      * The radius where the decaying amplitude is best fixed: its part of u, |a| |E^(+-1)| |x|^(-1/2), against the
-     * truncation estimate of {@link PreciseTransseries#ordersFor} orders plus 10^-(D+3); and its better neighbour.
+     * truncation estimate of {@link PreciseTransseries#ordersFor} orders plus 10^-(D+3); and the radius before it.
      */
     private static double[] decayingRadii(Painleve3 eq, InfinityBehaviour e, int digits, double phase, int free) {
         TransseriesAtInfinity probe = TransseriesAtInfinity.create(eq, e.background(), e.p(), e.q(), 4);
         int orders = PreciseTransseries.ordersFor(digits);
         Complex a = free > 0 ? e.p() : e.q();
         double[] rel = new double[RADII.length];
+        // (on the smallest radius the check is the next one)
         int best = 0;
         for (int i = 0; i < RADII.length; i++) {
             double y = probe.isD7() ? Math.pow(RADII[i], 2.0 / 3) : RADII[i];
@@ -155,9 +157,9 @@ public final class PreciseInfinityFit {
                 best = i;
             }
         }
-        int other = best == 0 ? 1 : best == RADII.length - 1 ? best - 1 : rel[best - 1] < rel[best + 1] ? best - 1
-                : best + 1;
-        return new double[] {RADII[Math.min(best, other)], RADII[Math.max(best, other)]};
+        // the check inside: beyond, the growing exponential's tiny amplitude (carried by any rounding of the start
+        // data) grows, and with it the error of its linear term
+        return new double[] {RADII[best], RADII[best == 0 ? 1 : best - 1]};
     }
 
     /** Newton's method on the precise transseries with the Jacobian of the double one. */
@@ -168,10 +170,14 @@ public final class PreciseInfinityFit {
         private final Complex c;
         private final int digits;
         private final int orders;
+        /** The amplitude of the exponential that grows along the ray (0: p, 1: q), taken linearly; -1: none. */
+        private int grows;
         private Complex pd;
         private Complex qd;
 
-        Newton(Painleve3 eq, ExactNumber[] parameters, int background, InfinityBehaviour e, int digits, int orders) {
+        Newton(Painleve3 eq, ExactNumber[] parameters, int background, InfinityBehaviour e, int digits, int orders,
+               int grows) {
+            this.grows = grows;
             this.eq = eq;
             this.parameters = parameters;
             this.background = background;
@@ -182,7 +188,7 @@ public final class PreciseInfinityFit {
             this.qd = e.q();
         }
 
-        Result solve(ExactPoint inner, HighPrecisionValue v1, ExactPoint outer, HighPrecisionValue v2, double target,
+        Result solve(ExactPoint fitPoint, HighPrecisionValue v1, ExactPoint checkPoint, HighPrecisionValue v2, double target,
                      DoubleConsumer progress) {
             MpArithmetic ar = new MpArithmetic(digits + PreciseTransseries.GUARD);
             MpContext ctx = ar.context();
@@ -190,13 +196,25 @@ public final class PreciseInfinityFit {
             MpComplex q = ctx.fromDouble(qd.getReal(), qd.getImaginary());
             double last = Double.POSITIVE_INFINITY;
             for (int build = 1; build <= MAX_BUILDS; build++) {
-                PreciseTransseries t = PreciseTransseries.create(eq, parameters, background, ctx.toApcomplex(p),
-                        ctx.toApcomplex(q), digits, orders);
+                // the growing amplitude is left out of the build (it would fill every harmonic) and added linearly
+                PreciseTransseries t = PreciseTransseries.create(eq, parameters, background,
+                        ctx.toApcomplex(grows == 0 ? ar.zero() : p), ctx.toApcomplex(grows == 1 ? ar.zero() : q),
+                        digits, orders);
                 progress.accept(0.5 + 0.5 * build / (MAX_BUILDS + 1.0));
-                Complex[][] j = jacobian(tau(inner));
-                Complex[] step = solve(j, residual(ar, t, inner, v1));
+                Complex[][] j = jacobian(tau(fitPoint));
+                Complex[] step = solve(j, residual(ar, t, fitPoint, v1, j, p, q));
                 double size = step[0].norm() / (1 + pd.norm()) + step[1].norm() / (1 + qd.norm());
-                double[] err = dataErrors(ar, t, j, inner, v1);
+                double[] err = dataErrors(ar, t, j, fitPoint, v1);
+                if (grows >= 0 && linearShare(ar, t, j, fitPoint, v1) > 0.1) {
+                    // the growing amplitude's linear term would dominate the errors: build with both amplitudes
+                    grows = -1;
+                    p = ar.subtract(p, ctx.fromDouble(step[0].getReal(), step[0].getImaginary()));
+                    q = ar.subtract(q, ctx.fromDouble(step[1].getReal(), step[1].getImaginary()));
+                    pd = ar.toComplex(p);
+                    qd = ar.toComplex(q);
+                    last = Double.POSITIVE_INFINITY;
+                    continue;
+                }
                 // below the errors of the data and the model a step only follows their noise
                 boolean noise = step[0].norm() <= 0.1 * err[0] && step[1].norm() <= 0.1 * err[1];
                 if (!Double.isFinite(size) || (build >= 3 && size > 0.5 * last && !noise)) {
@@ -205,7 +223,7 @@ public final class PreciseInfinityFit {
                 }
                 if (size <= 1e-3 * target || noise || build == MAX_BUILDS) {
                     // the last step is not taken: the model of this build belongs to (p, q); it enters the errors
-                    return result(ar, t, j, step, p, q, inner, v1, outer, v2, build);
+                    return result(ar, t, j, step, p, q, fitPoint, v1, checkPoint, v2, build);
                 }
                 p = ar.subtract(p, ctx.fromDouble(step[0].getReal(), step[0].getImaginary()));
                 q = ar.subtract(q, ctx.fromDouble(step[1].getReal(), step[1].getImaginary()));
@@ -217,17 +235,30 @@ public final class PreciseInfinityFit {
         }
 
         private Result result(MpArithmetic ar, PreciseTransseries t, Complex[][] j, Complex[] step, MpComplex p,
-                              MpComplex q, ExactPoint inner, HighPrecisionValue v1, ExactPoint outer,
+                              MpComplex q, ExactPoint fitPoint, HighPrecisionValue v1, ExactPoint checkPoint,
                               HighPrecisionValue v2, int builds) {
-            double[] err = dataErrors(ar, t, j, inner, v1);
+            double[] err = dataErrors(ar, t, j, fitPoint, v1);
             MpContext ctx = ar.context();
             // the disagreement at r2: the step the amplitudes would take there (with its own data errors)
-            Complex[] other = solve(jacobian(tau(outer)), residual(ar, t, outer, v2));
-            double dp = other[0].norm();
-            double dq = other[1].norm();
+            Complex[][] j2 = jacobian(tau(checkPoint));
+            Complex[] other = solve(j2, residual(ar, t, checkPoint, v2, j2, p, q));
+            double[] own = dataErrors(ar, t, j2, checkPoint, v2);
+            // only the part of the disagreement beyond the check's own errors (where one exponential decays, the
+            // check radius fixes the amplitude less well than the fit radius)
+            double dp = Math.max(0, other[0].norm() - own[0]);
+            double dq = Math.max(0, other[1].norm() - own[1]);
             return new Result(ctx.toApcomplex(p), ctx.toApcomplex(q), err[0] + step[0].norm() + dp,
-                    err[1] + step[1].norm() + dq, inner, outer, orders, builds,
-                    Math.min(v1.correctDigits(), v2.correctDigits()), Math.max(dp, dq));
+                    err[1] + step[1].norm() + dq, fitPoint, checkPoint, orders, builds,
+                    Math.min(v1.correctDigits(), v2.correctDigits()), Math.max(other[0].norm(), other[1].norm()),
+                    Math.max(own[0], own[1]));
+        }
+
+        /** The linear term's error in w against the data's and the model's error there. */
+        private double linearShare(MpArithmetic ar, PreciseTransseries t, Complex[][] j, ExactPoint z,
+                                   HighPrecisionValue v) {
+            LocalValue<MpComplex> m = t.startData(z.z(), z.sheet());
+            double data = Math.pow(10, -v.correctDigits()) * ar.abs(m.w()) + m.errW();
+            return 1e-9 * (grows == 0 ? pd.norm() : qd.norm()) * j[0][grows].norm() / data;
         }
 
         /** The data's and the model's errors at the point through the inverse Jacobian. */
@@ -238,6 +269,15 @@ public final class PreciseInfinityFit {
             MpContext ctx = ar.context();
             double e1 = rel * ar.abs(ctx.fromApcomplex(v.value(0))) + m.errW();
             double e2 = rel * ar.abs(ctx.fromApcomplex(v.value(1))) + m.errDw();
+            if (grows >= 0) {
+                // the linear term: the Jacobian's relative error (about 1e-10, taken as 1e-9), and the neglected
+                // products of the two amplitudes (the first, u_(2,0) ~ p q / y, bounded by 10 |p q| / y)
+                double a = grows == 0 ? pd.norm() : qd.norm();
+                double y = Math.pow(z.z().toComplex().norm(), eq.type() == Painleve3Type.D7 ? 2.0 / 3 : 1);
+                double second = 10 * pd.norm() * qd.norm() / y;
+                e1 += 1e-9 * a * j[0][grows].norm() + second * ar.abs(m.w());
+                e2 += 1e-9 * a * j[1][grows].norm() + second * (ar.abs(m.dw()) + ar.abs(m.w()) / y);
+            }
             return errors(j, e1, e2);
         }
 
@@ -246,13 +286,19 @@ public final class PreciseInfinityFit {
             return new Complex(Math.log(zz.norm()), zz.getArgument() + 2 * Math.PI * z.sheet());
         }
 
-        /** model - data at the point: {w, w'} for both amplitudes, {w} for one (as the first component). */
-        private Complex[] residual(MpArithmetic ar, PreciseTransseries t, ExactPoint z, HighPrecisionValue v) {
+        /** model - data at the point, {w, w'}; the growing amplitude a enters as a J (its column of J). */
+        private Complex[] residual(MpArithmetic ar, PreciseTransseries t, ExactPoint z, HighPrecisionValue v,
+                                   Complex[][] j, MpComplex p, MpComplex q) {
             LocalValue<MpComplex> m = t.startData(z.z(), z.sheet());
             MpContext ctx = ar.context();
-            MpComplex w = ctx.fromApcomplex(v.value(0));
-            MpComplex dw = ctx.fromApcomplex(v.value(1));
-            return new Complex[] {ar.toComplex(ar.subtract(m.w(), w)), ar.toComplex(ar.subtract(m.dw(), dw))};
+            MpComplex w = ar.subtract(m.w(), ctx.fromApcomplex(v.value(0)));
+            MpComplex dw = ar.subtract(m.dw(), ctx.fromApcomplex(v.value(1)));
+            if (grows >= 0) {
+                MpComplex a = grows == 0 ? p : q;
+                w = ar.add(w, ar.multiply(a, ctx.fromDouble(j[0][grows].getReal(), j[0][grows].getImaginary())));
+                dw = ar.add(dw, ar.multiply(a, ctx.fromDouble(j[1][grows].getReal(), j[1][grows].getImaginary())));
+            }
+            return new Complex[] {ar.toComplex(w), ar.toComplex(dw)};
         }
 
         /**
