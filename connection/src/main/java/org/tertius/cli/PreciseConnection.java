@@ -82,10 +82,10 @@ final class PreciseConnection {
         boolean both = estimate.kind() == InfinityBehaviour.Kind.OSCILLATING;
         rows.comment(digits + " digits: the solution replayed in arbitrary precision to z1 = "
                 + ValueRows.exactComplex(r.fitPoint().z()) + " and z2 = " + ValueRows.exactComplex(r.checkPoint().z())
-                + " (" + String.format(Locale.ROOT, "%.1f", r.replayDigits()) + " correct digits), the transseries with "
-                + r.orders() + " orders solved at z1 for p and q from w and w' by Newton's method (" + r.builds()
-                + " builds); the errors include the disagreement at z2 (" + String.format(Locale.ROOT, "%.2g",
-                r.disagreement()) + ") as far as it exceeds the errors there (" + String.format(Locale.ROOT, "%.2g",
+                + " (" + String.format(Locale.ROOT, "%.1f", r.replayDigits()) + " correct digits), the transseries"
+                + " with " + r.orders() + " orders solved at z1 for p and q from w and w' by Newton's method ("
+                + r.builds() + " builds); the errors include the disagreement at z2 ("
+                + String.format(Locale.ROOT, "%.2g", r.disagreement()) + ") as far as it exceeds the errors there (" + String.format(Locale.ROOT, "%.2g",
                 r.checkError()) + ")");
         if (!both) {
             rows.comment(digits + " digits, exponentially small: the amplitude of the exponential that grows along the"

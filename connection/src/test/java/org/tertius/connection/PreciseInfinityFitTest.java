@@ -135,8 +135,9 @@ class PreciseInfinityFitTest {
         double err = Double.parseDouble(r[3]);
         // one unit in the last printed digit on top of the reported error
         double printed = Math.pow(10, 1 - Integer.parseInt(r[1].split(" ")[0]));
-        assertTrue(diff <= err + slack + printed * Math.max(1e-30, Math.abs(parse(r[2]).real().doubleValue())
-                + Math.abs(parse(r[2]).imag().doubleValue())), name + ": " + r[2] + " differs by " + diff + " > " + err);
+        double size = Math.abs(parse(r[2]).real().doubleValue()) + Math.abs(parse(r[2]).imag().doubleValue());
+        assertTrue(diff <= err + slack + printed * Math.max(1e-30, size), name + ": " + r[2] + " differs by " + diff
+                + " > " + err);
         assertTrue(err < bound && diff < bound, name + ": error " + err + ", difference " + diff);
     }
 

@@ -34,7 +34,7 @@ import org.tertius.core.piii.Painleve3Type;
  * <p><b>Radii.</b> On an oscillating ray the amplitudes change w by about |x|^(-1/2), so they are well fixed far out,
  * where the asymptotic series needs few orders for D digits (its terms fall like Gamma(n/2) / |mu x|^(n/2)) and the
  * build is cheap (its cost grows like the fourth power of the orders): r1 is the smallest of {@link #RADII} at or
- * beyond 40 where at most D/2 + 20 orders reach D + 3 digits, r2 = 1.25 r1. Where one exponential decays its
+ * beyond 40 where at most D/2 + 24 orders reach D + 3 digits, r2 = 1.25 r1. Where one exponential decays its
  * amplitude changes w by only e^(-Re(mu x)) |x|^(-1/2): r1 is the radius of {@link #RADII} where the truncation
  * and the replay's digits fix it best (relative), r2 the better of its neighbours.
  *
@@ -46,7 +46,8 @@ public final class PreciseInfinityFit {
     /** Most digits: beyond, the builds (and the replay to large radii) take minutes. */
     public static final int MAX_DIGITS = 60;
     /** Radii tried for the fit (|z|). */
-    static final double[] RADII = {5, 6, 8, 10, 12, 15, 20, 25, 30, 40, 50, 60, 80, 100, 120, 150, 200, 250, 300, 400};
+    static final double[] RADII = {5, 6, 8, 10, 12, 15, 20, 25, 30, 40, 50, 60, 80, 100, 120, 150, 200, 250, 300, 400,
+        500, 600, 800};
     private static final int MAX_BUILDS = 6;
     private static final double OSCILLATING_FROM = 40;
 
@@ -99,7 +100,8 @@ public final class PreciseInfinityFit {
         double[] radii = both ? oscillatingRadii(eq, estimate, digits, phase)
                 : decayingRadii(eq, estimate, digits, phase, free);
         int orders = PreciseTransseries.ordersAt(eq, estimate.background(), estimate.p(), estimate.q(),
-                1e-3 * target, Math.min(radii[0], radii[1]), phase, both ? digits / 2 + 20 : PreciseTransseries.ordersFor(digits));
+                1e-3 * target, Math.min(radii[0], radii[1]), phase, both ? budget(digits)
+                : PreciseTransseries.ordersFor(digits));
         if (orders < 0) {
             orders = PreciseTransseries.ordersFor(digits);
         }
@@ -122,8 +124,13 @@ public final class PreciseInfinityFit {
         return ExactPoint.of(ExactNumber.ofDouble("radius", z), estimate.sheet());
     }
 
+    /** The most orders built on an oscillating ray (their cost grows like the fourth power of the orders). */
+    private static int budget(int digits) {
+        return digits / 2 + 24;
+    }
+
     private static double[] oscillatingRadii(Painleve3 eq, InfinityBehaviour e, int digits, double phase) {
-        int budget = digits / 2 + 20;
+        int budget = budget(digits);
         for (double r : RADII) {
             if (r >= OSCILLATING_FROM && PreciseTransseries.ordersAt(eq, e.background(), e.p(), e.q(),
                     1e-3 * Math.pow(10, -digits), r, phase, budget) > 0) {
@@ -188,8 +195,8 @@ public final class PreciseInfinityFit {
             this.qd = e.q();
         }
 
-        Result solve(ExactPoint fitPoint, HighPrecisionValue v1, ExactPoint checkPoint, HighPrecisionValue v2, double target,
-                     DoubleConsumer progress) {
+        Result solve(ExactPoint fitPoint, HighPrecisionValue v1, ExactPoint checkPoint, HighPrecisionValue v2,
+                     double target, DoubleConsumer progress) {
             MpArithmetic ar = new MpArithmetic(digits + PreciseTransseries.GUARD);
             MpContext ctx = ar.context();
             MpComplex p = ctx.fromDouble(pd.getReal(), pd.getImaginary());
@@ -302,9 +309,8 @@ public final class PreciseInfinityFit {
         }
 
         /**
-         * d(w, w')/d(p, q) of the double transseries at tau by central differences of u = log(w/reference) and u' (which
-         * keep the relative accuracy of an exponentially small amplitude part); one amplitude enters almost linearly,
-         * so its step is large.
+         * d(w, w')/d(p, q) of the double transseries at tau by central differences of u = log(w/reference) and u'
+         * (which keep the relative accuracy of an exponentially small amplitude part).
          */
         private Complex[][] jacobian(Complex tau) {
             TransseriesAtInfinity at = TransseriesAtInfinity.create(eq, c, pd, qd, InfinityBehaviour.ORDERS);
