@@ -85,8 +85,8 @@ final class PreciseConnection {
                 + " (" + String.format(Locale.ROOT, "%.1f", r.replayDigits()) + " correct digits), the transseries"
                 + " with " + r.orders() + " orders solved at z1 for p and q from w and w' by Newton's method ("
                 + r.builds() + " builds); the errors include the disagreement at z2 ("
-                + String.format(Locale.ROOT, "%.2g", r.disagreement()) + ") as far as it exceeds the errors there (" + String.format(Locale.ROOT, "%.2g",
-                r.checkError()) + ")");
+                + String.format(Locale.ROOT, "%.2g", r.disagreement()) + ") as far as it exceeds the errors there ("
+                + String.format(Locale.ROOT, "%.2g", r.checkError()) + ")");
         if (!both) {
             rows.comment(digits + " digits, exponentially small: the amplitude of the exponential that grows along the"
                     + " ray is fitted too (linearly); start data rounded to D digits carry a tiny one, so it is not"
