@@ -228,9 +228,11 @@ public final class PreciseInfinityFit {
                     throw new TertiusException("Newton's method for the amplitudes in " + digits + " digits does not"
                             + " converge (step " + size + " after " + build + " builds)");
                 }
-                if (size <= 1e-3 * target || noise || build == MAX_BUILDS) {
-                    // the last step is not taken: the model of this build belongs to (p, q); it enters the errors
-                    return result(ar, t, j, step, p, q, fitPoint, v1, checkPoint, v2, build);
+                // each step shrinks by the measured contraction (the Jacobian's relative error, about 1e-9): the
+                // error left after this step is taken as 10 times the step times that contraction
+                double contraction = build == 1 ? 1 : Math.min(1, size / last);
+                if (10 * contraction * size <= 0.1 * target || noise || build == MAX_BUILDS) {
+                    return result(ar, t, j, step, 10 * contraction, p, q, fitPoint, v1, checkPoint, v2, build);
                 }
                 p = ar.subtract(p, ctx.fromDouble(step[0].getReal(), step[0].getImaginary()));
                 q = ar.subtract(q, ctx.fromDouble(step[1].getReal(), step[1].getImaginary()));
@@ -241,23 +243,30 @@ public final class PreciseInfinityFit {
             throw new IllegalStateException("unreachable");
         }
 
-        private Result result(MpArithmetic ar, PreciseTransseries t, Complex[][] j, Complex[] step, MpComplex p,
-                              MpComplex q, ExactPoint fitPoint, HighPrecisionValue v1, ExactPoint checkPoint,
-                              HighPrecisionValue v2, int builds) {
+        /**
+         * The result after the last step (taken), with the errors of the model of this build, at (p, q) before the
+         * step: the data's and the model's errors at r1, the step times {@code left} (what remains of it), and the
+         * disagreement at r2 (the step there against the step at r1) beyond the errors at r2.
+         */
+        private Result result(MpArithmetic ar, PreciseTransseries t, Complex[][] j, Complex[] step, double left,
+                              MpComplex p, MpComplex q, ExactPoint fitPoint, HighPrecisionValue v1,
+                              ExactPoint checkPoint, HighPrecisionValue v2, int builds) {
             double[] err = dataErrors(ar, t, j, fitPoint, v1);
             MpContext ctx = ar.context();
-            // the disagreement at r2: the step the amplitudes would take there (with its own data errors)
             Complex[][] j2 = jacobian(tau(checkPoint));
             Complex[] other = solve(j2, residual(ar, t, checkPoint, v2, j2, p, q));
             double[] own = dataErrors(ar, t, j2, checkPoint, v2);
+            double dp = other[0].subtract(step[0]).norm();
+            double dq = other[1].subtract(step[1]).norm();
             // only the part of the disagreement beyond the check's own errors (where one exponential decays, the
             // check radius fixes the amplitude less well than the fit radius)
-            double dp = Math.max(0, other[0].norm() - own[0]);
-            double dq = Math.max(0, other[1].norm() - own[1]);
-            return new Result(ctx.toApcomplex(p), ctx.toApcomplex(q), err[0] + step[0].norm() + dp,
-                    err[1] + step[1].norm() + dq, fitPoint, checkPoint, orders, builds,
-                    Math.min(v1.correctDigits(), v2.correctDigits()), Math.max(other[0].norm(), other[1].norm()),
-                    Math.max(own[0], own[1]));
+            double ep = Math.max(0, dp - own[0]);
+            double eq2 = Math.max(0, dq - own[1]);
+            MpComplex pp = ar.subtract(p, ctx.fromDouble(step[0].getReal(), step[0].getImaginary()));
+            MpComplex qq = ar.subtract(q, ctx.fromDouble(step[1].getReal(), step[1].getImaginary()));
+            return new Result(ctx.toApcomplex(pp), ctx.toApcomplex(qq), err[0] + left * step[0].norm() + ep,
+                    err[1] + left * step[1].norm() + eq2, fitPoint, checkPoint, orders, builds,
+                    Math.min(v1.correctDigits(), v2.correctDigits()), Math.max(dp, dq), Math.max(own[0], own[1]));
         }
 
         /** The linear term's error in w against the data's and the model's error there. */
@@ -314,16 +323,30 @@ public final class PreciseInfinityFit {
          */
         private Complex[][] jacobian(Complex tau) {
             TransseriesAtInfinity at = TransseriesAtInfinity.create(eq, c, pd, qd, InfinityBehaviour.ORDERS);
-            // steps that change u by about 1e-5 |u| through the linear part x^(-1/2) (p E + q/E), or 1e-5 |a|
+            // steps that change u by about 1e-5 through the linear part x^(-1/2) (p E + q/E), or 1e-5 |a|
             Complex tauY = at.isD7() ? tau.multiply(2.0 / 3) : tau;
             double e = at.mu().multiply(tauY.exp()).add(at.kappa().multiply(tauY)).getReal();
             double root = Math.exp(tauY.getReal() / 2);
             double hp = 1e-5 * Math.max(pd.norm(), root * Math.exp(-e));
             double hq = 1e-5 * Math.max(qd.norm(), root * Math.exp(e));
             LocalValue<Complex> v = at.at(tau);
-            Complex[] dp = slope(v, logModel(pd.add(hp), qd, tau), logModel(pd.subtract(hp), qd, tau), 2 * hp);
-            Complex[] dq = slope(v, logModel(pd, qd.add(hq), tau), logModel(pd, qd.subtract(hq), tau), 2 * hq);
+            Complex[] dp = richardson(slope(v, tau, hp, 0), slope(v, tau, hp / 2, 0));
+            Complex[] dq = richardson(slope(v, tau, hq, 1), slope(v, tau, hq / 2, 1));
             return new Complex[][] {{dp[0], dq[0]}, {dp[1], dq[1]}};
+        }
+
+        /**
+         * Richardson's extrapolation of central differences of steps h and h/2: (4 D(h/2) - D(h))/3, error O(h^4)
+         * (common practice; the drift p q makes u markedly nonlinear in the amplitudes far out).
+         */
+        private static Complex[] richardson(Complex[] coarse, Complex[] fine) {
+            return new Complex[] {fine[0].multiply(4).subtract(coarse[0]).divide(3),
+                fine[1].multiply(4).subtract(coarse[1]).divide(3)};
+        }
+
+        private Complex[] slope(LocalValue<Complex> v, Complex tau, double h, int which) {
+            return which == 0 ? slope(v, logModel(pd.add(h), qd, tau), logModel(pd.subtract(h), qd, tau), 2 * h)
+                    : slope(v, logModel(pd, qd.add(h), tau), logModel(pd, qd.subtract(h), tau), 2 * h);
         }
 
         /** {dw, dw'} from the differences of u and u': w = ref e^u, w' = w (u' + ref'/ref). */
