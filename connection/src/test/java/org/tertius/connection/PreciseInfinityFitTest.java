@@ -7,6 +7,7 @@ import java.io.PrintWriter;
 import java.io.StringWriter;
 import java.math.BigDecimal;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import org.apfloat.Apcomplex;
 import org.apfloat.Apfloat;
@@ -118,6 +119,17 @@ class PreciseInfinityFitTest {
         e = refused(args("--z0", "50i", "--w0", "1", "--dw0", "0", "--at-infinity", "--ray", "pi/2", "--digits",
                 "12"));
         assertTrue(e.startsWith("tertius: --digits:"), e);
+        // a solution whose behaviour the double fit leaves undecided (a D7 solution started at |z| = 80 on its
+        // Stokes ray arg z = 0: the engine loses accuracy inward; scenario of this test)
+        String[] d7 = {"connect", "--alpha", "1", "--beta", "1/2", "--gamma", "0", "--delta", "-1", "--z0", "80",
+            "--w0", "4.2701736861968253576", "--dw0", "0.018115119816659362877", "--at-infinity", "--ray", "0"};
+        assertEquals(3, Main.execute(d7, new PrintWriter(new StringWriter(), true),
+                new PrintWriter(new StringWriter(), true)));
+        String[] d7digits = Arrays.copyOf(d7, d7.length + 2);
+        d7digits[d7.length] = "--digits";
+        d7digits[d7.length + 1] = "20";
+        e = refused(d7digits);
+        assertTrue(e.startsWith("tertius: --digits:") && e.contains("undecided"), e);
         // start data of a family are computed in double precision
         e = refused("connect", "--alpha", "0", "--beta", "0", "--gamma", "-1", "--delta", "1", "--family",
                 "oscillating", "--amplitude-infinity", "1.3", "--phase", "0.4", "--at-infinity", "--digits", "30");
