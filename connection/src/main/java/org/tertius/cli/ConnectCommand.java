@@ -13,7 +13,6 @@ import org.tertius.connection.infinity.InfinityBehaviour;
 import org.tertius.connection.infinity.TransseriesAtInfinity;
 import org.tertius.connection.match.DecayingConnection;
 import org.tertius.connection.match.InfinityBehaviourFit;
-import org.tertius.connection.match.PreciseInfinityFit;
 import org.tertius.connection.match.ZeroFit;
 import org.tertius.connection.zero.ZeroBehaviour;
 import org.tertius.core.InvalidInputException;
@@ -132,19 +131,7 @@ public final class ConnectCommand implements Command {
         Painleve3Solution s = painleve3(rows);
         Integer digits = connection.digits;
         if (digits != null) {
-            if (digits < HighPrecisionSolution.MIN_DIGITS || digits > PreciseInfinityFit.MAX_DIGITS) {
-                throw new InvalidInputException("--digits", "must be in [" + HighPrecisionSolution.MIN_DIGITS + ", "
-                        + PreciseInfinityFit.MAX_DIGITS + "] with --at-infinity, got " + digits);
-            }
-            if (s.equation().exactParameters() == null) {
-                throw new InvalidInputException("--digits", "needs the equation's parameters exact (decimals or p/q)");
-            }
-            try {
-                s.highPrecisionForm().requireDigits(digits + 5);
-            } catch (InvalidInputException e) {
-                throw new InvalidInputException("--digits", "needs exact start data (--z0 --w0 --dw0 as decimals or"
-                        + " p/q, e.g. from --from-infinity C,P,Q --digits D): " + e.argument() + " " + e.reason());
-            }
+            PreciseConnection.checkAtInfinity(s, digits);
         }
         return ConnectionReport.atInfinity(s, moved, connection.rayAngle(), connection.sheetIndex(),
                 connection.sampleRadii(InfinityBehaviourFit.R_MIN, InfinityBehaviourFit.R_MAX), rows,

@@ -20,6 +20,7 @@ import org.tertius.connection.match.ZeroBehaviourFit;
 import org.tertius.connection.zero.LocalValue;
 import org.tertius.connection.zero.ZeroBehaviour;
 import org.tertius.core.InvalidInputException;
+import org.tertius.core.highprecision.HighPrecisionSolution;
 import org.tertius.core.number.ApcomplexArithmetic;
 import org.tertius.core.number.ExactNumber;
 import org.tertius.core.number.MpArithmetic;
@@ -63,6 +64,23 @@ final class PreciseConnection {
                     "");
             rows.add("B", digits + " digits", complex(r.amplitude(), digits), ConnectionRows.error(r.amplitudeError()),
                     "", "");
+        }
+    }
+
+    /** Refuses --digits with --at-infinity before anything is computed: D out of range, data not exact. */
+    static void checkAtInfinity(Painleve3Solution s, int digits) {
+        if (digits < HighPrecisionSolution.MIN_DIGITS || digits > PreciseInfinityFit.MAX_DIGITS) {
+            throw new InvalidInputException("--digits", "must be in [" + HighPrecisionSolution.MIN_DIGITS + ", "
+                    + PreciseInfinityFit.MAX_DIGITS + "] with --at-infinity, got " + digits);
+        }
+        if (s.equation().exactParameters() == null) {
+            throw new InvalidInputException("--digits", "needs the equation's parameters exact (decimals or p/q)");
+        }
+        try {
+            s.highPrecisionForm().requireDigits(digits + 5);
+        } catch (InvalidInputException e) {
+            throw new InvalidInputException("--digits", "needs exact start data (--z0 --w0 --dw0 as decimals or"
+                    + " p/q, e.g. from --from-infinity C,P,Q --digits D): " + e.argument() + " " + e.reason());
         }
     }
 
