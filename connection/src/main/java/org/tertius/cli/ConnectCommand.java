@@ -73,19 +73,7 @@ public final class ConnectCommand implements Command {
                     decided = atZero(rows);
                     break;
                 case 1:
-                    refuseDigits("--at-infinity", "the fits at infinity are computed in double precision only (start"
-                            + " data in D digits from exact data at infinity: --from-infinity C,P,Q --digits D)");
-                    Painleve3Solution atInfinity = painleve3(rows);
-                    if (connection.monodromyData && connection.sheetIndex() != 0) {
-                        throw new InvalidInputException("--monodromy-data", "the bridge at infinity is derived on the"
-                                + " principal sheet; use --sheet 0");
-                    }
-                    decided = ConnectionReport.atInfinity(atInfinity, moved, connection.rayAngle(),
-                            connection.sheetIndex(), connection.sampleRadii(InfinityBehaviourFit.R_MIN,
-                                    InfinityBehaviourFit.R_MAX), rows);
-                    if (connection.monodromyData) {
-                        BridgeRows.infinityFromSolution(atInfinity, connection.rayAngle(), rows);
-                    }
+                    decided = atInfinity(rows);
                     break;
                 case 2:
                     fromZero(rows);
@@ -110,11 +98,6 @@ public final class ConnectCommand implements Command {
     /** Solutions started from the member's image moved by its errors (empty for start data given as such). */
     private List<Painleve3Solution> moved = List.of();
 
-    private void refuseDigits(String direction, String why) {
-        if (connection.digits != null) {
-            throw new InvalidInputException("--digits", "not available with " + direction + ": " + why);
-        }
-    }
 
     private boolean atZero(ConnectionRows rows) {
         Painleve3Solution s = painleve3(rows);
@@ -140,6 +123,33 @@ public final class ConnectCommand implements Command {
                 bridge, rows);
         if (connection.digits != null && decided) {
             PreciseConnection.atZero(s, connection.rayAngle(), connection.sheetIndex(), connection.digits, rows);
+        }
+        return decided;
+    }
+
+    private boolean atInfinity(ConnectionRows rows) {
+        Painleve3Solution s = painleve3(rows);
+        Integer digits = connection.digits;
+        if (connection.monodromyData && connection.sheetIndex() != 0) {
+            throw new InvalidInputException("--monodromy-data", "the bridge at infinity is derived on the"
+                    + " principal sheet; use --sheet 0");
+        }
+        if (connection.monodromyData && digits != null) {
+            throw new InvalidInputException("--monodromy-data", "the bridge to the monodromy data is double"
+                    + " precision; drop --digits or --monodromy-data");
+        }
+        if (digits != null) {
+            PreciseConnection.checkAtInfinity(s, digits);
+        }
+        boolean decided = ConnectionReport.atInfinity(s, moved, connection.rayAngle(), connection.sheetIndex(),
+                connection.sampleRadii(InfinityBehaviourFit.R_MIN, InfinityBehaviourFit.R_MAX), rows,
+                b -> {
+                    if (digits != null) {
+                        PreciseConnection.atInfinity(s, b, digits, rows);
+                    }
+                });
+        if (connection.monodromyData) {
+            BridgeRows.infinityFromSolution(s, connection.rayAngle(), rows);
         }
         return decided;
     }
@@ -377,6 +387,9 @@ public final class ConnectCommand implements Command {
                 break;
             case "branch":
                 option = "--branch";
+                break;
+            case "digits":
+                option = "--digits";
                 break;
             default:
                 option = direction == 2 ? "--from-zero" : direction == 3 ? "--from-infinity"

@@ -69,8 +69,8 @@ final class ConnectionOptions implements OptionGroup {
                 + " D the smallest radius where it reaches D digits)"));
         o.addOption(OptionKinds.value("--fit-at", "X", "decaying family (--lambda or --sigma alone): where sigma and"
                 + " B are fitted (default 1e-3)"));
-        o.addOption(OptionKinds.value("--digits", "D", "decaying family, --from-zero, --at-zero and --from-infinity:"
-                + " also in arbitrary precision with D digits (slow: tens of seconds to minutes)"));
+        o.addOption(OptionKinds.value("--digits", "D", "decaying family, --from-zero, --at-zero, --from-infinity"
+                + " and --at-infinity (16..60): also in arbitrary precision with D digits (slow: seconds to minutes)"));
         o.addOption(OptionKinds.value("--format", "FMT", "csv (default), json or text"));
     }
 

@@ -2,6 +2,7 @@ package org.tertius.cli;
 
 import java.util.List;
 import java.util.Locale;
+import java.util.function.Consumer;
 import org.hipparchus.complex.Complex;
 import org.tertius.connection.closed.McCoyTracyWu;
 import org.tertius.connection.infinity.InfinityBehaviour;
@@ -134,7 +135,7 @@ final class ConnectionReport {
      * @throws InvalidInputException for a ray through poles (a pole line) or an equation of another type
      */
     static boolean atInfinity(Painleve3Solution s, List<Painleve3Solution> moved, double angle, int sheet,
-                              double[] radii, ConnectionRows rows) {
+                              double[] radii, ConnectionRows rows, Consumer<InfinityBehaviour> precise) {
         Painleve3 eq = s.equation();
         InfinityBehaviour b = StartSensitivity.atInfinity(s, moved, angle, sheet, radii[0], radii[1]);
         rows.comment("behaviour at infinity of " + s.equation() + " along arg z = " + angle
@@ -147,6 +148,7 @@ final class ConnectionReport {
         }
         rows.addLabel("kind", b.kind().name().toLowerCase(Locale.ROOT));
         if (b.kind() == InfinityBehaviour.Kind.UNDECIDED) {
+            precise.accept(b); // refuses digits for an undecided behaviour
             return false;
         }
         List<Complex> roots = TransseriesAtInfinity.backgrounds(eq);
@@ -164,6 +166,7 @@ final class ConnectionReport {
         } else {
             rows.comment("exponentially small: only the exponential that decays along the ray is present");
         }
+        precise.accept(b);
         PoleFreeSector sector;
         try {
             sector = PoleFreeSector.around(s, angle, sheet, radii[0], radii[1]);

@@ -8,14 +8,19 @@ import java.util.List;
 import java.util.Locale;
 import org.apfloat.Apcomplex;
 import org.apfloat.Apfloat;
+import org.apfloat.ApcomplexMath;
 import org.apfloat.ApfloatMath;
+import org.hipparchus.complex.Complex;
 import org.tertius.connection.infinity.InfinityBehaviour;
 import org.tertius.connection.infinity.PreciseTransseries;
+import org.tertius.connection.infinity.TransseriesAtInfinity;
+import org.tertius.connection.match.PreciseInfinityFit;
 import org.tertius.connection.match.PreciseZeroFit;
 import org.tertius.connection.match.ZeroBehaviourFit;
 import org.tertius.connection.zero.LocalValue;
 import org.tertius.connection.zero.ZeroBehaviour;
 import org.tertius.core.InvalidInputException;
+import org.tertius.core.highprecision.HighPrecisionSolution;
 import org.tertius.core.number.ApcomplexArithmetic;
 import org.tertius.core.number.ExactNumber;
 import org.tertius.core.number.MpArithmetic;
@@ -60,6 +65,80 @@ final class PreciseConnection {
             rows.add("B", digits + " digits", complex(r.amplitude(), digits), ConnectionRows.error(r.amplitudeError()),
                     "", "");
         }
+    }
+
+    /** Refuses --digits with --at-infinity before anything is computed: D out of range, data not exact. */
+    static void checkAtInfinity(Painleve3Solution s, int digits) {
+        if (digits < HighPrecisionSolution.MIN_DIGITS || digits > PreciseInfinityFit.MAX_DIGITS) {
+            throw new InvalidInputException("--digits", "must be in [" + HighPrecisionSolution.MIN_DIGITS + ", "
+                    + PreciseInfinityFit.MAX_DIGITS + "] with --at-infinity, got " + digits);
+        }
+        if (s.equation().exactParameters() == null) {
+            throw new InvalidInputException("--digits", "needs the equation's parameters exact (decimals or p/q)");
+        }
+        try {
+            s.highPrecisionForm().requireDigits(digits + 5);
+        } catch (InvalidInputException e) {
+            throw new InvalidInputException("--digits", "needs exact start data (--z0 --w0 --dw0 as decimals or"
+                    + " p/q, e.g. from --from-infinity C,P,Q --digits D): " + e.argument() + " " + e.reason());
+        }
+    }
+
+    /**
+     * The rows of the behaviour at infinity in D digits, after the double-precision rows (which decide the kind, the
+     * background and the start of Newton's method): p, q and on an oscillating ray amplitude, phase and drift.
+     */
+    static void atInfinity(Painleve3Solution s, InfinityBehaviour estimate, int digits, ConnectionRows rows) {
+        if (estimate.kind() == InfinityBehaviour.Kind.UNDECIDED) {
+            throw new InvalidInputException("--digits", "the behaviour at infinity is undecided in double precision ("
+                    + estimate.note() + "), so there is nothing to find to " + digits + " digits");
+        }
+        PreciseInfinityFit.Result r;
+        try (Progress progress = new Progress("connect")) {
+            r = PreciseInfinityFit.fit(s, estimate, digits, f -> progress.update(Math.round(f * 1000), 1000));
+        }
+        boolean both = estimate.kind() == InfinityBehaviour.Kind.OSCILLATING;
+        rows.comment(digits + " digits: the solution replayed in arbitrary precision to z1 = "
+                + ValueRows.exactComplex(r.fitPoint().z()) + " and z2 = " + ValueRows.exactComplex(r.checkPoint().z())
+                + " (" + String.format(Locale.ROOT, "%.1f", r.replayDigits()) + " correct digits), the transseries"
+                + " with " + r.orders() + " orders solved at z1 for p and q from w and w' by Newton's method ("
+                + r.builds() + " builds); the errors include the disagreement at z2 ("
+                + String.format(Locale.ROOT, "%.2g", r.disagreement()) + ") as far as it exceeds the errors there ("
+                + String.format(Locale.ROOT, "%.2g", r.checkError()) + ")");
+        if (!both) {
+            rows.comment(digits + " digits, exponentially small: the amplitude of the exponential that grows along the"
+                    + " ray is fitted too (linearly); start data rounded to D digits carry a tiny one, so it is not"
+                    + " exactly 0, and such a solution leaves the background far out");
+        }
+        rows.add("p", digits + " digits", complex(r.p(), digits), ConnectionRows.error(r.errP()), "", "");
+        rows.add("q", digits + " digits", complex(r.q(), digits), ConnectionRows.error(r.errQ()), "", "");
+        if (!both) {
+            return;
+        }
+        Painleve3 eq = s.equation();
+        long precision = digits + PreciseTransseries.GUARD;
+        Apcomplex pq = r.p().multiply(r.q());
+        Apcomplex amplitude = ApcomplexMath.sqrt(pq).multiply(new Apfloat(2, precision));
+        Apcomplex phase = ApcomplexMath.log(r.p().divide(r.q())).divide(new Apcomplex(Apfloat.ZERO,
+                new Apfloat(2, precision)));
+        InfinityBehaviour b = InfinityBehaviour.measured(estimate.kind(), estimate.angle(), estimate.sheet(),
+                estimate.background(), toComplex(r.p()), toComplex(r.q()), r.errP(), r.errQ(), "");
+        // drift = -i (kappa(p, q) - kappa(0, 0)); kappa is fixed at order 3 (4 orders built)
+        int index = TransseriesAtInfinity.backgrounds(eq).indexOf(estimate.background());
+        PreciseTransseries with = PreciseTransseries.create(eq, eq.exactParameters(), index, r.p(), r.q(), digits, 4);
+        PreciseTransseries without = PreciseTransseries.create(eq, eq.exactParameters(), index, Apcomplex.ZERO,
+                Apcomplex.ZERO, digits, 4);
+        MpArithmetic ar = with.arithmetic();
+        Apcomplex drift = ar.context().toApcomplex(ar.subtract(with.kappa(), without.kappa()))
+                .multiply(new Apcomplex(Apfloat.ZERO, new Apfloat(-1, precision)));
+        rows.add("amplitude", digits + " digits", complex(amplitude, digits), ConnectionRows.error(b.amplitudeError()),
+                "", "");
+        rows.add("phase", digits + " digits", complex(phase, digits), ConnectionRows.error(b.phaseError()), "", "");
+        rows.add("drift", digits + " digits", complex(drift, digits), ConnectionRows.error(b.driftError(eq)), "", "");
+    }
+
+    private static Complex toComplex(Apcomplex a) {
+        return new Complex(a.real().doubleValue(), a.imag().doubleValue());
     }
 
     /** Start data in D digits from exact (sigma, B) typed as the two parts of --from-zero. */

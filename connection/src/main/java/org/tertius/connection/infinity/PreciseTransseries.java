@@ -4,6 +4,7 @@ import java.math.BigDecimal;
 import java.math.BigInteger;
 import java.math.RoundingMode;
 import java.util.List;
+import org.apfloat.Apcomplex;
 import org.hipparchus.complex.Complex;
 import org.tertius.connection.zero.LocalValue;
 import org.tertius.core.InvalidInputException;
@@ -88,13 +89,37 @@ public final class PreciseTransseries {
         requireDigits("p", p, digits);
         requireDigits("q", q, digits);
         MpArithmetic ar = new MpArithmetic(digits + GUARD);
+        return build(eq, parameters, background, ar, ar.context().fromExact(p), ar.context().fromExact(q), digits,
+                orders);
+    }
+
+    /**
+     * As {@link #create(Painleve3, ExactNumber[], int, ExactNumber, ExactNumber, int, int)} with amplitudes given as
+     * numbers (for example iterates of a fit), taken as they are at the working precision.
+     */
+    public static PreciseTransseries create(Painleve3 eq, ExactNumber[] parameters, int background, Apcomplex p,
+                                            Apcomplex q, int digits, int orders) {
+        int count = TransseriesAtInfinity.backgrounds(eq).size();
+        if (background < 0 || background >= count || orders < 4 || orders > MAX_ORDERS) {
+            throw new InvalidInputException("orders", "background index " + background + " must be in [0, "
+                    + (count - 1) + "], orders " + orders + " in [4, " + MAX_ORDERS + "]");
+        }
+        String[] names = {"alpha", "beta", "gamma", "delta"};
+        for (int i = 0; i < 4; i++) {
+            requireDigits(names[i], parameters[i], digits);
+        }
+        MpArithmetic ar = new MpArithmetic(digits + GUARD);
+        return build(eq, parameters, background, ar, ar.context().fromApcomplex(p), ar.context().fromApcomplex(q),
+                digits, orders);
+    }
+
+    private static PreciseTransseries build(Painleve3 eq, ExactNumber[] parameters, int background, MpArithmetic ar,
+                                            MpComplex pp, MpComplex qq, int digits, int orders) {
         MpContext ctx = ar.context();
         MpComplex alpha = ctx.fromExact(parameters[0]);
         MpComplex beta = ctx.fromExact(parameters[1]);
         MpComplex gamma = ctx.fromExact(parameters[2]);
         MpComplex delta = ctx.fromExact(parameters[3]);
-        MpComplex pp = ctx.fromExact(p);
-        MpComplex qq = ctx.fromExact(q);
         boolean d7 = eq.type() == Painleve3Type.D7;
         MpComplex c;
         if (d7) {
@@ -153,6 +178,41 @@ public final class PreciseTransseries {
             }
         }
         return -1;
+    }
+
+    /**
+     * The fewest orders (even, in [8, maxOrders]) whose truncation estimate at |x| = {@code radius} on the
+     * ray of log-coordinate phase {@code phase} is below {@code target} (absolute, in u = log(w/c)), from the
+     * recursion in double precision with the given amplitudes; -1 if none.
+     */
+    public static int ordersAt(Painleve3 eq, Complex c, Complex p, Complex q, double target, double radius,
+                               double phase, int maxOrders) {
+        int most = Math.min(maxOrders, MAX_ORDERS);
+        boolean d7 = eq.type() == Painleve3Type.D7;
+        HarmonicTransseries<Complex> t = core(ComplexArithmetic.INSTANCE, d7, eq.alpha(), eq.beta(), eq.gamma(), c, p,
+                q, most);
+        double y = d7 ? Math.pow(radius, 2.0 / 3) : radius;
+        Complex tau = new Complex(Math.log(y), (d7 ? 2.0 / 3 : 1) * phase);
+        for (int n = 8; n <= most; n += 2) {
+            LocalValue<Complex> v = t.at(tau, n, 0);
+            if (v.errW() <= target && v.errDw() <= target * (1 + v.dw().norm())) {
+                return n;
+            }
+        }
+        return -1;
+    }
+
+    /**
+     * The truncation estimate (absolute, in u = log(w/c)) of {@code orders} orders at |x| = {@code radius} on the ray
+     * of log-coordinate phase {@code phase}, from the recursion in double precision with the given amplitudes.
+     */
+    public static double truncationAt(Painleve3 eq, Complex c, Complex p, Complex q, int orders, double radius,
+                                      double phase) {
+        boolean d7 = eq.type() == Painleve3Type.D7;
+        HarmonicTransseries<Complex> t = core(ComplexArithmetic.INSTANCE, d7, eq.alpha(), eq.beta(), eq.gamma(), c, p,
+                q, orders);
+        double y = d7 ? Math.pow(radius, 2.0 / 3) : radius;
+        return t.at(new Complex(Math.log(y), (d7 ? 2.0 / 3 : 1) * phase), orders, 0).errW();
     }
 
     private static void requireDigits(String name, ExactNumber x, int digits) {
