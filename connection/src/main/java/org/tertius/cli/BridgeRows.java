@@ -267,8 +267,9 @@ final class BridgeRows {
             moved.connection(2, 1), moved.connection(2, 2), moved.connectionProduct(), moved.chi(),
             ZeroMonodromyBridge.trace(sigma.multiply(1 + 1e-15))};
         for (int i = 0; i < values.length; i++) {
-            double err = ZeroMonodromyBridge.closedFormRounding() * values[i].norm()
-                    + 2 * values[i].subtract(other[i]).norm();
+            // m and m0 come from the parameters by a few roundings, the rest through Gamma values
+            double rounding = i < 2 ? 4 * Math.ulp(1.0) : ZeroMonodromyBridge.closedFormRounding();
+            double err = rounding * values[i].norm() + 2 * values[i].subtract(other[i]).norm();
             rows.add(names[i], "double", "", "", ConnectionRows.complex(values[i]), ConnectionRows.error(err));
         }
     }

@@ -5,6 +5,7 @@ import java.util.List;
 import org.hipparchus.complex.Complex;
 import org.tertius.connection.zero.LocalValue;
 import org.tertius.core.InvalidInputException;
+import org.tertius.core.number.ComplexText;
 import org.tertius.core.piii.Painleve3;
 import org.tertius.core.piii.Painleve3Solution;
 import org.tertius.core.step.SolverSettings;
@@ -73,9 +74,10 @@ public final class InfinityBehaviour {
             // |E^k x^(-n/2)| = r^(k Re kappa - n/2) on the ray (|k| <= n): the terms decay only for |Re kappa| < 1/2
             double growth = Math.abs(t.kappa().getReal());
             if (!(growth < 0.5)) {
-                throw new InvalidInputException("p, q", "the oscillation about c = " + c + " with p = " + p + ", q = "
-                        + q + " does not decay along the ray arg z = " + angle + ": |Re kappa| = " + growth
-                        + " (kappa = " + t.kappa() + "), and the transseries describes solutions only for |Re kappa| < 1/2"
+                throw new InvalidInputException("p, q", "the oscillation about c = " + ComplexText.brief(c)
+                        + " with p = " + ComplexText.brief(p) + ", q = " + ComplexText.brief(q) + " does not decay"
+                        + " along the ray arg z = " + angle + ": |Re kappa| = " + growth + " (kappa = "
+                        + ComplexText.brief(t.kappa()) + "), and the transseries describes solutions only for |Re kappa| < 1/2"
                         + " (smaller amplitudes: p q closer to 0)");
             }
         } else {

@@ -7,6 +7,7 @@ import org.tertius.connection.infinity.InfinityBehaviour;
 import org.tertius.connection.infinity.TransseriesAtInfinity;
 import org.tertius.core.InvalidInputException;
 import org.tertius.core.TertiusException;
+import org.tertius.core.number.ComplexText;
 import org.tertius.core.number.SurfacePoint;
 import org.tertius.core.piii.Painleve3;
 import org.tertius.core.piii.Painleve3Solution;
@@ -97,7 +98,8 @@ public final class InfinityBehaviourFit {
             }
         }
         if (!(worst < 2) || (worst >= 0.5 && worst >= 0.9 * inner)) {
-            throw poleLine(angle, sheet, rMax, "w does not approach any background " + backgrounds
+            throw poleLine(angle, sheet, rMax, "w does not approach any background "
+                    + backgrounds.stream().map(ComplexText::brief).toList()
                     + " (|log(w/c)| up to " + worst + " on the outer half of [" + rMin + ", " + rMax + "], " + inner
                     + " on the inner half)");
         }
@@ -129,8 +131,9 @@ public final class InfinityBehaviourFit {
             // the transseries holds only while its terms decay, |Re kappa| < 1/2 (TransseriesAtInfinity)
             double growth = Math.abs(TransseriesAtInfinity.create(eq, c, best.p, best.q, 2).kappa().getReal());
             if (!(growth < 0.5)) {
-                return InfinityBehaviour.undecided(angle, sheet, "the amplitudes fitted about c = " + c + " on [" + rMin
-                        + ", " + rMax + "] (p = " + best.p + ", q = " + best.q + ") give |Re kappa| = " + growth
+                return InfinityBehaviour.undecided(angle, sheet, "the amplitudes fitted about c = "
+                        + ComplexText.brief(c) + " on [" + rMin + ", " + rMax + "] (p = " + ComplexText.brief(best.p)
+                        + ", q = " + ComplexText.brief(best.q) + ") give |Re kappa| = " + growth
                         + " >= 1/2: such an oscillation grows like |z|^(|Re kappa| - 1/2), so w does not approach c"
                         + " along this ray");
             }
