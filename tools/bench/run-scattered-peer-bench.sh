@@ -58,19 +58,26 @@ print('ratio peer / Tertius: %.0fx (medians)' % (n * mp_ / mo))
 rows = [r for r in csv.reader(l for l in open(d + '/ours.csv') if not l.startswith('#'))][1:]
 worst = 0
 checked = 0
+target = -1
 for line in open(d + '/peer.txt'):
     parts = line.split(' ', 1)
-    if len(parts) < 2 or parts[1].startswith('blocked') or parts[0] == 'reached':
+    if len(parts) < 2 or parts[0] == 'reached':
         continue
-    i = checked
-    checked += 1
+    # one line per target, in the order of the targets, blocked ones included: index by target, not by reached count
+    target += 1
+    if parts[1].startswith('blocked'):
+        continue
     m = re_number.findall(parts[1].replace(' ', ''))
     if len(m) != 2:
         continue
+    checked += 1
     re, im = Decimal(m[0]), Decimal(m[1])
-    r = rows[i]
+    r = rows[target]
     xr, xi = Decimal(r[3]), Decimal(r[4])
     diff = ((xr - re) ** 2 + (xi - im) ** 2).sqrt() / (xr * xr + xi * xi).sqrt()
     worst = max(worst, float(diff))
 print('largest difference of w on the %d sample points reached by both (relative): %.1e' % (checked, worst))
+if not worst < 10.0 ** -(digits - 5):
+    print('FAILED: the difference exceeds 1e-%d' % (digits - 5))
+    sys.exit(1)
 PY

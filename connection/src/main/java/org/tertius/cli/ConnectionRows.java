@@ -85,7 +85,11 @@ final class ConnectionRows {
         return String.format(Locale.ROOT, "%.17g", x);
     }
 
+    /** An error estimate with 3 digits; an exact 0 (exact data printed exactly) as 0. */
     static String error(double e) {
+        if (e == 0) {
+            return "0";
+        }
         return String.format(Locale.ROOT, "%.2e", e);
     }
 

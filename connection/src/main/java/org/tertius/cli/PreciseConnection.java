@@ -60,9 +60,11 @@ final class PreciseConnection {
                     f -> progress.update(Math.round(f * 1000), 1000));
             rows.comment(digits + " digits: the solution replayed in arbitrary precision to z0 = " + r.point()
                     + ", the series at 0 of degree " + r.degree() + " solved there for sigma and B");
-            rows.add("sigma", digits + " digits", complex(r.sigma(), digits), ConnectionRows.error(r.sigmaError()), "",
+            rows.add("sigma", digits + " digits", complex(r.sigma(), digits),
+                    ConnectionRows.error(r.sigmaError() + printed(r.sigma(), digits)), "",
                     "");
-            rows.add("B", digits + " digits", complex(r.amplitude(), digits), ConnectionRows.error(r.amplitudeError()),
+            rows.add("B", digits + " digits", complex(r.amplitude(), digits),
+                    ConnectionRows.error(r.amplitudeError() + printed(r.amplitude(), digits)),
                     "", "");
         }
     }
@@ -110,8 +112,10 @@ final class PreciseConnection {
                     + " ray is fitted too (linearly); start data rounded to D digits carry a tiny one, so it is not"
                     + " exactly 0, and such a solution leaves the background far out");
         }
-        rows.add("p", digits + " digits", complex(r.p(), digits), ConnectionRows.error(r.errP()), "", "");
-        rows.add("q", digits + " digits", complex(r.q(), digits), ConnectionRows.error(r.errQ()), "", "");
+        rows.add("p", digits + " digits", complex(r.p(), digits),
+                ConnectionRows.error(r.errP() + printed(r.p(), digits)), "", "");
+        rows.add("q", digits + " digits", complex(r.q(), digits),
+                ConnectionRows.error(r.errQ() + printed(r.q(), digits)), "", "");
         if (!both) {
             return;
         }
@@ -131,10 +135,13 @@ final class PreciseConnection {
         MpArithmetic ar = with.arithmetic();
         Apcomplex drift = ar.context().toApcomplex(ar.subtract(with.kappa(), without.kappa()))
                 .multiply(new Apcomplex(Apfloat.ZERO, new Apfloat(-1, precision)));
-        rows.add("amplitude", digits + " digits", complex(amplitude, digits), ConnectionRows.error(b.amplitudeError()),
+        rows.add("amplitude", digits + " digits", complex(amplitude, digits),
+                ConnectionRows.error(b.amplitudeError() + printed(amplitude, digits)),
                 "", "");
-        rows.add("phase", digits + " digits", complex(phase, digits), ConnectionRows.error(b.phaseError()), "", "");
-        rows.add("drift", digits + " digits", complex(drift, digits), ConnectionRows.error(b.driftError(eq)), "", "");
+        rows.add("phase", digits + " digits", complex(phase, digits),
+                ConnectionRows.error(b.phaseError() + printed(phase, digits)), "", "");
+        rows.add("drift", digits + " digits", complex(drift, digits),
+                ConnectionRows.error(b.driftError(eq) + printed(drift, digits)), "", "");
     }
 
     private static Complex toComplex(Apcomplex a) {
@@ -170,10 +177,12 @@ final class PreciseConnection {
         }
         rows.comment("start data in " + digits + " digits from sigma = " + parts.get(0) + ", B = " + parts.get(1)
                 + " (read exactly), from the series at 0; z on sheet " + sheet);
-        rows.add("z", digits + " digits", complex(v.z(), digits), "0", "", "");
+        rows.add("z", digits + " digits", complex(v.z(), digits), ConnectionRows.error(printed(v.z(), digits)), "", "");
         rows.add("sheet", "exact", Integer.toString(sheet), "0", "", "");
-        rows.add("w", digits + " digits", complex(v.w(), digits), ConnectionRows.error(v.errW()), "", "");
-        rows.add("dw", digits + " digits", complex(v.dw(), digits), ConnectionRows.error(v.errDw()), "", "");
+        rows.add("w", digits + " digits", complex(v.w(), digits),
+                ConnectionRows.error(v.errW() + printed(v.w(), digits)), "", "");
+        rows.add("dw", digits + " digits", complex(v.dw(), digits),
+                ConnectionRows.error(v.errDw() + printed(v.dw(), digits)), "", "");
     }
 
     /**
@@ -265,10 +274,21 @@ final class PreciseConnection {
                 "", "");
     }
 
-    /** A bound of the rounding of {@link #complex} to D digits: one unit in the D-th digit of the larger part. */
-    private static double printed(Apcomplex c, int digits) {
-        double top = Math.max(Math.abs(c.real().doubleValue()), Math.abs(c.imag().doubleValue()));
-        return top * Math.pow(10, 1 - digits);
+    /**
+     * A bound of the rounding of {@link #complex} to D digits: 0 where the printed digits are the value itself (an
+     * exact abscissa such as 2^-7), else one unit in the D-th digit of the larger part.
+     */
+    static double printed(Apcomplex c, int digits) {
+        Apfloat re = c.real();
+        Apfloat im = c.imag();
+        long top = Math.max(re.signum() == 0 ? Long.MIN_VALUE : re.scale(), im.signum() == 0 ? Long.MIN_VALUE
+                : im.scale());
+        if (top == Long.MIN_VALUE || re.equals(new Apfloat(part(re, digits, top)))
+                && im.equals(new Apfloat(part(im, digits, top)))) {
+            return 0;
+        }
+        double larger = Math.max(Math.abs(re.doubleValue()), Math.abs(im.doubleValue()));
+        return larger * Math.pow(10, 1 - digits);
     }
 
     /** a+bi with D significant digits relative to the modulus. */

@@ -87,7 +87,10 @@ class BridgeCommandTest {
             assertTrue(numerical.subtract(typed).norm() <= Math.min(2 * err, 1e-8), q + " " + numerical);
             // the closed form from the data typed (derived here, connection/README.md "Monodromy data at z = 0")
             assertEquals(0, closed(r, q).subtract(typed).norm(), 1e-13, q + " closed form");
-            assertTrue(Double.parseDouble(r.get(q)[5]) < 1e-13, q + " closed-form error");
+            // its error is the Gamma budget (exact data): closedFormRounding() relative, twice for rounding around it
+            double closedErr = Double.parseDouble(r.get(q)[5]);
+            assertTrue(closedErr > 0 && closedErr < 2 * ZeroMonodromyBridge.closedFormRounding() * typed.norm(),
+                    q + " closed-form error " + closedErr);
         }
     }
 
