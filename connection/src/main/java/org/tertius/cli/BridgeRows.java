@@ -93,6 +93,39 @@ final class BridgeRows {
         } catch (InvalidInputException e) {
             throw new InvalidInputException("--monodromy-data", "(" + e.argument() + ") " + e.reason());
         }
+        PointData at = dataOnRay(s, angle);
+        if (at.data() == null) {
+            throw new InvalidInputException("--monodromy-data", at.failure() + "; choose another --ray");
+        }
+        MonodromyData<Complex> d = at.data();
+        List<String> comments = new ArrayList<>();
+        List<Estimate<Complex>> found;
+        try {
+            found = bridge.zeroData(d.stokesAtZero(1), d.stokesAtZero(2), d.stokesAtInfinity(1),
+                    d.stokesAtInfinity(2), d.connection(1, 1), d.connection(2, 1));
+        } catch (InvalidInputException e) {
+            comments.add("closed form (bridge to the monodromy data) not available: " + e.reason());
+            return new ClosedAtZero(comments, null, null);
+        }
+        comments.add("closed form: sigma and B from the monodromy data of the solution computed at z = "
+                + ComplexText.format(at.point().z()) + " (member 1 with s = 1/4) through the bridge derived here"
+                + " (connection/README.md 'Monodromy data at z = 0', method of Jimbo, Publ. RIMS 18 (1982) 1137):"
+                + " tr M_0 = 2 sin(pi sigma/2),"
+                + " B = G(sigma) (e^(2 pi i (m + nu)) - chi)/(e^(2 pi i (m - nu)) - chi);"
+                + " errors: those of the data (the solution's, carried through the map) propagated");
+        return new ClosedAtZero(comments, found.get(0), found.get(1));
+    }
+
+    /** The monodromy data at a point of a ray, or (data null) why no point of the ray gave them. */
+    private record PointData(SurfacePoint point, MonodromyData<Complex> data, String failure) {
+    }
+
+    /**
+     * The monodromy data (member 1 with s = 1/4) of a Painleve III solution at the first point of the ray (|z| = 1,
+     * 0.75, 1.5, 0.5, 2) where the solution is known to 1e-10 relative and the data pass their self-checks.
+     */
+    private static PointData dataOnRay(Painleve3Solution s, double angle) {
+        Painleve3 eq = s.equation();
         MonodromyMap<Complex> map = MonodromyMap.doublePrecision();
         String last = "";
         for (double r : new double[] {1, 0.75, 1.5, 0.5, 2}) {
@@ -113,25 +146,10 @@ final class BridgeRows {
                 last = "the self-checks of the data at " + p + " fail: " + d.checks();
                 continue;
             }
-            List<String> comments = new ArrayList<>();
-            List<Estimate<Complex>> found;
-            try {
-                found = bridge.zeroData(d.stokesAtZero(1), d.stokesAtZero(2), d.stokesAtInfinity(1),
-                        d.stokesAtInfinity(2), d.connection(1, 1), d.connection(2, 1));
-            } catch (InvalidInputException e) {
-                comments.add("closed form (bridge to the monodromy data) not available: " + e.reason());
-                return new ClosedAtZero(comments, null, null);
-            }
-            comments.add("closed form: sigma and B from the monodromy data of the solution computed at z = "
-                    + ComplexText.format(p.z()) + " (member 1 with s = 1/4) through the bridge derived here"
-                    + " (connection/README.md 'Monodromy data at z = 0', method of Jimbo, Publ. RIMS 18 (1982) 1137):"
-                    + " tr M_0 = 2 sin(pi sigma/2),"
-                    + " B = G(sigma) (e^(2 pi i (m + nu)) - chi)/(e^(2 pi i (m - nu)) - chi);"
-                    + " errors: those of the data (the solution's, carried through the map) propagated");
-            return new ClosedAtZero(comments, found.get(0), found.get(1));
+            return new PointData(p, d, null);
         }
-        throw new InvalidInputException("--monodromy-data", "no point of the ray at |z| in {1, 0.75, 1.5, 0.5, 2}"
-                + " gave monodromy data that pass their checks (last: " + last + "); choose another --ray");
+        return new PointData(null, null, "no point of the ray at |z| in {1, 0.75, 1.5, 0.5, 2} gave monodromy data"
+                + " that pass their checks (last: " + last + ")");
     }
 
     /**
@@ -174,42 +192,24 @@ final class BridgeRows {
             rows.comment("closed form at infinity not available on this ray: " + e.reason());
             return;
         }
-        MonodromyMap<Complex> map = MonodromyMap.doublePrecision();
-        String last = "";
-        for (double r : new double[] {1, 0.75, 1.5, 0.5, 2}) {
-            SurfacePoint p = SurfacePoint.fromLog(Math.log(r), angle);
-            MonodromyData<Complex> d;
-            try {
-                Painleve3Value v = s.evaluate(p);
-                if (!(v.errW() <= 1e-10 * (1 + v.w().norm())) || !(v.errDw() <= 1e-10 * (1 + v.dw().norm()))) {
-                    last = "the solution is known only to " + v.errW() + " at " + p;
-                    continue;
-                }
-                d = map.compute(LaxMatrix.ofPainleve3(eq, v, PAINLEVE3_S));
-            } catch (TertiusException e) {
-                last = e.getMessage();
-                continue;
-            }
-            if (!d.checksHold()) {
-                last = "the self-checks of the data at " + p + " fail: " + d.checks();
-                continue;
-            }
-            Oscillation o;
-            try {
-                o = bridge.oscillation(d.stokesAtInfinity(1), d.stokesAtInfinity(2), d.stokesAtZero(1),
-                        d.stokesAtZero(2), d.connection(1, 1), d.connection(1, 2), d.connection(2, 1),
-                        d.connection(2, 2));
-            } catch (InvalidInputException e) {
-                rows.comment("closed form at infinity not available: " + e.reason());
-                return;
-            }
-            rows.comment("closed form at infinity: from the monodromy data of the solution computed at z = "
-                    + ComplexText.format(p.z()) + " (member 1 with s = 1/4), errors of the data propagated");
-            closedRows(bridge, o, rows);
+        PointData at = dataOnRay(s, angle);
+        if (at.data() == null) {
+            rows.comment("closed form at infinity not available: " + at.failure());
             return;
         }
-        rows.comment("closed form at infinity not available: no point of the ray at |z| in {1, 0.75, 1.5, 0.5, 2}"
-                + " gave monodromy data that pass their checks (last: " + last + ")");
+        MonodromyData<Complex> d = at.data();
+        Oscillation o;
+        try {
+            o = bridge.oscillation(d.stokesAtInfinity(1), d.stokesAtInfinity(2), d.stokesAtZero(1),
+                    d.stokesAtZero(2), d.connection(1, 1), d.connection(1, 2), d.connection(2, 1),
+                    d.connection(2, 2));
+        } catch (InvalidInputException e) {
+            rows.comment("closed form at infinity not available: " + e.reason());
+            return;
+        }
+        rows.comment("closed form at infinity: from the monodromy data of the solution computed at z = "
+                + ComplexText.format(at.point().z()) + " (member 1 with s = 1/4), errors of the data propagated");
+        closedRows(bridge, o, rows);
     }
 
     private static void closedRows(InfinityMonodromyBridge bridge, Oscillation o, ConnectionRows rows) {
