@@ -70,28 +70,7 @@ class InfinityMonodromyBridgeTest {
     private static double worstRatio;
 
     static Stream<Arguments> infinitySets() {
-        Random r = new Random(20_1982);
-        List<Arguments> sets = new ArrayList<>();
-        while (sets.size() < 24) {
-            boolean general = sets.size() % 2 == 1;
-            Complex alpha = new Complex(r.nextDouble(-1.5, 1.5), r.nextDouble(-0.5, 0.5));
-            Complex beta = new Complex(r.nextDouble(-1.5, 1.5), r.nextDouble(-0.5, 0.5));
-            Complex gamma = general ? new Complex(r.nextDouble(0.3, 2), r.nextDouble(-1, 1)) : Complex.ONE;
-            Complex delta = general ? new Complex(r.nextDouble(-2, 2), r.nextDouble(-2, 2)) : new Complex(-1);
-            Painleve3 eq = Painleve3.of(alpha, beta, gamma, delta);
-            Complex c = TransseriesAtInfinity.backgrounds(eq).get(r.nextInt(4));
-            List<Double> rays = InfinityBehaviour.oscillatingRays(eq, c);
-            double angle = rays.get(r.nextInt(rays.size()));
-            Complex p = new Complex(r.nextDouble(-0.4, 0.4), r.nextDouble(-0.4, 0.4));
-            Complex q = new Complex(r.nextDouble(-0.4, 0.4), r.nextDouble(-0.4, 0.4));
-            try {
-                InfinityBehaviour.of(eq, c, p, q, angle, 0);
-            } catch (RuntimeException e) {
-                continue; // |Re kappa| >= 1/2: no oscillating solution with these amplitudes
-            }
-            sets.add(Arguments.of(sets.size(), eq, c, p, q, angle));
-        }
-        return sets.stream();
+        return RandomOscillations.alternating(20_1982, 24);
     }
 
     static Stream<Arguments> firstInfinitySets() {

@@ -4,7 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Random;
 import java.util.stream.Stream;
@@ -17,7 +16,6 @@ import org.junit.jupiter.params.provider.MethodSource;
 import org.tertius.connection.closed.InfinityMonodromyBridge;
 import org.tertius.connection.closed.InfinityMonodromyBridge.Oscillation;
 import org.tertius.connection.infinity.InfinityBehaviour;
-import org.tertius.connection.infinity.TransseriesAtInfinity;
 import org.tertius.core.number.SurfacePoint;
 import org.tertius.core.piii.Painleve3;
 import org.tertius.core.piii.Painleve3Solution;
@@ -50,28 +48,7 @@ class OscillationPhaseTest {
     private static int compared;
 
     static Stream<Arguments> sets() {
-        Random r = new Random(20_2026);
-        List<Arguments> sets = new ArrayList<>();
-        while (sets.size() < 30) {
-            boolean general = sets.size() % 2 == 1;
-            Complex alpha = new Complex(r.nextDouble(-1.5, 1.5), r.nextDouble(-0.5, 0.5));
-            Complex beta = new Complex(r.nextDouble(-1.5, 1.5), r.nextDouble(-0.5, 0.5));
-            Complex gamma = general ? new Complex(r.nextDouble(0.3, 2), r.nextDouble(-1, 1)) : Complex.ONE;
-            Complex delta = general ? new Complex(r.nextDouble(-2, 2), r.nextDouble(-2, 2)) : new Complex(-1);
-            Painleve3 eq = Painleve3.of(alpha, beta, gamma, delta);
-            Complex c = TransseriesAtInfinity.backgrounds(eq).get(r.nextInt(4));
-            List<Double> rays = InfinityBehaviour.oscillatingRays(eq, c);
-            double angle = rays.get(r.nextInt(rays.size()));
-            Complex p = new Complex(r.nextDouble(-0.4, 0.4), r.nextDouble(-0.4, 0.4));
-            Complex q = new Complex(r.nextDouble(-0.4, 0.4), r.nextDouble(-0.4, 0.4));
-            try {
-                InfinityBehaviour.of(eq, c, p, q, angle, 0);
-            } catch (RuntimeException e) {
-                continue; // |Re kappa| >= 1/2: no oscillating solution with these amplitudes
-            }
-            sets.add(Arguments.of(sets.size(), eq, c, p, q, angle));
-        }
-        return sets.stream();
+        return RandomOscillations.alternating(20_2026, 30);
     }
 
     /**
@@ -79,32 +56,11 @@ class OscillationPhaseTest {
      * first generator does not meet.
      */
     static Stream<Arguments> reversedSets() {
-        Random r = new Random(20_2027);
-        List<Arguments> sets = new ArrayList<>();
-        while (sets.size() < 8) {
-            Complex alpha = new Complex(r.nextDouble(-1.5, 1.5), r.nextDouble(-0.5, 0.5));
-            Complex beta = new Complex(r.nextDouble(-1.5, 1.5), r.nextDouble(-0.5, 0.5));
-            Complex gamma = new Complex(r.nextDouble(0.3, 2), r.nextDouble(-1, 1));
-            Complex delta = new Complex(r.nextDouble(-2, 2), r.nextDouble(-2, 2));
-            Painleve3 eq = Painleve3.of(alpha, beta, gamma, delta);
-            Complex c = TransseriesAtInfinity.backgrounds(eq).get(r.nextInt(4));
-            List<Double> rays = InfinityBehaviour.oscillatingRays(eq, c);
-            double angle = rays.get(r.nextInt(rays.size()));
-            Complex p = new Complex(r.nextDouble(-0.4, 0.4), r.nextDouble(-0.4, 0.4));
-            Complex q = new Complex(r.nextDouble(-0.4, 0.4), r.nextDouble(-0.4, 0.4));
-            InfinityMonodromyBridge bridge = InfinityMonodromyBridge.of(eq, S, angle);
-            int i = bridge.backgrounds().indexOf(c);
-            if (bridge.orientation(i) != -1 || bridge.ratioCovered(i) != null) {
-                continue;
-            }
-            try {
-                InfinityBehaviour.of(eq, c, p, q, angle, 0);
-            } catch (RuntimeException e) {
-                continue;
-            }
-            sets.add(Arguments.of(100 + sets.size(), eq, c, p, q, angle));
-        }
-        return sets.stream();
+        return RandomOscillations.general(20_2027, 8, 100, d -> {
+            InfinityMonodromyBridge bridge = InfinityMonodromyBridge.of(d.equation(), S, d.angle());
+            int i = bridge.backgrounds().indexOf(d.background());
+            return bridge.orientation(i) == -1 && bridge.ratioCovered(i) == null;
+        });
     }
 
     /** Eight sets with eps = -1 (about 1.5 s each). */
