@@ -15,14 +15,8 @@ import org.junit.jupiter.params.provider.Arguments;
 import org.junit.jupiter.params.provider.MethodSource;
 import org.tertius.connection.closed.InfinityMonodromyBridge;
 import org.tertius.connection.closed.InfinityMonodromyBridge.Oscillation;
-import org.tertius.connection.infinity.InfinityBehaviour;
-import org.tertius.core.number.SurfacePoint;
 import org.tertius.core.piii.Painleve3;
-import org.tertius.core.piii.Painleve3Solution;
-import org.tertius.core.piii.Painleve3Value;
-import org.tertius.core.step.SolverSettings;
 import org.tertius.hierarchy.monodromy.Estimate;
-import org.tertius.hierarchy.monodromy.LaxMatrix;
 import org.tertius.hierarchy.monodromy.MonodromyData;
 import org.tertius.hierarchy.monodromy.MonodromyMap;
 
@@ -91,15 +85,12 @@ class OscillationPhaseTest {
     }
 
     private static void check(int index, Painleve3 eq, Complex c, Complex p, Complex q, double angle) {
-        InfinityBehaviour given = InfinityBehaviour.of(eq, c, p, q, angle, 0);
-        Painleve3Solution solution = given.solution(eq, SolverSettings.defaults());
-        Painleve3Value v = solution.evaluate(SurfacePoint.fromLog(Math.log(6), angle));
-        MonodromyData<Complex> d = MAP.compute(LaxMatrix.ofPainleve3(eq, v, S));
-        String at = "set " + index + " (" + eq + ", c " + c + ", p " + p + ", q " + q + ", ray " + angle + "): ";
+        RandomOscillations.Draw draw = new RandomOscillations.Draw(eq, c, p, q, angle);
+        MonodromyData<Complex> d = draw.monodromyData(MAP, S);
+        String at = draw.describe(index);
         assertTrue(d.checksHold(), at + d.checks());
         InfinityMonodromyBridge bridge = InfinityMonodromyBridge.of(eq, S, angle);
-        List<Estimate<Complex>> data = List.of(d.stokesAtInfinity(1), d.stokesAtInfinity(2), d.stokesAtZero(1),
-                d.stokesAtZero(2), d.connection(1, 1), d.connection(1, 2), d.connection(2, 1), d.connection(2, 2));
+        List<Estimate<Complex>> data = RandomOscillations.bridgeData(d);
         int i = bridge.backgrounds().indexOf(c);
         Oscillation o = bridge.oscillation(i, data);
         assertNull(bridge.ratioCovered(i), at + "configuration not covered");

@@ -9,7 +9,15 @@ import org.hipparchus.complex.Complex;
 import org.junit.jupiter.params.provider.Arguments;
 import org.tertius.connection.infinity.InfinityBehaviour;
 import org.tertius.connection.infinity.TransseriesAtInfinity;
+import org.tertius.core.number.SurfacePoint;
 import org.tertius.core.piii.Painleve3;
+import org.tertius.core.piii.Painleve3Solution;
+import org.tertius.core.piii.Painleve3Value;
+import org.tertius.core.step.SolverSettings;
+import org.tertius.hierarchy.monodromy.Estimate;
+import org.tertius.hierarchy.monodromy.LaxMatrix;
+import org.tertius.hierarchy.monodromy.MonodromyData;
+import org.tertius.hierarchy.monodromy.MonodromyMap;
 
 /**
  * Random D6 solutions given at infinity by the constants (c, p, q) of an oscillation along one of its oscillating
@@ -29,12 +37,35 @@ final class RandomOscillations {
             }
         }
 
+        /**
+         * The monodromy data (member 1 with constant s) of the solution at |z| = 6 on the ray, where it is computed
+         * from the transseries; their self-checks are for the caller.
+         */
+        MonodromyData<Complex> monodromyData(MonodromyMap<Complex> map, Complex s) {
+            Painleve3Solution solution = InfinityBehaviour.of(equation, background, p, q, angle, 0)
+                    .solution(equation, SolverSettings.defaults());
+            Painleve3Value v = solution.evaluate(SurfacePoint.fromLog(Math.log(6), angle));
+            return map.compute(LaxMatrix.ofPainleve3(equation, v, s));
+        }
+
+        /** The prefix of a failure message. */
+        String describe(int index) {
+            return "set " + index + " (" + equation + ", c " + background + ", p " + p + ", q " + q + ", ray " + angle
+                    + "): ";
+        }
+
         Arguments arguments(int index) {
             return Arguments.of(index, equation, background, p, q, angle);
         }
     }
 
     private RandomOscillations() {
+    }
+
+    /** The eight entries of the data in the order the bridge at infinity takes them. */
+    static List<Estimate<Complex>> bridgeData(MonodromyData<Complex> d) {
+        return List.of(d.stokesAtInfinity(1), d.stokesAtInfinity(2), d.stokesAtZero(1), d.stokesAtZero(2),
+                d.connection(1, 1), d.connection(1, 2), d.connection(2, 1), d.connection(2, 2));
     }
 
     /** gamma = 1, delta = -1 unless general; alpha, beta, p, q complex; c and the ray drawn among those possible. */
